@@ -1,0 +1,66 @@
+package org.depotcast.access;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.enterprise.event.Event;
+import jakarta.transaction.Transactional;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.InvalidInputException;
+
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+/** Accounts and their roles. */
+@ApplicationScoped
+public class AccountService {
+    /** Fired after any account change, so cached sign-ins are dropped. */
+    public record AccountsChanged() {
+    }
+
+    private static final Set<String> KNOWN_ROLES = Set.of(Roles.STORES_OFFICER, Roles.MECHANIC, Roles.PROGRAMME_LEAD,
+            Roles.ADMIN);
+
+    private final UserAccountRepository accounts;
+    private final Event<AccountsChanged> changed;
+
+    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed) {
+        this.accounts = accounts;
+        this.changed = changed;
+    }
+
+    @Transactional
+    public Optional<UserAccount> findEnabled(String username) {
+        return accounts.byUsername(username).filter(a -> a.enabled);
+    }
+
+    public List<UserAccount> all() {
+        return accounts.allByName();
+    }
+
+    public long count() {
+        return accounts.count();
+    }
+
+    @Transactional
+    public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId) {
+        if (accounts.byUsername(username).isPresent()) {
+            throw new ConflictException("username", "account '" + username + "' already exists");
+        }
+        if (password == null || password.length() < 8) {
+            throw new InvalidInputException("password", "must be at least 8 characters");
+        }
+        for (String role : roles) {
+            if (!KNOWN_ROLES.contains(role)) {
+                throw new InvalidInputException("roles", "unknown role '" + role + "'");
+            }
+        }
+        UserAccount account = new UserAccount();
+        account.username = username;
+        account.passwordHash = PasswordHasher.hash(password);
+        account.roles = String.join(",", roles.stream().sorted().toList());
+        account.kitLocationId = kitLocationId;
+        accounts.persist(account);
+        changed.fire(new AccountsChanged());
+        return account;
+    }
+}

@@ -1,0 +1,19 @@
+package org.depotcast.access;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.panache.common.Sort;
+import jakarta.enterprise.context.ApplicationScoped;
+
+import java.util.List;
+import java.util.Optional;
+
+@ApplicationScoped
+class UserAccountRepository implements PanacheRepository<UserAccount> {
+    Optional<UserAccount> byUsername(String username) {
+        return find("username", username).firstResultOptional();
+    }
+
+    List<UserAccount> allByName() {
+        return listAll(Sort.by("username"));
+    }
+}

@@ -1,0 +1,132 @@
+package org.depotcast.catalogue;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvRow;
+import org.depotcast.common.CsvTable;
+import org.depotcast.common.EntityMissingException;
+
+import java.math.BigDecimal;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Optional;
+import java.util.Set;
+
+/** The parts catalogue. Other features look parts up here by part number. */
+@ApplicationScoped
+public class PartService {
+    static final List<String> CSV_COLUMNS = List.of("part_number", "description", "family", "unit_of_issue",
+            "pack_size", "min_order_qty", "unit_cost", "currency", "supplier", "lead_time_days", "shelf_life_days",
+            "critical");
+
+    private final PartRepository parts;
+
+    PartService(PartRepository parts) {
+        this.parts = parts;
+    }
+
+    public List<Part> all() {
+        return parts.allByNumber();
+    }
+
+    public List<Part> inFamily(ComponentFamily family) {
+        return parts.inFamily(family);
+    }
+
+    public Optional<Part> find(String partNumber) {
+        return parts.byPartNumber(partNumber);
+    }
+
+    /** The part, or a 422 naming {@code field} when a request body names a part that does not exist. */
+    public Part require(String field, String partNumber) {
+        return parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(field, "part", partNumber));
+    }
+
+    public Part byId(long id) {
+        return parts.findById(id);
+    }
+
+    @Transactional
+    public Part create(PartRequest request) {
+        if (parts.byPartNumber(request.partNumber()).isPresent()) {
+            throw new ConflictException("partNumber", "part '" + request.partNumber() + "' already exists");
+        }
+        Part part = new Part();
+        apply(part, request);
+        parts.persist(part);
+        return part;
+    }
+
+    @Transactional
+    public Part update(String partNumber, PartRequest request) {
+        Part part = parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
+        if (!partNumber.equals(request.partNumber())) {
+            throw new ConflictException("partNumber", "the part number in the body must match the one in the path");
+        }
+        if (request.version() != null && request.version() != part.version) {
+            throw new ConflictException("version", "part '" + partNumber + "' was changed since version "
+                    + request.version() + "; reload it");
+        }
+        apply(part, request);
+        return part;
+    }
+
+    /** Creates or updates every part in the file, or, if any row is wrong, changes nothing. */
+    @Transactional
+    public int importCsv(String csv) {
+        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 11));
+        Set<String> seen = new HashSet<>();
+        List<PartRequest> requests = table.rows().stream().map(row -> read(row, seen)).toList();
+        table.problems().throwIfAny();
+        for (PartRequest request : requests) {
+            Part part = parts.byPartNumber(request.partNumber()).orElseGet(Part::new);
+            apply(part, request);
+            if (part.id == null) {
+                parts.persist(part);
+            }
+        }
+        return requests.size();
+    }
+
+    public String exportCsv() {
+        return CsvOut.write(CSV_COLUMNS, all(), p -> List.of(p.partNumber, p.description, p.family, p.unitOfIssue,
+                p.packSize, p.minOrderQty, p.unitCost.toPlainString(), p.currency, p.supplier, p.leadTimeDays,
+                p.shelfLifeDays == null ? "" : p.shelfLifeDays, p.critical));
+    }
+
+    private static PartRequest read(CsvRow row, Set<String> seen) {
+        String number = row.text("part_number");
+        if (number != null && !seen.add(number)) {
+            row.reject("part_number", "appears twice in the file");
+        }
+        String currency = row.text("currency");
+        if (currency != null && !currency.matches("[A-Z]{3}")) {
+            row.reject("currency", "must be a three-letter ISO 4217 code, was '" + currency + "'");
+        }
+        Integer pack = row.integer("pack_size", 1);
+        Integer moq = row.integer("min_order_qty", 1);
+        Integer lead = row.integer("lead_time_days", 0);
+        Boolean critical = row.optionalBoolean("critical");
+        return new PartRequest(number, row.text("description"), row.choice("family", ComponentFamily.class),
+                row.choice("unit_of_issue", UnitOfIssue.class), pack == null ? 1 : pack, moq == null ? 1 : moq,
+                row.decimal("unit_cost", BigDecimal.ZERO, false), currency, row.text("supplier"),
+                lead == null ? 0 : lead, row.optionalInt("shelf_life_days", 1), Boolean.TRUE.equals(critical), null);
+    }
+
+    private static void apply(Part part, PartRequest r) {
+        part.partNumber = r.partNumber();
+        part.description = r.description();
+        part.family = r.family();
+        part.unitOfIssue = r.unitOfIssue();
+        part.packSize = r.packSize();
+        part.minOrderQty = r.minOrderQty();
+        part.unitCost = r.unitCost();
+        part.currency = r.currency();
+        part.supplier = r.supplier();
+        part.leadTimeDays = r.leadTimeDays();
+        part.shelfLifeDays = r.shelfLifeDays();
+        part.critical = r.critical();
+    }
+}

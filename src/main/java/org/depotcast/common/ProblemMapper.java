@@ -1,0 +1,151 @@
+package org.depotcast.common;
+
+import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.core.exc.StreamReadException;
+import com.fasterxml.jackson.databind.exc.InvalidFormatException;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
+import com.fasterxml.jackson.databind.JsonMappingException;
+import io.quarkus.logging.Log;
+import io.quarkus.security.AuthenticationFailedException;
+import io.quarkus.security.ForbiddenException;
+import io.quarkus.security.UnauthorizedException;
+import jakarta.persistence.OptimisticLockException;
+import jakarta.validation.ConstraintViolation;
+import jakarta.validation.ConstraintViolationException;
+import jakarta.ws.rs.WebApplicationException;
+import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
+import org.hibernate.StaleObjectStateException;
+import org.jboss.resteasy.reactive.server.ServerExceptionMapper;
+
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.Comparator;
+import java.util.List;
+
+/** The one place that turns exceptions into RFC 9457 problem-details answers. Nothing else builds error bodies. */
+public class ProblemMapper {
+
+    @ServerExceptionMapper
+    public Response invalidInput(InvalidInputException e, UriInfo uri) {
+        return respond(400, "invalid-input", "Invalid input", e.getMessage(), uri, e.errors());
+    }
+
+    @ServerExceptionMapper
+    public Response constraintViolation(ConstraintViolationException e, UriInfo uri) {
+        List<FieldError> errors = new ArrayList<>();
+        for (ConstraintViolation<?> v : e.getConstraintViolations()) {
+            errors.add(new FieldError(fieldOf(v), v.getMessage()));
+        }
+        errors.sort(Comparator.comparing(FieldError::field));
+        return respond(400, "invalid-input", "Invalid input", new InvalidInputException(errors).getMessage(), uri, errors);
+    }
+
+    // Named one by one: Quarkus REST ships its own mappers for the specific Jackson types, and the most specific wins.
+    @ServerExceptionMapper({JsonProcessingException.class, MismatchedInputException.class,
+            InvalidFormatException.class, JsonParseException.class, StreamReadException.class})
+    public Response unreadableJson(JsonProcessingException e, UriInfo uri) {
+        String field = "body";
+        if (e instanceof JsonMappingException m && !m.getPath().isEmpty()) {
+            field = jsonPath(m.getPath());
+        }
+        String detail = e instanceof JsonMappingException ? "value does not have the expected type or form"
+                : "body is not well-formed JSON";
+        return respond(400, "invalid-input", "Invalid input", field + ": " + detail, uri, List.of(new FieldError(field, detail)));
+    }
+
+    @ServerExceptionMapper
+    public Response missing(EntityMissingException e, UriInfo uri) {
+        // A missing thing named in the path is 404; named inside a body it is an unprocessable request.
+        int status = e.field() == null ? 404 : 422;
+        List<FieldError> errors = e.field() == null ? List.of() : List.of(new FieldError(e.field(), e.getMessage()));
+        return respond(status, "not-found", "Not found", e.getMessage(), uri, errors);
+    }
+
+    @ServerExceptionMapper
+    public Response businessRule(BusinessRuleException e, UriInfo uri) {
+        return respond(422, "rule-violated", "Request breaks a stock rule", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
+    }
+
+    @ServerExceptionMapper
+    public Response conflict(ConflictException e, UriInfo uri) {
+        return respond(409, "conflict", "Conflict with current state", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
+    }
+
+    @ServerExceptionMapper({OptimisticLockException.class, StaleObjectStateException.class})
+    public Response stale(RuntimeException e, UriInfo uri) {
+        return respond(409, "conflict", "Conflict with current state",
+                "the record was changed by someone else; reload and try again", uri, List.of());
+    }
+
+    @ServerExceptionMapper({UnauthorizedException.class, AuthenticationFailedException.class})
+    public Response unauthorized(RuntimeException e, UriInfo uri) {
+        Response base = respond(401, "unauthorized", "Sign-in required", "valid credentials are required", uri, List.of());
+        return Response.fromResponse(base).header("WWW-Authenticate", "Basic realm=\"depotcast\"").build();
+    }
+
+    @ServerExceptionMapper
+    public Response forbidden(ForbiddenException e, UriInfo uri) {
+        String detail = e.getMessage() == null || e.getMessage().isBlank()
+                ? "your role does not allow this action" : e.getMessage();
+        return respond(403, "forbidden", "Not allowed", detail, uri, List.of());
+    }
+
+    @ServerExceptionMapper
+    public Response web(WebApplicationException e, UriInfo uri) {
+        if (e.getCause() instanceof JsonProcessingException json) {
+            return unreadableJson(json, uri);
+        }
+        int status = e.getResponse().getStatus();
+        if (status >= 500) {
+            return unexpected(e, uri);
+        }
+        String title = Response.Status.fromStatusCode(status) == null ? "Request refused"
+                : Response.Status.fromStatusCode(status).getReasonPhrase();
+        return respond(status, "http-" + status, title, title, uri, List.of());
+    }
+
+    @ServerExceptionMapper
+    public Response unexpected(Throwable e, UriInfo uri) {
+        Log.error("unexpected failure on " + (uri == null ? "?" : uri.getPath()), e);
+        return respond(500, "internal", "Internal error", "the server could not complete the request", uri, List.of());
+    }
+
+    private static Response respond(int status, String type, String title, String detail, UriInfo uri,
+                                    List<FieldError> errors) {
+        Problem body = new Problem("/problems/" + type, title, status, detail, uri == null ? null : uri.getPath(), errors);
+        return Response.status(status).type(Problem.MEDIA_TYPE).entity(body).build();
+    }
+
+    private static List<FieldError> fieldList(String field, String message) {
+        return field == null ? List.of() : List.of(new FieldError(field, message));
+    }
+
+    private static String jsonPath(List<JsonMappingException.Reference> path) {
+        StringBuilder sb = new StringBuilder();
+        for (JsonMappingException.Reference ref : path) {
+            if (ref.getFieldName() != null) {
+                if (!sb.isEmpty()) {
+                    sb.append('.');
+                }
+                sb.append(ref.getFieldName());
+            } else if (ref.getIndex() >= 0) {
+                sb.append('[').append(ref.getIndex()).append(']');
+            }
+        }
+        return sb.isEmpty() ? "body" : sb.toString();
+    }
+
+    /**
+     * Method-validation paths read method.parameter[.property...]: the property path names the field, or the
+     * parameter itself (a query or path parameter) when there is none.
+     */
+    private static String fieldOf(ConstraintViolation<?> v) {
+        String[] parts = v.getPropertyPath().toString().split("\\.");
+        if (parts.length <= 1) {
+            return parts[0];
+        }
+        return parts.length == 2 ? parts[1] : String.join(".", Arrays.copyOfRange(parts, 2, parts.length));
+    }
+}

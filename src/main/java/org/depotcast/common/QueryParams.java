@@ -1,0 +1,66 @@
+package org.depotcast.common;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.format.DateTimeParseException;
+import java.util.Arrays;
+import java.util.Locale;
+
+/**
+ * Typed query parameters that fail with a 400 naming the parameter. JAX-RS would answer a failed conversion of a
+ * typed @QueryParam with a bare 404, so resources take such parameters as strings and convert them here.
+ */
+public final class QueryParams {
+    private QueryParams() {
+    }
+
+    public static <E extends Enum<E>> E optionalEnum(String name, String value, Class<E> type) {
+        if (value == null || value.isBlank()) {
+            return null;
+        }
+        try {
+            return Enum.valueOf(type, value.strip().toUpperCase(Locale.ROOT).replace('-', '_'));
+        } catch (IllegalArgumentException e) {
+            throw new InvalidInputException(name, "must be one of " + Arrays.toString(type.getEnumConstants())
+                    + ", was '" + value + "'");
+        }
+    }
+
+    public static LocalDate optionalDate(String name, String value) {
+        if (value == null || value.isBlank()) {
+            return null;
+        }
+        try {
+            return LocalDate.parse(value.strip());
+        } catch (DateTimeParseException e) {
+            throw new InvalidInputException(name, "must be a date written yyyy-mm-dd, was '" + value + "'");
+        }
+    }
+
+    public static OffsetDateTime optionalInstant(String name, String value) {
+        if (value == null || value.isBlank()) {
+            return null;
+        }
+        try {
+            return value.length() == 10 ? LocalDate.parse(value).atStartOfDay().atOffset(java.time.ZoneOffset.UTC)
+                    : OffsetDateTime.parse(value.strip());
+        } catch (DateTimeParseException e) {
+            throw new InvalidInputException(name, "must be a date (yyyy-mm-dd) or an ISO-8601 date-time, was '" + value + "'");
+        }
+    }
+
+    public static int intInRange(String name, String value, int defaultValue, int min, int max) {
+        if (value == null || value.isBlank()) {
+            return defaultValue;
+        }
+        try {
+            int parsed = Integer.parseInt(value.strip());
+            if (parsed < min || parsed > max) {
+                throw new InvalidInputException(name, "must be between " + min + " and " + max + ", was " + parsed);
+            }
+            return parsed;
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(name, "must be a whole number, was '" + value + "'");
+        }
+    }
+}

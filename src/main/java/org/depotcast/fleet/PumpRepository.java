@@ -1,0 +1,26 @@
+package org.depotcast.fleet;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.panache.common.Sort;
+import jakarta.enterprise.context.ApplicationScoped;
+
+import java.util.List;
+import java.util.Optional;
+
+@ApplicationScoped
+class PumpRepository implements PanacheRepository<Pump> {
+    Optional<Pump> byAssetId(String assetId) {
+        return find("assetId", assetId).firstResultOptional();
+    }
+
+    List<Pump> search(Long depotId, PumpStatus status) {
+        if (depotId == null && status == null) {
+            return listAll(Sort.by("assetId"));
+        }
+        if (depotId == null) {
+            return list("status", Sort.by("assetId"), status);
+        }
+        return status == null ? list("depot.id", Sort.by("assetId"), depotId)
+                : list("depot.id = ?1 and status = ?2", Sort.by("assetId"), depotId, status);
+    }
+}

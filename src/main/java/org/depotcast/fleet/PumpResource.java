@@ -1,0 +1,115 @@
+package org.depotcast.fleet;
+
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotNull;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PUT;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.MediaType;
+import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
+import org.depotcast.access.Roles;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.ImportResult;
+import org.depotcast.common.QueryParams;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.util.List;
+
+@Path("/api/pumps")
+@Produces(MediaType.APPLICATION_JSON)
+class PumpResource {
+    private final PumpService pumps;
+    private final UsageService usage;
+
+    PumpResource(PumpService pumps, UsageService usage) {
+        this.pumps = pumps;
+        this.usage = usage;
+    }
+
+    record UsageReadingResponse(LocalDate readOn, BigDecimal hoursPerDay, UsageSource source) {
+        static UsageReadingResponse from(UsageReading r) {
+            return new UsageReadingResponse(r.readOn, r.hoursPerDay, r.source);
+        }
+    }
+
+    @GET
+    public List<PumpResponse> list(@QueryParam("depot") String depot, @QueryParam("status") String status) {
+        return pumps.search(depot, QueryParams.optionalEnum("status", status, PumpStatus.class)).stream().map(PumpResponse::from).toList();
+    }
+
+    @GET
+    @Path("{assetId}")
+    public PumpResponse get(@PathParam("assetId") String assetId) {
+        return pumps.find(assetId).map(PumpResponse::from)
+                .orElseThrow(() -> new EntityMissingException(null, "pump", assetId));
+    }
+
+    @POST
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public Response register(@Valid @NotNull PumpRequest request, UriInfo uri) {
+        Pump pump = pumps.register(request);
+        return Response.created(uri.getAbsolutePathBuilder().path(pump.assetId).build())
+                .entity(PumpResponse.from(pump)).build();
+    }
+
+    @PUT
+    @Path("{assetId}")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public PumpResponse update(@PathParam("assetId") String assetId, @Valid @NotNull PumpRequest request) {
+        return PumpResponse.from(pumps.update(assetId, request));
+    }
+
+    @GET
+    @Path("{assetId}/usage")
+    public List<UsageReadingResponse> usage(@PathParam("assetId") String assetId) {
+        return usage.of(assetId).stream().map(UsageReadingResponse::from).toList();
+    }
+
+    @POST
+    @Path("{assetId}/usage")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.MECHANIC, Roles.ADMIN})
+    public Response recordUsage(@PathParam("assetId") String assetId, @Valid @NotNull UsageReadingRequest request) {
+        return Response.status(201).entity(UsageReadingResponse.from(usage.record(assetId, request))).build();
+    }
+
+    @POST
+    @Path("import")
+    @Consumes({"text/csv", MediaType.TEXT_PLAIN})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public ImportResult importCsv(String csv) {
+        return new ImportResult(pumps.importCsv(csv));
+    }
+
+    @GET
+    @Path("export")
+    @Produces("text/csv")
+    public String exportCsv() {
+        return pumps.exportCsv();
+    }
+
+    @POST
+    @Path("usage/import")
+    @Consumes({"text/csv", MediaType.TEXT_PLAIN})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public ImportResult importUsage(String csv) {
+        return new ImportResult(usage.importCsv(csv));
+    }
+
+    @GET
+    @Path("usage/export")
+    @Produces("text/csv")
+    public String exportUsage() {
+        return usage.exportCsv();
+    }
+}

@@ -1,0 +1,172 @@
+package org.depotcast.fleet;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.PumpModel;
+import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvRow;
+import org.depotcast.common.CsvTable;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import java.util.Set;
+
+/** The register of installed pumps and their usage readings. */
+@ApplicationScoped
+public class PumpService {
+    static final List<String> CSV_COLUMNS = List.of("asset_id", "model_code", "depth_m", "installed_on", "latitude",
+            "longitude", "depot_code", "assigned_mechanic", "status", "status_since", "usage_hours_per_day",
+            "usage_source");
+
+    private final PumpRepository pumps;
+    private final PumpModelService models;
+    private final LocationService locations;
+
+    PumpService(PumpRepository pumps, PumpModelService models, LocationService locations) {
+        this.pumps = pumps;
+        this.models = models;
+        this.locations = locations;
+    }
+
+    public List<Pump> search(String depotCode, PumpStatus status) {
+        Long depotId = depotCode == null ? null : locations.require("depot", depotCode).id;
+        return pumps.search(depotId, status);
+    }
+
+    public List<Pump> all() {
+        return pumps.search(null, null);
+    }
+
+    public Optional<Pump> find(String assetId) {
+        return pumps.byAssetId(assetId);
+    }
+
+    public Pump require(String field, String assetId) {
+        return pumps.byAssetId(assetId).orElseThrow(() -> new EntityMissingException(field, "pump", assetId));
+    }
+
+    @Transactional
+    public Pump register(PumpRequest request) {
+        if (pumps.byAssetId(request.assetId()).isPresent()) {
+            throw new ConflictException("assetId", "pump '" + request.assetId() + "' is already registered");
+        }
+        Pump pump = new Pump();
+        apply(pump, request, models.require("modelCode", request.modelCode()), depot("depotCode", request.depotCode()));
+        pumps.persist(pump);
+        return pump;
+    }
+
+    @Transactional
+    public Pump update(String assetId, PumpRequest request) {
+        Pump pump = pumps.byAssetId(assetId).orElseThrow(() -> new EntityMissingException(null, "pump", assetId));
+        if (!assetId.equals(request.assetId())) {
+            throw new ConflictException("assetId", "the asset id in the body must match the one in the path");
+        }
+        apply(pump, request, models.require("modelCode", request.modelCode()), depot("depotCode", request.depotCode()));
+        return pump;
+    }
+
+    /** All or nothing; existing asset ids are updated. */
+    @Transactional
+    public int importCsv(String csv) {
+        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 4));
+        Map<String, PumpModel> modelCache = new HashMap<>();
+        Map<String, Location> depotCache = new HashMap<>();
+        Set<String> seen = new HashSet<>();
+        List<PumpRequest> requests = new java.util.ArrayList<>();
+        for (CsvRow row : table.rows()) {
+            String assetId = row.text("asset_id");
+            if (assetId != null && !seen.add(assetId)) {
+                row.reject("asset_id", "appears twice in the file");
+            }
+            String modelCode = row.text("model_code");
+            if (modelCode != null && modelCache.computeIfAbsent(modelCode, c -> models.find(c).orElse(null)) == null) {
+                row.reject("model_code", "pump model '" + modelCode + "' does not exist");
+            }
+            String depotCode = row.text("depot_code");
+            if (depotCode != null && depotCache.computeIfAbsent(depotCode, c -> locations.find(c)
+                    .filter(l -> l.kind == LocationKind.DEPOT).orElse(null)) == null) {
+                row.reject("depot_code", "depot '" + depotCode + "' does not exist");
+            }
+            BigDecimal depth = row.decimal("depth_m", BigDecimal.ZERO, true);
+            LocalDate installed = row.date("installed_on");
+            if (installed != null && installed.isAfter(LocalDate.now())) {
+                row.reject("installed_on", "must not be in the future");
+            }
+            BigDecimal usage = row.optionalDecimal("usage_hours_per_day", BigDecimal.ZERO, false);
+            if (usage != null && usage.compareTo(BigDecimal.valueOf(24)) > 0) {
+                row.reject("usage_hours_per_day", "must be at most 24");
+            }
+            PumpStatus status = row.optionalText("status") == null ? PumpStatus.WORKING : row.choice("status", PumpStatus.class);
+            UsageSource source = row.optionalText("usage_source") == null ? null : row.choice("usage_source", UsageSource.class);
+            requests.add(new PumpRequest(assetId, modelCode, depth, installed,
+                    row.optionalDecimal("latitude", BigDecimal.valueOf(-90), false),
+                    row.optionalDecimal("longitude", BigDecimal.valueOf(-180), false), depotCode,
+                    row.optionalText("assigned_mechanic"), status, row.optionalDate("status_since"), usage, source));
+        }
+        table.problems().throwIfAny();
+        for (PumpRequest request : requests) {
+            Pump pump = pumps.byAssetId(request.assetId()).orElseGet(Pump::new);
+            apply(pump, request, modelCache.get(request.modelCode()), depotCache.get(request.depotCode()));
+            if (pump.id == null) {
+                pumps.persist(pump);
+            }
+        }
+        return requests.size();
+    }
+
+    public String exportCsv() {
+        return CsvOut.write(CSV_COLUMNS, all(), p -> java.util.Arrays.asList(p.assetId, p.model.code,
+                p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude), p.depot.code,
+                p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
+                p.brokenSince != null ? p.brokenSince : p.decommissionedOn != null ? p.decommissionedOn : "",
+                p.usageHoursPerDay.toPlainString(), p.usageSource));
+    }
+
+    private Location depot(String field, String code) {
+        Location location = locations.require(field, code);
+        if (location.kind != LocationKind.DEPOT) {
+            throw new BusinessRuleException(field, "'" + code + "' is a " + location.kind + ", not a depot");
+        }
+        return location;
+    }
+
+    private static void apply(Pump pump, PumpRequest r, PumpModel model, Location depot) {
+        pump.assetId = r.assetId();
+        pump.model = model;
+        pump.depthM = r.depthM();
+        pump.installedOn = r.installedOn();
+        pump.latitude = r.latitude();
+        pump.longitude = r.longitude();
+        pump.depot = depot;
+        pump.assignedMechanic = r.assignedMechanic();
+        PumpStatus status = r.status() == null ? PumpStatus.WORKING : r.status();
+        if (status != PumpStatus.WORKING && r.statusSince() == null) {
+            throw new BusinessRuleException("statusSince", "a " + status + " pump needs the date it became so");
+        }
+        pump.setStatus(status, r.statusSince());
+        if (r.usageHoursPerDay() == null) {
+            pump.usageHoursPerDay = Pump.DEFAULT_HOURS_PER_DAY;
+            pump.usageSource = UsageSource.DEFAULT;
+        } else {
+            pump.usageHoursPerDay = r.usageHoursPerDay();
+            pump.usageSource = r.usageSource() == null ? UsageSource.SURVEYED : r.usageSource();
+        }
+    }
+
+    private static String plain(BigDecimal value) {
+        return value == null ? "" : value.toPlainString();
+    }
+}

@@ -1,0 +1,5 @@
+package org.depotcast.fleet;
+
+public enum PumpStatus {
+    WORKING, BROKEN, DECOMMISSIONED
+}

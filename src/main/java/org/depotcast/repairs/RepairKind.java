@@ -1,0 +1,5 @@
+package org.depotcast.repairs;
+
+public enum RepairKind {
+    BREAKDOWN, PREVENTIVE
+}

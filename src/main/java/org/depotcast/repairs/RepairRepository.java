@@ -1,0 +1,47 @@
+package org.depotcast.repairs;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.panache.common.Sort;
+import jakarta.enterprise.context.ApplicationScoped;
+
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Optional;
+
+@ApplicationScoped
+class RepairRepository implements PanacheRepository<Repair> {
+    Optional<Repair> byRef(String repairRef) {
+        return find("repairRef", repairRef).firstResultOptional();
+    }
+
+    List<Repair> search(Long pumpId, LocalDate since, int limit) {
+        Sort newestFirst = Sort.descending("reportedOn").and("id", Sort.Direction.Descending);
+        if (pumpId != null) {
+            return since == null ? find("pump.id", newestFirst, pumpId).page(0, limit).list()
+                    : find("pump.id = ?1 and reportedOn >= ?2", newestFirst, pumpId, since).page(0, limit).list();
+        }
+        return since == null ? findAll(newestFirst).page(0, limit).list()
+                : find("reportedOn >= ?1", newestFirst, since).page(0, limit).list();
+    }
+
+    java.util.Set<String> allRefs() {
+        return new java.util.HashSet<>(getEntityManager().createQuery("select r.repairRef from Repair r", String.class)
+                .getResultList());
+    }
+
+    List<Repair> allInOrder() {
+        return listAll(Sort.by("repairRef"));
+    }
+
+    /**
+     * Every part replaced, one row per repair line: part id, pump id, depot id, mechanic, repair kind, date fixed
+     * (reported when not yet fixed), quantity. The raw demand history for forecasting.
+     */
+    List<Object[]> consumptionRows() {
+        return getEntityManager().createQuery("""
+                select l.part.id, r.pump.id, r.pump.depot.id, r.mechanic, r.kind,
+                       coalesce(r.fixedOn, r.reportedOn), l.quantity
+                from RepairLine l join l.repair r
+                """, Object[].class).getResultList();
+    }
+}

@@ -1,0 +1,73 @@
+package org.depotcast.repairs;
+
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotNull;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.DefaultValue;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.MediaType;
+import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
+import org.depotcast.access.Roles;
+import org.depotcast.common.ImportResult;
+import org.depotcast.common.QueryParams;
+
+import java.time.LocalDate;
+import java.util.List;
+
+@Path("/api/repairs")
+@Produces(MediaType.APPLICATION_JSON)
+class RepairResource {
+    private final RepairService service;
+
+    RepairResource(RepairService service) {
+        this.service = service;
+    }
+
+    @GET
+    public List<RepairResponse> list(@QueryParam("asset") String asset, @QueryParam("since") String since,
+                                     @QueryParam("limit") String limit) {
+        return service.search(asset, QueryParams.optionalDate("since", since),
+                        QueryParams.intInRange("limit", limit, 200, 1, 10_000)).stream().map(RepairResponse::from).toList();
+    }
+
+    @GET
+    @Path("{repairRef}")
+    public RepairResponse get(@PathParam("repairRef") String repairRef) {
+        return RepairResponse.from(service.get(repairRef));
+    }
+
+    /** 201 for a new repair; 200 with the stored one when the phone resends the same reference. */
+    @POST
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.MECHANIC, Roles.STORES_OFFICER, Roles.ADMIN})
+    public Response record(@Valid @NotNull RepairRequest request, UriInfo uri) {
+        RepairService.Recorded recorded = service.record(request);
+        RepairResponse body = RepairResponse.from(recorded.repair());
+        return recorded.replayed() ? Response.ok(body).build()
+                : Response.created(uri.getAbsolutePathBuilder().path(body.repairRef()).build()).entity(body).build();
+    }
+
+    @POST
+    @Path("import")
+    @Consumes({"text/csv", MediaType.TEXT_PLAIN})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public ImportResult importCsv(String csv) {
+        return new ImportResult(service.importCsv(csv));
+    }
+
+    @GET
+    @Path("export")
+    @Produces("text/csv")
+    public String exportCsv() {
+        return service.exportCsv();
+    }
+}

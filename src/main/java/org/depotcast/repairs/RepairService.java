@@ -1,0 +1,256 @@
+package org.depotcast.repairs;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.access.Roles;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvRow;
+import org.depotcast.common.CsvTable;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.Quantities;
+import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.MovementCommand;
+import org.depotcast.stock.MovementKind;
+import org.depotcast.stock.StockLedgerService;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/** Repair records, and the consumption each fixed repair posts to the ledger from the mechanic's kit. */
+@ApplicationScoped
+public class RepairService {
+    static final List<String> CSV_COLUMNS = List.of("repair_ref", "asset_id", "mechanic", "kind", "reported_on",
+            "diagnosed_on", "parts_available_on", "fixed_on", "fault", "part_number", "quantity");
+
+    private final RepairRepository repairs;
+    private final PumpService pumps;
+    private final PartService parts;
+    private final LocationService locations;
+    private final StockLedgerService ledger;
+    private final CurrentUser currentUser;
+
+    RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
+                  StockLedgerService ledger, CurrentUser currentUser) {
+        this.repairs = repairs;
+        this.pumps = pumps;
+        this.parts = parts;
+        this.locations = locations;
+        this.ledger = ledger;
+        this.currentUser = currentUser;
+    }
+
+    public record Recorded(Repair repair, boolean replayed) {
+    }
+
+    public Repair get(String repairRef) {
+        return repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
+    }
+
+    public List<Repair> search(String assetId, LocalDate since, int limit) {
+        Long pumpId = assetId == null ? null : pumps.require("asset", assetId).id;
+        return repairs.search(pumpId, since, limit);
+    }
+
+    /** Consumption history rows for forecasting; see {@link RepairRepository#consumptionRows()}. */
+    public List<Object[]> consumptionRows() {
+        return repairs.consumptionRows();
+    }
+
+    /** Records a repair; a fixed one consumes its parts from the mechanic's kit, all in one transaction. */
+    @Transactional
+    public Recorded record(RepairRequest request) {
+        Optional<Repair> earlier = repairs.byRef(request.repairRef());
+        if (earlier.isPresent()) {
+            if (!earlier.get().pump.assetId.equals(request.assetId())) {
+                throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' was recorded for another pump");
+            }
+            return new Recorded(earlier.get(), true);
+        }
+        String mechanic = request.mechanic() == null || currentUser.hasRole(Roles.MECHANIC)
+                ? currentUser.name() : request.mechanic();
+        String dateProblem = dateOrderProblem(request.reportedOn(), request.diagnosedOn(), request.partsAvailableOn(),
+                request.fixedOn());
+        if (dateProblem != null) {
+            throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
+        }
+        Repair repair = newRepair(request, pumps.require("assetId", request.assetId()), mechanic);
+        List<RepairRequest.Line> lines = request.lines() == null ? List.of() : request.lines();
+        for (int i = 0; i < lines.size(); i++) {
+            Part part = parts.require("lines[" + i + "].partNumber", lines.get(i).partNumber());
+            BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", lines.get(i).quantity(), part.wholeUnits());
+            if (repair.lines.stream().anyMatch(l -> l.part.id.equals(part.id))) {
+                throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber + "' is listed twice");
+            }
+            repair.addLine(line(part, quantity));
+        }
+        repair.ledgerPosted = repair.fixedOn != null && !repair.lines.isEmpty();
+        repairs.persist(repair);
+        repairs.flush();
+        if (repair.ledgerPosted) {
+            consumeFromKit(repair);
+        }
+        return new Recorded(repair, false);
+    }
+
+    private void consumeFromKit(Repair repair) {
+        Location kit = locations.kitOf(repair.mechanic).orElseThrow(() -> new BusinessRuleException("mechanic",
+                "mechanic '" + repair.mechanic + "' carries no kit to consume parts from"));
+        for (RepairLine line : repair.lines) {
+            MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, line.part.partNumber, kit.code, null,
+                    line.quantity, repair.fixedOn.atStartOfDay().atOffset(ZoneOffset.UTC),
+                    repair.kind == RepairKind.BREAKDOWN ? "breakdown repair" : "preventive service",
+                    repair.repairRef, "repair:" + repair.repairRef + ":" + line.part.partNumber, null, repair.id);
+            ledger.postWithin(command);
+        }
+    }
+
+    /**
+     * Imports repair history (one row per replaced part; rows sharing a reference make one repair). History is
+     * kept for forecasting and reporting and is not posted to the ledger: opening stock is counted after it.
+     */
+    @Transactional
+    public int importCsv(String csv) {
+        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 5));
+        Map<String, Pump> pumpsById = new HashMap<>();
+        pumps.all().forEach(p -> pumpsById.put(p.assetId, p));
+        Map<String, Part> partsByNumber = new HashMap<>();
+        parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
+        Map<String, Repair> byRef = new LinkedHashMap<>();
+        java.util.Set<String> storedRefs = repairs.allRefs();
+        for (CsvRow row : table.rows()) {
+            readRow(row, pumpsById, partsByNumber, storedRefs, byRef);
+        }
+        table.problems().throwIfAny();
+        int written = 0;
+        for (Repair repair : byRef.values()) {
+            repairs.persist(repair);
+            if (++written % 500 == 0) {
+                repairs.flush();
+                repairs.getEntityManager().clear();
+            }
+        }
+        return table.rows().size();
+    }
+
+    private void readRow(CsvRow row, Map<String, Pump> pumpsById, Map<String, Part> partsByNumber,
+                         java.util.Set<String> storedRefs, Map<String, Repair> byRef) {
+        String ref = row.text("repair_ref");
+        String assetId = row.text("asset_id");
+        Pump pump = assetId == null ? null : pumpsById.get(assetId);
+        if (assetId != null && pump == null) {
+            row.reject("asset_id", "pump '" + assetId + "' does not exist");
+        }
+        String mechanic = row.text("mechanic");
+        RepairKind kind = row.choice("kind", RepairKind.class);
+        LocalDate reported = row.date("reported_on");
+        LocalDate diagnosed = row.optionalDate("diagnosed_on");
+        LocalDate available = row.optionalDate("parts_available_on");
+        LocalDate fixed = row.optionalDate("fixed_on");
+        String problem = reported == null ? null : dateOrderProblem(reported, diagnosed, available, fixed);
+        if (problem != null) {
+            row.reject(problem.replaceAll("([A-Z])", "_$1").toLowerCase(), "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
+        }
+        String partNumber = row.optionalText("part_number");
+        Part part = partNumber == null ? null : partsByNumber.get(partNumber);
+        if (partNumber != null && part == null) {
+            row.reject("part_number", "part '" + partNumber + "' does not exist");
+        }
+        BigDecimal quantity = partNumber == null ? null : row.decimal("quantity", BigDecimal.ZERO, true);
+        if (quantity != null && part != null && part.wholeUnits() && !Quantities.isWhole(quantity)) {
+            row.reject("quantity", "must be a whole number for part '" + partNumber + "'");
+        }
+        if (ref == null || pump == null) {
+            return;
+        }
+        Repair repair = byRef.get(ref);
+        if (repair == null) {
+            if (storedRefs.contains(ref)) {
+                row.reject("repair_ref", "repair '" + ref + "' is already recorded");
+                return;
+            }
+            repair = newRepair(new RepairRequest(ref, assetId, mechanic, kind, reported, diagnosed, available, fixed,
+                    row.optionalText("fault"), null), pump, mechanic);
+            repair.ledgerPosted = false;
+            byRef.put(ref, repair);
+        } else if (!repair.pump.assetId.equals(assetId)) {
+            row.reject("asset_id", "repair '" + ref + "' names another pump on an earlier row");
+        }
+        if (part != null && quantity != null) {
+            Part p = part;
+            if (repair.lines.stream().anyMatch(l -> l.part.id.equals(p.id))) {
+                row.reject("part_number", "part '" + partNumber + "' appears twice in repair '" + ref + "'");
+            }
+            repair.addLine(line(part, Quantities.normalise(quantity.setScale(Quantities.SCALE, java.math.RoundingMode.HALF_UP))));
+        }
+    }
+
+    public String exportCsv() {
+        List<List<?>> rows = new ArrayList<>();
+        for (Repair r : repairs.allInOrder()) {
+            List<RepairLine> lines = r.lines.isEmpty() ? java.util.Collections.singletonList(null) : r.lines;
+            for (RepairLine l : lines) {
+                rows.add(java.util.Arrays.asList(r.repairRef, r.pump.assetId, r.mechanic, r.kind, r.reportedOn,
+                        blank(r.diagnosedOn), blank(r.partsAvailableOn), blank(r.fixedOn), r.fault == null ? "" : r.fault,
+                        l == null ? "" : l.part.partNumber, l == null ? "" : l.quantity.stripTrailingZeros().toPlainString()));
+            }
+        }
+        return CsvOut.write(CSV_COLUMNS, rows, r -> r);
+    }
+
+    private static Repair newRepair(RepairRequest r, Pump pump, String mechanic) {
+        Repair repair = new Repair();
+        repair.repairRef = r.repairRef();
+        repair.pump = pump;
+        repair.mechanic = mechanic;
+        repair.kind = r.kind();
+        repair.reportedOn = r.reportedOn();
+        repair.diagnosedOn = r.diagnosedOn();
+        repair.partsAvailableOn = r.partsAvailableOn();
+        repair.fixedOn = r.fixedOn();
+        repair.fault = r.fault();
+        return repair;
+    }
+
+    private static RepairLine line(Part part, BigDecimal quantity) {
+        RepairLine line = new RepairLine();
+        line.part = part;
+        line.quantity = quantity;
+        return line;
+    }
+
+    /** Null when the dates run in order, else the name of the first date that comes too early. */
+    static String dateOrderProblem(LocalDate reported, LocalDate diagnosed, LocalDate available, LocalDate fixed) {
+        LocalDate last = reported;
+        String[] names = {"diagnosedOn", "partsAvailableOn", "fixedOn"};
+        LocalDate[] dates = {diagnosed, available, fixed};
+        for (int i = 0; i < dates.length; i++) {
+            if (dates[i] != null) {
+                if (dates[i].isBefore(last)) {
+                    return names[i];
+                }
+                last = dates[i];
+            }
+        }
+        return null;
+    }
+
+    private static Object blank(LocalDate date) {
+        return date == null ? "" : date;
+    }
+}

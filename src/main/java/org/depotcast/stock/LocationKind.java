@@ -1,0 +1,6 @@
+package org.depotcast.stock;
+
+/** Levels of the stock hierarchy: the central store supplies depots, a depot supplies its mechanics' kits. */
+public enum LocationKind {
+    CENTRAL_STORE, DEPOT, KIT
+}

@@ -1,0 +1,28 @@
+package org.depotcast.stock;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+
+/**
+ * What a caller asks the ledger to post. Locations by code (null = outside the programme); the two link ids tie a
+ * movement to the purchase-order line or repair that caused it.
+ */
+public record MovementCommand(MovementKind kind, String partNumber, String fromCode, String toCode,
+                              BigDecimal quantity, OffsetDateTime occurredAt, String reason, String reference,
+                              String idempotencyKey, Long purchaseOrderLineId, Long repairId) {
+
+    public static MovementCommand of(MovementKind kind, String partNumber, String fromCode, String toCode,
+                                     BigDecimal quantity, String reference) {
+        return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, null, null, reference, null, null, null);
+    }
+
+    public MovementCommand withLinks(Long purchaseOrderLineId, Long repairId, String idempotencyKey) {
+        return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, occurredAt, reason, reference,
+                idempotencyKey, purchaseOrderLineId, repairId);
+    }
+
+    public MovementCommand at(OffsetDateTime when) {
+        return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, when, reason, reference,
+                idempotencyKey, purchaseOrderLineId, repairId);
+    }
+}

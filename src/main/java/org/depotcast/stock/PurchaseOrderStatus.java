@@ -1,0 +1,5 @@
+package org.depotcast.stock;
+
+public enum PurchaseOrderStatus {
+    OPEN, CLOSED, CANCELLED
+}

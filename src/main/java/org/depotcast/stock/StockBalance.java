@@ -1,0 +1,47 @@
+package org.depotcast.stock;
+
+import jakarta.persistence.Column;
+import jakarta.persistence.Entity;
+import jakarta.persistence.FetchType;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.JoinColumn;
+import jakarta.persistence.ManyToOne;
+import jakarta.persistence.Table;
+import jakarta.persistence.Version;
+import org.depotcast.catalogue.Part;
+import org.depotcast.common.BusinessRuleException;
+
+import java.math.BigDecimal;
+
+/** On hand for one part at one location; changed only by the ledger, and never below zero. */
+@Entity
+@Table(name = "stock_balance")
+public class StockBalance {
+    @Id
+    @GeneratedValue(strategy = GenerationType.IDENTITY)
+    public Long id;
+    @ManyToOne(fetch = FetchType.LAZY, optional = false)
+    @JoinColumn(name = "part_id")
+    public Part part;
+    @ManyToOne(fetch = FetchType.LAZY, optional = false)
+    @JoinColumn(name = "location_id")
+    public Location location;
+    @Column(name = "on_hand", nullable = false)
+    public BigDecimal onHand;
+    @Version
+    public long version;
+
+    void add(BigDecimal quantity) {
+        onHand = onHand.add(quantity);
+    }
+
+    void take(BigDecimal quantity, String partNumber, String locationCode) {
+        if (onHand.compareTo(quantity) < 0) {
+            throw new BusinessRuleException("quantity", "only " + onHand.stripTrailingZeros().toPlainString() + " of part '"
+                    + partNumber + "' on hand at '" + locationCode + "', cannot take " + quantity.stripTrailingZeros().toPlainString());
+        }
+        onHand = onHand.subtract(quantity);
+    }
+}

@@ -1,0 +1,166 @@
+package org.depotcast.stock;
+
+import io.quarkus.narayana.jta.QuarkusTransaction;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.PersistenceException;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.Quantities;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * The only writer of stock. Each movement and the balances it changes are written in one transaction; balances are
+ * locked (pessimistically, in location-id order so two transfers cannot deadlock) before they are read, so two
+ * mechanics drawing the last unit cannot both succeed and no balance goes below zero.
+ */
+@ApplicationScoped
+public class StockLedgerService {
+    private static final int ATTEMPTS = 3;
+
+    private final StockBalanceRepository balances;
+    private final StockMovementRepository movements;
+    private final LocationService locations;
+    private final PartService parts;
+    private final CurrentUser currentUser;
+
+    StockLedgerService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
+                       PartService parts, CurrentUser currentUser) {
+        this.balances = balances;
+        this.movements = movements;
+        this.locations = locations;
+        this.parts = parts;
+        this.currentUser = currentUser;
+    }
+
+    /**
+     * Posts in a transaction of its own. A race on creating a new balance row or on the idempotency key surfaces as
+     * a constraint violation; it is retried, and a resend under a known key returns the movement already posted.
+     */
+    public PostedMovement post(MovementCommand command) {
+        String actor = currentUser.name();
+        for (int attempt = 1; ; attempt++) {
+            try {
+                return QuarkusTransaction.requiringNew().call(() -> postAs(command, actor));
+            } catch (PersistenceException e) {
+                Optional<StockMovement> earlier = command.idempotencyKey() == null ? Optional.empty()
+                        : QuarkusTransaction.requiringNew().call(() -> movements.byIdempotencyKey(command.idempotencyKey()));
+                if (earlier.isPresent()) {
+                    return replay(earlier.get(), command);
+                }
+                if (attempt == ATTEMPTS) {
+                    throw new ConflictException(null, "the stock record was busy; try again");
+                }
+            }
+        }
+    }
+
+    /** Posts inside the caller's transaction (a repair with its consumptions, a receipt with its order line). */
+    @Transactional(Transactional.TxType.MANDATORY)
+    public PostedMovement postWithin(MovementCommand command) {
+        return postAs(command, currentUser.name());
+    }
+
+    private PostedMovement postAs(MovementCommand command, String actor) {
+        if (command.idempotencyKey() != null) {
+            Optional<StockMovement> earlier = movements.byIdempotencyKey(command.idempotencyKey());
+            if (earlier.isPresent()) {
+                return replay(earlier.get(), command);
+            }
+        }
+        if (command.kind() == null) {
+            throw new InvalidInputException("kind", "is required");
+        }
+        Part part = parts.require("partNumber", command.partNumber());
+        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.wholeUnits());
+        Location from = command.fromCode() == null ? null : locations.require("from", command.fromCode());
+        Location to = command.toCode() == null ? null : locations.require("to", command.toCode());
+        String endsProblem = command.kind().endsProblem(from == null ? null : from.kind, to == null ? null : to.kind,
+                from != null && to != null && from.id.equals(to.id));
+        if (endsProblem != null) {
+            throw new BusinessRuleException(from != null && to != null && from.id.equals(to.id) ? "to" : "kind", endsProblem);
+        }
+        if (command.kind() == MovementKind.ISSUE_TO_KIT || command.kind() == MovementKind.RETURN) {
+            Location kit = command.kind() == MovementKind.ISSUE_TO_KIT ? to : from;
+            Location depot = command.kind() == MovementKind.ISSUE_TO_KIT ? from : to;
+            if (!kit.parent.id.equals(depot.id)) {
+                throw new BusinessRuleException("to", "kit '" + kit.code + "' belongs to depot '" + kit.parent.code + "'");
+            }
+        }
+        applyToBalances(part, from, to, quantity);
+        StockMovement movement = new StockMovement();
+        movement.kind = command.kind();
+        movement.part = part;
+        movement.fromLocation = from;
+        movement.toLocation = to;
+        movement.quantity = quantity;
+        movement.recordedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        movement.occurredAt = command.occurredAt() == null ? movement.recordedAt : command.occurredAt();
+        movement.actor = actor;
+        movement.reason = command.reason();
+        movement.reference = command.reference();
+        movement.idempotencyKey = command.idempotencyKey();
+        movement.purchaseOrderLineId = command.purchaseOrderLineId();
+        movement.repairId = command.repairId();
+        movements.persist(movement);
+        movements.flush();
+        return new PostedMovement(movement, false);
+    }
+
+    private void applyToBalances(Part part, Location from, Location to, BigDecimal quantity) {
+        // Lock in location-id order: two opposite transfers of the same part must not wait on each other.
+        boolean fromFirst = to == null || (from != null && from.id < to.id);
+        if (fromFirst) {
+            take(part, from, quantity);
+            give(part, to, quantity);
+        } else {
+            give(part, to, quantity);
+            take(part, from, quantity);
+        }
+    }
+
+    private void take(Part part, Location from, BigDecimal quantity) {
+        if (from == null) {
+            return;
+        }
+        StockBalance balance = balances.lockedFor(part.id, from.id).orElseThrow(() -> new BusinessRuleException("quantity",
+                "no stock of part '" + part.partNumber + "' at '" + from.code + "'"));
+        balance.take(quantity, part.partNumber, from.code);
+    }
+
+    private void give(Part part, Location to, BigDecimal quantity) {
+        if (to == null) {
+            return;
+        }
+        StockBalance balance = balances.lockedFor(part.id, to.id).orElseGet(() -> {
+            StockBalance created = new StockBalance();
+            created.part = part;
+            created.location = to;
+            created.onHand = BigDecimal.ZERO.setScale(Quantities.SCALE);
+            balances.persist(created);
+            balances.flush();
+            return created;
+        });
+        balance.add(quantity);
+    }
+
+    private static PostedMovement replay(StockMovement earlier, MovementCommand command) {
+        boolean same = earlier.kind == command.kind()
+                && Objects.equals(earlier.part.partNumber, command.partNumber())
+                && command.quantity() != null && earlier.quantity.compareTo(command.quantity()) == 0;
+        if (!same) {
+            throw new ConflictException("idempotencyKey", "key '" + command.idempotencyKey()
+                    + "' was already used for a different movement");
+        }
+        return new PostedMovement(earlier, true);
+    }
+}

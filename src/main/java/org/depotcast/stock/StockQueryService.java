@@ -1,0 +1,106 @@
+package org.depotcast.stock;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+
+/** Read side of the stock ledger: balances with on-order, movement history, and reconciliation. */
+@ApplicationScoped
+public class StockQueryService {
+    private final StockBalanceRepository balances;
+    private final StockMovementRepository movements;
+    private final LocationService locations;
+    private final PartService parts;
+    private final PurchaseOrderService orders;
+
+    StockQueryService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
+                      PartService parts, PurchaseOrderService orders) {
+        this.balances = balances;
+        this.movements = movements;
+        this.locations = locations;
+        this.parts = parts;
+        this.orders = orders;
+    }
+
+    /** Every part with stock or stock on order at the location (or everywhere when {@code locationCode} is null). */
+    @Transactional
+    public List<BalanceView> balances(String locationCode) {
+        Long locationId = locationCode == null ? null : locations.require("location", locationCode).id;
+        Map<Long, Part> partsById = new HashMap<>();
+        parts.all().forEach(p -> partsById.put(p.id, p));
+        Map<Long, String> codes = new HashMap<>();
+        locations.all().forEach(l -> codes.put(l.id, l.code));
+        Map<Long, Map<Long, BigDecimal>> onOrder = orders.onOrder(locationId);
+        Map<List<Long>, BigDecimal[]> cells = new HashMap<>();
+        for (Object[] row : balances.onHand(locationId)) {
+            cells.put(List.of((Long) row[0], (Long) row[1]), new BigDecimal[]{(BigDecimal) row[2], BigDecimal.ZERO});
+        }
+        onOrder.forEach((partId, byLocation) -> byLocation.forEach((locId, qty) -> cells
+                .computeIfAbsent(List.of(partId, locId), k -> new BigDecimal[]{BigDecimal.ZERO, BigDecimal.ZERO})[1] = qty));
+        List<BalanceView> views = new ArrayList<>(cells.size());
+        cells.forEach((key, value) -> {
+            Part part = partsById.get(key.get(0));
+            views.add(new BalanceView(part.partNumber, part.description, codes.get(key.get(1)), value[0], value[1]));
+        });
+        views.sort(Comparator.comparing(BalanceView::locationCode).thenComparing(BalanceView::partNumber));
+        return views;
+    }
+
+    /** On hand of one part at one location; zero when it never had any. */
+    @Transactional
+    public BigDecimal onHand(String partNumber, String locationCode) {
+        Part part = parts.require("partNumber", partNumber);
+        Location location = locations.require("location", locationCode);
+        return balances.find("part.id = ?1 and location.id = ?2", part.id, location.id).firstResultOptional()
+                .map(b -> b.onHand).orElse(BigDecimal.ZERO);
+    }
+
+    @Transactional
+    public List<StockMovement> movements(String partNumber, String locationCode, OffsetDateTime since, int limit) {
+        Long partId = partNumber == null ? null : parts.require("part", partNumber).id;
+        Long locationId = locationCode == null ? null : locations.require("location", locationCode).id;
+        return movements.search(partId, locationId, since, limit);
+    }
+
+    @Transactional
+    public ReconcileReport reconcile() {
+        Map<List<Long>, BigDecimal> ledger = new HashMap<>();
+        for (Object[] row : movements.ledgerSums()) {
+            ledger.put(List.of(((Number) row[0]).longValue(), ((Number) row[1]).longValue()), toDecimal(row[2]));
+        }
+        List<ReconcileReport.Mismatch> mismatches = new ArrayList<>();
+        List<Object[]> stored = balances.onHand(null);
+        for (Object[] row : stored) {
+            List<Long> key = List.of((Long) row[0], (Long) row[1]);
+            BigDecimal sum = Objects.requireNonNullElse(ledger.remove(key), BigDecimal.ZERO);
+            if (sum.compareTo((BigDecimal) row[2]) != 0) {
+                mismatches.add(mismatch(key, (BigDecimal) row[2], sum));
+            }
+        }
+        // Ledger lines with no balance row at all are mismatches too, unless they net to zero.
+        ledger.forEach((key, sum) -> {
+            if (sum.signum() != 0) {
+                mismatches.add(mismatch(key, BigDecimal.ZERO, sum));
+            }
+        });
+        return new ReconcileReport(stored.size(), movements.count(), mismatches.isEmpty(), mismatches);
+    }
+
+    private ReconcileReport.Mismatch mismatch(List<Long> key, BigDecimal balance, BigDecimal sum) {
+        return new ReconcileReport.Mismatch(parts.byId(key.get(0)).partNumber, locations.byId(key.get(1)).code, balance, sum);
+    }
+
+    private static BigDecimal toDecimal(Object value) {
+        return value instanceof BigDecimal d ? d : new BigDecimal(value.toString());
+    }
+}
