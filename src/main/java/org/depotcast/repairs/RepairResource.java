@@ -51,7 +51,7 @@ class RepairResource {
     @RolesAllowed({Roles.MECHANIC, Roles.STORES_OFFICER, Roles.ADMIN})
     public Response record(@Valid @NotNull RepairRequest request, UriInfo uri) {
         RepairService.Recorded recorded = service.record(request);
-        RepairResponse body = RepairResponse.from(recorded.repair());
+        RepairResponse body = recorded.repair();
         return recorded.replayed() ? Response.ok(body).build()
                 : Response.created(uri.getAbsolutePathBuilder().path(body.repairRef()).build()).entity(body).build();
     }

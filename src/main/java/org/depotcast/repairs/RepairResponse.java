@@ -11,7 +11,7 @@ public record RepairResponse(String repairRef, String assetId, String depotCode,
     public record Line(String partNumber, BigDecimal quantity) {
     }
 
-    static RepairResponse from(Repair r) {
+    public static RepairResponse from(Repair r) {
         return new RepairResponse(r.repairRef, r.pump.assetId, r.pump.depot.code, r.mechanic, r.kind, r.reportedOn,
                 r.diagnosedOn, r.partsAvailableOn, r.fixedOn, r.fault, r.ledgerPosted, r.daysWaitingForParts(),
                 r.downtimeDays(), r.lines.stream().map(l -> new Line(l.part.partNumber, l.quantity)).toList());

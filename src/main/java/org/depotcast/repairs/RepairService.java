@@ -55,7 +55,7 @@ public class RepairService {
         this.currentUser = currentUser;
     }
 
-    public record Recorded(Repair repair, boolean replayed) {
+    public record Recorded(RepairResponse repair, boolean replayed) {
     }
 
     public Repair get(String repairRef) {
@@ -80,7 +80,7 @@ public class RepairService {
             if (!earlier.get().pump.assetId.equals(request.assetId())) {
                 throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' was recorded for another pump");
             }
-            return new Recorded(earlier.get(), true);
+            return new Recorded(RepairResponse.from(earlier.get()), true);
         }
         String mechanic = request.mechanic() == null || currentUser.hasRole(Roles.MECHANIC)
                 ? currentUser.name() : request.mechanic();
@@ -105,7 +105,7 @@ public class RepairService {
         if (repair.ledgerPosted) {
             consumeFromKit(repair);
         }
-        return new Recorded(repair, false);
+        return new Recorded(RepairResponse.from(repair), false);
     }
 
     private void consumeFromKit(Repair repair) {

@@ -54,7 +54,7 @@ class PurchaseOrderResource {
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public Response receive(@PathParam("orderNumber") String orderNumber, @Valid @NotNull ReceiptRequest request) {
         PostedMovement posted = service.receive(orderNumber, request);
-        return Response.status(posted.replayed() ? 200 : 201).entity(MovementResponse.from(posted.movement())).build();
+        return Response.status(posted.replayed() ? 200 : 201).entity(posted.movement()).build();
     }
 
     @POST

@@ -108,7 +108,7 @@ public class PurchaseOrderService {
                 receipt.idempotencyKey(), line.id, null);
         PostedMovement posted = ledger.postWithin(command);
         if (!posted.replayed()) {
-            line.receive(posted.movement().quantity);
+            line.receive(posted.movement().quantity());
             order.closeIfComplete();
         }
         return posted;

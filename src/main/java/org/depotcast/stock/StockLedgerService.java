@@ -113,7 +113,7 @@ public class StockLedgerService {
         movement.repairId = command.repairId();
         movements.persist(movement);
         movements.flush();
-        return new PostedMovement(movement, false);
+        return new PostedMovement(MovementResponse.from(movement), false);
     }
 
     private void applyToBalances(Part part, Location from, Location to, BigDecimal quantity) {
@@ -161,6 +161,6 @@ public class StockLedgerService {
             throw new ConflictException("idempotencyKey", "key '" + command.idempotencyKey()
                     + "' was already used for a different movement");
         }
-        return new PostedMovement(earlier, true);
+        return new PostedMovement(MovementResponse.from(earlier), true);
     }
 }

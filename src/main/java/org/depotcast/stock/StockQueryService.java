@@ -66,10 +66,10 @@ public class StockQueryService {
     }
 
     @Transactional
-    public List<StockMovement> movements(String partNumber, String locationCode, OffsetDateTime since, int limit) {
+    public List<MovementResponse> movements(String partNumber, String locationCode, OffsetDateTime since, int limit) {
         Long partId = partNumber == null ? null : parts.require("part", partNumber).id;
         Long locationId = locationCode == null ? null : locations.require("location", locationCode).id;
-        return movements.search(partId, locationId, since, limit);
+        return movements.search(partId, locationId, since, limit).stream().map(MovementResponse::from).toList();
     }
 
     @Transactional

@@ -42,7 +42,7 @@ class StockResource {
     @RolesAllowed({Roles.STORES_OFFICER, Roles.MECHANIC, Roles.ADMIN})
     public Response post(@Valid @NotNull MovementRequest request, UriInfo uri) {
         PostedMovement posted = ledger.post(request.toCommand());
-        MovementResponse body = MovementResponse.from(posted.movement());
+        MovementResponse body = posted.movement();
         return posted.replayed() ? Response.ok(body).build()
                 : Response.created(uri.getBaseUriBuilder().path("api/stock/movements").queryParam("id", body.id()).build())
                 .entity(body).build();
@@ -53,7 +53,7 @@ class StockResource {
     public List<MovementResponse> movements(@QueryParam("part") String part, @QueryParam("location") String location,
                                             @QueryParam("since") String since, @QueryParam("limit") String limit) {
         return queries.movements(part, location, QueryParams.optionalInstant("since", since),
-                        QueryParams.intInRange("limit", limit, 200, 1, 10_000)).stream().map(MovementResponse::from).toList();
+                QueryParams.intInRange("limit", limit, 200, 1, 10_000));
     }
 
     @GET
