@@ -1,5 +1,6 @@
 package org.depotcast.catalogue;
 
+import jakarta.persistence.Cacheable;
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
 import jakarta.persistence.EnumType;
@@ -10,14 +11,20 @@ import jakarta.persistence.Id;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 
+import org.hibernate.annotations.NaturalId;
+import org.hibernate.annotations.NaturalIdCache;
+
 import java.math.BigDecimal;
 
 @Entity
+@Cacheable
+@NaturalIdCache
 @Table(name = "part")
 public class Part {
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
     public Long id;
+    @NaturalId(mutable = true)
     @Column(name = "part_number", nullable = false, unique = true)
     public String partNumber;
     @Column(nullable = false)

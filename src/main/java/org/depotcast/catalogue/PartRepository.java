@@ -10,7 +10,8 @@ import java.util.Optional;
 @ApplicationScoped
 class PartRepository implements PanacheRepository<Part> {
     Optional<Part> byPartNumber(String partNumber) {
-        return find("partNumber", partNumber).firstResultOptional();
+        // Natural-id lookups are served from the second-level cache: the ledger looks parts up on every movement.
+        return getSession().bySimpleNaturalId(Part.class).loadOptional(partNumber);
     }
 
     List<Part> allByNumber() {

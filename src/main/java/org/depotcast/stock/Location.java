@@ -1,5 +1,6 @@
 package org.depotcast.stock;
 
+import jakarta.persistence.Cacheable;
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
 import jakarta.persistence.EnumType;
@@ -13,14 +14,20 @@ import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 
+import org.hibernate.annotations.NaturalId;
+import org.hibernate.annotations.NaturalIdCache;
+
 import java.math.BigDecimal;
 
 @Entity
+@Cacheable
+@NaturalIdCache
 @Table(name = "location")
 public class Location {
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
     public Long id;
+    @NaturalId(mutable = true)
     @Column(nullable = false, unique = true)
     public String code;
     @Column(nullable = false)

@@ -10,7 +10,7 @@ import java.util.Optional;
 @ApplicationScoped
 class LocationRepository implements PanacheRepository<Location> {
     Optional<Location> byCode(String code) {
-        return find("code", code).firstResultOptional();
+        return getSession().bySimpleNaturalId(Location.class).loadOptional(code);
     }
 
     List<Location> allByCode() {
