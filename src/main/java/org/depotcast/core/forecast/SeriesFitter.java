@@ -1,0 +1,69 @@
+package org.depotcast.core.forecast;
+
+/**
+ * Fits a method to a series with given smoothing constants, or chooses them by minimising the in-sample mean
+ * squared one-step error over a grid. Grids (stated bounds): α ∈ [0.05, 0.50] step 0.01 for Croston, SBA and SBJ
+ * (the range the intermittent-demand literature recommends); α ∈ [0.01, 1.00] step 0.01 for SES; α and β ∈
+ * [0.05, 0.50] step 0.05 for TSB. TSB starts p̂ at the mean demand share.
+ */
+public final class SeriesFitter {
+    private SeriesFitter() {
+    }
+
+    public static FittedSeries fit(double[] y, ForecastMethod method, double alpha, double beta) {
+        Series.requireValid(y);
+        double[] fitted = new double[y.length];
+        double forecast = run(y, method, alpha, beta, fitted);
+        return new FittedSeries(method, method.usesAlpha() ? alpha : Double.NaN, method.usesBeta() ? beta : Double.NaN,
+                forecast, Smoothing.meanSquaredError(y, fitted), fitted);
+    }
+
+    /** Chooses α (and β for TSB) where not given (NaN) by the in-sample grid search, then fits. */
+    public static FittedSeries fitOptimised(double[] y, ForecastMethod method, double alpha, double beta) {
+        Series.requireValid(y);
+        if (!method.usesAlpha() || (!Double.isNaN(alpha) && (!method.usesBeta() || !Double.isNaN(beta)))) {
+            return fit(y, method, alpha, beta);
+        }
+        double[] work = new double[y.length];
+        double bestAlpha = alpha, bestBeta = beta, bestMse = Double.POSITIVE_INFINITY;
+        double[] alphas = Double.isNaN(alpha) ? grid(method == ForecastMethod.SES ? 0.01 : 0.05,
+                method == ForecastMethod.SES ? 1.0 : 0.5, method == ForecastMethod.TSB ? 0.05 : 0.01) : new double[]{alpha};
+        double[] betas = !method.usesBeta() ? new double[]{Double.NaN}
+                : Double.isNaN(beta) ? grid(0.05, 0.5, 0.05) : new double[]{beta};
+        for (double a : alphas) {
+            for (double b : betas) {
+                run(y, method, a, b, work);
+                double mse = Smoothing.meanSquaredError(y, work);
+                // Strictly better only: ties keep the smaller constant, the smoother forecast.
+                if (mse < bestMse - 1e-12) {
+                    bestMse = mse;
+                    bestAlpha = a;
+                    bestBeta = b;
+                }
+            }
+        }
+        if (Double.isInfinite(bestMse)) {
+            bestAlpha = Double.isNaN(alpha) ? 0.1 : alpha;
+            bestBeta = method.usesBeta() && Double.isNaN(beta) ? 0.1 : beta;
+        }
+        return fit(y, method, bestAlpha, bestBeta);
+    }
+
+    static double run(double[] y, ForecastMethod method, double alpha, double beta, double[] fitted) {
+        return switch (method) {
+            case CROSTON, SBA, SBJ -> Smoothing.croston(y, alpha, method, fitted);
+            case TSB -> Smoothing.tsb(y, alpha, beta, Smoothing.TsbStart.MEAN, fitted);
+            case SES -> Smoothing.ses(y, alpha, fitted);
+            case POISSON -> Smoothing.poissonMean(y, fitted);
+        };
+    }
+
+    private static double[] grid(double from, double to, double step) {
+        int n = (int) Math.round((to - from) / step) + 1;
+        double[] values = new double[n];
+        for (int i = 0; i < n; i++) {
+            values[i] = Math.round((from + i * step) * 1e6) / 1e6;
+        }
+        return values;
+    }
+}

@@ -1,0 +1,86 @@
+package org.depotcast.core.forecast;
+
+import java.util.Arrays;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Forecasts one demand series with a named method, or chooses one ("auto") by rolling-origin backtest.
+ *
+ * <p>Auto: candidates Croston, SBA, TSB, SES and the Poisson mean are each scored over the last
+ * {@link #BACKTEST_ORIGINS} origins with a 3-period horizon; the lowest RMSSE wins, ties to the smaller absolute
+ * bias. With too little history to backtest (fewer than {@link #BACKTEST_ORIGINS} + 6 periods or fewer than two
+ * demands) the Syntetos–Boylan–Croston rule applies: SES for smooth series, SBA otherwise.
+ *
+ * <p>Interval model (stated because the Croston family has no consistent stochastic model, Shenstone &amp; Hyndman
+ * 2005, J. Forecasting 24:389–402): the variance of one period's demand is the larger of the forecast mean and the
+ * in-sample mean squared one-step error, and periods are taken as independent, so demand over L periods has mean
+ * L·f and variance L·σ². It is Poisson when σ² equals the mean, negative binomial when larger.
+ */
+public final class SeriesForecaster {
+    public static final int BACKTEST_ORIGINS = 12;
+    private static final int BACKTEST_HORIZON = 3;
+    private static final List<ForecastMethod> CANDIDATES = List.of(ForecastMethod.CROSTON, ForecastMethod.SBA,
+            ForecastMethod.TSB, ForecastMethod.SES, ForecastMethod.POISSON);
+
+    private SeriesForecaster() {
+    }
+
+    /**
+     * @param method  the method, or null for auto
+     * @param alpha   smoothing constant, NaN to optimise
+     * @param beta    TSB's probability constant, NaN to optimise
+     * @param horizon periods to forecast, 1..60
+     */
+    public static SeriesForecast forecast(double[] history, ForecastMethod method, double alpha, double beta, int horizon) {
+        Series.requireValid(history);
+        if (horizon < 1 || horizon > 60) {
+            throw new IllegalArgumentException("horizon must be between 1 and 60, was " + horizon);
+        }
+        if (!Double.isNaN(alpha)) {
+            Series.requireSmoothing("alpha", alpha);
+        }
+        if (!Double.isNaN(beta)) {
+            Series.requireSmoothing("beta", beta);
+        }
+        DemandProfile profile = DemandProfile.of(history);
+        Map<ForecastMethod, ErrorScores> scores = new EnumMap<>(ForecastMethod.class);
+        ForecastMethod chosen = method;
+        if (chosen == null) {
+            chosen = choose(history, profile, alpha, beta, scores);
+        }
+        FittedSeries fit = SeriesFitter.fitOptimised(history, chosen, alpha, beta);
+        double[] forecast = new double[horizon];
+        Arrays.fill(forecast, fit.perPeriod());
+        double variance = Double.isNaN(fit.inSampleMse()) ? fit.perPeriod() : Math.max(fit.perPeriod(), fit.inSampleMse());
+        return new SeriesForecast(chosen, fit.alpha(), fit.beta(), forecast, profile, scores, variance);
+    }
+
+    private static ForecastMethod choose(double[] history, DemandProfile profile, double alpha, double beta,
+                                         Map<ForecastMethod, ErrorScores> scores) {
+        if (history.length < BACKTEST_ORIGINS + 6 || profile.demands() < 2) {
+            return profile.demandClass() == DemandClass.SMOOTH ? ForecastMethod.SES : ForecastMethod.SBA;
+        }
+        ForecastMethod best = null;
+        for (ForecastMethod candidate : CANDIDATES) {
+            ErrorScores s = Backtest.method(history, BACKTEST_ORIGINS, BACKTEST_HORIZON, candidate, alpha, beta);
+            scores.put(candidate, s);
+            if (best == null || better(s, scores.get(best))) {
+                best = candidate;
+            }
+        }
+        return scores.get(best).rmsse() >= 0 ? best
+                : profile.demandClass() == DemandClass.SMOOTH ? ForecastMethod.SES : ForecastMethod.SBA;
+    }
+
+    private static boolean better(ErrorScores a, ErrorScores b) {
+        if (Double.isNaN(a.rmsse())) {
+            return false;
+        }
+        if (Double.isNaN(b.rmsse()) || a.rmsse() < b.rmsse() - 1e-12) {
+            return true;
+        }
+        return Math.abs(a.rmsse() - b.rmsse()) <= 1e-12 && Math.abs(a.scaledBias()) < Math.abs(b.scaledBias());
+    }
+}
