@@ -142,7 +142,9 @@ public class ProblemMapper {
      * parameter itself (a query or path parameter) when there is none.
      */
     private static String fieldOf(ConstraintViolation<?> v) {
-        String[] parts = v.getPropertyPath().toString().split("\\.");
+        // Container elements add nodes such as "<list element>": the index on the list node already says which.
+        String[] parts = java.util.Arrays.stream(v.getPropertyPath().toString().split("\\."))
+                .filter(p -> !p.startsWith("<")).toArray(String[]::new);
         if (parts.length <= 1) {
             return parts[0];
         }

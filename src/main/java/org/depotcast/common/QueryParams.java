@@ -49,6 +49,28 @@ public final class QueryParams {
         }
     }
 
+    public static Double optionalDouble(String name, String value) {
+        if (value == null || value.isBlank()) {
+            return null;
+        }
+        try {
+            return Double.parseDouble(value.strip());
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(name, "must be a number, was '" + value + "'");
+        }
+    }
+
+    public static Integer optionalInt(String name, String value) {
+        if (value == null || value.isBlank()) {
+            return null;
+        }
+        try {
+            return Integer.parseInt(value.strip());
+        } catch (NumberFormatException e) {
+            throw new InvalidInputException(name, "must be a whole number, was '" + value + "'");
+        }
+    }
+
     public static int intInRange(String name, String value, int defaultValue, int min, int max) {
         if (value == null || value.isBlank()) {
             return defaultValue;

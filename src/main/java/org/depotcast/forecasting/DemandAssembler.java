@@ -1,0 +1,218 @@
+package org.depotcast.forecasting;
+
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.DemandProfile;
+import org.depotcast.core.forecast.ErrorScores;
+import org.depotcast.core.forecast.ForecastMethod;
+import org.depotcast.core.forecast.PreventiveSchedule;
+import org.depotcast.core.forecast.SeriesFitter;
+import org.depotcast.core.forecast.SeriesForecast;
+import org.depotcast.core.forecast.SeriesForecaster;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.IntConsumer;
+
+/**
+ * Turns a fleet snapshot and the fitted fleet models into a forecast for every part at every depot, kit and the
+ * whole programme. Breakdown demand comes either from the fleet model (rate per operating hour × each pump's hours ×
+ * units per breakdown × its depot's shrunk ratio) or from the part's own history by a series method; which one is
+ * decided per series by the declared policy, and under "auto" by the lower RMSSE over the last 12 months with the
+ * fleet model refitted without them. Scheduled-service demand is added on top, pump by pump.
+ */
+final class DemandAssembler {
+    static final String PROGRAMME = "PROGRAMME";
+    static final String FLEET = "FLEET";
+    private static final int HOLDOUT_MONTHS = 12;
+    private static final double DAYS_PER_MONTH = 365.25 / 12;
+
+    private final FleetSnapshot snapshot;
+    private final Map<ComponentFamily, ForecastModelDefinition> definitions;
+    private final Map<ComponentFamily, FleetModel> models;
+    private final Map<ComponentFamily, FleetModel> holdoutModels;
+    private final int horizon;
+    private final int months;
+    private final Map<String, double[]> history = new LinkedHashMap<>();
+    private final Map<String, double[]> fleetFuture = new LinkedHashMap<>();
+    private final Map<String, double[]> fleetHoldout = new LinkedHashMap<>();
+    private final Map<String, double[]> preventive = new LinkedHashMap<>();
+
+    DemandAssembler(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
+                    Map<ComponentFamily, FleetModel> models, Map<ComponentFamily, FleetModel> holdoutModels, int horizon) {
+        this.snapshot = snapshot;
+        this.definitions = definitions;
+        this.models = models;
+        this.holdoutModels = holdoutModels;
+        this.horizon = horizon;
+        this.months = snapshot.months();
+    }
+
+    /** Series keys are "partId|locationCode". */
+    private static String key(long partId, String location) {
+        return partId + "|" + location;
+    }
+
+    private List<String> locationsOf(long depotId, String mechanic) {
+        List<String> codes = new ArrayList<>(3);
+        codes.add(PROGRAMME);
+        codes.add(snapshot.locationCodes().get(depotId));
+        String kit = mechanic == null ? null : snapshot.kitByMechanic().get(mechanic);
+        if (kit != null) {
+            codes.add(kit);
+        }
+        return codes;
+    }
+
+    int seriesCount() {
+        collect();
+        return history.size();
+    }
+
+    private boolean collected;
+
+    private void collect() {
+        if (collected) {
+            return;
+        }
+        collected = true;
+        for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+            int m = snapshot.monthIndex(c.day());
+            if (!c.breakdown() || m < 0 || m >= months) {
+                continue;
+            }
+            for (String location : locationsOf(c.depotId(), c.mechanic())) {
+                history.computeIfAbsent(key(c.partId(), location), k -> new double[months])[m] += c.quantity();
+            }
+        }
+        long origin = snapshot.historyEnd().toEpochDay();
+        for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
+            List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
+            boolean activeNow = pump.endDay() > origin;
+            for (FleetSnapshot.BomPart part : pump.bom()) {
+                addFleet(pump, part, locations, activeNow, origin);
+            }
+            if (activeNow) {
+                addPreventive(pump, locations, origin);
+            }
+        }
+        // Every series with a fleet expectation or a history gets a forecast.
+        fleetFuture.keySet().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
+        preventive.keySet().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
+    }
+
+    private void addFleet(FleetSnapshot.PumpRecord pump, FleetSnapshot.BomPart part, List<String> locations,
+                          boolean activeNow, long origin) {
+        FleetModel model = models.get(part.family());
+        FleetModel holdout = holdoutModels.get(part.family());
+        if (model == null) {
+            return;
+        }
+        if (activeNow) {
+            double hoursPerDay = pump.usage().hoursPerDayOn(origin);
+            double age = (origin - pump.installedDay()) / 365.25;
+            double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), Math.max(0, age), hoursPerDay);
+            double eventsPerMonth = model.ratePerHour(x) * hoursPerDay * DAYS_PER_MONTH * model.depotRatio(pump.depotId());
+            double variance = eventsPerMonth * model.unitsPerEvent() * model.unitsPerEvent()
+                    * (model.fit() == null ? 1 : model.fit().varianceFactor());
+            for (String location : locations) {
+                double[] cell = fleetFuture.computeIfAbsent(key(part.partId(), location), k -> new double[2]);
+                cell[0] += eventsPerMonth * model.unitsPerEvent();
+                cell[1] += variance;
+            }
+        }
+        if (holdout != null) {
+            double[] expected = new double[HOLDOUT_MONTHS];
+            LocalDate start = snapshot.historyEnd().minusMonths(HOLDOUT_MONTHS);
+            for (int m = 0; m < HOLDOUT_MONTHS; m++) {
+                long from = Math.max(start.plusMonths(m).toEpochDay(), pump.installedDay());
+                long to = Math.min(start.plusMonths(m + 1).toEpochDay(), pump.endDay());
+                double hours = pump.usage().hoursBetween(from, to);
+                if (hours > 0) {
+                    double age = ((from + to) / 2.0 - pump.installedDay()) / 365.25;
+                    double[] x = FleetModel.covariateValues(holdout.covariates(), pump.depthM(), age, hours / (to - from));
+                    expected[m] = holdout.ratePerHour(x) * hours * holdout.unitsPerEvent() * holdout.depotRatio(pump.depotId());
+                }
+            }
+            for (String location : locations) {
+                double[] cell = fleetHoldout.computeIfAbsent(key(part.partId(), location), k -> new double[HOLDOUT_MONTHS]);
+                for (int m = 0; m < HOLDOUT_MONTHS; m++) {
+                    cell[m] += expected[m];
+                }
+            }
+        }
+    }
+
+    private void addPreventive(FleetSnapshot.PumpRecord pump, List<String> locations, long origin) {
+        double hoursPerDay = pump.usage().hoursPerDayOn(origin);
+        double[] hoursPerMonth = new double[horizon];
+        Arrays.fill(hoursPerMonth, hoursPerDay * DAYS_PER_MONTH);
+        double since = pump.usage().hoursBetween(Math.max(pump.lastServiceDay(), pump.installedDay()), origin);
+        int[] due = PreventiveSchedule.servicesDue(since, hoursPerMonth, pump.serviceIntervalHours());
+        if (Arrays.stream(due).sum() == 0) {
+            return;
+        }
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            ForecastModelDefinition definition = definitions.get(part.family());
+            if (part.serviceKitQuantity() <= 0 || definition == null || !definition.preventive()) {
+                continue;
+            }
+            for (String location : locations) {
+                double[] cell = preventive.computeIfAbsent(key(part.partId(), location), k -> new double[horizon]);
+                for (int m = 0; m < horizon; m++) {
+                    cell[m] += due[m] * part.serviceKitQuantity();
+                }
+            }
+        }
+    }
+
+    /** Forecasts every series; {@code progress} is told after each one. */
+    List<PartForecastResult> assemble(IntConsumer progress) {
+        collect();
+        List<PartForecastResult> results = new ArrayList<>(history.size());
+        int done = 0;
+        for (Map.Entry<String, double[]> entry : history.entrySet()) {
+            results.add(forecastOne(entry.getKey(), entry.getValue()));
+            progress.accept(++done);
+        }
+        return results;
+    }
+
+    private PartForecastResult forecastOne(String key, double[] series) {
+        int bar = key.indexOf('|');
+        long partId = Long.parseLong(key.substring(0, bar));
+        String location = key.substring(bar + 1);
+        ForecastModelDefinition definition = definitions.get(snapshot.partFamilies().get(partId));
+        String policy = definition == null ? "auto" : definition.methodPolicy();
+        ForecastMethod fixed = policy.equals("auto") || policy.equals("fleet") ? null
+                : ForecastMethod.valueOf(policy.toUpperCase(Locale.ROOT));
+        SeriesForecast fromHistory = SeriesForecaster.forecast(series, fixed, Double.NaN, Double.NaN, horizon);
+        double[] training = Arrays.copyOf(series, months - HOLDOUT_MONTHS);
+        double[] actual = Arrays.copyOfRange(series, months - HOLDOUT_MONTHS, months);
+        double historyFlat = SeriesFitter.fitOptimised(training, fromHistory.method(), Double.NaN, Double.NaN).perPeriod();
+        double[] historyHoldout = new double[HOLDOUT_MONTHS];
+        Arrays.fill(historyHoldout, historyFlat);
+        ErrorScores historyScores = ErrorScores.of(training, historyHoldout, actual);
+        double[] fleetHold = fleetHoldout.get(key);
+        ErrorScores fleetScores = fleetHold == null ? null : ErrorScores.of(training, fleetHold, actual);
+        double[] fleet = fleetFuture.get(key);
+        boolean useFleet = fleet != null && (policy.equals("fleet") || (policy.equals("auto")
+                && (fleetScores == null ? false : !(fleetScores.rmsse() >= historyScores.rmsse()))));
+        double[] pm = preventive.getOrDefault(key, new double[horizon]);
+        double breakdown = useFleet ? fleet[0] : fromHistory.forecast()[0];
+        double variance = useFleet ? Math.max(fleet[1], 0) : fromHistory.perPeriodVariance();
+        double[] monthly = new double[horizon];
+        for (int m = 0; m < horizon; m++) {
+            monthly[m] = breakdown + pm[m];
+        }
+        return new PartForecastResult(partId, location, useFleet ? FLEET : fromHistory.method().name(),
+                useFleet ? Double.NaN : fromHistory.alpha(), useFleet ? Double.NaN : fromHistory.beta(),
+                DemandProfile.of(series), breakdown, variance, pm, monthly, series,
+                useFleet ? fleetScores : historyScores, fleetScores == null ? Double.NaN : fleetScores.rmsse(),
+                historyScores.rmsse());
+    }
+}

@@ -1,0 +1,119 @@
+package org.depotcast.forecasting;
+
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.PoissonFit;
+import org.depotcast.core.forecast.PoissonRegression;
+import org.depotcast.core.forecast.RateShrinkage;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Fits one family's fleet model on pump-year rows: each pump in each 12-month block of the history (counted back
+ * from the forecast origin) is a row with its operating hours as exposure, its covariates at mid-period, and the
+ * breakdowns of that family. A family with fewer than {@link #MIN_EVENTS} breakdowns, or a singular design, falls
+ * back to the declared prior rate.
+ */
+final class FleetModelFitter {
+    static final int MIN_EVENTS = 10;
+    private static final double DAYS_PER_YEAR = 365.25;
+
+    private FleetModelFitter() {
+    }
+
+    /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
+    static FleetModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, int skipRecentBlocks) {
+        ComponentFamily family = definition.family();
+        Map<Long, List<Long>> eventDays = new HashMap<>();
+        double unitsSum = 0;
+        int unitLines = 0;
+        for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+            if (c.breakdown() && snapshot.partFamilies().get(c.partId()) == family) {
+                eventDays.computeIfAbsent(c.pumpId(), k -> new ArrayList<>()).add(c.day().toEpochDay());
+                unitsSum += c.quantity();
+                unitLines++;
+            }
+        }
+        double units = definition.unitsPerEvent() != null ? definition.unitsPerEvent()
+                : unitLines > 0 ? unitsSum / unitLines : 1.0;
+        List<double[]> covariates = new ArrayList<>();
+        List<Double> counts = new ArrayList<>(), exposures = new ArrayList<>();
+        List<Long> depots = new ArrayList<>();
+        int blocks = snapshot.months() / 12;
+        for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
+            if (pump.bom().stream().noneMatch(b -> b.family() == family)) {
+                continue;
+            }
+            List<Long> events = eventDays.getOrDefault(pump.id(), List.of());
+            for (int b = skipRecentBlocks; b < blocks; b++) {
+                LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
+                long from = Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay());
+                long to = Math.min(blockEnd.toEpochDay(), pump.endDay());
+                double hours = pump.usage().hoursBetween(from, to);
+                if (to - from < 1 || hours < 1) {
+                    continue;
+                }
+                int count = 0;
+                for (long day : events) {
+                    if (day >= from && day < to) {
+                        count++;
+                    }
+                }
+                double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
+                covariates.add(FleetModel.covariateValues(definition.covariates(), pump.depthM(), age, hours / (to - from)));
+                counts.add((double) count);
+                exposures.add(hours);
+                depots.add(pump.depotId());
+            }
+        }
+        double[] y = counts.stream().mapToDouble(Double::doubleValue).toArray();
+        double[] e = exposures.stream().mapToDouble(Double::doubleValue).toArray();
+        int events = (int) java.util.Arrays.stream(y).sum();
+        double exposure = java.util.Arrays.stream(e).sum();
+        double prior = definition.priorEventsPer1000Hours() / 1000.0;
+        PoissonFit fit = null;
+        if (events >= MIN_EVENTS) {
+            try {
+                fit = PoissonRegression.fit(covariates.toArray(new double[0][]), y, e);
+            } catch (PoissonRegression.SingularDesignException singular) {
+                fit = null;
+            }
+        }
+        Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, depots);
+        return new FleetModel(family, definition.covariates(), fit, prior, units, events, exposure, ratios);
+    }
+
+    private static Map<Long, Double> depotRatios(PoissonFit fit, List<double[]> covariates, double[] y,
+                                                 double[] e, List<Long> depots) {
+        if (fit == null) {
+            // A prior is not fitted to these data: scaling it by their ratios would just refit it badly.
+            return Map.of();
+        }
+        Map<Long, double[]> observedExpected = new HashMap<>();
+        for (int i = 0; i < y.length; i++) {
+            double expected = fit.expected(covariates.get(i), e[i]);
+            double[] oe = observedExpected.computeIfAbsent(depots.get(i), k -> new double[2]);
+            oe[0] += y[i];
+            oe[1] += expected;
+        }
+        List<Long> ids = new ArrayList<>(observedExpected.keySet());
+        ids.removeIf(id -> !(observedExpected.get(id)[1] > 0));
+        Map<Long, Double> ratios = new HashMap<>();
+        if (ids.isEmpty()) {
+            return ratios;
+        }
+        double[] o = new double[ids.size()], ex = new double[ids.size()];
+        for (int i = 0; i < ids.size(); i++) {
+            o[i] = observedExpected.get(ids.get(i))[0];
+            ex[i] = observedExpected.get(ids.get(i))[1];
+        }
+        double[] shrunk = RateShrinkage.shrink(o, ex);
+        for (int i = 0; i < ids.size(); i++) {
+            ratios.put(ids.get(i), shrunk[i]);
+        }
+        return ratios;
+    }
+}

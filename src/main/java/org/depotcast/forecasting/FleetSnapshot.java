@@ -1,0 +1,48 @@
+package org.depotcast.forecasting;
+
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.UsageTimeline;
+
+import java.time.LocalDate;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Everything a forecast run needs, read from the database once into plain values: pumps with their usage timelines
+ * and bills of materials, and the consumption history. Built by {@link FleetSnapshotLoader}.
+ *
+ * @param historyStart first day of the first history month
+ * @param historyEnd   first day after the last complete history month (the forecast origin)
+ * @param pumps        pumps that were in service at some time in the history window or are in service now
+ * @param consumption  every replaced part from the repair records
+ * @param kitByMechanic kit location code of each mechanic
+ * @param locationCodes code of each depot and kit by id
+ * @param partNumbers  part number by id
+ */
+record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<PumpRecord> pumps, List<Consumption> consumption,
+                     Map<String, String> kitByMechanic, Map<Long, String> locationCodes, Map<Long, String> partNumbers,
+                     Map<Long, ComponentFamily> partFamilies) {
+
+    int months() {
+        return (int) java.time.temporal.ChronoUnit.MONTHS.between(historyStart, historyEnd);
+    }
+
+    int monthIndex(LocalDate day) {
+        return (int) java.time.temporal.ChronoUnit.MONTHS.between(historyStart, day.withDayOfMonth(1));
+    }
+
+    /** A bill-of-materials line as it applies to one pump at its depth. */
+    record BomPart(long partId, ComponentFamily family, double serviceKitQuantity) {
+    }
+
+    record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
+                      int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay) {
+        boolean inServiceOn(long day) {
+            return day >= installedDay && day < endDay;
+        }
+    }
+
+    record Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,
+                       double quantity) {
+    }
+}

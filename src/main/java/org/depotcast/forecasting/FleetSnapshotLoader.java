@@ -1,0 +1,103 @@
+package org.depotcast.forecasting;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.BomLine;
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.core.forecast.UsageTimeline;
+import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpStatus;
+import org.depotcast.fleet.UsageService;
+import org.depotcast.repairs.RepairKind;
+import org.depotcast.repairs.RepairService;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/** Reads the fleet, usage and repair history into a {@link FleetSnapshot}, in one read-only transaction. */
+@ApplicationScoped
+class FleetSnapshotLoader {
+    private final PumpService pumps;
+    private final UsageService usage;
+    private final RepairService repairs;
+    private final LocationService locations;
+    private final PartService parts;
+
+    FleetSnapshotLoader(PumpService pumps, UsageService usage, RepairService repairs, LocationService locations,
+                        PartService parts) {
+        this.pumps = pumps;
+        this.usage = usage;
+        this.repairs = repairs;
+        this.locations = locations;
+        this.parts = parts;
+    }
+
+    @Transactional
+    FleetSnapshot load(LocalDate origin, int historyMonths) {
+        LocalDate historyEnd = origin.withDayOfMonth(1);
+        LocalDate historyStart = historyEnd.minusMonths(historyMonths);
+        Map<Long, List<long[]>> readingDays = new HashMap<>();
+        Map<Long, List<Double>> readingHours = new HashMap<>();
+        for (Object[] row : usage.allReadings()) {
+            long pumpId = (Long) row[0];
+            readingDays.computeIfAbsent(pumpId, k -> new ArrayList<>()).add(new long[]{((LocalDate) row[1]).toEpochDay()});
+            readingHours.computeIfAbsent(pumpId, k -> new ArrayList<>()).add(((BigDecimal) row[2]).doubleValue());
+        }
+        List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
+        Map<Long, Long> lastService = new HashMap<>();
+        for (Object[] row : repairs.consumptionRows()) {
+            LocalDate day = (LocalDate) row[5];
+            boolean breakdown = row[4] == RepairKind.BREAKDOWN;
+            long pumpId = (Long) row[1];
+            consumption.add(new FleetSnapshot.Consumption((Long) row[0], pumpId, (Long) row[2], (String) row[3],
+                    breakdown, day, ((BigDecimal) row[6]).doubleValue()));
+            if (!breakdown) {
+                lastService.merge(pumpId, day.toEpochDay(), Math::max);
+            }
+        }
+        List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
+        for (Pump pump : pumps.all()) {
+            long end = pump.status == PumpStatus.DECOMMISSIONED && pump.decommissionedOn != null
+                    ? pump.decommissionedOn.toEpochDay() : Long.MAX_VALUE / 4;
+            if (end <= historyStart.toEpochDay()) {
+                continue;
+            }
+            List<long[]> days = readingDays.getOrDefault(pump.id, List.of());
+            List<Double> hours = readingHours.getOrDefault(pump.id, List.of());
+            UsageTimeline timeline = new UsageTimeline(days.stream().mapToLong(d -> d[0]).toArray(),
+                    hours.stream().mapToDouble(Double::doubleValue).toArray(), pump.usageHoursPerDay.doubleValue());
+            double depth = pump.depthM.doubleValue();
+            List<FleetSnapshot.BomPart> bom = new ArrayList<>();
+            for (BomLine line : pump.model.bom) {
+                bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(depth)));
+            }
+            records.add(new FleetSnapshot.PumpRecord(pump.id, pump.depot.id, pump.assignedMechanic, depth,
+                    pump.installedOn.toEpochDay(), end, pump.model.serviceIntervalHours, timeline, List.copyOf(bom),
+                    lastService.getOrDefault(pump.id, pump.installedOn.toEpochDay())));
+        }
+        Map<String, String> kits = new HashMap<>();
+        Map<Long, String> codes = new HashMap<>();
+        for (Location location : locations.all()) {
+            codes.put(location.id, location.code);
+            if (location.kind == LocationKind.KIT) {
+                kits.put(location.mechanicUsername, location.code);
+            }
+        }
+        Map<Long, String> partNumbers = new HashMap<>();
+        Map<Long, ComponentFamily> families = new HashMap<>();
+        parts.all().forEach(p -> {
+            partNumbers.put(p.id, p.partNumber);
+            families.put(p.id, p.family);
+        });
+        return new FleetSnapshot(historyStart, historyEnd, records, consumption, kits, codes, partNumbers, families);
+    }
+}

@@ -1,0 +1,107 @@
+package org.depotcast.forecasting;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.QueryParams;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/** Reads the latest finished forecast run: per part and location, and the fleet model per family. */
+@ApplicationScoped
+public class ForecastQueryService {
+    private final ForecastRepository repository;
+    private final PartService parts;
+
+    ForecastQueryService(ForecastRepository repository, PartService parts) {
+        this.repository = repository;
+        this.parts = parts;
+    }
+
+    /** Planning's view: the latest stored forecast of a part at a location, if any run has finished. */
+    @Transactional
+    public Optional<StoredForecastResponse> latest(String partNumber, String locationCode) {
+        Part part = parts.require("part", partNumber);
+        return repository.latestFinishedRun().flatMap(run -> repository.forecastOf(run.id, part.id, locationCode)
+                .map(f -> response(run, part.partNumber, f)));
+    }
+
+    @Transactional
+    public StoredForecastResponse forPart(String partNumber, String locationCode) {
+        ForecastRun run = latestRun();
+        Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
+        String location = locationCode == null ? DemandAssembler.PROGRAMME : locationCode;
+        PartForecast f = repository.forecastOf(run.id, part.id, location).orElseThrow(() ->
+                new EntityMissingException(null, "forecast of part at location", partNumber + " @ " + location));
+        return response(run, part.partNumber, f);
+    }
+
+    @Transactional
+    public List<StoredForecastResponse> atLocation(String locationCode) {
+        ForecastRun run = latestRun();
+        Map<Long, String> numbers = new LinkedHashMap<>();
+        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        List<StoredForecastResponse> out = new ArrayList<>();
+        for (PartForecast f : repository.forecastsAt(run.id, locationCode)) {
+            out.add(response(run, numbers.get(f.partId), f));
+        }
+        return out;
+    }
+
+    @Transactional
+    public FleetModelResponse fleetModel(String family) {
+        ComponentFamily parsed = QueryParams.optionalEnum("family", family, ComponentFamily.class);
+        ForecastRun run = latestRun();
+        FleetModelFitRecord r = repository.fitOf(run.id, parsed.name())
+                .orElseThrow(() -> new EntityMissingException(null, "fleet model", family));
+        List<String> terms = new ArrayList<>();
+        terms.add("intercept");
+        if (!r.covariates.isEmpty()) {
+            terms.addAll(List.of(r.covariates.split(";")));
+        }
+        double[] coefficients = ForecastRecords.split(r.coefficients);
+        double[] errors = ForecastRecords.split(r.standardErrors);
+        return new FleetModelResponse(r.family, run.id, r.source, named(terms, coefficients), named(terms, errors),
+                r.deviance, r.dfResidual, r.dispersion, r.overdispersed, r.events, r.exposureHours, r.unitsPerEvent,
+                Math.exp(coefficients[0]) * 1000);
+    }
+
+    private ForecastRun latestRun() {
+        return repository.latestFinishedRun().orElseThrow(() -> new EntityMissingException(null, "forecast run",
+                "latest (no run has finished yet; POST /api/forecast/runs)"));
+    }
+
+    private static Map<String, Double> named(List<String> terms, double[] values) {
+        Map<String, Double> map = new LinkedHashMap<>();
+        for (int i = 0; i < values.length && i < terms.size(); i++) {
+            map.put(terms.get(i), values[i]);
+        }
+        return map;
+    }
+
+    private static StoredForecastResponse response(ForecastRun run, String partNumber, PartForecast f) {
+        double[] monthly = ForecastRecords.split(f.monthlyForecast);
+        double[] preventive = ForecastRecords.split(f.preventiveMonthly);
+        double[] history = ForecastRecords.split(f.monthlyHistory);
+        LocalDate origin = run.historyTo.plusDays(1);
+        List<StoredForecastResponse.Month> months = new ArrayList<>();
+        for (int m = 0; m < monthly.length; m++) {
+            months.add(new StoredForecastResponse.Month(origin.plusMonths(m), monthly[m], f.breakdownPerMonth, preventive[m]));
+        }
+        List<StoredForecastResponse.HistoryMonth> past = new ArrayList<>();
+        for (int m = 0; m < history.length; m++) {
+            past.add(new StoredForecastResponse.HistoryMonth(run.historyFrom.plusMonths(m), history[m]));
+        }
+        return new StoredForecastResponse(partNumber, f.locationCode, run.id, run.finishedAt, f.method, f.alpha, f.beta,
+                f.adi, f.cv2, f.demandClass, f.mase, f.rmsse, f.scaledBias, f.fleetRmsse, f.historyRmsse,
+                f.breakdownPerMonth, f.variancePerMonth, months, past);
+    }
+}

@@ -1,0 +1,73 @@
+package org.depotcast.forecasting;
+
+import org.depotcast.core.forecast.PoissonFit;
+
+import java.util.Arrays;
+import java.util.Locale;
+import java.util.stream.Collectors;
+
+/** Converts results to stored rows and back; numbers lists are semicolon-separated. */
+final class ForecastRecords {
+    private ForecastRecords() {
+    }
+
+    static String join(double[] values) {
+        return Arrays.stream(values).mapToObj(v -> Double.isNaN(v) ? "NaN" : String.format(Locale.ROOT, "%.6g", v))
+                .collect(Collectors.joining(";"));
+    }
+
+    static double[] split(String values) {
+        if (values == null || values.isEmpty()) {
+            return new double[0];
+        }
+        return Arrays.stream(values.split(";")).mapToDouble(Double::parseDouble).toArray();
+    }
+
+    static Double finite(double value) {
+        return Double.isFinite(value) ? value : null;
+    }
+
+    static FleetModelFitRecord fit(long runId, FleetModel model) {
+        FleetModelFitRecord record = new FleetModelFitRecord();
+        record.runId = runId;
+        record.family = model.family().name();
+        record.source = model.source();
+        PoissonFit fit = model.fit();
+        record.covariates = fit == null ? "" : model.covariates().stream().map(c -> c.name().toLowerCase(Locale.ROOT))
+                .collect(Collectors.joining(";"));
+        record.coefficients = fit == null ? join(new double[]{Math.log(model.priorPerHour())}) : join(fit.coefficients());
+        record.standardErrors = fit == null ? "" : join(fit.standardErrors());
+        record.deviance = fit == null ? null : fit.deviance();
+        record.dfResidual = fit == null ? null : fit.dfResidual();
+        record.dispersion = fit == null ? null : finite(fit.dispersion());
+        record.overdispersed = fit != null && fit.overdispersed();
+        record.events = model.events();
+        record.exposureHours = model.exposureHours();
+        record.unitsPerEvent = model.unitsPerEvent();
+        return record;
+    }
+
+    static PartForecast forecast(long runId, PartForecastResult r) {
+        PartForecast f = new PartForecast();
+        f.runId = runId;
+        f.partId = r.partId();
+        f.locationCode = r.locationCode();
+        f.method = r.method();
+        f.alpha = finite(r.alpha());
+        f.beta = finite(r.beta());
+        f.adi = finite(r.profile().adi());
+        f.cv2 = finite(r.profile().cv2());
+        f.demandClass = r.profile().demandClass().name();
+        f.mase = finite(r.chosenScores().mase());
+        f.rmsse = finite(r.chosenScores().rmsse());
+        f.scaledBias = finite(r.chosenScores().scaledBias());
+        f.fleetRmsse = finite(r.fleetRmsse());
+        f.historyRmsse = finite(r.historyRmsse());
+        f.breakdownPerMonth = r.breakdownPerMonth();
+        f.variancePerMonth = r.variancePerMonth();
+        f.monthlyForecast = join(r.monthly());
+        f.preventiveMonthly = join(r.preventive());
+        f.monthlyHistory = join(r.history());
+        return f;
+    }
+}

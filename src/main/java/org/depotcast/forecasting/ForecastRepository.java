@@ -1,0 +1,34 @@
+package org.depotcast.forecasting;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import jakarta.enterprise.context.ApplicationScoped;
+
+import java.util.List;
+import java.util.Optional;
+
+@ApplicationScoped
+class ForecastRepository implements PanacheRepository<PartForecast> {
+    Optional<ForecastRun> latestFinishedRun() {
+        return getEntityManager().createQuery(
+                        "select r from ForecastRun r where r.status = :done order by r.id desc", ForecastRun.class)
+                .setParameter("done", ForecastRun.Status.DONE).setMaxResults(1).getResultStream().findFirst();
+    }
+
+    Optional<ForecastRun> run(long id) {
+        return Optional.ofNullable(getEntityManager().find(ForecastRun.class, id));
+    }
+
+    Optional<PartForecast> forecastOf(long runId, long partId, String locationCode) {
+        return find("runId = ?1 and partId = ?2 and locationCode = ?3", runId, partId, locationCode).firstResultOptional();
+    }
+
+    List<PartForecast> forecastsAt(long runId, String locationCode) {
+        return list("runId = ?1 and locationCode = ?2 order by partId", runId, locationCode);
+    }
+
+    Optional<FleetModelFitRecord> fitOf(long runId, String family) {
+        return getEntityManager().createQuery("select f from FleetModelFitRecord f where f.runId = :run and f.family = :family",
+                        FleetModelFitRecord.class).setParameter("run", runId).setParameter("family", family)
+                .getResultStream().findFirst();
+    }
+}

@@ -1,0 +1,49 @@
+package org.depotcast.forecasting;
+
+import jakarta.persistence.Column;
+import jakarta.persistence.Entity;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.Table;
+
+/** A stored forecast of one part at one location. Monthly lists are semicolon-separated numbers. */
+@Entity
+@Table(name = "part_forecast")
+public class PartForecast {
+    @Id
+    @GeneratedValue(strategy = GenerationType.IDENTITY)
+    public Long id;
+    @Column(name = "run_id", nullable = false)
+    public Long runId;
+    @Column(name = "part_id", nullable = false)
+    public Long partId;
+    @Column(name = "location_code", nullable = false)
+    public String locationCode;
+    @Column(nullable = false)
+    public String method;
+    public Double alpha;
+    public Double beta;
+    public Double adi;
+    public Double cv2;
+    @Column(name = "demand_class", nullable = false)
+    public String demandClass;
+    public Double mase;
+    public Double rmsse;
+    @Column(name = "scaled_bias")
+    public Double scaledBias;
+    @Column(name = "fleet_rmsse")
+    public Double fleetRmsse;
+    @Column(name = "history_rmsse")
+    public Double historyRmsse;
+    @Column(name = "breakdown_per_month", nullable = false)
+    public double breakdownPerMonth;
+    @Column(name = "variance_per_month", nullable = false)
+    public double variancePerMonth;
+    @Column(name = "monthly_forecast", nullable = false)
+    public String monthlyForecast;
+    @Column(name = "preventive_monthly", nullable = false)
+    public String preventiveMonthly;
+    @Column(name = "monthly_history", nullable = false)
+    public String monthlyHistory;
+}

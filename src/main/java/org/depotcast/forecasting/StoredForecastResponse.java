@@ -1,0 +1,18 @@
+package org.depotcast.forecasting;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.util.List;
+
+/** A stored forecast with the history it was made from, month by month. */
+public record StoredForecastResponse(String partNumber, String location, long runId, OffsetDateTime computedAt,
+                                     String method, Double alpha, Double beta, Double adi, Double cv2,
+                                     String demandClass, Double mase, Double rmsse, Double scaledBias,
+                                     Double fleetRmsse, Double historyRmsse, double breakdownPerMonth,
+                                     double variancePerMonth, List<Month> forecast, List<HistoryMonth> history) {
+    public record Month(LocalDate month, double total, double breakdown, double preventive) {
+    }
+
+    public record HistoryMonth(LocalDate month, double quantity) {
+    }
+}
