@@ -13,6 +13,13 @@ class PumpRepository implements PanacheRepository<Pump> {
         return find("assetId", assetId).firstResultOptional();
     }
 
+    /** One row per pump for planning runs, without loading entities. See {@link PumpService#planningRows()}. */
+    List<Object[]> planningRows() {
+        return getEntityManager().createQuery("""
+                select p.id, p.depot.id, p.assignedMechanic, p.depthM, p.installedOn, p.status, p.decommissionedOn,
+                       p.model.id, p.usageHoursPerDay from Pump p""", Object[].class).getResultList();
+    }
+
     List<Pump> search(Long depotId, PumpStatus status) {
         if (depotId == null && status == null) {
             return listAll(Sort.by("assetId"));

@@ -45,6 +45,14 @@ public class PumpService {
         return pumps.search(depotId, status);
     }
 
+    /**
+     * Every pump as a plain row, for programme-wide planning runs: id, depot id, assigned mechanic, depth (m),
+     * installed on, status, decommissioned on, pump model id, usage hours per day.
+     */
+    public List<Object[]> planningRows() {
+        return pumps.planningRows();
+    }
+
     public List<Pump> all() {
         return pumps.search(null, null);
     }

@@ -173,13 +173,13 @@ final class DemandAssembler {
     /** Forecasts every series; {@code progress} is told after each one. */
     List<PartForecastResult> assemble(IntConsumer progress) {
         collect();
-        List<PartForecastResult> results = new ArrayList<>(history.size());
-        int done = 0;
-        for (Map.Entry<String, double[]> entry : history.entrySet()) {
-            results.add(forecastOne(entry.getKey(), entry.getValue()));
-            progress.accept(++done);
-        }
-        return results;
+        // Series are independent and the maps are read-only from here on: use every core.
+        java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
+        return history.entrySet().parallelStream().map(entry -> {
+            PartForecastResult result = forecastOne(entry.getKey(), entry.getValue());
+            progress.accept(done.incrementAndGet());
+            return result;
+        }).toList();
     }
 
     private PartForecastResult forecastOne(String key, double[] series) {

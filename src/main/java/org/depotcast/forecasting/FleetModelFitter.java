@@ -24,30 +24,50 @@ final class FleetModelFitter {
     private FleetModelFitter() {
     }
 
-    /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
-    static FleetModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, int skipRecentBlocks) {
-        ComponentFamily family = definition.family();
-        Map<Long, List<Long>> eventDays = new HashMap<>();
-        double unitsSum = 0;
-        int unitLines = 0;
-        for (FleetSnapshot.Consumption c : snapshot.consumption()) {
-            if (c.breakdown() && snapshot.partFamilies().get(c.partId()) == family) {
-                eventDays.computeIfAbsent(c.pumpId(), k -> new ArrayList<>()).add(c.day().toEpochDay());
-                unitsSum += c.quantity();
-                unitLines++;
+    /** Breakdown days per pump for one family, and the mean units replaced per breakdown. */
+    record Breakdowns(Map<Long, long[]> daysByPump, double meanUnits) {
+        static Map<ComponentFamily, Breakdowns> of(FleetSnapshot snapshot) {
+            Map<ComponentFamily, Map<Long, List<Long>>> days = new java.util.EnumMap<>(ComponentFamily.class);
+            Map<ComponentFamily, double[]> units = new java.util.EnumMap<>(ComponentFamily.class);
+            for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+                ComponentFamily family = snapshot.partFamilies().get(c.partId());
+                if (c.breakdown() && family != null) {
+                    days.computeIfAbsent(family, f -> new HashMap<>()).computeIfAbsent(c.pumpId(), k -> new ArrayList<>())
+                            .add(c.day().toEpochDay());
+                    double[] u = units.computeIfAbsent(family, f -> new double[2]);
+                    u[0] += c.quantity();
+                    u[1]++;
+                }
             }
+            Map<ComponentFamily, Breakdowns> result = new java.util.EnumMap<>(ComponentFamily.class);
+            days.forEach((family, byPump) -> {
+                Map<Long, long[]> arrays = new HashMap<>();
+                byPump.forEach((pump, list) -> arrays.put(pump, list.stream().mapToLong(Long::longValue).toArray()));
+                double[] u = units.get(family);
+                result.put(family, new Breakdowns(arrays, u[0] / u[1]));
+            });
+            return result;
         }
+    }
+
+    /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
+    static FleetModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns,
+                          int skipRecentBlocks) {
+        ComponentFamily family = definition.family();
+        Map<Long, long[]> eventDays = breakdowns == null ? Map.of() : breakdowns.daysByPump();
         double units = definition.unitsPerEvent() != null ? definition.unitsPerEvent()
-                : unitLines > 0 ? unitsSum / unitLines : 1.0;
-        List<double[]> covariates = new ArrayList<>();
-        List<Double> counts = new ArrayList<>(), exposures = new ArrayList<>();
-        List<Long> depots = new ArrayList<>();
+                : breakdowns != null ? breakdowns.meanUnits() : 1.0;
         int blocks = snapshot.months() / 12;
+        int capacity = snapshot.pumps().size() * blocks;
+        double[][] covariates = new double[capacity][];
+        double[] y = new double[capacity], e = new double[capacity];
+        long[] depots = new long[capacity];
+        int rows = 0;
         for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
             if (pump.bom().stream().noneMatch(b -> b.family() == family)) {
                 continue;
             }
-            List<Long> events = eventDays.getOrDefault(pump.id(), List.of());
+            long[] events = eventDays.getOrDefault(pump.id(), new long[0]);
             for (int b = skipRecentBlocks; b < blocks; b++) {
                 LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
                 long from = Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay());
@@ -63,39 +83,41 @@ final class FleetModelFitter {
                     }
                 }
                 double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                covariates.add(FleetModel.covariateValues(definition.covariates(), pump.depthM(), age, hours / (to - from)));
-                counts.add((double) count);
-                exposures.add(hours);
-                depots.add(pump.depotId());
+                covariates[rows] = FleetModel.covariateValues(definition.covariates(), pump.depthM(), age, hours / (to - from));
+                y[rows] = count;
+                e[rows] = hours;
+                depots[rows] = pump.depotId();
+                rows++;
             }
         }
-        double[] y = counts.stream().mapToDouble(Double::doubleValue).toArray();
-        double[] e = exposures.stream().mapToDouble(Double::doubleValue).toArray();
+        covariates = java.util.Arrays.copyOf(covariates, rows);
+        y = java.util.Arrays.copyOf(y, rows);
+        e = java.util.Arrays.copyOf(e, rows);
         int events = (int) java.util.Arrays.stream(y).sum();
         double exposure = java.util.Arrays.stream(e).sum();
         double prior = definition.priorEventsPer1000Hours() / 1000.0;
         PoissonFit fit = null;
         if (events >= MIN_EVENTS) {
             try {
-                fit = PoissonRegression.fit(covariates.toArray(new double[0][]), y, e);
+                fit = PoissonRegression.fit(covariates, y, e);
             } catch (PoissonRegression.SingularDesignException singular) {
                 fit = null;
             }
         }
-        Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, depots);
+        Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, java.util.Arrays.copyOf(depots, rows));
         return new FleetModel(family, definition.covariates(), fit, prior, units, events, exposure, ratios);
     }
 
-    private static Map<Long, Double> depotRatios(PoissonFit fit, List<double[]> covariates, double[] y,
-                                                 double[] e, List<Long> depots) {
+    private static Map<Long, Double> depotRatios(PoissonFit fit, double[][] covariates, double[] y, double[] e,
+                                                 long[] depots) {
         if (fit == null) {
             // A prior is not fitted to these data: scaling it by their ratios would just refit it badly.
             return Map.of();
         }
         Map<Long, double[]> observedExpected = new HashMap<>();
         for (int i = 0; i < y.length; i++) {
-            double expected = fit.expected(covariates.get(i), e[i]);
-            double[] oe = observedExpected.computeIfAbsent(depots.get(i), k -> new double[2]);
+            double expected = fit.expected(covariates[i], e[i]);
+            double[] oe = observedExpected.computeIfAbsent(depots[i], k -> new double[2]);
             oe[0] += y[i];
             oe[1] += expected;
         }

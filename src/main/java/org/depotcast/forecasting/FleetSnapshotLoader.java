@@ -5,8 +5,9 @@ import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.BomLine;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PumpModel;
+import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.core.forecast.UsageTimeline;
-import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.PumpStatus;
 import org.depotcast.fleet.UsageService;
@@ -31,9 +32,11 @@ class FleetSnapshotLoader {
     private final RepairService repairs;
     private final LocationService locations;
     private final PartService parts;
+    private final PumpModelService models;
 
     FleetSnapshotLoader(PumpService pumps, UsageService usage, RepairService repairs, LocationService locations,
-                        PartService parts) {
+                        PartService parts, PumpModelService models) {
+        this.models = models;
         this.pumps = pumps;
         this.usage = usage;
         this.repairs = repairs;
@@ -64,25 +67,30 @@ class FleetSnapshotLoader {
                 lastService.merge(pumpId, day.toEpochDay(), Math::max);
             }
         }
+        Map<Long, PumpModel> modelsById = new HashMap<>();
+        models.all().forEach(m -> modelsById.put(m.id, m));
         List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
-        for (Pump pump : pumps.all()) {
-            long end = pump.status == PumpStatus.DECOMMISSIONED && pump.decommissionedOn != null
-                    ? pump.decommissionedOn.toEpochDay() : Long.MAX_VALUE / 4;
+        for (Object[] row : pumps.planningRows()) {
+            long pumpId = (Long) row[0];
+            LocalDate installed = (LocalDate) row[4];
+            long end = row[5] == PumpStatus.DECOMMISSIONED && row[6] != null
+                    ? ((LocalDate) row[6]).toEpochDay() : Long.MAX_VALUE / 4;
             if (end <= historyStart.toEpochDay()) {
                 continue;
             }
-            List<long[]> days = readingDays.getOrDefault(pump.id, List.of());
-            List<Double> hours = readingHours.getOrDefault(pump.id, List.of());
+            List<long[]> days = readingDays.getOrDefault(pumpId, List.of());
+            List<Double> hours = readingHours.getOrDefault(pumpId, List.of());
             UsageTimeline timeline = new UsageTimeline(days.stream().mapToLong(d -> d[0]).toArray(),
-                    hours.stream().mapToDouble(Double::doubleValue).toArray(), pump.usageHoursPerDay.doubleValue());
-            double depth = pump.depthM.doubleValue();
-            List<FleetSnapshot.BomPart> bom = new ArrayList<>();
-            for (BomLine line : pump.model.bom) {
+                    hours.stream().mapToDouble(Double::doubleValue).toArray(), ((BigDecimal) row[8]).doubleValue());
+            double depth = ((BigDecimal) row[3]).doubleValue();
+            PumpModel model = modelsById.get((Long) row[7]);
+            List<FleetSnapshot.BomPart> bom = new ArrayList<>(model.bom.size());
+            for (BomLine line : model.bom) {
                 bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(depth)));
             }
-            records.add(new FleetSnapshot.PumpRecord(pump.id, pump.depot.id, pump.assignedMechanic, depth,
-                    pump.installedOn.toEpochDay(), end, pump.model.serviceIntervalHours, timeline, List.copyOf(bom),
-                    lastService.getOrDefault(pump.id, pump.installedOn.toEpochDay())));
+            records.add(new FleetSnapshot.PumpRecord(pumpId, (Long) row[1], (String) row[2], depth,
+                    installed.toEpochDay(), end, model.serviceIntervalHours, timeline, List.copyOf(bom),
+                    lastService.getOrDefault(pumpId, installed.toEpochDay())));
         }
         Map<String, String> kits = new HashMap<>();
         Map<Long, String> codes = new HashMap<>();

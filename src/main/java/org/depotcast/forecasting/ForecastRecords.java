@@ -11,9 +11,17 @@ final class ForecastRecords {
     private ForecastRecords() {
     }
 
+    /** Six decimals are plenty for units per month; plain concatenation because runs write millions of numbers. */
     static String join(double[] values) {
-        return Arrays.stream(values).mapToObj(v -> Double.isNaN(v) ? "NaN" : String.format(Locale.ROOT, "%.6g", v))
-                .collect(Collectors.joining(";"));
+        StringBuilder out = new StringBuilder(values.length * 8);
+        for (int i = 0; i < values.length; i++) {
+            if (i > 0) {
+                out.append(';');
+            }
+            double v = values[i];
+            out.append(Double.isFinite(v) ? Double.toString(Math.round(v * 1e6) / 1e6) : "NaN");
+        }
+        return out.toString();
     }
 
     static double[] split(String values) {

@@ -103,17 +103,23 @@ public class ForecastRunService {
             FleetSnapshot snapshot = loader.load(today, historyMonths);
             Log.infof("forecast run %d: %d pumps, %d consumption lines read in %d ms", runId, snapshot.pumps().size(),
                     snapshot.consumption().size(), (System.nanoTime() - started) / 1_000_000);
+            // Families fit independently: one per core.
             Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
             Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
-            for (ForecastModelDefinition definition : definitions.values()) {
-                models.put(definition.family(), FleetModelFitter.fit(definition, snapshot, 0));
-                holdout.put(definition.family(), FleetModelFitter.fit(definition, snapshot, 1));
-            }
+            Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
+            definitions.values().parallelStream()
+                    .map(d -> new FleetModel[]{FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 0),
+                            FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 1)})
+                    .toList().forEach(pair -> {
+                        models.put(pair[0].family(), pair[0]);
+                        holdout.put(pair[1].family(), pair[1]);
+                    });
             DemandAssembler assembler = new DemandAssembler(snapshot, definitions, models, holdout, horizonMonths);
             int total = assembler.seriesCount();
             updateProgress(runId, 0, total, snapshot);
             List<PartForecastResult> results = assembler.assemble(done -> {
                 if (done % PROGRESS_EVERY == 0) {
+                    // Progress is read from the run row by a client polling GET /api/forecast/runs/{id}.
                     updateProgress(runId, done, total, snapshot);
                     Log.infof("forecast run %d: %d of %d series", runId, done, total);
                 }

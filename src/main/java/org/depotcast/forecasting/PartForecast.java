@@ -5,6 +5,7 @@ import jakarta.persistence.Entity;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
+import jakarta.persistence.SequenceGenerator;
 import jakarta.persistence.Table;
 
 /** A stored forecast of one part at one location. Monthly lists are semicolon-separated numbers. */
@@ -12,7 +13,8 @@ import jakarta.persistence.Table;
 @Table(name = "part_forecast")
 public class PartForecast {
     @Id
-    @GeneratedValue(strategy = GenerationType.IDENTITY)
+    @GeneratedValue(strategy = GenerationType.SEQUENCE, generator = "part_forecast_seq")
+    @SequenceGenerator(name = "part_forecast_seq", sequenceName = "part_forecast_seq", allocationSize = 50)
     public Long id;
     @Column(name = "run_id", nullable = false)
     public Long runId;
