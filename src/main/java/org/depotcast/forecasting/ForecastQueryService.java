@@ -34,6 +34,35 @@ public class ForecastQueryService {
                 .map(f -> response(run, part.partNumber, f)));
     }
 
+    /** Expected demand of one part at a location, per month, as planning uses it. */
+    public record DemandRate(double monthlyMean, double monthlyVariance, String method) {
+    }
+
+    /**
+     * Demand per part number at a location from the latest finished run, averaged over its first {@code months}
+     * forecast months (breakdowns plus scheduled services); empty when no run has finished yet.
+     */
+    @Transactional
+    public Map<String, DemandRate> demandAt(String locationCode, int months) {
+        Map<String, DemandRate> rates = new java.util.HashMap<>();
+        Optional<ForecastRun> run = repository.latestFinishedRun();
+        if (run.isEmpty()) {
+            return rates;
+        }
+        Map<Long, String> numbers = new java.util.HashMap<>();
+        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
+            double[] monthly = ForecastRecords.split(f.monthlyForecast);
+            int n = Math.max(1, Math.min(months, monthly.length));
+            double sum = 0;
+            for (int m = 0; m < n; m++) {
+                sum += monthly[m];
+            }
+            rates.put(numbers.get(f.partId), new DemandRate(sum / n, f.variancePerMonth, f.method));
+        }
+        return rates;
+    }
+
     @Transactional
     public StoredForecastResponse forPart(String partNumber, String locationCode) {
         ForecastRun run = latestRun();

@@ -79,6 +79,10 @@ public class ForecastRunService {
         return QuarkusTransaction.requiringNew().call(() -> repository.run(runId).orElseThrow());
     }
 
+    public java.util.Optional<ForecastRun> latestFinished() {
+        return QuarkusTransaction.requiringNew().call(repository::latestFinishedRun);
+    }
+
     public ForecastRun run(long id) {
         return QuarkusTransaction.requiringNew().call(() -> repository.run(id)
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "forecast run", id)));

@@ -67,6 +67,15 @@ public class RepairService {
         return repairs.search(pumpId, since, limit);
     }
 
+    /** Open repairs waiting for parts, keyed "depotCode|partNumber". */
+    public Map<String, Long> openNeeds() {
+        Map<String, Long> needs = new HashMap<>();
+        for (Object[] row : repairs.openNeeds()) {
+            needs.put(row[0] + "|" + row[1], (Long) row[2]);
+        }
+        return needs;
+    }
+
     /** Consumption history rows for forecasting; see {@link RepairRepository#consumptionRows()}. */
     public List<Object[]> consumptionRows() {
         return repairs.consumptionRows();

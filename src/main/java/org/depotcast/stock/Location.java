@@ -50,7 +50,7 @@ public class Location {
         return switch (kind) {
             case DEPOT -> this;
             case KIT -> parent;
-            case CENTRAL_STORE -> null;
+            case CENTRAL_STORE, IN_TRANSIT -> null;
         };
     }
 }

@@ -124,6 +124,7 @@ public class LocationService {
             case DEPOT -> parentKind == LocationKind.CENTRAL_STORE ? null : "a depot's parent must be the central store";
             case KIT -> parentKind != LocationKind.DEPOT ? "a kit's parent must be a depot"
                     : mechanic == null ? "a kit must name the mechanic who carries it" : null;
+            case IN_TRANSIT -> "the in-transit location is the system's own; it cannot be created";
         };
     }
 

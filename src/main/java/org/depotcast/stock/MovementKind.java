@@ -7,7 +7,7 @@ package org.depotcast.stock;
 public enum MovementKind {
     /** From a supplier into any store, against a purchase-order line. */
     RECEIPT,
-    /** Between the central store and depots, or depot to depot. */
+    /** Between the central store and depots, or depot to depot, directly or through the in-transit location. */
     TRANSFER,
     /** From a depot into one of its mechanics' kits. */
     ISSUE_TO_KIT,
@@ -24,6 +24,9 @@ public enum MovementKind {
     public String endsProblem(LocationKind from, LocationKind to, boolean sameLocation) {
         if (from != null && to != null && sameLocation) {
             return "from and to must be different locations";
+        }
+        if ((from == LocationKind.IN_TRANSIT || to == LocationKind.IN_TRANSIT) && this != TRANSFER) {
+            return "only transfers pass through the in-transit location";
         }
         return switch (this) {
             case RECEIPT -> from == null && to != null ? null : "a receipt has a 'to' location and no 'from'";

@@ -22,11 +22,13 @@ public final class MarginalAllocation {
      * @param packSize    units per purchase step
      * @param packCost    cost of one step
      * @param weight      consequence per backorder (e.g. pump-days lost per unit short)
+     * @param maxUnits    most units worth buying (e.g. up to the order-up-to level)
      */
-    public record Item(DemandDistribution demand, double stock, int packSize, double packCost, double weight) {
+    public record Item(DemandDistribution demand, double stock, int packSize, double packCost, double weight,
+                       long maxUnits) {
         public Item {
-            if (packSize < 1 || !(packCost > 0) || weight < 0) {
-                throw new IllegalArgumentException("pack size ≥ 1, pack cost > 0 and weight ≥ 0 are required");
+            if (packSize < 1 || !(packCost > 0) || weight < 0 || maxUnits < 0) {
+                throw new IllegalArgumentException("pack size ≥ 1, pack cost > 0, weight ≥ 0 and max units ≥ 0 are required");
             }
         }
 
@@ -63,7 +65,7 @@ public final class MarginalAllocation {
             if (top[1] <= 0) {
                 break;
             }
-            if (spent + item.packCost() > budget + 1e-9) {
+            if (spent + item.packCost() > budget + 1e-9 || units[i] + item.packSize() > item.maxUnits()) {
                 continue;
             }
             double s = item.stock() + units[i];

@@ -61,15 +61,19 @@ class PolicyMathTest {
         // Ratios P(X > s)/c worked by hand give the order A, A, A, A, C, A, C, B;
         // EBO falls from 3.0 + 0.8 + 1.5 = 5.3 to 0.664905.
         List<MarginalAllocation.Item> items = List.of(
-                new MarginalAllocation.Item(new PoissonDemand(3.0), 0, 1, 2, 1),
-                new MarginalAllocation.Item(new PoissonDemand(0.8), 0, 1, 10, 1),
-                new MarginalAllocation.Item(new PoissonDemand(1.5), 0, 1, 5, 1));
+                new MarginalAllocation.Item(new PoissonDemand(3.0), 0, 1, 2, 1, Long.MAX_VALUE),
+                new MarginalAllocation.Item(new PoissonDemand(0.8), 0, 1, 10, 1, Long.MAX_VALUE),
+                new MarginalAllocation.Item(new PoissonDemand(1.5), 0, 1, 5, 1, Long.MAX_VALUE));
         MarginalAllocation.Plan plan = MarginalAllocation.allocate(items, 30);
         assertEquals(List.of(0, 0, 0, 0, 2, 0, 2, 1), plan.steps().stream().map(MarginalAllocation.Step::item).toList());
         assertEquals(30, plan.spent(), 1e-9);
         assertEquals(5.3, plan.backordersBefore(), 1e-9);
         assertEquals(0.664905, plan.backordersAfter(), 1e-6);
         assertThrows(IllegalArgumentException.class, () -> MarginalAllocation.allocate(items, 0));
+        // A cap stops an item at its order-up-to level and leaves the money for the others.
+        MarginalAllocation.Plan capped = MarginalAllocation.allocate(List.of(
+                new MarginalAllocation.Item(new PoissonDemand(3.0), 0, 1, 2, 1, 2), items.get(1), items.get(2)), 30);
+        assertEquals(2, capped.unitsPerItem()[0]);
     }
 
     @Test

@@ -1,0 +1,38 @@
+package org.depotcast.planning;
+
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Digits;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Size;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+
+/** Request bodies of the planning endpoints. */
+public final class PlanningRequests {
+    private PlanningRequests() {
+    }
+
+    public record ReorderPointRequest(@NotNull @DecimalMin("0") Double leadTimeDemandMean, Double variance,
+                                      @NotNull Double serviceLevel, String distribution, String target,
+                                      @DecimalMin(value = "0", inclusive = false) Double orderQuantity) {
+    }
+
+    public record ReorderPointResponse(double reorderPoint, double cycleServiceLevel, double fillRate,
+                                       double expectedBackorders, String distribution) {
+    }
+
+    public record AlertActionRequest(@NotBlank String partNumber, @NotBlank String location, @NotNull AlertKind kind,
+                                     @NotNull AlertAction.Action action, LocalDate snoozeUntil,
+                                     @Size(max = 300) String note) {
+    }
+
+    public record PurchasePlanRequest(@NotNull @DecimalMin(value = "0", inclusive = false)
+                                      @Digits(integer = 12, fraction = 2) BigDecimal budget, LocalDate planningDate) {
+    }
+
+    public record TransferRequest(@NotBlank String partNumber, @NotBlank String from, @NotBlank String to,
+                                  @NotNull BigDecimal quantity) {
+    }
+}

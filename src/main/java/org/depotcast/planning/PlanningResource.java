@@ -1,0 +1,110 @@
+package org.depotcast.planning;
+
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotNull;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.MediaType;
+import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
+import org.depotcast.access.Roles;
+import org.depotcast.common.QueryParams;
+
+import java.time.LocalDate;
+import java.time.ZoneOffset;
+import java.util.List;
+
+@Path("/api/planning")
+@Produces(MediaType.APPLICATION_JSON)
+class PlanningResource {
+    private final PlanningService planning;
+    private final PurchasePlanService purchasePlans;
+    private final TransferService transfers;
+
+    PlanningResource(PlanningService planning, PurchasePlanService purchasePlans, TransferService transfers) {
+        this.planning = planning;
+        this.purchasePlans = purchasePlans;
+        this.transfers = transfers;
+    }
+
+    @GET
+    @Path("policies")
+    public List<StockPolicy> policies(@QueryParam("location") String location) {
+        return location == null ? planning.programmePolicies() : planning.policies(location);
+    }
+
+    /** Alerts for one location (or every depot and the central store), worst consequence first. */
+    @GET
+    @Path("alerts")
+    public List<ReorderAlert> alerts(@QueryParam("location") String location, @QueryParam("kind") String kind,
+                                     @QueryParam("includeSnoozed") String includeSnoozed) {
+        return planning.alerts(location, QueryParams.optionalEnum("kind", kind, AlertKind.class),
+                "true".equalsIgnoreCase(includeSnoozed));
+    }
+
+    @POST
+    @Path("alerts/actions")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public Response act(@Valid @NotNull PlanningRequests.AlertActionRequest r) {
+        AlertAction a = planning.act(r.partNumber(), r.location(), r.kind(), r.action(), r.snoozeUntil(), r.note());
+        return Response.status(201).entity(java.util.Map.of("id", a.id, "action", a.action, "actor", a.actor)).build();
+    }
+
+    @POST
+    @Path("purchase-plans")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public Response propose(@Valid @NotNull PlanningRequests.PurchasePlanRequest r, UriInfo uri) {
+        LocalDate date = r.planningDate() == null ? LocalDate.now(ZoneOffset.UTC) : r.planningDate();
+        PurchasePlanResponse plan = purchasePlans.propose(r.budget(), date);
+        return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(plan.id())).build()).entity(plan).build();
+    }
+
+    @GET
+    @Path("purchase-plans/{id}")
+    public PurchasePlanResponse plan(@PathParam("id") long id) {
+        return purchasePlans.get(id);
+    }
+
+    @POST
+    @Path("purchase-plans/{id}/accept")
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public PurchasePlanResponse accept(@PathParam("id") long id) {
+        return purchasePlans.accept(id);
+    }
+
+    @GET
+    @Path("purchase-plans/{id}/export")
+    @Produces("text/csv")
+    public String export(@PathParam("id") long id) {
+        return purchasePlans.exportCsv(id);
+    }
+
+    @GET
+    @Path("transfers/suggestions")
+    public List<TransferResponses.Suggestion> suggestions(@QueryParam("part") String part) {
+        return transfers.suggest(part);
+    }
+
+    @POST
+    @Path("transfers")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public Response dispatch(@Valid @NotNull PlanningRequests.TransferRequest r) {
+        return Response.status(201).entity(transfers.dispatch(r.partNumber(), r.from(), r.to(), r.quantity())).build();
+    }
+
+    @POST
+    @Path("transfers/{id}/receive")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public TransferResponses.Order receive(@PathParam("id") long id) {
+        return transfers.receive(id);
+    }
+}

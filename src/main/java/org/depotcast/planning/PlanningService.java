@@ -1,0 +1,168 @@
+package org.depotcast.planning;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.forecasting.ForecastQueryService;
+import org.depotcast.repairs.RepairService;
+import org.depotcast.stock.BalanceView;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.StockQueryService;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Stock policies per part and location, and the reorder alerts that follow from them. Reads only: planning never
+ * changes stock on its own.
+ */
+@ApplicationScoped
+public class PlanningService {
+    static final String PROGRAMME = "PROGRAMME";
+
+    private final PartService parts;
+    private final LocationService locations;
+    private final StockQueryService stock;
+    private final ForecastQueryService forecasts;
+    private final RepairService repairs;
+    private final AlertActionRepository actions;
+    private final CurrentUser currentUser;
+    private final PolicyCalculator calculator;
+
+    PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
+                    RepairService repairs, AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings) {
+        this.parts = parts;
+        this.locations = locations;
+        this.stock = stock;
+        this.forecasts = forecasts;
+        this.repairs = repairs;
+        this.actions = actions;
+        this.currentUser = currentUser;
+        this.calculator = new PolicyCalculator(settings);
+    }
+
+    /** Policies of every part with stock, stock on order or forecast demand at the location. */
+    @Transactional
+    public List<StockPolicy> policies(String locationCode) {
+        Location location = locations.require("location", locationCode);
+        if (location.kind == LocationKind.IN_TRANSIT) {
+            throw new InvalidInputException("location", "stock in transit has no reorder policy");
+        }
+        String forecastKey = location.kind == LocationKind.CENTRAL_STORE ? PROGRAMME : location.code;
+        int horizonMonths = location.kind == LocationKind.KIT ? 2 : 3;
+        Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(forecastKey, horizonMonths);
+        Map<String, double[]> onHandOnOrder = new HashMap<>();
+        for (BalanceView b : stock.balances(location.code)) {
+            onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
+        }
+        List<StockPolicy> policies = new ArrayList<>();
+        for (Part part : parts.all()) {
+            ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
+            double[] held = onHandOnOrder.get(part.partNumber);
+            if (rate == null && held == null) {
+                continue;
+            }
+            policies.add(calculator.policy(part, location.code, location.kind, rate == null ? 0 : rate.monthlyMean(),
+                    rate == null ? 0 : rate.monthlyVariance(), rate == null ? "none" : rate.method(),
+                    held == null ? 0 : held[0], held == null ? 0 : held[1]));
+        }
+        return policies;
+    }
+
+    /**
+     * Programme-level policies for buying: programme-wide demand over the supplier lead time and central review,
+     * against the echelon position (stock everywhere in the programme plus everything on order).
+     */
+    @Transactional
+    public List<StockPolicy> programmePolicies() {
+        Location central = locations.ofKind(LocationKind.CENTRAL_STORE).stream().findFirst()
+                .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
+        Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
+        Map<String, double[]> echelon = new HashMap<>();
+        for (BalanceView b : stock.balances(null)) {
+            double[] cell = echelon.computeIfAbsent(b.partNumber(), k -> new double[2]);
+            cell[0] += b.onHand().doubleValue();
+            cell[1] += b.onOrder().doubleValue();
+        }
+        List<StockPolicy> policies = new ArrayList<>();
+        for (Part part : parts.all()) {
+            ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
+            double[] held = echelon.getOrDefault(part.partNumber, new double[2]);
+            policies.add(calculator.policy(part, central.code, LocationKind.CENTRAL_STORE,
+                    rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
+                    rate == null ? "none" : rate.method(), held[0], held[1]));
+        }
+        return policies;
+    }
+
+    /** Alerts at one location (or every depot and the central store), worst consequence first. */
+    @Transactional
+    public List<ReorderAlert> alerts(String locationCode, AlertKind onlyKind, boolean includeSnoozed) {
+        List<String> codes = new ArrayList<>();
+        if (locationCode != null) {
+            codes.add(locationCode);
+        } else {
+            locations.ofKind(LocationKind.CENTRAL_STORE).forEach(l -> codes.add(l.code));
+            locations.ofKind(LocationKind.DEPOT).forEach(l -> codes.add(l.code));
+        }
+        Map<String, Long> waiting = repairs.openNeeds();
+        Map<String, AlertAction> latestActions = new HashMap<>();
+        Map<Long, String> partNumbers = new HashMap<>();
+        parts.all().forEach(p -> partNumbers.put(p.id, p.partNumber));
+        for (AlertAction a : actions.at(locationCode)) {
+            latestActions.put(partNumbers.get(a.partId) + "|" + a.locationCode + "|" + a.alertKind, a);
+        }
+        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        List<ReorderAlert> alerts = new ArrayList<>();
+        for (String code : codes) {
+            for (StockPolicy p : policies(code)) {
+                for (ReorderAlert alert : AlertRules.raise(p, waiting.getOrDefault(code + "|" + p.partNumber(), 0L))) {
+                    AlertAction action = latestActions.get(alert.partNumber() + "|" + code + "|" + alert.kind());
+                    boolean snoozed = action != null && action.action == AlertAction.Action.SNOOZE
+                            && action.snoozedUntil != null && action.snoozedUntil.isAfter(today);
+                    if ((onlyKind != null && alert.kind() != onlyKind) || (snoozed && !includeSnoozed)) {
+                        continue;
+                    }
+                    alerts.add(AlertRules.withAction(alert, action != null, snoozed ? action.snoozedUntil : null));
+                }
+            }
+        }
+        alerts.sort(Comparator.comparingDouble(ReorderAlert::pumpDaysAtRisk).reversed()
+                .thenComparing(ReorderAlert::partNumber));
+        return alerts;
+    }
+
+    /** Records an acknowledgement or a snooze; the alert itself is recomputed from stock and forecasts each time. */
+    @Transactional
+    public AlertAction act(String partNumber, String locationCode, AlertKind kind, AlertAction.Action action,
+                           LocalDate snoozeUntil, String note) {
+        Part part = parts.require("partNumber", partNumber);
+        locations.require("location", locationCode);
+        if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(ZoneOffset.UTC)))) {
+            throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
+        }
+        AlertAction record = new AlertAction();
+        record.partId = part.id;
+        record.locationCode = locationCode;
+        record.alertKind = kind;
+        record.action = action;
+        record.snoozedUntil = action == AlertAction.Action.SNOOZE ? snoozeUntil : null;
+        record.note = note;
+        record.actor = currentUser.name();
+        record.actedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        actions.persist(record);
+        return record;
+    }
+}

@@ -1,0 +1,69 @@
+package org.depotcast.planning;
+
+import org.depotcast.catalogue.Part;
+import org.depotcast.core.policy.DemandDistribution;
+import org.depotcast.core.policy.NormalDemand;
+import org.depotcast.core.policy.OrderQuantity;
+import org.depotcast.core.policy.ReorderPoint;
+import org.depotcast.stock.LocationKind;
+
+/**
+ * Reorder point and order-up-to level for one part at one location (Silver, Pyke &amp; Thomas 2017, ch. 6–7):
+ * demand over the protection period from the stored monthly forecast, Poisson or negative binomial by its
+ * variance-to-mean ratio, normal for fast movers (mean over the period ≥ 30 units); s for the target cycle service
+ * level; Q from the EOQ rounded to packs and the MOQ; S = s + Q, capped so stock is not held past its shelf life.
+ * Protection periods: central store = supplier lead time (with its variability) + central review; depot = transfer
+ * lead time + depot review; kit = one visit cycle, its min/max being s and s + one cycle's mean demand.
+ */
+final class PolicyCalculator {
+    private static final double DAYS_PER_MONTH = 365.25 / 12;
+    private static final double FAST_MOVER_UNITS = 30;
+
+    private final PlanningSettings settings;
+
+    PolicyCalculator(PlanningSettings settings) {
+        this.settings = settings;
+    }
+
+    static DemandDistribution distribution(double mean, double variance) {
+        return mean >= FAST_MOVER_UNITS ? new NormalDemand(mean, Math.max(variance, mean))
+                : DemandDistribution.fromMoments(mean, variance);
+    }
+
+    StockPolicy policy(Part part, String locationCode, LocationKind level, double monthlyMean, double monthlyVariance,
+                       String method, double onHand, double onOrder) {
+        int protection = switch (level) {
+            case CENTRAL_STORE -> part.leadTimeDays + settings.centralReviewDays();
+            case DEPOT -> settings.depotTransferLeadDays() + settings.depotReviewDays();
+            default -> settings.kitVisitCycleDays();
+        };
+        double daily = Math.max(0, monthlyMean) / DAYS_PER_MONTH;
+        double dailyVariance = Math.max(Math.max(0, monthlyVariance) / DAYS_PER_MONTH, daily);
+        double leadSd = level == LocationKind.CENTRAL_STORE ? settings.supplierLeadTimeCv() * part.leadTimeDays : 0;
+        double[] moments = ReorderPoint.leadTimeMoments(daily, dailyVariance, protection, leadSd);
+        DemandDistribution demand = distribution(moments[0], moments[1]);
+        double serviceLevel = part.critical ? settings.serviceLevelCritical() : settings.serviceLevelStandard();
+        double annual = daily * 365.25;
+        double quantity;
+        if (level == LocationKind.KIT) {
+            quantity = Math.max(1, Math.ceil(daily * settings.kitVisitCycleDays()));
+        } else {
+            double holding = Math.max(0.01, part.unitCost.doubleValue() * settings.holdingRatePerYear());
+            quantity = annual <= 0 ? part.packSize
+                    : OrderQuantity.economicInPacks(annual, settings.orderingCost(), holding, part.packSize, part.minOrderQty);
+        }
+        double s = Math.ceil(ReorderPoint.of(demand, serviceLevel, ReorderPoint.Target.CYCLE_SERVICE_LEVEL, quantity)
+                .reorderPoint() - 1e-9);
+        double upTo = s + quantity;
+        if (part.shelfLifeDays != null && daily > 0) {
+            // Never hold more than will be used before it expires, but never less than the reorder point.
+            upTo = Math.max(s, Math.min(upTo, Math.floor(daily * part.shelfLifeDays)));
+        }
+        double position = onHand + onOrder;
+        double shortUnits = demand.expectedShortfall(Math.max(0, position));
+        return new StockPolicy(part.partNumber, locationCode, level.name(), part.critical, serviceLevel, protection,
+                daily, moments[0], moments[1], demand.name(), s, quantity, upTo, onHand, onOrder, position, shortUnits,
+                shortUnits * protection / 2.0, method, part.shelfLifeDays, part.unitCost.doubleValue(), part.currency,
+                part.packSize, part.minOrderQty, part.supplier);
+    }
+}

@@ -1,0 +1,43 @@
+package org.depotcast.planning;
+
+import jakarta.persistence.Column;
+import jakarta.persistence.Entity;
+import jakarta.persistence.FetchType;
+import jakarta.persistence.GeneratedValue;
+import jakarta.persistence.GenerationType;
+import jakarta.persistence.Id;
+import jakarta.persistence.JoinColumn;
+import jakarta.persistence.ManyToOne;
+import jakarta.persistence.Table;
+import org.depotcast.catalogue.Part;
+
+import java.math.BigDecimal;
+
+/** One part in a purchase plan: what to buy (possibly nothing) and where its position stands after. */
+@Entity
+@Table(name = "purchase_plan_line")
+public class PurchasePlanLine {
+    @Id
+    @GeneratedValue(strategy = GenerationType.IDENTITY)
+    public Long id;
+    @ManyToOne(fetch = FetchType.LAZY, optional = false)
+    @JoinColumn(name = "purchase_plan_id")
+    public PurchasePlan plan;
+    @ManyToOne(optional = false)
+    @JoinColumn(name = "part_id")
+    public Part part;
+    @Column(nullable = false)
+    public int packs;
+    @Column(nullable = false)
+    public BigDecimal quantity;
+    @Column(nullable = false)
+    public BigDecimal cost;
+    @Column(name = "position_before", nullable = false)
+    public double positionBefore;
+    @Column(name = "reorder_point", nullable = false)
+    public double reorderPoint;
+    @Column(name = "order_up_to", nullable = false)
+    public double orderUpTo;
+    @Column(name = "shortfall_after", nullable = false)
+    public double shortfallAfter;
+}

@@ -1,0 +1,164 @@
+package org.depotcast.planning;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.CsvOut;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.core.policy.MarginalAllocation;
+import org.depotcast.core.policy.OrderQuantity;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.PurchaseOrderRequest;
+import org.depotcast.stock.PurchaseOrderService;
+
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Turns a budget into a supplier order by marginal analysis (see {@link MarginalAllocation}): each next purchase
+ * step of a part — whole packs, at least its minimum order quantity — goes where it removes the most expected
+ * pump-days without water per unit of money, up to the part's order-up-to level. Proposing changes no stock;
+ * accepting places one purchase order per supplier, delivered to the central store.
+ */
+@ApplicationScoped
+public class PurchasePlanService {
+    private final PlanningService planning;
+    private final PartService parts;
+    private final PurchaseOrderService orders;
+    private final LocationService locations;
+    private final CurrentUser currentUser;
+    private final Plans plans;
+
+    @ApplicationScoped
+    static class Plans implements PanacheRepository<PurchasePlan> {
+    }
+
+    PurchasePlanService(PlanningService planning, PartService parts, PurchaseOrderService orders, LocationService locations,
+                        CurrentUser currentUser, Plans plans) {
+        this.planning = planning;
+        this.parts = parts;
+        this.orders = orders;
+        this.locations = locations;
+        this.currentUser = currentUser;
+        this.plans = plans;
+    }
+
+    @Transactional
+    public PurchasePlanResponse propose(BigDecimal budget, LocalDate planningDate) {
+        List<StockPolicy> policies = planning.programmePolicies();
+        String currency = programmeCurrency(policies);
+        List<StockPolicy> priced = policies.stream().filter(p -> p.currency().equals(currency)).toList();
+        List<MarginalAllocation.Item> items = new ArrayList<>();
+        for (StockPolicy p : priced) {
+            int step = (int) OrderQuantity.roundUpToPacks(Math.max(p.packSize(), p.minOrderQty()), p.packSize());
+            long room = (long) Math.max(0, Math.ceil(p.orderUpTo() - p.position()));
+            items.add(new MarginalAllocation.Item(PolicyCalculator.distribution(p.demandMean(), p.demandVariance()),
+                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0,
+                    OrderQuantity.roundUpToPacks(room, step)));
+        }
+        MarginalAllocation.Plan allocation = MarginalAllocation.allocate(items, budget.doubleValue());
+        PurchasePlan plan = new PurchasePlan();
+        plan.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+        plan.createdBy = currentUser.name();
+        plan.planningDate = planningDate;
+        plan.budget = budget;
+        plan.currency = currency;
+        plan.pumpDaysBefore = allocation.backordersBefore();
+        plan.pumpDaysAfter = allocation.backordersAfter();
+        plan.status = PurchasePlan.Status.PROPOSED;
+        BigDecimal spent = BigDecimal.ZERO;
+        for (int i = 0; i < priced.size(); i++) {
+            StockPolicy p = priced.get(i);
+            long units = allocation.unitsPerItem()[i];
+            double after = p.position() + units;
+            if (units == 0 && after > p.reorderPoint()) {
+                continue;
+            }
+            PurchasePlanLine line = new PurchasePlanLine();
+            line.plan = plan;
+            line.part = parts.require("partNumber", p.partNumber());
+            line.packs = (int) (units / p.packSize());
+            line.quantity = BigDecimal.valueOf(units);
+            line.cost = BigDecimal.valueOf(p.unitCost()).multiply(line.quantity).setScale(2, RoundingMode.HALF_UP);
+            line.positionBefore = p.position();
+            line.reorderPoint = p.reorderPoint();
+            line.orderUpTo = p.orderUpTo();
+            line.shortfallAfter = Math.max(0, p.reorderPoint() - after);
+            spent = spent.add(line.cost);
+            plan.lines.add(line);
+        }
+        plan.spent = spent;
+        plans.persist(plan);
+        return PurchasePlanResponse.from(plan);
+    }
+
+    @Transactional
+    public PurchasePlanResponse get(long id) {
+        return PurchasePlanResponse.from(require(id));
+    }
+
+    /** Places one purchase order per supplier for the plan's lines, in one transaction; a plan is accepted once. */
+    @Transactional
+    public PurchasePlanResponse accept(long id) {
+        PurchasePlan plan = plans.findById(id, jakarta.persistence.LockModeType.PESSIMISTIC_WRITE);
+        if (plan == null) {
+            throw new EntityMissingException(null, "purchase plan", id);
+        }
+        if (plan.status == PurchasePlan.Status.ACCEPTED) {
+            throw new ConflictException("id", "purchase plan " + id + " was already accepted");
+        }
+        String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+        Map<String, List<PurchasePlanLine>> bySupplier = new LinkedHashMap<>();
+        plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> bySupplier.computeIfAbsent(l.part.supplier, k -> new ArrayList<>()).add(l));
+        if (bySupplier.isEmpty()) {
+            throw new BusinessRuleException("id", "purchase plan " + id + " buys nothing");
+        }
+        int n = 0;
+        for (Map.Entry<String, List<PurchasePlanLine>> supplier : bySupplier.entrySet()) {
+            int leadDays = supplier.getValue().stream().mapToInt(l -> l.part.leadTimeDays).max().orElse(0);
+            orders.place(new PurchaseOrderRequest("PP" + id + "-" + (++n), supplier.getKey(), central, plan.planningDate,
+                    plan.planningDate.plusDays(leadDays), supplier.getValue().stream()
+                    .map(l -> new PurchaseOrderRequest.Line(l.part.partNumber, l.quantity)).toList()));
+        }
+        plan.status = PurchasePlan.Status.ACCEPTED;
+        return PurchasePlanResponse.from(plan);
+    }
+
+    @Transactional
+    public String exportCsv(long id) {
+        PurchasePlan plan = require(id);
+        return CsvOut.write(List.of("part_number", "description", "supplier", "packs", "quantity", "unit_cost", "cost",
+                "currency"), plan.lines.stream().filter(l -> l.packs > 0).toList(), l -> List.of(l.part.partNumber,
+                l.part.description, l.part.supplier, l.packs, l.quantity.toPlainString(),
+                l.part.unitCost.toPlainString(), l.cost.toPlainString(), plan.currency));
+    }
+
+    private PurchasePlan require(long id) {
+        PurchasePlan plan = plans.findById(id);
+        if (plan == null) {
+            throw new EntityMissingException(null, "purchase plan", id);
+        }
+        return plan;
+    }
+
+    /** The currency most parts are priced in; parts priced otherwise stay out of the plan (no rate is set). */
+    private static String programmeCurrency(List<StockPolicy> policies) {
+        Map<String, Integer> counts = new LinkedHashMap<>();
+        policies.forEach(p -> counts.merge(p.currency(), 1, Integer::sum));
+        return counts.entrySet().stream().max(Map.Entry.comparingByValue()).map(Map.Entry::getKey)
+                .orElseThrow(() -> new BusinessRuleException("budget", "the catalogue has no priced parts"));
+    }
+}

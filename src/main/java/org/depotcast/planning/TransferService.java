@@ -1,0 +1,174 @@
+package org.depotcast.planning;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.LockModeType;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.Quantities;
+import org.depotcast.core.policy.TransferPlanner;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.MovementCommand;
+import org.depotcast.stock.MovementKind;
+import org.depotcast.stock.StockLedgerService;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Transfers between depots before buying: suggestions from the transportation LP of {@link TransferPlanner}
+ * (donors give only what they hold above their own reorder point; receivers at or below their reorder point ask up
+ * to their order-up-to level; cost per unit = distance × cost per unit-km; a unit short is worth the pump-days it
+ * would cost), and the dispatch/receive steps that move the stock through the ledger.
+ */
+@ApplicationScoped
+public class TransferService {
+    static final String IN_TRANSIT = "IN-TRANSIT";
+
+    private final PlanningService planning;
+    private final LocationService locations;
+    private final PartService parts;
+    private final StockLedgerService ledger;
+    private final CurrentUser currentUser;
+    private final PlanningSettings settings;
+    private final Orders orders;
+
+    @ApplicationScoped
+    static class Orders implements PanacheRepository<TransferOrder> {
+    }
+
+    TransferService(PlanningService planning, LocationService locations, PartService parts, StockLedgerService ledger,
+                    CurrentUser currentUser, PlanningSettings settings, Orders orders) {
+        this.planning = planning;
+        this.locations = locations;
+        this.parts = parts;
+        this.ledger = ledger;
+        this.currentUser = currentUser;
+        this.settings = settings;
+        this.orders = orders;
+    }
+
+    @Transactional
+    public List<TransferResponses.Suggestion> suggest(String partNumber) {
+        if (partNumber != null) {
+            parts.require("part", partNumber);
+        }
+        List<Location> depots = locations.ofKind(LocationKind.DEPOT);
+        Map<String, Map<String, StockPolicy>> byPart = new HashMap<>();
+        for (Location depot : depots) {
+            for (StockPolicy p : planning.policies(depot.code)) {
+                if (partNumber == null || partNumber.equals(p.partNumber())) {
+                    byPart.computeIfAbsent(p.partNumber(), k -> new HashMap<>()).put(depot.code, p);
+                }
+            }
+        }
+        List<TransferResponses.Suggestion> suggestions = new ArrayList<>();
+        byPart.keySet().stream().sorted().forEach(part -> suggestions.addAll(suggestFor(part, depots, byPart.get(part))));
+        return suggestions;
+    }
+
+    private List<TransferResponses.Suggestion> suggestFor(String part, List<Location> depots, Map<String, StockPolicy> policies) {
+        List<Location> donors = new ArrayList<>(), receivers = new ArrayList<>();
+        List<Long> surplus = new ArrayList<>(), deficit = new ArrayList<>();
+        for (Location depot : depots) {
+            StockPolicy p = policies.get(depot.code);
+            if (p == null) {
+                continue;
+            }
+            long spare = (long) Math.floor(p.onHand() - p.reorderPoint());
+            if (spare > 0) {
+                donors.add(depot);
+                surplus.add(spare);
+            } else if (p.position() <= p.reorderPoint() && p.dailyDemand() > 0) {
+                receivers.add(depot);
+                deficit.add((long) Math.ceil(p.orderUpTo() - p.position()));
+            }
+        }
+        if (donors.isEmpty() || receivers.isEmpty()) {
+            return List.of();
+        }
+        double[][] cost = new double[donors.size()][receivers.size()];
+        double[][] km = new double[donors.size()][receivers.size()];
+        for (int i = 0; i < donors.size(); i++) {
+            for (int j = 0; j < receivers.size(); j++) {
+                km[i][j] = distanceKm(donors.get(i), receivers.get(j));
+                cost[i][j] = km[i][j] * settings.transferCostPerUnitKm();
+            }
+        }
+        double pumpDaysPerUnit = (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
+        double penalty = settings.pumpDayValue() * pumpDaysPerUnit;
+        List<TransferResponses.Suggestion> out = new ArrayList<>();
+        for (TransferPlanner.Move move : TransferPlanner.plan(surplus.stream().mapToLong(Long::longValue).toArray(),
+                deficit.stream().mapToLong(Long::longValue).toArray(), cost, penalty)) {
+            out.add(new TransferResponses.Suggestion(part, donors.get(move.from()).code, receivers.get(move.to()).code,
+                    move.units(), km[move.from()][move.to()], move.unitCost(), move.units() * pumpDaysPerUnit));
+        }
+        out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
+        return out;
+    }
+
+    private static double distanceKm(Location a, Location b) {
+        if (a.latitude == null || a.longitude == null || b.latitude == null || b.longitude == null) {
+            return 0;
+        }
+        return TransferPlanner.distanceKm(a.latitude.doubleValue(), a.longitude.doubleValue(),
+                b.latitude.doubleValue(), b.longitude.doubleValue());
+    }
+
+    /** Sends stock on its way: out of the donor into transit, in one transaction with the transfer order. */
+    @Transactional
+    public TransferResponses.Order dispatch(String partNumber, String fromCode, String toCode, BigDecimal quantity) {
+        Location from = locations.require("from", fromCode);
+        Location to = locations.require("to", toCode);
+        for (Location l : List.of(from, to)) {
+            if (l.kind != LocationKind.DEPOT && l.kind != LocationKind.CENTRAL_STORE) {
+                throw new BusinessRuleException(l == from ? "from" : "to", "transfers run between the central store and depots");
+            }
+        }
+        if (from.id.equals(to.id)) {
+            throw new BusinessRuleException("to", "from and to must be different locations");
+        }
+        TransferOrder order = new TransferOrder();
+        order.part = parts.require("partNumber", partNumber);
+        order.quantity = Quantities.requirePositive("quantity", quantity, order.part.wholeUnits());
+        order.from = from;
+        order.to = to;
+        order.status = TransferOrder.Status.IN_TRANSIT;
+        order.dispatchedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        order.actor = currentUser.name();
+        orders.persist(order);
+        orders.flush();
+        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, partNumber, fromCode, IN_TRANSIT, order.quantity,
+                order.dispatchedAt, "transfer dispatched to " + toCode, "transfer " + order.id, null, null, null));
+        return TransferResponses.Order.from(order);
+    }
+
+    /** Receives a transfer at its destination; a second receipt of the same order is refused. */
+    @Transactional
+    public TransferResponses.Order receive(long id) {
+        TransferOrder order = orders.findById(id, LockModeType.PESSIMISTIC_WRITE);
+        if (order == null) {
+            throw new EntityMissingException(null, "transfer", id);
+        }
+        if (order.status != TransferOrder.Status.IN_TRANSIT) {
+            throw new BusinessRuleException("id", "transfer " + id + " was already received");
+        }
+        order.status = TransferOrder.Status.RECEIVED;
+        order.receivedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, order.part.partNumber, IN_TRANSIT, order.to.code,
+                order.quantity, order.receivedAt, "transfer received from " + order.from.code, "transfer " + order.id,
+                null, null, null));
+        return TransferResponses.Order.from(order);
+    }
+}

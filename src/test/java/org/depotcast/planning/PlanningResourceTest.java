@@ -1,0 +1,169 @@
+package org.depotcast.planning;
+
+import io.quarkus.test.junit.QuarkusTest;
+import io.restassured.path.json.JsonPath;
+import jakarta.inject.Inject;
+import org.depotcast.TestData;
+import org.depotcast.forecasting.ForecastRunService;
+import org.depotcast.stock.StockQueryService;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.depotcast.TestData.as;
+import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.hasItem;
+import static org.hamcrest.Matchers.lessThanOrEqualTo;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+@QuarkusTest
+class PlanningResourceTest {
+    private static final String PROBLEM = "application/problem+json";
+
+    @Inject
+    ForecastRunService runs;
+    @Inject
+    StockQueryService stock;
+
+    @BeforeEach
+    void forecastsExist() {
+        if (runs.latestFinished().isEmpty()) {
+            runs.runNow("test", LocalDate.of(2026, 12, 2));
+        }
+    }
+
+    @Test
+    void statelessReorderPointMatchesThePoissonTable() {
+        // Poisson lead-time demand 4 at 95%: s = 8, F(8) = 0.978637, G(8) = 0.033627 (see DemandDistributionTest).
+        as("officer").contentType("application/json")
+                .body(Map.of("leadTimeDemandMean", 4.0, "serviceLevel", 0.95, "distribution", "poisson", "orderQuantity", 5))
+                .post("/api/policy/reorder-point").then().statusCode(200)
+                .body("reorderPoint", equalTo(8.0f)).body("distribution", equalTo("poisson"));
+        JsonPath nb = as("officer").contentType("application/json")
+                .body(Map.of("leadTimeDemandMean", 4.0, "variance", 8.0, "serviceLevel", 0.95, "distribution", "negative-binomial"))
+                .post("/api/policy/reorder-point").then().statusCode(200).extract().jsonPath();
+        assertEquals(9.0, nb.getDouble("reorderPoint"), 0);
+        as("officer").contentType("application/json").body(Map.of("leadTimeDemandMean", 4.0, "serviceLevel", 1.2))
+                .post("/api/policy/reorder-point").then().statusCode(400).contentType(PROBLEM)
+                .body("errors.field", hasItem("serviceLevel"));
+        as("officer").contentType("application/json")
+                .body(Map.of("leadTimeDemandMean", 4.0, "serviceLevel", 0.9, "distribution", "negative-binomial"))
+                .post("/api/policy/reorder-point").then().statusCode(400).body("errors.field", hasItem("variance"));
+        as("officer").contentType("application/json")
+                .body(Map.of("leadTimeDemandMean", 4.0, "serviceLevel", 0.9, "distribution", "weibull"))
+                .post("/api/policy/reorder-point").then().statusCode(400).body("errors.field", hasItem("distribution"));
+    }
+
+    @Test
+    void alertsAreSortedByConsequenceAndCarryTheirNumbers() {
+        List<Map<String, Object>> alerts = as("officer").queryParam("location", "DEP-MARROWFORD")
+                .get("/api/planning/alerts").then().statusCode(200).extract().jsonPath().getList("$");
+        assertFalse(alerts.isEmpty(), "the demo's uneven stock raises alerts");
+        for (int i = 1; i < alerts.size(); i++) {
+            assertTrue(((Number) alerts.get(i - 1).get("pumpDaysAtRisk")).doubleValue()
+                    >= ((Number) alerts.get(i).get("pumpDaysAtRisk")).doubleValue());
+        }
+        Map<String, Object> first = alerts.get(0);
+        assertTrue(first.containsKey("reorderPoint") && first.containsKey("position") && first.containsKey("detail"));
+        as("officer").queryParam("location", "DEP-MARROWFORD").queryParam("kind", "SPROCKETS")
+                .get("/api/planning/alerts").then().statusCode(400).contentType(PROBLEM);
+    }
+
+    @Test
+    void snoozedAlertsLeaveTheListUntilTheirDate() {
+        List<Map<String, Object>> alerts = as("officer").queryParam("location", "DEP-QUILLAN")
+                .get("/api/planning/alerts").then().statusCode(200).extract().jsonPath().getList("$");
+        Map<String, Object> target = alerts.get(alerts.size() - 1);
+        Map<String, Object> body = new HashMap<>();
+        body.put("partNumber", target.get("partNumber"));
+        body.put("location", "DEP-QUILLAN");
+        body.put("kind", target.get("kind"));
+        body.put("action", "SNOOZE");
+        body.put("snoozeUntil", LocalDate.now().plusDays(7).toString());
+        as("officer").contentType("application/json").body(body).post("/api/planning/alerts/actions").then().statusCode(201);
+        List<Map<String, Object>> after = as("officer").queryParam("location", "DEP-QUILLAN")
+                .get("/api/planning/alerts").then().extract().jsonPath().getList("$");
+        assertTrue(after.stream().noneMatch(a -> a.get("partNumber").equals(target.get("partNumber"))
+                && a.get("kind").equals(target.get("kind"))));
+        as("officer").queryParam("location", "DEP-QUILLAN").queryParam("includeSnoozed", "true")
+                .get("/api/planning/alerts").then().body("snoozedUntil", hasItem(LocalDate.now().plusDays(7).toString()));
+        body.put("snoozeUntil", LocalDate.now().minusDays(1).toString());
+        as("officer").contentType("application/json").body(body).post("/api/planning/alerts/actions")
+                .then().statusCode(422).contentType(PROBLEM).body("errors[0].field", equalTo("snoozeUntil"));
+    }
+
+    @Test
+    void purchasePlanStaysInBudgetAndIsAcceptedOnce() {
+        JsonPath plan = as("lead").contentType("application/json")
+                .body(Map.of("budget", 1500, "planningDate", "2026-12-02")).post("/api/planning/purchase-plans")
+                .then().statusCode(201).body("spent", lessThanOrEqualTo(1500.0f)).extract().jsonPath();
+        assertTrue(plan.getDouble("pumpDaysAfter") <= plan.getDouble("pumpDaysBefore"));
+        List<Map<String, Object>> lines = plan.getList("lines");
+        assertFalse(lines.isEmpty());
+        double sum = 0;
+        for (Map<String, Object> line : lines) {
+            sum += ((Number) line.get("cost")).doubleValue();
+        }
+        assertEquals(plan.getDouble("spent"), sum, 0.01);
+        long id = plan.getLong("id");
+        String csv = as("lead").get("/api/planning/purchase-plans/" + id + "/export").then().statusCode(200).extract().asString();
+        assertEquals(lines.size() + 1, csv.strip().split("\n").length);
+        as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(200).body("status", equalTo("ACCEPTED"));
+        as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(409).contentType(PROBLEM);
+        as("lead").queryParam("status", "OPEN").get("/api/purchase-orders").then().body("orderNumber", hasItem("PP" + id + "-1"));
+        as("lead").contentType("application/json").body(Map.of("budget", 0)).post("/api/planning/purchase-plans")
+                .then().statusCode(400).contentType(PROBLEM).body("errors[0].field", equalTo("budget"));
+        as("mechanic1").contentType("application/json").body(Map.of("budget", 10)).post("/api/planning/purchase-plans")
+                .then().statusCode(403);
+    }
+
+    @Test
+    void transferSuggestionsNeverTakeADonorBelowItsReorderPoint() {
+        List<Map<String, Object>> suggestions = as("officer").get("/api/planning/transfers/suggestions")
+                .then().statusCode(200).extract().jsonPath().getList("$");
+        Map<String, Double> given = new HashMap<>();
+        for (Map<String, Object> s : suggestions) {
+            given.merge(s.get("partNumber") + "|" + s.get("from"), ((Number) s.get("quantity")).doubleValue(), Double::sum);
+        }
+        for (Map.Entry<String, Double> g : given.entrySet()) {
+            String[] key = g.getKey().split("\\|");
+            List<Map<String, Object>> policies = as("officer").queryParam("location", key[1])
+                    .get("/api/planning/policies").then().extract().jsonPath().getList("$");
+            Map<String, Object> policy = policies.stream().filter(p -> p.get("partNumber").equals(key[0])).findFirst().orElseThrow();
+            double onHand = ((Number) policy.get("onHand")).doubleValue();
+            double s = ((Number) policy.get("reorderPoint")).doubleValue();
+            assertTrue(onHand - g.getValue() >= s, g.getKey() + " gives " + g.getValue() + " of " + onHand + " above s " + s);
+        }
+        // The same data give the same suggestions.
+        assertEquals(suggestions, as("officer").get("/api/planning/transfers/suggestions").then().extract().jsonPath().getList("$"));
+    }
+
+    @Test
+    void acceptedTransferMovesThroughTransitAndIsReceivedOnce() {
+        BigDecimal fromBefore = stock.onHand("OB-CS-63", "DEP-TESHVALE");
+        BigDecimal toBefore = stock.onHand("OB-CS-63", "DEP-QUILLAN");
+        long id = as("officer").contentType("application/json")
+                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "quantity", 2))
+                .post("/api/planning/transfers").then().statusCode(201).body("status", equalTo("IN_TRANSIT"))
+                .extract().jsonPath().getLong("id");
+        assertEquals(0, fromBefore.subtract(BigDecimal.valueOf(2)).compareTo(stock.onHand("OB-CS-63", "DEP-TESHVALE")));
+        as("officer").post("/api/planning/transfers/" + id + "/receive").then().statusCode(200).body("status", equalTo("RECEIVED"));
+        as("officer").post("/api/planning/transfers/" + id + "/receive").then().statusCode(422).contentType(PROBLEM);
+        assertEquals(0, toBefore.add(BigDecimal.valueOf(2)).compareTo(stock.onHand("OB-CS-63", "DEP-QUILLAN")));
+        as("officer").contentType("application/json")
+                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-TESHVALE", "quantity", 1))
+                .post("/api/planning/transfers").then().statusCode(422).contentType(PROBLEM);
+        as("officer").contentType("application/json")
+                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "quantity", 100000))
+                .post("/api/planning/transfers").then().statusCode(422).contentType(PROBLEM);
+        assertTrue(stock.reconcile().consistent());
+        TestData.as("lead").get("/api/stock/reconcile").then().body("consistent", equalTo(true));
+    }
+}
