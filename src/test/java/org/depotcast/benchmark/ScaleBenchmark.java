@@ -38,6 +38,12 @@ class ScaleBenchmark {
     AgroalDataSource dataSource;
     @Inject
     ForecastRunService runs;
+    @Inject
+    org.depotcast.planning.PlanningService planning;
+    @Inject
+    org.depotcast.planning.PurchasePlanService purchasePlans;
+    @Inject
+    org.depotcast.planning.TransferService transfers;
 
     @Test
     void fullRecomputationAtFortyTimesTheDemo() throws Exception {
@@ -77,22 +83,38 @@ class ScaleBenchmark {
                         + "%.0f MiB live after the last collection",
                 seconds, run.seriesTotal, Runtime.getRuntime().maxMemory() / 1048576, peak.get() / 1048576.0,
                 liveAfterGc / 1048576.0));
+
+        // Issue 4 figure: a full programme plan at the same scale (alerts everywhere, a purchase plan, transfers).
+        double[] planSeconds = new double[3];
+        int alerts = 0, suggestions = 0, lines = 0;
+        for (int round = 0; round < planSeconds.length; round++) {
+            long planStart = System.nanoTime();
+            alerts = planning.alerts(null, null, false).size();
+            lines = purchasePlans.propose(new java.math.BigDecimal("250000"), LocalDate.of(2026, 12, 2)).lines().size();
+            suggestions = transfers.suggest(null).size();
+            planSeconds[round] = (System.nanoTime() - planStart) / 1e9;
+        }
+        Figures.report(String.format("full programme plan at 40x the demo (alerts for %d depots and the central store, "
+                        + "purchase plan, transfer LPs for 120 parts): median %.1f s over 3 rounds; %d alerts, %d plan lines, "
+                        + "%d transfer suggestions", DEPOTS, Figures.median(planSeconds), alerts, lines, suggestions));
     }
 
     private int[] populate() throws SQLException {
         SplittableRandom random = new SplittableRandom(40);
         try (Connection c = dataSource.getConnection()) {
             c.setAutoCommit(false);
-            exec(c, "insert into location (id, code, name, kind) values (1, 'CENTRAL', 'Central store', 'CENTRAL_STORE')");
-            try (PreparedStatement depot = c.prepareStatement("insert into location (id, code, name, kind, parent_id, mechanic_username) values (?, ?, ?, ?, ?, ?)")) {
+            exec(c, "insert into location (id, code, name, kind) values (2, 'CENTRAL', 'Central store', 'CENTRAL_STORE')");
+            try (PreparedStatement depot = c.prepareStatement("insert into location (id, code, name, kind, parent_id, mechanic_username, latitude, longitude) values (?, ?, ?, ?, ?, ?, ?, ?)")) {
                 for (int d = 0; d < DEPOTS; d++) {
                     long depotId = 100 + d;
                     depot.setLong(1, depotId);
                     depot.setString(2, "D" + d);
                     depot.setString(3, "Depot " + d);
                     depot.setString(4, "DEPOT");
-                    depot.setLong(5, 1);
+                    depot.setLong(5, 2);
                     depot.setString(6, null);
+                    depot.setDouble(7, -2 + 4 * random(d, 1));
+                    depot.setDouble(8, 1 + 4 * random(d, 2));
                     depot.addBatch();
                     for (int k = 0; k < KITS_PER_DEPOT; k++) {
                         depot.setLong(1, 1000 + d * KITS_PER_DEPOT + k);
@@ -101,6 +123,8 @@ class ScaleBenchmark {
                         depot.setString(4, "KIT");
                         depot.setLong(5, depotId);
                         depot.setString(6, "m" + d + "-" + k);
+                        depot.setNull(7, java.sql.Types.NUMERIC);
+                        depot.setNull(8, java.sql.Types.NUMERIC);
                         depot.addBatch();
                     }
                 }
@@ -130,6 +154,7 @@ class ScaleBenchmark {
                 bom.executeBatch();
             }
             int[] written = writeFleet(c, random);
+            writeOpeningStock(c, random);
             c.commit();
             return written;
         }
@@ -195,6 +220,38 @@ class ScaleBenchmark {
             line.executeBatch();
         }
         return new int[]{repairs, readings};
+    }
+
+    /** Uneven opening stock at every depot and the central store, as balance rows and the count movements behind them. */
+    private void writeOpeningStock(Connection c, SplittableRandom random) throws SQLException {
+        try (PreparedStatement balance = c.prepareStatement("insert into stock_balance (part_id, location_id, on_hand) values (?, ?, ?)");
+             PreparedStatement movement = c.prepareStatement("insert into stock_movement (kind, part_id, to_location_id, quantity, occurred_at, recorded_at, actor, reason) values ('COUNT_ADJUSTMENT', ?, ?, ?, current_timestamp, current_timestamp, 'benchmark', 'opening count')")) {
+            long parts = (long) MODELS * FAMILIES.length;
+            for (long part = 1; part <= parts; part++) {
+                for (int d = -1; d < DEPOTS; d++) {
+                    long location = d < 0 ? 2 : 100 + d;
+                    int quantity = random.nextDouble() < 0.2 ? 0 : random.nextInt(d < 0 ? 400 : 40);
+                    if (quantity == 0) {
+                        continue;
+                    }
+                    balance.setLong(1, part);
+                    balance.setLong(2, location);
+                    balance.setInt(3, quantity);
+                    balance.addBatch();
+                    movement.setLong(1, part);
+                    movement.setLong(2, location);
+                    movement.setInt(3, quantity);
+                    movement.addBatch();
+                }
+            }
+            balance.executeBatch();
+            movement.executeBatch();
+        }
+    }
+
+    /** A fixed pseudo-random coordinate in [0, 1) per depot, independent of the data generator's stream. */
+    private static double random(int depot, int axis) {
+        return new SplittableRandom(depot * 31L + axis).nextDouble();
     }
 
     private static int poisson(SplittableRandom random, double mean) {

@@ -29,7 +29,8 @@ public sealed interface DemandDistribution permits PoissonDemand, NegativeBinomi
         if (!(mean >= 0) || Double.isInfinite(mean)) {
             throw new IllegalArgumentException("mean must be finite and ≥ 0, was " + mean);
         }
-        if (Double.isNaN(variance) || variance <= mean * (1 + 1e-9)) {
+        // No expected demand is no demand, whatever spread an estimate carries.
+        if (mean == 0 || Double.isNaN(variance) || variance <= mean * (1 + 1e-9)) {
             return new PoissonDemand(mean);
         }
         return new NegativeBinomialDemand(mean, variance);

@@ -70,6 +70,14 @@ class DemandDistributionTest {
     }
 
     @Test
+    void zeroMeanIsNoDemand() {
+        DemandDistribution none = DemandDistribution.fromMoments(0, 3);
+        assertEquals("poisson", none.name());
+        assertEquals(0, none.quantile(0.99));
+        assertEquals(1.0, none.cdf(0), 0);
+    }
+
+    @Test
     void lossIsTheSumOfTheTail() {
         NegativeBinomialDemand d = new NegativeBinomialDemand(2.5, 7.0);
         for (int x = 0; x < 10; x++) {
