@@ -26,8 +26,11 @@ public class TestData {
     private final PartService parts;
     private final LocationService locations;
     private final StockLedgerService ledger;
+    private final org.depotcast.access.AccountService accounts;
 
-    TestData(PartService parts, LocationService locations, StockLedgerService ledger) {
+    TestData(PartService parts, LocationService locations, StockLedgerService ledger,
+             org.depotcast.access.AccountService accounts) {
+        this.accounts = accounts;
         this.parts = parts;
         this.locations = locations;
         this.ledger = ledger;
@@ -50,7 +53,8 @@ public class TestData {
 
     public String depot() {
         String code = unique("TDEP").toUpperCase();
-        locations.create(new LocationRequest(code, "test depot", LocationKind.DEPOT, "CENTRAL", null, null, null));
+        var depot = locations.create(new LocationRequest(code, "test depot", LocationKind.DEPOT, "CENTRAL", null, null, null));
+        accounts.addLocation("officer", depot.id);
         return code;
     }
 

@@ -41,6 +41,29 @@ public class AccountService {
         return accounts.count();
     }
 
+    /** Replaces the locations an account acts on (a stores officer's depots, or the central store). */
+    @Transactional
+    public void assignLocations(String username, java.util.Collection<Long> locationIds) {
+        UserAccount account = accounts.byUsername(username)
+                .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
+        var em = accounts.getEntityManager();
+        em.createNativeQuery("delete from user_location where user_account_id = ?1").setParameter(1, account.id).executeUpdate();
+        for (Long id : locationIds) {
+            em.createNativeQuery("insert into user_location (user_account_id, location_id) values (?1, ?2)")
+                    .setParameter(1, account.id).setParameter(2, id).executeUpdate();
+        }
+        changed.fire(new AccountsChanged());
+    }
+
+    /** Adds one location to an account's assignments, keeping the others. */
+    @Transactional
+    public void addLocation(String username, long locationId) {
+        UserAccount account = accounts.byUsername(username)
+                .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
+        accounts.getEntityManager().createNativeQuery("insert into user_location (user_account_id, location_id) values (?1, ?2)")
+                .setParameter(1, account.id).setParameter(2, locationId).executeUpdate();
+    }
+
     @Transactional
     public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId) {
         if (accounts.byUsername(username).isPresent()) {

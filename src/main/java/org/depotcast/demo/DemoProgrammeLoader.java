@@ -24,6 +24,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Set;
 import java.util.function.ToIntFunction;
 
@@ -103,6 +104,12 @@ class DemoProgrammeLoader {
             return;
         }
         accounts.create("officer", "officer-demo", Set.of(Roles.STORES_OFFICER), null);
+        accounts.assignLocations("officer", java.util.stream.Stream.concat(
+                locations.ofKind(LocationKind.CENTRAL_STORE).stream(), locations.ofKind(LocationKind.DEPOT).stream())
+                .map(l -> l.id).toList());
+        // A second officer who runs one depot only: shows how stores officers are scoped.
+        accounts.create("officer2", "officer2-demo", Set.of(Roles.STORES_OFFICER), null);
+        accounts.assignLocations("officer2", List.of(locations.require("location", "DEP-QUILLAN").id));
         accounts.create("lead", "lead-demo", Set.of(Roles.PROGRAMME_LEAD), null);
         accounts.create("admin", "admin-demo", Set.of(Roles.ADMIN), null);
         for (Location kit : locations.ofKind(LocationKind.KIT)) {

@@ -48,8 +48,7 @@ class PumpResource {
     @GET
     @Path("{assetId}")
     public PumpResponse get(@PathParam("assetId") String assetId) {
-        return pumps.find(assetId).map(PumpResponse::from)
-                .orElseThrow(() -> new EntityMissingException(null, "pump", assetId));
+        return PumpResponse.from(pumps.requireVisible(null, assetId));
     }
 
     @POST

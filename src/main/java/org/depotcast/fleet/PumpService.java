@@ -2,6 +2,7 @@ package org.depotcast.fleet;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
 import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.BusinessRuleException;
@@ -33,16 +34,51 @@ public class PumpService {
     private final PumpRepository pumps;
     private final PumpModelService models;
     private final LocationService locations;
+    private final AccessScope scope;
 
-    PumpService(PumpRepository pumps, PumpModelService models, LocationService locations) {
+    PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope) {
+        this.scope = scope;
         this.pumps = pumps;
         this.models = models;
         this.locations = locations;
     }
 
+    /** Pumps the caller may see: all for leads and admins, their depots' for officers, assigned ones for mechanics. */
     public List<Pump> search(String depotCode, PumpStatus status) {
-        Long depotId = depotCode == null ? null : locations.require("depot", depotCode).id;
-        return pumps.search(depotId, status);
+        Long depotId = null;
+        if (depotCode != null) {
+            Location depot = locations.require("depot", depotCode);
+            scope.require(depot.id, depot.code);
+            depotId = depot.id;
+        }
+        AccessScope.Scope visible = scope.current();
+        return pumps.search(depotId, status).stream().filter(p -> visible(visible, p)).toList();
+    }
+
+    public boolean visible(Pump pump) {
+        return visible(scope.current(), pump);
+    }
+
+    /** The caller's visibility as a filter, resolved once for a whole list. */
+    public java.util.function.Predicate<Pump> visibleFilter() {
+        AccessScope.Scope current = scope.current();
+        return pump -> visible(current, pump);
+    }
+
+    private static boolean visible(AccessScope.Scope scope, Pump pump) {
+        if (scope.everything()) {
+            return true;
+        }
+        return scope.mechanic() != null ? scope.mechanic().equals(pump.assignedMechanic) : scope.sees(pump.depot.id);
+    }
+
+    /** The pump, or 404 when unknown, 403 when outside the caller's depots or assignments. */
+    public Pump requireVisible(String field, String assetId) {
+        Pump pump = require(field, assetId);
+        if (!visible(pump)) {
+            throw new io.quarkus.security.ForbiddenException("pump '" + assetId + "' is outside your depots or assignments");
+        }
+        return pump;
     }
 
     /**
@@ -71,14 +107,16 @@ public class PumpService {
             throw new ConflictException("assetId", "pump '" + request.assetId() + "' is already registered");
         }
         Pump pump = new Pump();
-        apply(pump, request, models.require("modelCode", request.modelCode()), depot("depotCode", request.depotCode()));
+        Location depot = depot("depotCode", request.depotCode());
+        scope.require(depot.id, depot.code);
+        apply(pump, request, models.require("modelCode", request.modelCode()), depot);
         pumps.persist(pump);
         return pump;
     }
 
     @Transactional
     public Pump update(String assetId, PumpRequest request) {
-        Pump pump = pumps.byAssetId(assetId).orElseThrow(() -> new EntityMissingException(null, "pump", assetId));
+        Pump pump = requireVisible(null, assetId);
         if (!assetId.equals(request.assetId())) {
             throw new ConflictException("assetId", "the asset id in the body must match the one in the path");
         }
@@ -104,9 +142,12 @@ public class PumpService {
                 row.reject("model_code", "pump model '" + modelCode + "' does not exist");
             }
             String depotCode = row.text("depot_code");
-            if (depotCode != null && depotCache.computeIfAbsent(depotCode, c -> locations.find(c)
-                    .filter(l -> l.kind == LocationKind.DEPOT).orElse(null)) == null) {
+            Location depot = depotCode == null ? null : depotCache.computeIfAbsent(depotCode, c -> locations.find(c)
+                    .filter(l -> l.kind == LocationKind.DEPOT).orElse(null));
+            if (depotCode != null && depot == null) {
                 row.reject("depot_code", "depot '" + depotCode + "' does not exist");
+            } else if (depot != null && !scope.current().sees(depot.id)) {
+                row.reject("depot_code", "depot '" + depotCode + "' is outside the locations assigned to you");
             }
             BigDecimal depth = row.decimal("depth_m", BigDecimal.ZERO, true);
             LocalDate installed = row.date("installed_on");
@@ -136,7 +177,7 @@ public class PumpService {
     }
 
     public String exportCsv() {
-        return CsvOut.write(CSV_COLUMNS, all(), p -> java.util.Arrays.asList(p.assetId, p.model.code,
+        return CsvOut.write(CSV_COLUMNS, search(null, null), p -> java.util.Arrays.asList(p.assetId, p.model.code,
                 p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude), p.depot.code,
                 p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
                 p.brokenSince != null ? p.brokenSince : p.decommissionedOn != null ? p.decommissionedOn : "",

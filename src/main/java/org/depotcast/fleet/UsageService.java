@@ -30,7 +30,7 @@ public class UsageService {
     }
 
     public List<UsageReading> of(String assetId) {
-        return readings.ofPump(pumps.require(null, assetId).id);
+        return readings.ofPump(pumps.requireVisible(null, assetId).id);
     }
 
     /** Readings of every pump, oldest first per pump; rows: pump id, read on, hours per day. */
@@ -40,7 +40,7 @@ public class UsageService {
 
     @Transactional
     public UsageReading record(String assetId, UsageReadingRequest request) {
-        Pump pump = pumps.require(null, assetId);
+        Pump pump = pumps.requireVisible(null, assetId);
         if (readings.exists(pump.id, request.readOn())) {
             throw new ConflictException("readOn", "pump '" + assetId + "' already has a reading on " + request.readOn());
         }
@@ -56,6 +56,7 @@ public class UsageService {
         Map<String, Pump> pumpCache = new HashMap<>();
         Set<String> seen = new HashSet<>();
         Set<String> stored = readings.keys();
+        var visible = pumps.visibleFilter();
         record Row(String assetId, LocalDate readOn, BigDecimal hours, UsageSource source) {
         }
         List<Row> rows = new ArrayList<>();
@@ -64,6 +65,8 @@ public class UsageService {
             Pump pump = assetId == null ? null : pumpCache.computeIfAbsent(assetId, a -> pumps.find(a).orElse(null));
             if (assetId != null && pump == null) {
                 row.reject("asset_id", "pump '" + assetId + "' does not exist");
+            } else if (pump != null && !visible.test(pump)) {
+                row.reject("asset_id", "pump '" + assetId + "' is outside your depots or assignments");
             }
             LocalDate readOn = row.date("read_on");
             BigDecimal hours = row.decimal("hours_per_day", BigDecimal.ZERO, false);
@@ -92,7 +95,9 @@ public class UsageService {
     }
 
     public String exportCsv() {
-        List<UsageReading> all = readings.listAll(io.quarkus.panache.common.Sort.by("pump.assetId").and("readOn"));
+        var visible = pumps.visibleFilter();
+        List<UsageReading> all = readings.listAll(io.quarkus.panache.common.Sort.by("pump.assetId").and("readOn"))
+                .stream().filter(r -> visible.test(r.pump)).toList();
         return CsvOut.write(CSV_COLUMNS, all, r -> List.of(r.pump.assetId, r.readOn, r.hoursPerDay.toPlainString(),
                 r.source));
     }

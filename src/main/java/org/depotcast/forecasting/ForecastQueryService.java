@@ -20,8 +20,13 @@ import java.util.Optional;
 public class ForecastQueryService {
     private final ForecastRepository repository;
     private final PartService parts;
+    private final org.depotcast.stock.LocationService locations;
+    private final org.depotcast.access.AccessScope scope;
 
-    ForecastQueryService(ForecastRepository repository, PartService parts) {
+    ForecastQueryService(ForecastRepository repository, PartService parts, org.depotcast.stock.LocationService locations,
+                         org.depotcast.access.AccessScope scope) {
+        this.locations = locations;
+        this.scope = scope;
         this.repository = repository;
         this.parts = parts;
     }
@@ -68,6 +73,7 @@ public class ForecastQueryService {
         ForecastRun run = latestRun();
         Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         String location = locationCode == null ? DemandAssembler.PROGRAMME : locationCode;
+        requireVisible(location);
         PartForecast f = repository.forecastOf(run.id, part.id, location).orElseThrow(() ->
                 new EntityMissingException(null, "forecast of part at location", partNumber + " @ " + location));
         return response(run, part.partNumber, f);
@@ -75,6 +81,7 @@ public class ForecastQueryService {
 
     @Transactional
     public List<StoredForecastResponse> atLocation(String locationCode) {
+        requireVisible(locationCode);
         ForecastRun run = latestRun();
         Map<Long, String> numbers = new LinkedHashMap<>();
         parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
@@ -101,6 +108,16 @@ public class ForecastQueryService {
         return new FleetModelResponse(r.family, run.id, r.source, named(terms, coefficients), named(terms, errors),
                 r.deviance, r.dfResidual, r.dispersion, r.overdispersed, r.events, r.exposureHours, r.unitsPerEvent,
                 Math.exp(coefficients[0]) * 1000);
+    }
+
+    /** The whole programme for leads, admins and central-store officers; a depot or kit for those it is assigned to. */
+    private void requireVisible(String locationCode) {
+        if (DemandAssembler.PROGRAMME.equals(locationCode)) {
+            scope.requireProgramme();
+            return;
+        }
+        org.depotcast.stock.Location location = locations.require("location", locationCode);
+        scope.require(location.id, location.code);
     }
 
     private ForecastRun latestRun() {

@@ -40,9 +40,12 @@ public class PlanningService {
     private final AlertActionRepository actions;
     private final CurrentUser currentUser;
     private final PolicyCalculator calculator;
+    private final org.depotcast.access.AccessScope scope;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
-                    RepairService repairs, AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings) {
+                    RepairService repairs, AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings,
+                    org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.parts = parts;
         this.locations = locations;
         this.stock = stock;
@@ -57,6 +60,7 @@ public class PlanningService {
     @Transactional
     public List<StockPolicy> policies(String locationCode) {
         Location location = locations.require("location", locationCode);
+        scope.require(location.id, location.code);
         if (location.kind == LocationKind.IN_TRANSIT) {
             throw new InvalidInputException("location", "stock in transit has no reorder policy");
         }
@@ -87,6 +91,7 @@ public class PlanningService {
      */
     @Transactional
     public List<StockPolicy> programmePolicies() {
+        scope.requireProgramme();
         Location central = locations.ofKind(LocationKind.CENTRAL_STORE).stream().findFirst()
                 .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
@@ -114,8 +119,9 @@ public class PlanningService {
         if (locationCode != null) {
             codes.add(locationCode);
         } else {
-            locations.ofKind(LocationKind.CENTRAL_STORE).forEach(l -> codes.add(l.code));
-            locations.ofKind(LocationKind.DEPOT).forEach(l -> codes.add(l.code));
+            var visible = scope.current();
+            locations.ofKind(LocationKind.CENTRAL_STORE).stream().filter(l -> visible.sees(l.id)).forEach(l -> codes.add(l.code));
+            locations.ofKind(LocationKind.DEPOT).stream().filter(l -> visible.sees(l.id)).forEach(l -> codes.add(l.code));
         }
         Map<String, Long> waiting = repairs.openNeeds();
         Map<String, AlertAction> latestActions = new HashMap<>();
@@ -149,7 +155,8 @@ public class PlanningService {
     public AlertAction act(String partNumber, String locationCode, AlertKind kind, AlertAction.Action action,
                            LocalDate snoozeUntil, String note) {
         Part part = parts.require("partNumber", partNumber);
-        locations.require("location", locationCode);
+        Location location = locations.require("location", locationCode);
+        scope.require(location.id, location.code);
         if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(ZoneOffset.UTC)))) {
             throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
         }

@@ -41,13 +41,15 @@ public class PurchasePlanService {
     private final LocationService locations;
     private final CurrentUser currentUser;
     private final Plans plans;
+    private final org.depotcast.access.AccessScope scope;
 
     @ApplicationScoped
     static class Plans implements PanacheRepository<PurchasePlan> {
     }
 
     PurchasePlanService(PlanningService planning, PartService parts, PurchaseOrderService orders, LocationService locations,
-                        CurrentUser currentUser, Plans plans) {
+                        CurrentUser currentUser, Plans plans, org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.planning = planning;
         this.parts = parts;
         this.orders = orders;
@@ -107,12 +109,14 @@ public class PurchasePlanService {
 
     @Transactional
     public PurchasePlanResponse get(long id) {
+        scope.requireProgramme();
         return PurchasePlanResponse.from(require(id));
     }
 
     /** Places one purchase order per supplier for the plan's lines, in one transaction; a plan is accepted once. */
     @Transactional
     public PurchasePlanResponse accept(long id) {
+        scope.requireProgramme();
         PurchasePlan plan = plans.findById(id, jakarta.persistence.LockModeType.PESSIMISTIC_WRITE);
         if (plan == null) {
             throw new EntityMissingException(null, "purchase plan", id);
@@ -139,6 +143,7 @@ public class PurchasePlanService {
 
     @Transactional
     public String exportCsv(long id) {
+        scope.requireProgramme();
         PurchasePlan plan = require(id);
         return CsvOut.write(List.of("part_number", "description", "supplier", "packs", "quantity", "unit_cost", "cost",
                 "currency"), plan.lines.stream().filter(l -> l.packs > 0).toList(), l -> List.of(l.part.partNumber,

@@ -43,13 +43,15 @@ public class TransferService {
     private final CurrentUser currentUser;
     private final PlanningSettings settings;
     private final Orders orders;
+    private final org.depotcast.access.AccessScope scope;
 
     @ApplicationScoped
     static class Orders implements PanacheRepository<TransferOrder> {
     }
 
     TransferService(PlanningService planning, LocationService locations, PartService parts, StockLedgerService ledger,
-                    CurrentUser currentUser, PlanningSettings settings, Orders orders) {
+                    CurrentUser currentUser, PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.planning = planning;
         this.locations = locations;
         this.parts = parts;
@@ -65,6 +67,7 @@ public class TransferService {
             parts.require("part", partNumber);
         }
         List<Location> depots = locations.ofKind(LocationKind.DEPOT);
+        var visible = scope.current();
         Map<String, Map<String, StockPolicy>> byPart = new HashMap<>();
         for (Location depot : depots) {
             for (StockPolicy p : planning.policies(depot.code)) {
@@ -75,7 +78,10 @@ public class TransferService {
         }
         List<TransferResponses.Suggestion> suggestions = new ArrayList<>();
         byPart.keySet().stream().sorted().forEach(part -> suggestions.addAll(suggestFor(part, depots, byPart.get(part))));
-        return suggestions;
+        // An officer sees the moves that touch the depots assigned to them.
+        Map<String, Long> ids = new HashMap<>();
+        depots.forEach(d -> ids.put(d.code, d.id));
+        return suggestions.stream().filter(s -> visible.sees(ids.get(s.from())) || visible.sees(ids.get(s.to()))).toList();
     }
 
     private List<TransferResponses.Suggestion> suggestFor(String part, List<Location> depots, Map<String, StockPolicy> policies) {
@@ -131,6 +137,7 @@ public class TransferService {
     public TransferResponses.Order dispatch(String partNumber, String fromCode, String toCode, BigDecimal quantity) {
         Location from = locations.require("from", fromCode);
         Location to = locations.require("to", toCode);
+        scope.require(from.id, from.code);
         for (Location l : List.of(from, to)) {
             if (l.kind != LocationKind.DEPOT && l.kind != LocationKind.CENTRAL_STORE) {
                 throw new BusinessRuleException(l == from ? "from" : "to", "transfers run between the central store and depots");
@@ -161,6 +168,7 @@ public class TransferService {
         if (order == null) {
             throw new EntityMissingException(null, "transfer", id);
         }
+        scope.require(order.to.id, order.to.code);
         if (order.status != TransferOrder.Status.IN_TRANSIT) {
             throw new BusinessRuleException("id", "transfer " + id + " was already received");
         }

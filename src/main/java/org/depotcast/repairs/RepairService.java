@@ -59,12 +59,18 @@ public class RepairService {
     }
 
     public Repair get(String repairRef) {
-        return repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
+        Repair repair = repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
+        pumps.requireVisible(null, repair.pump.assetId);
+        return repair;
     }
 
     public List<Repair> search(String assetId, LocalDate since, int limit) {
-        Long pumpId = assetId == null ? null : pumps.require("asset", assetId).id;
-        return repairs.search(pumpId, since, limit);
+        if (assetId != null) {
+            return repairs.search(pumps.requireVisible("asset", assetId).id, since, limit);
+        }
+        // Scoped callers page through their own pumps' repairs only.
+        var visible = pumps.visibleFilter();
+        return repairs.search(null, since, Integer.MAX_VALUE).stream().filter(r -> visible.test(r.pump)).limit(limit).toList();
     }
 
     /** Open repairs waiting for parts, keyed "depotCode|partNumber". */
@@ -98,7 +104,7 @@ public class RepairService {
         if (dateProblem != null) {
             throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
         }
-        Repair repair = newRepair(request, pumps.require("assetId", request.assetId()), mechanic);
+        Repair repair = newRepair(request, pumps.requireVisible("assetId", request.assetId()), mechanic);
         List<RepairRequest.Line> lines = request.lines() == null ? List.of() : request.lines();
         for (int i = 0; i < lines.size(); i++) {
             Part part = parts.require("lines[" + i + "].partNumber", lines.get(i).partNumber());
@@ -142,8 +148,9 @@ public class RepairService {
         parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
         Map<String, Repair> byRef = new LinkedHashMap<>();
         java.util.Set<String> storedRefs = repairs.allRefs();
+        var visible = pumps.visibleFilter();
         for (CsvRow row : table.rows()) {
-            readRow(row, pumpsById, partsByNumber, storedRefs, byRef);
+            readRow(row, pumpsById, partsByNumber, storedRefs, visible, byRef);
         }
         table.problems().throwIfAny();
         int written = 0;
@@ -158,12 +165,15 @@ public class RepairService {
     }
 
     private void readRow(CsvRow row, Map<String, Pump> pumpsById, Map<String, Part> partsByNumber,
-                         java.util.Set<String> storedRefs, Map<String, Repair> byRef) {
+                         java.util.Set<String> storedRefs, java.util.function.Predicate<Pump> visible,
+                         Map<String, Repair> byRef) {
         String ref = row.text("repair_ref");
         String assetId = row.text("asset_id");
         Pump pump = assetId == null ? null : pumpsById.get(assetId);
         if (assetId != null && pump == null) {
             row.reject("asset_id", "pump '" + assetId + "' does not exist");
+        } else if (pump != null && !visible.test(pump)) {
+            row.reject("asset_id", "pump '" + assetId + "' is outside your depots or assignments");
         }
         String mechanic = row.text("mechanic");
         RepairKind kind = row.choice("kind", RepairKind.class);
@@ -211,7 +221,8 @@ public class RepairService {
 
     public String exportCsv() {
         List<List<?>> rows = new ArrayList<>();
-        for (Repair r : repairs.allInOrder()) {
+        var visible = pumps.visibleFilter();
+        for (Repair r : repairs.allInOrder().stream().filter(r -> visible.test(r.pump)).toList()) {
             List<RepairLine> lines = r.lines.isEmpty() ? java.util.Collections.singletonList(null) : r.lines;
             for (RepairLine l : lines) {
                 rows.add(java.util.Arrays.asList(r.repairRef, r.pump.assetId, r.mechanic, r.kind, r.reportedOn,

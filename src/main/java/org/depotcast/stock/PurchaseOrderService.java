@@ -31,9 +31,11 @@ public class PurchaseOrderService {
     private final PartService parts;
     private final LocationService locations;
     private final StockLedgerService ledger;
+    private final org.depotcast.access.AccessScope scope;
 
     PurchaseOrderService(PurchaseOrderRepository orders, PartService parts, LocationService locations,
-                         StockLedgerService ledger) {
+                         StockLedgerService ledger, org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.orders = orders;
         this.parts = parts;
         this.locations = locations;
@@ -41,11 +43,15 @@ public class PurchaseOrderService {
     }
 
     public List<PurchaseOrder> list(PurchaseOrderStatus status) {
-        return orders.withStatus(status);
+        var visible = scope.current();
+        return orders.withStatus(status).stream().filter(o -> visible.sees(o.destination.id)).toList();
     }
 
     public PurchaseOrder get(String orderNumber) {
-        return orders.byNumber(orderNumber).orElseThrow(() -> new EntityMissingException(null, "purchase order", orderNumber));
+        PurchaseOrder order = orders.byNumber(orderNumber)
+                .orElseThrow(() -> new EntityMissingException(null, "purchase order", orderNumber));
+        scope.require(order.destination.id, order.destination.code);
+        return order;
     }
 
     /** Outstanding on open orders, keyed by part id then destination id. */
@@ -69,6 +75,7 @@ public class PurchaseOrderService {
         order.orderNumber = request.orderNumber();
         order.supplier = request.supplier();
         order.destination = locations.require("destination", request.destination());
+        scope.require(order.destination.id, order.destination.code);
         if (order.destination.kind == LocationKind.KIT) {
             throw new BusinessRuleException("destination", "suppliers deliver to the central store or a depot, not a kit");
         }
@@ -97,6 +104,7 @@ public class PurchaseOrderService {
     public PostedMovement receive(String orderNumber, ReceiptRequest receipt) {
         PurchaseOrder order = orders.lockedByNumber(orderNumber)
                 .orElseThrow(() -> new EntityMissingException(null, "purchase order", orderNumber));
+        scope.require(order.destination.id, order.destination.code);
         if (order.status != PurchaseOrderStatus.OPEN && receipt.idempotencyKey() == null) {
             throw new BusinessRuleException("orderNumber", "purchase order '" + orderNumber + "' is " + order.status);
         }
@@ -118,6 +126,7 @@ public class PurchaseOrderService {
     public PurchaseOrder cancel(String orderNumber) {
         PurchaseOrder order = orders.lockedByNumber(orderNumber)
                 .orElseThrow(() -> new EntityMissingException(null, "purchase order", orderNumber));
+        scope.require(order.destination.id, order.destination.code);
         if (order.status != PurchaseOrderStatus.OPEN) {
             throw new BusinessRuleException("orderNumber", "only an open order can be cancelled; this one is " + order.status);
         }
@@ -165,7 +174,7 @@ public class PurchaseOrderService {
 
     public String exportCsv() {
         List<List<?>> rows = new ArrayList<>();
-        for (PurchaseOrder o : orders.withStatus(PurchaseOrderStatus.OPEN)) {
+        for (PurchaseOrder o : list(PurchaseOrderStatus.OPEN)) {
             for (PurchaseOrderLine l : o.lines) {
                 rows.add(List.of(o.orderNumber, o.supplier, o.destination.code, o.orderedOn,
                         o.expectedOn == null ? "" : o.expectedOn, l.part.partNumber,

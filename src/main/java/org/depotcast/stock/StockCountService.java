@@ -30,8 +30,11 @@ public class StockCountService {
     private final LocationService locations;
     private final StockLedgerService ledger;
     private final StockQueryService queries;
+    private final org.depotcast.access.AccessScope scope;
 
-    StockCountService(PartService parts, LocationService locations, StockLedgerService ledger, StockQueryService queries) {
+    StockCountService(PartService parts, LocationService locations, StockLedgerService ledger, StockQueryService queries,
+                      org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.parts = parts;
         this.locations = locations;
         this.ledger = ledger;
@@ -48,8 +51,11 @@ public class StockCountService {
         Set<String> seen = new HashSet<>();
         for (CsvRow row : table.rows()) {
             String locationCode = row.text("location_code");
-            if (locationCode != null && locations.find(locationCode).isEmpty()) {
+            Optional<Location> location = locationCode == null ? Optional.empty() : locations.find(locationCode);
+            if (locationCode != null && location.isEmpty()) {
                 row.reject("location_code", "location '" + locationCode + "' does not exist");
+            } else if (location.isPresent() && !scope.current().sees(location.get().id)) {
+                row.reject("location_code", "location '" + locationCode + "' is outside the locations assigned to you");
             }
             String partNumber = row.text("part_number");
             Optional<Part> part = partNumber == null ? Optional.empty() : parts.find(partNumber);

@@ -4,6 +4,7 @@ import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.PersistenceException;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
@@ -32,9 +33,11 @@ public class StockLedgerService {
     private final LocationService locations;
     private final PartService parts;
     private final CurrentUser currentUser;
+    private final AccessScope scope;
 
     StockLedgerService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
-                       PartService parts, CurrentUser currentUser) {
+                       PartService parts, CurrentUser currentUser, AccessScope scope) {
+        this.scope = scope;
         this.balances = balances;
         this.movements = movements;
         this.locations = locations;
@@ -96,6 +99,7 @@ public class StockLedgerService {
                 throw new BusinessRuleException("to", "kit '" + kit.code + "' belongs to depot '" + kit.parent.code + "'");
             }
         }
+        requireMayAct(command.kind(), from, to);
         applyToBalances(part, from, to, quantity);
         StockMovement movement = new StockMovement();
         movement.kind = command.kind();
@@ -114,6 +118,22 @@ public class StockLedgerService {
         movements.persist(movement);
         movements.flush();
         return new PostedMovement(MovementResponse.from(movement), false);
+    }
+
+    /**
+     * The location stock leaves from (or, for stock arriving from outside or from transit, the one it arrives at)
+     * must be the caller's; mechanics may only use and return parts from their own kit.
+     */
+    private void requireMayAct(MovementKind kind, Location from, Location to) {
+        AccessScope.Scope current = scope.current();
+        if (current.everything()) {
+            return;
+        }
+        if (current.mechanic() != null && kind != MovementKind.CONSUMPTION && kind != MovementKind.RETURN) {
+            throw new io.quarkus.security.ForbiddenException("mechanics record consumption and returns from their own kit");
+        }
+        Location acting = from != null && from.kind != LocationKind.IN_TRANSIT ? from : to;
+        scope.require(acting.id, acting.code);
     }
 
     private void applyToBalances(Part part, Location from, Location to, BigDecimal quantity) {

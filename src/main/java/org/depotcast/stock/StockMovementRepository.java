@@ -16,7 +16,8 @@ class StockMovementRepository implements PanacheRepository<StockMovement> {
         return find("idempotencyKey", key).firstResultOptional();
     }
 
-    List<StockMovement> search(Long partId, Long locationId, OffsetDateTime since, int limit) {
+    /** @param visibleIds locations the caller may see, null for all */
+    List<StockMovement> search(Long partId, Long locationId, java.util.Set<Long> visibleIds, OffsetDateTime since, int limit) {
         List<String> clauses = new ArrayList<>();
         Parameters params = new Parameters();
         if (partId != null) {
@@ -26,6 +27,10 @@ class StockMovementRepository implements PanacheRepository<StockMovement> {
         if (locationId != null) {
             clauses.add("(fromLocation.id = :location or toLocation.id = :location)");
             params.and("location", locationId);
+        }
+        if (visibleIds != null) {
+            clauses.add("(fromLocation.id in :visible or toLocation.id in :visible)");
+            params.and("visible", visibleIds.isEmpty() ? java.util.Set.of(-1L) : visibleIds);
         }
         if (since != null) {
             clauses.add("occurredAt >= :since");

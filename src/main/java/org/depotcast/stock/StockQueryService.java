@@ -2,6 +2,7 @@ package org.depotcast.stock;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 
@@ -22,9 +23,11 @@ public class StockQueryService {
     private final LocationService locations;
     private final PartService parts;
     private final PurchaseOrderService orders;
+    private final AccessScope scope;
 
     StockQueryService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
-                      PartService parts, PurchaseOrderService orders) {
+                      PartService parts, PurchaseOrderService orders, AccessScope scope) {
+        this.scope = scope;
         this.balances = balances;
         this.movements = movements;
         this.locations = locations;
@@ -35,7 +38,8 @@ public class StockQueryService {
     /** Every part with stock or stock on order at the location (or everywhere when {@code locationCode} is null). */
     @Transactional
     public List<BalanceView> balances(String locationCode) {
-        Long locationId = locationCode == null ? null : locations.require("location", locationCode).id;
+        Long locationId = locationCode == null ? null : visibleLocation(locationCode).id;
+        AccessScope.Scope visible = scope.current();
         Map<Long, Part> partsById = new HashMap<>();
         parts.all().forEach(p -> partsById.put(p.id, p));
         Map<Long, String> codes = new HashMap<>();
@@ -49,6 +53,9 @@ public class StockQueryService {
                 .computeIfAbsent(List.of(partId, locId), k -> new BigDecimal[]{BigDecimal.ZERO, BigDecimal.ZERO})[1] = qty));
         List<BalanceView> views = new ArrayList<>(cells.size());
         cells.forEach((key, value) -> {
+            if (!visible.sees(key.get(1))) {
+                return;
+            }
             Part part = partsById.get(key.get(0));
             views.add(new BalanceView(part.partNumber, part.description, codes.get(key.get(1)), value[0], value[1]));
         });
@@ -68,8 +75,10 @@ public class StockQueryService {
     @Transactional
     public List<MovementResponse> movements(String partNumber, String locationCode, OffsetDateTime since, int limit) {
         Long partId = partNumber == null ? null : parts.require("part", partNumber).id;
-        Long locationId = locationCode == null ? null : locations.require("location", locationCode).id;
-        return movements.search(partId, locationId, since, limit).stream().map(MovementResponse::from).toList();
+        Long locationId = locationCode == null ? null : visibleLocation(locationCode).id;
+        AccessScope.Scope visible = scope.current();
+        return movements.search(partId, locationId, visible.locationIds(), since, limit).stream()
+                .map(MovementResponse::from).toList();
     }
 
     @Transactional
@@ -78,8 +87,10 @@ public class StockQueryService {
         for (Object[] row : movements.ledgerSums()) {
             ledger.put(List.of(((Number) row[0]).longValue(), ((Number) row[1]).longValue()), toDecimal(row[2]));
         }
+        AccessScope.Scope visible = scope.current();
+        ledger.keySet().removeIf(key -> !visible.sees(key.get(1)));
         List<ReconcileReport.Mismatch> mismatches = new ArrayList<>();
-        List<Object[]> stored = balances.onHand(null);
+        List<Object[]> stored = balances.onHand(null).stream().filter(row -> visible.sees((Long) row[1])).toList();
         for (Object[] row : stored) {
             List<Long> key = List.of((Long) row[0], (Long) row[1]);
             BigDecimal sum = Objects.requireNonNullElse(ledger.remove(key), BigDecimal.ZERO);
@@ -94,6 +105,12 @@ public class StockQueryService {
             }
         });
         return new ReconcileReport(stored.size(), movements.count(), mismatches.isEmpty(), mismatches);
+    }
+
+    private Location visibleLocation(String code) {
+        Location location = locations.require("location", code);
+        scope.require(location.id, location.code);
+        return location;
     }
 
     private ReconcileReport.Mismatch mismatch(List<Long> key, BigDecimal balance, BigDecimal sum) {

@@ -23,6 +23,7 @@ class FleetResourceTest {
         body.put("depthM", 42.5);
         body.put("installedOn", "2024-05-01");
         body.put("depotCode", "DEP-TESHVALE");
+        body.put("assignedMechanic", "mechanic1");
         return body;
     }
 
@@ -59,6 +60,15 @@ class FleetResourceTest {
         as("officer").contentType("application/json").body(broken).post("/api/pumps")
                 .then().statusCode(422).contentType(PROBLEM).body("errors[0].field", equalTo("statusSince"));
         as("officer").queryParam("status", "SULKING").get("/api/pumps").then().statusCode(400).contentType(PROBLEM);
+    }
+
+    @Test
+    void mechanicsSeeOnlyTheirPumpsAndOfficersOnlyTheirDepots() {
+        as("mechanic2").get("/api/pumps").then().statusCode(200).body("assignedMechanic", org.hamcrest.Matchers.everyItem(equalTo("mechanic2")));
+        as("officer2").get("/api/pumps").then().statusCode(200).body("depotCode", org.hamcrest.Matchers.everyItem(equalTo("DEP-QUILLAN")));
+        as("officer2").queryParam("depot", "DEP-TESHVALE").get("/api/pumps").then().statusCode(403).contentType(PROBLEM);
+        String export = as("officer2").get("/api/pumps/export").then().statusCode(200).extract().asString();
+        org.junit.jupiter.api.Assertions.assertFalse(export.contains("DEP-TESHVALE"));
     }
 
     @Test

@@ -23,10 +23,17 @@ class RepairResourceTest {
     @Inject
     StockQueryService stock;
 
+    /** Demo pumps assigned to mechanic5 and mechanic6 (seed-data/pumps.csv). */
+    private static final Map<String, String> PUMP_OF = Map.of("mechanic5", "OB-00006", "mechanic6", "OB-00005");
+
     private static Map<String, Object> repair(String ref, String part, int quantity) {
+        return repair(ref, part, quantity, "mechanic5");
+    }
+
+    private static Map<String, Object> repair(String ref, String part, int quantity, String mechanic) {
         Map<String, Object> body = new HashMap<>();
         body.put("repairRef", ref);
-        body.put("assetId", "OB-00003");
+        body.put("assetId", PUMP_OF.get(mechanic));
         body.put("kind", "BREAKDOWN");
         body.put("reportedOn", "2026-11-20");
         body.put("diagnosedOn", "2026-11-21");
@@ -56,10 +63,16 @@ class RepairResourceTest {
         String part = data.part(UnitOfIssue.EACH);
         data.stock(part, "KIT-M06", 1);
         String ref = TestData.unique("phone-rep");
-        as("mechanic6").contentType("application/json").body(repair(ref, part, 2)).post("/api/repairs")
+        as("mechanic6").contentType("application/json").body(repair(ref, part, 2, "mechanic6")).post("/api/repairs")
                 .then().statusCode(422).contentType("application/problem+json");
         as("mechanic6").get("/api/repairs/" + ref).then().statusCode(404);
         assertEquals(0, BigDecimal.ONE.compareTo(stock.onHand(part, "KIT-M06")));
+    }
+
+    @Test
+    void aMechanicCannotRecordOnAnotherMechanicsPump() {
+        as("mechanic6").contentType("application/json").body(repair(TestData.unique("rep"), "OB-CS-50", 1, "mechanic5"))
+                .post("/api/repairs").then().statusCode(403).contentType("application/problem+json");
     }
 
     @Test

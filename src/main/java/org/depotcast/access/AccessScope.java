@@ -1,0 +1,88 @@
+package org.depotcast.access;
+
+import io.quarkus.arc.Arc;
+import io.quarkus.security.ForbiddenException;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.EntityManager;
+import jakarta.transaction.Transactional;
+
+import java.util.HashSet;
+import java.util.List;
+import java.util.Set;
+
+/**
+ * Which stock locations the signed-in account may see and act on. Programme leads and admins: all. Stores
+ * officers: the locations assigned to them (user_location) and the kits of their depots. Mechanics: their own kit.
+ * Work done by the system itself (start-up loading, scheduled runs) is not limited.
+ */
+@ApplicationScoped
+public class AccessScope {
+    private final CurrentUser currentUser;
+    private final EntityManager em;
+
+    AccessScope(CurrentUser currentUser, EntityManager em) {
+        this.currentUser = currentUser;
+        this.em = em;
+    }
+
+    /** @param locationIds null when every location is in scope */
+    public record Scope(Set<Long> locationIds, boolean programme, String mechanic) {
+        public boolean everything() {
+            return locationIds == null;
+        }
+
+        public boolean sees(Long locationId) {
+            return locationIds == null || (locationId != null && locationIds.contains(locationId));
+        }
+    }
+
+    @Transactional
+    public Scope current() {
+        if (!Arc.container().requestContext().isActive() || CurrentUser.SYSTEM.equals(currentUser.name())
+                || currentUser.hasRole(Roles.ADMIN) || currentUser.hasRole(Roles.PROGRAMME_LEAD)) {
+            return new Scope(null, true, null);
+        }
+        String name = currentUser.name();
+        Set<Long> ids = new HashSet<>();
+        if (currentUser.hasRole(Roles.STORES_OFFICER)) {
+            ids.addAll(longs(em.createNativeQuery("""
+                    select ul.location_id from user_location ul join user_account ua on ua.id = ul.user_account_id
+                    where ua.username = ?1""").setParameter(1, name).getResultList()));
+            if (!ids.isEmpty()) {
+                ids.addAll(longs(em.createNativeQuery("select id from location where kind = 'KIT' and parent_id in (?1)")
+                        .setParameter(1, ids).getResultList()));
+            }
+        }
+        String mechanic = null;
+        if (currentUser.hasRole(Roles.MECHANIC)) {
+            mechanic = name;
+            ids.addAll(longs(em.createNativeQuery("select kit_location_id from user_account where username = ?1 and kit_location_id is not null")
+                    .setParameter(1, name).getResultList()));
+        }
+        boolean programme = !longs(em.createNativeQuery("select id from location where kind = 'CENTRAL_STORE'")
+                .getResultList()).stream().filter(ids::contains).toList().isEmpty();
+        return new Scope(ids, programme, mechanic);
+    }
+
+    /** 403 unless the location is in scope. */
+    public void require(Long locationId, String code) {
+        if (!current().sees(locationId)) {
+            throw new ForbiddenException("location '" + code + "' is outside the locations assigned to you");
+        }
+    }
+
+    /** 403 unless the account sees the programme as a whole (leads, admins, officers of the central store). */
+    public void requireProgramme() {
+        if (!current().programme()) {
+            throw new ForbiddenException("programme-wide figures are for the programme lead and the central store");
+        }
+    }
+
+    private static Set<Long> longs(List<?> values) {
+        Set<Long> out = new HashSet<>();
+        for (Object v : values) {
+            out.add(((Number) v).longValue());
+        }
+        return out;
+    }
+}
