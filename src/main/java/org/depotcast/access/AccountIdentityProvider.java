@@ -22,10 +22,26 @@ import java.util.concurrent.ConcurrentHashMap;
  * Checks a username and password against the stored bcrypt hash. bcrypt is slow on purpose (~50 ms), so a verified
  * pair is remembered for a few minutes as a SHA-256 digest (never the password itself); a phone posting movements
  * one by one then costs one bcrypt check, not one per request. Any account change clears the memory.
+ * Repeated failures slow an account's sign-in down: after {@link #FREE_FAILURES} failures in a row, each further
+ * attempt is refused unchecked until a wait that doubles with every failure (1 s, 2 s, 4 s … at most 5 minutes)
+ * has passed, which makes guessing a password by trying impractical.
  */
 @ApplicationScoped
 public class AccountIdentityProvider implements IdentityProvider<UsernamePasswordAuthenticationRequest> {
     private static final long REMEMBER_MILLIS = 5 * 60 * 1000L;
+    static final int FREE_FAILURES = 5;
+    private static final long MAX_WAIT_MILLIS = 5 * 60 * 1000L;
+
+    private record Failures(int count, long lastAt) {
+        long blockedUntil() {
+            if (count < FREE_FAILURES) {
+                return 0;
+            }
+            return lastAt + Math.min(MAX_WAIT_MILLIS, 1000L << Math.min(20, count - FREE_FAILURES));
+        }
+    }
+
+    private final Map<String, Failures> failures = new ConcurrentHashMap<>();
 
     private record Verified(String digest, Set<String> roles, long until) {
     }
@@ -47,6 +63,10 @@ public class AccountIdentityProvider implements IdentityProvider<UsernamePasswor
                                               AuthenticationRequestContext context) {
         String username = request.getUsername();
         String password = new String(request.getPassword().getPassword());
+        Failures failed = failures.get(username);
+        if (failed != null && System.currentTimeMillis() < failed.blockedUntil()) {
+            return Uni.createFrom().failure(new AuthenticationFailedException("too many failed sign-ins; wait and retry"));
+        }
         String digest = digest(username, password);
         Verified known = verified.get(username);
         if (known != null && known.digest().equals(digest) && known.until() > System.currentTimeMillis()) {
@@ -54,8 +74,13 @@ public class AccountIdentityProvider implements IdentityProvider<UsernamePasswor
         }
         return context.runBlocking(() -> {
             UserAccount account = accounts.findEnabled(username)
-                    .filter(a -> PasswordHasher.matches(password, a.passwordHash))
-                    .orElseThrow(() -> new AuthenticationFailedException("invalid credentials"));
+                    .filter(a -> PasswordHasher.matches(password, a.passwordHash)).orElse(null);
+            if (account == null) {
+                failures.merge(username, new Failures(1, System.currentTimeMillis()),
+                        (old, one) -> new Failures(old.count() + 1, one.lastAt()));
+                throw new AuthenticationFailedException("invalid credentials");
+            }
+            failures.remove(username);
             Set<String> roles = account.roleSet();
             verified.put(username, new Verified(digest, roles, System.currentTimeMillis() + REMEMBER_MILLIS));
             return identity(username, roles);

@@ -22,8 +22,10 @@ public class AccountService {
 
     private final UserAccountRepository accounts;
     private final Event<AccountsChanged> changed;
+    private final AuditService audit;
 
-    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed) {
+    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed, AuditService audit) {
+        this.audit = audit;
         this.accounts = accounts;
         this.changed = changed;
     }
@@ -52,6 +54,7 @@ public class AccountService {
             em.createNativeQuery("insert into user_location (user_account_id, location_id) values (?1, ?2)")
                     .setParameter(1, account.id).setParameter(2, id).executeUpdate();
         }
+        audit.record("ACCOUNT_LOCATIONS_SET", "account", username, null, java.util.Map.of("locationIds", locationIds));
         changed.fire(new AccountsChanged());
     }
 
@@ -83,6 +86,8 @@ public class AccountService {
         account.roles = String.join(",", roles.stream().sorted().toList());
         account.kitLocationId = kitLocationId;
         accounts.persist(account);
+        audit.record("ACCOUNT_CREATED", "account", username, null,
+                java.util.Map.of("username", username, "roles", account.roles, "kitLocationId", String.valueOf(kitLocationId)));
         changed.fire(new AccountsChanged());
         return account;
     }

@@ -61,6 +61,25 @@ class PartResource {
         return PartResponse.from(service.update(partNumber, request));
     }
 
+    record SubstituteRequest(@jakarta.validation.constraints.NotBlank String partNumber) {
+    }
+
+    @GET
+    @Path("{partNumber}/substitutes")
+    public java.util.Set<String> substitutes(@PathParam("partNumber") String partNumber) {
+        return service.substitutesOf(partNumber);
+    }
+
+    @POST
+    @Path("{partNumber}/substitutes")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public java.util.Set<String> addSubstitute(@PathParam("partNumber") String partNumber,
+                                               @Valid @NotNull SubstituteRequest request) {
+        service.addSubstitute(partNumber, request.partNumber());
+        return service.substitutesOf(partNumber);
+    }
+
     @POST
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})

@@ -2,6 +2,7 @@ package org.depotcast.catalogue;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AuditService;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.CsvOut;
 import org.depotcast.common.CsvRow;
@@ -22,9 +23,11 @@ public class PartService {
             "critical");
 
     private final PartRepository parts;
+    private final AuditService audit;
 
-    PartService(PartRepository parts) {
+    PartService(PartRepository parts, AuditService audit) {
         this.parts = parts;
+        this.audit = audit;
     }
 
     public List<Part> all() {
@@ -48,6 +51,32 @@ public class PartService {
         return parts.findById(id);
     }
 
+    /** Part numbers that may be issued in place of this part (the compatibility list). */
+    @Transactional
+    public java.util.Set<String> substitutesOf(String partNumber) {
+        Part part = require("partNumber", partNumber);
+        @SuppressWarnings("unchecked")
+        List<String> numbers = parts.getEntityManager().createNativeQuery("""
+                select p.part_number from part_substitute s join part p on p.id = s.substitute_id where s.part_id = ?1""")
+                .setParameter(1, part.id).getResultList();
+        return new java.util.TreeSet<>(numbers);
+    }
+
+    /** Declares that {@code substitute} may be issued for {@code partNumber} (one direction). */
+    @Transactional
+    public void addSubstitute(String partNumber, String substitute) {
+        Part part = parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
+        Part other = require("partNumber", substitute);
+        if (part.id.equals(other.id)) {
+            throw new org.depotcast.common.BusinessRuleException("partNumber", "a part does not substitute for itself");
+        }
+        if (!substitutesOf(partNumber).contains(substitute)) {
+            parts.getEntityManager().createNativeQuery("insert into part_substitute (part_id, substitute_id) values (?1, ?2)")
+                    .setParameter(1, part.id).setParameter(2, other.id).executeUpdate();
+            audit.record("SUBSTITUTE_ADDED", "part", partNumber, null, java.util.Map.of("substitute", substitute));
+        }
+    }
+
     @Transactional
     public Part create(PartRequest request) {
         if (parts.byPartNumber(request.partNumber()).isPresent()) {
@@ -56,6 +85,7 @@ public class PartService {
         Part part = new Part();
         apply(part, request);
         parts.persist(part);
+        audit.record("PART_CREATED", "part", part.partNumber, null, PartResponse.from(part));
         return part;
     }
 
@@ -69,7 +99,9 @@ public class PartService {
             throw new ConflictException("version", "part '" + partNumber + "' was changed since version "
                     + request.version() + "; reload it");
         }
+        PartResponse before = PartResponse.from(part);
         apply(part, request);
+        audit.record("PART_UPDATED", "part", part.partNumber, before, request);
         return part;
     }
 
@@ -82,6 +114,8 @@ public class PartService {
         table.problems().throwIfAny();
         for (PartRequest request : requests) {
             Part part = parts.byPartNumber(request.partNumber()).orElseGet(Part::new);
+            audit.record(part.id == null ? "PART_CREATED" : "PART_UPDATED", "part", request.partNumber(),
+                    part.id == null ? null : PartResponse.from(part), request);
             apply(part, request);
             if (part.id == null) {
                 parts.persist(part);

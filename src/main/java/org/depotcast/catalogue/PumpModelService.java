@@ -25,8 +25,10 @@ public class PumpModelService {
 
     private final PumpModelRepository models;
     private final PartService parts;
+    private final org.depotcast.access.AuditService audit;
 
-    PumpModelService(PumpModelRepository models, PartService parts) {
+    PumpModelService(PumpModelRepository models, PartService parts, org.depotcast.access.AuditService audit) {
+        this.audit = audit;
         this.models = models;
         this.parts = parts;
     }
@@ -115,6 +117,8 @@ public class PumpModelService {
     }
 
     private void apply(PumpModel model, PumpModelRequest request) {
+        audit.record(model.id == null ? "PUMP_MODEL_CREATED" : "PUMP_MODEL_UPDATED", "pump_model", request.code(),
+                model.id == null ? null : PumpModelResponse.from(model), request);
         model.code = request.code();
         model.name = request.name();
         model.serviceIntervalHours = request.serviceIntervalHours();

@@ -35,8 +35,11 @@ public class PumpService {
     private final PumpModelService models;
     private final LocationService locations;
     private final AccessScope scope;
+    private final org.depotcast.access.AuditService audit;
 
-    PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope) {
+    PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope,
+                org.depotcast.access.AuditService audit) {
+        this.audit = audit;
         this.scope = scope;
         this.pumps = pumps;
         this.models = models;
@@ -192,7 +195,9 @@ public class PumpService {
         return location;
     }
 
-    private static void apply(Pump pump, PumpRequest r, PumpModel model, Location depot) {
+    private void apply(Pump pump, PumpRequest r, PumpModel model, Location depot) {
+        audit.record(pump.id == null ? "PUMP_REGISTERED" : "PUMP_UPDATED", "pump", r.assetId(),
+                pump.id == null ? null : PumpResponse.from(pump), r);
         pump.assetId = r.assetId();
         pump.model = model;
         pump.depthM = r.depthM();

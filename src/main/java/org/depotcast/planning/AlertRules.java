@@ -40,13 +40,13 @@ final class AlertRules {
     }
 
     private static ReorderAlert alert(StockPolicy p, AlertKind kind, double pumpDays, Double cover, long waiting, String detail) {
-        return new ReorderAlert(p.partNumber(), p.locationCode(), kind, pumpDays, p.onHand(), p.onOrder(), p.position(),
+        return new ReorderAlert(p.partNumber(), p.locationCode(), kind, pumpDays, p.onHand(), p.onOrder(), p.committed(), p.position(),
                 p.reorderPoint(), p.orderUpTo(), p.dailyDemand(), cover, waiting, detail, false, null);
     }
 
     static ReorderAlert withAction(ReorderAlert a, boolean acknowledged, LocalDate snoozedUntil) {
         return new ReorderAlert(a.partNumber(), a.locationCode(), a.kind(), a.pumpDaysAtRisk(), a.onHand(), a.onOrder(),
-                a.position(), a.reorderPoint(), a.orderUpTo(), a.dailyDemand(), a.daysOfCover(), a.pumpsWaiting(),
+                a.committed(), a.position(), a.reorderPoint(), a.orderUpTo(), a.dailyDemand(), a.daysOfCover(), a.pumpsWaiting(),
                 a.detail(), acknowledged, snoozedUntil);
     }
 }

@@ -41,11 +41,16 @@ public class PlanningService {
     private final CurrentUser currentUser;
     private final PolicyCalculator calculator;
     private final org.depotcast.access.AccessScope scope;
+    private final org.depotcast.access.AuditService audit;
+    private final org.depotcast.requests.RequestService requests;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
                     RepairService repairs, AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings,
-                    org.depotcast.access.AccessScope scope) {
+                    org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
+                    org.depotcast.requests.RequestService requests) {
+        this.requests = requests;
         this.scope = scope;
+        this.audit = audit;
         this.parts = parts;
         this.locations = locations;
         this.stock = stock;
@@ -71,6 +76,7 @@ public class PlanningService {
         for (BalanceView b : stock.balances(location.code)) {
             onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
         }
+        Map<String, java.math.BigDecimal> committed = requests.committed();
         List<StockPolicy> policies = new ArrayList<>();
         for (Part part : parts.all()) {
             ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
@@ -80,7 +86,8 @@ public class PlanningService {
             }
             policies.add(calculator.policy(part, location.code, location.kind, rate == null ? 0 : rate.monthlyMean(),
                     rate == null ? 0 : rate.monthlyVariance(), rate == null ? "none" : rate.method(),
-                    held == null ? 0 : held[0], held == null ? 0 : held[1]));
+                    held == null ? 0 : held[0], held == null ? 0 : held[1],
+                    committed.getOrDefault(location.code + "|" + part.partNumber, java.math.BigDecimal.ZERO).doubleValue()));
         }
         return policies;
     }
@@ -97,17 +104,18 @@ public class PlanningService {
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
         Map<String, double[]> echelon = new HashMap<>();
         for (BalanceView b : stock.balances(null)) {
-            double[] cell = echelon.computeIfAbsent(b.partNumber(), k -> new double[2]);
+            double[] cell = echelon.computeIfAbsent(b.partNumber(), k -> new double[3]);
             cell[0] += b.onHand().doubleValue();
             cell[1] += b.onOrder().doubleValue();
         }
+        // Committed stock stays inside the programme (depot to kit), so the echelon position does not change.
         List<StockPolicy> policies = new ArrayList<>();
         for (Part part : parts.all()) {
             ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
-            double[] held = echelon.getOrDefault(part.partNumber, new double[2]);
+            double[] held = echelon.getOrDefault(part.partNumber, new double[3]);
             policies.add(calculator.policy(part, central.code, LocationKind.CENTRAL_STORE,
                     rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
-                    rate == null ? "none" : rate.method(), held[0], held[1]));
+                    rate == null ? "none" : rate.method(), held[0], held[1], 0));
         }
         return policies;
     }
@@ -170,6 +178,8 @@ public class PlanningService {
         record.actor = currentUser.name();
         record.actedAt = OffsetDateTime.now(ZoneOffset.UTC);
         actions.persist(record);
+        audit.record("ALERT_" + action.name(), "alert", partNumber + "@" + locationCode + ":" + kind, null,
+                java.util.Map.of("snoozedUntil", String.valueOf(record.snoozedUntil), "note", String.valueOf(note)));
         return record;
     }
 }

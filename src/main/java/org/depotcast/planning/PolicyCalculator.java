@@ -31,7 +31,7 @@ final class PolicyCalculator {
     }
 
     StockPolicy policy(Part part, String locationCode, LocationKind level, double monthlyMean, double monthlyVariance,
-                       String method, double onHand, double onOrder) {
+                       String method, double onHand, double onOrder, double committed) {
         int protection = switch (level) {
             case CENTRAL_STORE -> part.leadTimeDays + settings.centralReviewDays();
             case DEPOT -> settings.depotTransferLeadDays() + settings.depotReviewDays();
@@ -59,10 +59,10 @@ final class PolicyCalculator {
             // Never hold more than will be used before it expires, but never less than the reorder point.
             upTo = Math.max(s, Math.min(upTo, Math.floor(daily * part.shelfLifeDays)));
         }
-        double position = onHand + onOrder;
+        double position = onHand + onOrder - committed;
         double shortUnits = demand.expectedShortfall(Math.max(0, position));
         return new StockPolicy(part.partNumber, locationCode, level.name(), part.critical, serviceLevel, protection,
-                daily, moments[0], moments[1], demand.name(), s, quantity, upTo, onHand, onOrder, position, shortUnits,
+                daily, moments[0], moments[1], demand.name(), s, quantity, upTo, onHand, onOrder, committed, position, shortUnits,
                 shortUnits * protection / 2.0, method, part.shelfLifeDays, part.unitCost.doubleValue(), part.currency,
                 part.packSize, part.minOrderQty, part.supplier);
     }

@@ -42,14 +42,17 @@ public class PurchasePlanService {
     private final CurrentUser currentUser;
     private final Plans plans;
     private final org.depotcast.access.AccessScope scope;
+    private final org.depotcast.access.AuditService audit;
 
     @ApplicationScoped
     static class Plans implements PanacheRepository<PurchasePlan> {
     }
 
     PurchasePlanService(PlanningService planning, PartService parts, PurchaseOrderService orders, LocationService locations,
-                        CurrentUser currentUser, Plans plans, org.depotcast.access.AccessScope scope) {
+                        CurrentUser currentUser, Plans plans, org.depotcast.access.AccessScope scope,
+                        org.depotcast.access.AuditService audit) {
         this.scope = scope;
+        this.audit = audit;
         this.planning = planning;
         this.parts = parts;
         this.orders = orders;
@@ -138,7 +141,9 @@ public class PurchasePlanService {
                     .map(l -> new PurchaseOrderRequest.Line(l.part.partNumber, l.quantity)).toList()));
         }
         plan.status = PurchasePlan.Status.ACCEPTED;
-        return PurchasePlanResponse.from(plan);
+        PurchasePlanResponse accepted = PurchasePlanResponse.from(plan);
+        audit.record("PURCHASE_PLAN_ACCEPTED", "purchase_plan", Long.toString(id), null, accepted);
+        return accepted;
     }
 
     @Transactional

@@ -7,7 +7,7 @@ import java.time.LocalDate;
  * already waiting it adds the waiting pumps times the protection period.
  */
 public record ReorderAlert(String partNumber, String locationCode, AlertKind kind, double pumpDaysAtRisk,
-                           double onHand, double onOrder, double position, double reorderPoint, double orderUpTo,
+                           double onHand, double onOrder, double committed, double position, double reorderPoint, double orderUpTo,
                            double dailyDemand, Double daysOfCover, long pumpsWaiting, String detail,
                            boolean acknowledged, LocalDate snoozedUntil) {
 }

@@ -12,7 +12,8 @@ package org.depotcast.planning;
  * @param reorderPoint     s (a kit's min)
  * @param orderQuantity    Q in whole packs, at least the MOQ
  * @param orderUpTo        S = s + Q, capped by shelf life (a kit's max)
- * @param position         on hand + on order
+ * @param committed        approved for mechanics and not yet issued
+ * @param position         on hand + on order − committed
  * @param expectedShortUnits G(position): units expected short before replenishment arrives
  * @param pumpDaysAtRisk   expected pump-days without water: short units × half the protection period (a pump that
  *                         breaks while the part is out waits, on average, half the time to the next replenishment)
@@ -20,7 +21,7 @@ package org.depotcast.planning;
 public record StockPolicy(String partNumber, String locationCode, String level, boolean critical, double serviceLevel,
                           int protectionDays, double dailyDemand, double demandMean, double demandVariance,
                           String distribution, double reorderPoint, double orderQuantity, double orderUpTo,
-                          double onHand, double onOrder, double position, double expectedShortUnits,
+                          double onHand, double onOrder, double committed, double position, double expectedShortUnits,
                           double pumpDaysAtRisk, String forecastMethod, Integer shelfLifeDays, double unitCost,
                           String currency, int packSize, int minOrderQty, String supplier) {
 }

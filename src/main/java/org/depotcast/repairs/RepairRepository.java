@@ -37,6 +37,14 @@ class RepairRepository implements PanacheRepository<Repair> {
                 group by r.pump.depot.code, l.part.partNumber""", Object[].class).getResultList();
     }
 
+    /** Repairs reported since a date that waited for parts: rows depot code, diagnosed on, parts available on. */
+    List<Object[]> waitsSince(LocalDate since) {
+        return getEntityManager().createQuery("""
+                select r.pump.depot.code, r.diagnosedOn, r.partsAvailableOn from Repair r
+                where r.reportedOn >= :since and r.diagnosedOn is not null and r.partsAvailableOn > r.diagnosedOn""",
+                Object[].class).setParameter("since", since).getResultList();
+    }
+
     List<Repair> allInOrder() {
         return listAll(Sort.by("repairRef"));
     }

@@ -73,6 +73,17 @@ public class RepairService {
         return repairs.search(null, since, Integer.MAX_VALUE).stream().filter(r -> visible.test(r.pump)).limit(limit).toList();
     }
 
+    /** Per depot code: {repairs that waited for parts, pump-days spent waiting}, for repairs reported since a date. */
+    public Map<String, long[]> waitingForPartsSince(LocalDate since) {
+        Map<String, long[]> waits = new HashMap<>();
+        for (Object[] row : repairs.waitsSince(since)) {
+            long[] cell = waits.computeIfAbsent((String) row[0], k -> new long[2]);
+            cell[0]++;
+            cell[1] += java.time.temporal.ChronoUnit.DAYS.between((LocalDate) row[1], (LocalDate) row[2]);
+        }
+        return waits;
+    }
+
     /** Open repairs waiting for parts, keyed "depotCode|partNumber". */
     public Map<String, Long> openNeeds() {
         Map<String, Long> needs = new HashMap<>();

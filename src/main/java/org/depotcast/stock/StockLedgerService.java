@@ -5,6 +5,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.PersistenceException;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
@@ -34,9 +35,11 @@ public class StockLedgerService {
     private final PartService parts;
     private final CurrentUser currentUser;
     private final AccessScope scope;
+    private final AuditService audit;
 
     StockLedgerService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
-                       PartService parts, CurrentUser currentUser, AccessScope scope) {
+                       PartService parts, CurrentUser currentUser, AccessScope scope, AuditService audit) {
+        this.audit = audit;
         this.scope = scope;
         this.balances = balances;
         this.movements = movements;
@@ -117,7 +120,9 @@ public class StockLedgerService {
         movement.repairId = command.repairId();
         movements.persist(movement);
         movements.flush();
-        return new PostedMovement(MovementResponse.from(movement), false);
+        MovementResponse posted = MovementResponse.from(movement);
+        audit.record("MOVEMENT_POSTED", "stock_movement", Long.toString(movement.id), null, posted);
+        return new PostedMovement(posted, false);
     }
 
     /**

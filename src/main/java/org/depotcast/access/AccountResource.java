@@ -1,0 +1,76 @@
+package org.depotcast.access;
+
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotEmpty;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Pattern;
+import jakarta.validation.constraints.Size;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PUT;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.core.MediaType;
+import jakarta.ws.rs.core.Response;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationService;
+
+import java.util.List;
+import java.util.Set;
+
+/** Account management: admins only. Passwords never leave the service, not even hashed. */
+@Path("/api/accounts")
+@Produces(MediaType.APPLICATION_JSON)
+@RolesAllowed(Roles.ADMIN)
+class AccountResource {
+    private final AccountService accounts;
+    private final LocationService locations;
+
+    AccountResource(AccountService accounts, LocationService locations) {
+        this.accounts = accounts;
+        this.locations = locations;
+    }
+
+    record AccountView(String username, Set<String> roles, boolean enabled) {
+    }
+
+    record CreateAccount(@NotBlank @Size(max = 60) @Pattern(regexp = "[a-z0-9._-]+", message = "may hold lower-case letters, digits and . _ - only") String username,
+                         @NotBlank @Size(min = 8, max = 200) String password, @NotEmpty Set<@NotBlank String> roles,
+                         String kitCode, List<String> locationCodes) {
+    }
+
+    record LocationCodes(@NotNull List<@NotBlank String> codes) {
+    }
+
+    @GET
+    public List<AccountView> list() {
+        return accounts.all().stream().map(a -> new AccountView(a.username, a.roleSet(), a.enabled)).toList();
+    }
+
+    @POST
+    @Consumes(MediaType.APPLICATION_JSON)
+    public Response create(@Valid @NotNull CreateAccount body) {
+        Long kitId = body.kitCode() == null ? null : locations.require("kitCode", body.kitCode()).id;
+        UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId);
+        if (body.locationCodes() != null) {
+            accounts.assignLocations(account.username, ids(body.locationCodes()));
+        }
+        return Response.status(201).entity(new AccountView(account.username, account.roleSet(), account.enabled)).build();
+    }
+
+    @PUT
+    @Path("{username}/locations")
+    @Consumes(MediaType.APPLICATION_JSON)
+    public Response assign(@PathParam("username") String username, @Valid @NotNull LocationCodes body) {
+        accounts.assignLocations(username, ids(body.codes()));
+        return Response.noContent().build();
+    }
+
+    private List<Long> ids(List<String> codes) {
+        return codes.stream().map(c -> locations.require("codes", c)).map((Location l) -> l.id).toList();
+    }
+}

@@ -1,0 +1,59 @@
+package org.depotcast.requests;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.repairs.RepairService;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.time.Duration;
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+/** Per depot over the last 365 days: hours from request to issue, and pump-days spent waiting for parts. */
+@ApplicationScoped
+public class RequestReportService {
+    private final RequestService requests;
+    private final RepairService repairs;
+    private final LocationService locations;
+    private final AccessScope scope;
+
+    RequestReportService(RequestService requests, RepairService repairs, LocationService locations, AccessScope scope) {
+        this.requests = requests;
+        this.repairs = repairs;
+        this.locations = locations;
+        this.scope = scope;
+    }
+
+    @Transactional
+    public List<RequestDtos.DepotReport> perDepot() {
+        OffsetDateTime since = OffsetDateTime.now(ZoneOffset.UTC).minusDays(365);
+        Map<String, long[]> waits = repairs.waitingForPartsSince(LocalDate.now(ZoneOffset.UTC).minusDays(365));
+        List<PartsRequest> issued = requests.issuedSince(since);
+        AccessScope.Scope visible = scope.current();
+        List<RequestDtos.DepotReport> out = new ArrayList<>();
+        for (Location depot : locations.ofKind(LocationKind.DEPOT)) {
+            if (!visible.sees(depot.id)) {
+                continue;
+            }
+            double[] hours = issued.stream().filter(r -> r.depot.id.equals(depot.id))
+                    .mapToDouble(r -> Duration.between(r.raisedAt, r.issuedAt).toMinutes() / 60.0).sorted().toArray();
+            long[] wait = waits.getOrDefault(depot.code, new long[2]);
+            out.add(new RequestDtos.DepotReport(depot.code, hours.length,
+                    hours.length == 0 ? null : java.util.Arrays.stream(hours).average().orElse(0),
+                    hours.length == 0 ? null : median(hours), wait[0], wait[1]));
+        }
+        return out;
+    }
+
+    private static double median(double[] sorted) {
+        int n = sorted.length;
+        return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
+    }
+}

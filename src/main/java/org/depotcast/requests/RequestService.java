@@ -1,0 +1,264 @@
+package org.depotcast.requests;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.panache.common.Sort;
+import io.quarkus.security.ForbiddenException;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.LockModeType;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.Quantities;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.MovementCommand;
+import org.depotcast.stock.MovementKind;
+import org.depotcast.stock.StockLedgerService;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.EnumSet;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+
+/**
+ * The parts-request workflow: raised by a mechanic (offline-safe by client reference), approved in full or in part
+ * (possibly as a compatible substitute) or refused by a stores officer of the depot, issued from the depot to the
+ * kit through the ledger, then closed; cancellable until issued. Approved, unissued quantities are committed stock.
+ * Every change takes a row lock on the request, so two officers acting at once cannot both succeed.
+ */
+@ApplicationScoped
+public class RequestService {
+    private final Requests requests;
+    private final PartService parts;
+    private final PumpService pumps;
+    private final LocationService locations;
+    private final StockLedgerService ledger;
+    private final AccessScope scope;
+    private final CurrentUser currentUser;
+    private final AuditService audit;
+
+    @ApplicationScoped
+    static class Requests implements PanacheRepository<PartsRequest> {
+        Optional<PartsRequest> byClientRef(String clientRef) {
+            return find("clientRef", clientRef).firstResultOptional();
+        }
+    }
+
+    RequestService(Requests requests, PartService parts, PumpService pumps, LocationService locations,
+                   StockLedgerService ledger, AccessScope scope, CurrentUser currentUser, AuditService audit) {
+        this.requests = requests;
+        this.parts = parts;
+        this.pumps = pumps;
+        this.locations = locations;
+        this.ledger = ledger;
+        this.scope = scope;
+        this.currentUser = currentUser;
+        this.audit = audit;
+    }
+
+    public record Raised(RequestDtos.View request, boolean replayed) {
+    }
+
+    @Transactional
+    public Raised raise(RequestDtos.Raise body) {
+        String mechanic = currentUser.name();
+        Optional<PartsRequest> earlier = requests.byClientRef(body.clientRef());
+        if (earlier.isPresent()) {
+            if (!earlier.get().mechanic.equals(mechanic)) {
+                throw new ConflictException("clientRef", "reference '" + body.clientRef() + "' belongs to another request");
+            }
+            return new Raised(RequestDtos.View.from(earlier.get()), true);
+        }
+        Location kit = locations.kitOf(mechanic).orElseThrow(() ->
+                new BusinessRuleException("mechanic", "account '" + mechanic + "' carries no kit"));
+        PartsRequest request = new PartsRequest();
+        request.clientRef = body.clientRef();
+        request.mechanic = mechanic;
+        request.kit = kit;
+        request.depot = kit.parent;
+        request.pump = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId());
+        request.urgency = body.urgency();
+        request.fault = body.fault();
+        request.raisedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        request.status = RequestStatus.RAISED;
+        for (int i = 0; i < body.lines().size(); i++) {
+            RequestDtos.Line l = body.lines().get(i);
+            PartsRequestLine line = new PartsRequestLine();
+            line.request = request;
+            line.part = parts.require("lines[" + i + "].partNumber", l.partNumber());
+            Part part = line.part;
+            if (request.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
+                throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + l.partNumber() + "' is listed twice");
+            }
+            line.quantityRequested = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
+            request.lines.add(line);
+        }
+        request.moveTo(RequestStatus.RAISED, EnumSet.of(RequestStatus.RAISED), mechanic, body.fault());
+        requests.persist(request);
+        audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
+        return new Raised(RequestDtos.View.from(request), false);
+    }
+
+    @Transactional
+    public RequestDtos.View approve(long id, RequestDtos.Approve body) {
+        PartsRequest request = lockedForDepot(id);
+        RequestDtos.View before = RequestDtos.View.from(request);
+        boolean full = true;
+        boolean any = false;
+        for (int i = 0; i < body.lines().size(); i++) {
+            RequestDtos.ApprovedLine a = body.lines().get(i);
+            String field = "lines[" + i + "]";
+            PartsRequestLine line = request.lines.stream().filter(l -> l.part.partNumber.equals(a.partNumber())).findFirst()
+                    .orElseThrow(() -> new BusinessRuleException(field + ".partNumber", "part '" + a.partNumber() + "' was not requested"));
+            Part issue = line.part;
+            if (a.substitutePartNumber() != null) {
+                if (!parts.substitutesOf(line.part.partNumber).contains(a.substitutePartNumber())) {
+                    throw new BusinessRuleException(field + ".substitutePartNumber", "'" + a.substitutePartNumber()
+                            + "' is not on the compatibility list of '" + line.part.partNumber + "'");
+                }
+                issue = parts.require(field + ".substitutePartNumber", a.substitutePartNumber());
+            }
+            BigDecimal quantity = a.quantity().signum() == 0 ? BigDecimal.ZERO
+                    : Quantities.requirePositive(field + ".quantity", a.quantity(), issue.wholeUnits());
+            if (quantity.compareTo(line.quantityRequested) > 0) {
+                throw new BusinessRuleException(field + ".quantity", "cannot approve more than the " 
+                        + line.quantityRequested.stripTrailingZeros().toPlainString() + " requested");
+            }
+            line.approvedPart = issue == line.part ? null : issue;
+            line.quantityApproved = quantity;
+        }
+        for (PartsRequestLine line : request.lines) {
+            full &= line.quantityApproved.compareTo(line.quantityRequested) == 0;
+            any |= line.quantityApproved.signum() > 0;
+        }
+        if (!any) {
+            throw new BusinessRuleException("lines", "approve at least one unit, or refuse the request with a reason");
+        }
+        request.moveTo(full ? RequestStatus.APPROVED : RequestStatus.PARTLY_APPROVED, EnumSet.of(RequestStatus.RAISED),
+                currentUser.name(), body.note());
+        audit.record("REQUEST_APPROVED", "parts_request", request.clientRef, before, RequestDtos.View.from(request));
+        return RequestDtos.View.from(request);
+    }
+
+    @Transactional
+    public RequestDtos.View refuse(long id, String reason) {
+        PartsRequest request = lockedForDepot(id);
+        request.moveTo(RequestStatus.REFUSED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
+                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason);
+        audit.record("REQUEST_REFUSED", "parts_request", request.clientRef, null, reason);
+        return RequestDtos.View.from(request);
+    }
+
+    /** Issues the approved parts from the depot to the mechanic's kit, all lines in one transaction. */
+    @Transactional
+    public RequestDtos.View issue(long id) {
+        PartsRequest request = lockedForDepot(id);
+        request.moveTo(RequestStatus.ISSUED, EnumSet.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED),
+                currentUser.name(), null);
+        for (PartsRequestLine line : request.lines) {
+            if (line.quantityApproved.signum() > 0) {
+                ledger.postWithin(new MovementCommand(MovementKind.ISSUE_TO_KIT, line.partToIssue().partNumber,
+                        request.depot.code, request.kit.code, line.quantityApproved, null, "parts request",
+                        request.clientRef, "request:" + request.id + ":" + line.id, null, null));
+                line.quantityIssued = line.quantityApproved;
+            }
+        }
+        request.issuedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        audit.record("REQUEST_ISSUED", "parts_request", request.clientRef, null, RequestDtos.View.from(request));
+        return RequestDtos.View.from(request);
+    }
+
+    /** The mechanic withdraws a request that has not been issued; its committed quantities are released. */
+    @Transactional
+    public RequestDtos.View cancel(long id, String reason) {
+        PartsRequest request = locked(id);
+        if (!request.mechanic.equals(currentUser.name())) {
+            throw new ForbiddenException("only the mechanic who raised a request can cancel it");
+        }
+        request.moveTo(RequestStatus.CANCELLED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
+                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason);
+        audit.record("REQUEST_CANCELLED", "parts_request", request.clientRef, null, reason);
+        return RequestDtos.View.from(request);
+    }
+
+    @Transactional
+    public RequestDtos.View close(long id) {
+        PartsRequest request = locked(id);
+        requireParty(request);
+        request.moveTo(RequestStatus.CLOSED, EnumSet.of(RequestStatus.ISSUED), currentUser.name(), null);
+        audit.record("REQUEST_CLOSED", "parts_request", request.clientRef, null, null);
+        return RequestDtos.View.from(request);
+    }
+
+    @Transactional
+    public RequestDtos.View get(long id) {
+        PartsRequest request = requests.findByIdOptional(id).orElseThrow(() -> new EntityMissingException(null, "request", id));
+        requireParty(request);
+        return RequestDtos.View.from(request);
+    }
+
+    /** Mechanics see their own requests; officers their depots'; leads and admins all. */
+    @Transactional
+    public List<RequestDtos.View> list(RequestStatus status) {
+        AccessScope.Scope visible = scope.current();
+        List<PartsRequest> all = status == null ? requests.listAll(Sort.descending("id"))
+                : requests.list("status", Sort.descending("id"), status);
+        return all.stream().filter(r -> visible.mechanic() != null ? r.mechanic.equals(visible.mechanic())
+                : visible.sees(r.depot.id)).map(RequestDtos.View::from).toList();
+    }
+
+    /** Approved but not yet issued, keyed "depotCode|partNumber": stock promised to mechanics. */
+    @Transactional
+    public Map<String, BigDecimal> committed() {
+        Map<String, BigDecimal> committed = new HashMap<>();
+        for (PartsRequest r : requests.list("status in ?1", List.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED))) {
+            for (PartsRequestLine l : r.lines) {
+                committed.merge(r.depot.code + "|" + l.partToIssue().partNumber, l.quantityApproved.subtract(l.quantityIssued),
+                        BigDecimal::add);
+            }
+        }
+        return committed;
+    }
+
+    List<PartsRequest> issuedSince(OffsetDateTime since) {
+        return requests.list("issuedAt >= ?1", since);
+    }
+
+    private PartsRequest locked(long id) {
+        PartsRequest request = requests.findById(id, LockModeType.PESSIMISTIC_WRITE);
+        if (request == null) {
+            throw new EntityMissingException(null, "request", id);
+        }
+        return request;
+    }
+
+    /** The request, locked, when the caller is an officer (or lead/admin) of its depot. */
+    private PartsRequest lockedForDepot(long id) {
+        PartsRequest request = locked(id);
+        if (scope.current().mechanic() != null) {
+            throw new ForbiddenException("mechanics cannot approve, refuse or issue requests");
+        }
+        scope.require(request.depot.id, request.depot.code);
+        return request;
+    }
+
+    private void requireParty(PartsRequest request) {
+        AccessScope.Scope visible = scope.current();
+        boolean party = visible.mechanic() != null ? request.mechanic.equals(visible.mechanic()) : visible.sees(request.depot.id);
+        if (!party) {
+            throw new ForbiddenException("request " + request.clientRef + " belongs to another mechanic or depot");
+        }
+    }
+}
