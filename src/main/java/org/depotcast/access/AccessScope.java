@@ -13,12 +13,25 @@ import java.util.Set;
 /**
  * Which stock locations the signed-in account may see and act on. Programme leads and admins: all. Stores
  * officers: the locations assigned to them (user_location) and the kits of their depots. Mechanics: their own kit.
- * Work done by the system itself (start-up loading, scheduled runs) is not limited.
+ * Work done by the system itself (start-up loading, scheduled runs) is not limited. A scope is remembered per
+ * account for {@link #REMEMBER_MILLIS} (every movement asks), and forgotten at once when any account or location
+ * assignment changes.
  */
 @ApplicationScoped
 public class AccessScope {
+    private static final long REMEMBER_MILLIS = 30_000;
+
     private final CurrentUser currentUser;
     private final EntityManager em;
+    private final java.util.Map<String, Remembered> remembered = new java.util.concurrent.ConcurrentHashMap<>();
+
+    private record Remembered(Scope scope, long until) {
+    }
+
+    /** Called on any account change (see SignInCacheReset). */
+    void forgetAll() {
+        remembered.clear();
+    }
 
     AccessScope(CurrentUser currentUser, EntityManager em) {
         this.currentUser = currentUser;
@@ -43,6 +56,16 @@ public class AccessScope {
             return new Scope(null, true, null);
         }
         String name = currentUser.name();
+        Remembered known = remembered.get(name);
+        if (known != null && known.until() > System.currentTimeMillis()) {
+            return known.scope();
+        }
+        Scope scope = resolve(name);
+        remembered.put(name, new Remembered(scope, System.currentTimeMillis() + REMEMBER_MILLIS));
+        return scope;
+    }
+
+    private Scope resolve(String name) {
         Set<Long> ids = new HashSet<>();
         if (currentUser.hasRole(Roles.STORES_OFFICER)) {
             ids.addAll(longs(em.createNativeQuery("""

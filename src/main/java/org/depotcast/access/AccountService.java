@@ -65,6 +65,7 @@ public class AccountService {
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
         accounts.getEntityManager().createNativeQuery("insert into user_location (user_account_id, location_id) values (?1, ?2)")
                 .setParameter(1, account.id).setParameter(2, locationId).executeUpdate();
+        changed.fire(new AccountsChanged());
     }
 
     @Transactional
