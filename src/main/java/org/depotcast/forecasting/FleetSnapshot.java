@@ -19,7 +19,7 @@ import java.util.Map;
  * @param locationCodes code of each depot and kit by id
  * @param partNumbers  part number by id
  */
-record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<PumpRecord> pumps, List<Consumption> consumption,
+public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<PumpRecord> pumps, List<Consumption> consumption,
                      Map<String, String> kitByMechanic, Map<Long, String> locationCodes, Map<Long, String> partNumbers,
                      Map<Long, ComponentFamily> partFamilies) {
 
@@ -32,17 +32,17 @@ record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<PumpReco
     }
 
     /** A bill-of-materials line as it applies to one pump at its depth. */
-    record BomPart(long partId, ComponentFamily family, double serviceKitQuantity) {
+    public record BomPart(long partId, ComponentFamily family, double serviceKitQuantity) {
     }
 
-    record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
+    public record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
                       int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay) {
-        boolean inServiceOn(long day) {
+        public boolean inServiceOn(long day) {
             return day >= installedDay && day < endDay;
         }
     }
 
-    record Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,
+    public record Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,
                        double quantity) {
     }
 }

@@ -26,7 +26,7 @@ import java.util.Map;
 
 /** Reads the fleet, usage and repair history into a {@link FleetSnapshot}, in one read-only transaction. */
 @ApplicationScoped
-class FleetSnapshotLoader {
+public class FleetSnapshotLoader {
     private final PumpService pumps;
     private final UsageService usage;
     private final RepairService repairs;
@@ -45,7 +45,7 @@ class FleetSnapshotLoader {
     }
 
     @Transactional
-    FleetSnapshot load(LocalDate origin, int historyMonths) {
+    public FleetSnapshot load(LocalDate origin, int historyMonths) {
         LocalDate historyEnd = origin.withDayOfMonth(1);
         LocalDate historyStart = historyEnd.minusMonths(historyMonths);
         Map<Long, List<long[]>> readingDays = new HashMap<>();

@@ -1,0 +1,63 @@
+package org.depotcast.spend;
+
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.Max;
+import jakarta.validation.constraints.Min;
+import jakarta.validation.constraints.NotBlank;
+import jakarta.validation.constraints.NotNull;
+import jakarta.validation.constraints.Pattern;
+import jakarta.validation.constraints.Size;
+
+import java.util.List;
+
+/**
+ * A named spend scenario. Everything but the name and horizon is optional; left out, the scenario is the baseline
+ * (today's fleet and usage, today's prices in the catalogue currency).
+ *
+ * @param decommissionPercentPerYear share of today's pumps taken out of service each year
+ * @param usageChangePercent         change of every pump's daily load, e.g. 10 for 10 % more use
+ * @param priceEscalationPercentPerYear price rise per year, compounded from year 2
+ * @param currency                   projection currency; {@code exchangeRate} converts catalogue prices into it
+ */
+public record ScenarioDefinition(
+        @NotBlank @Size(max = 120) String name,
+        @NotNull @Min(1) @Max(10) Integer horizonYears,
+        List<@Valid @NotNull Installation> installations,
+        @DecimalMin("0") @DecimalMax("100") Double decommissionPercentPerYear,
+        @DecimalMin("-90") @DecimalMax("500") Double usageChangePercent,
+        @DecimalMin("-50") @DecimalMax("200") Double priceEscalationPercentPerYear,
+        @Pattern(regexp = "[A-Z]{3}", message = "must be a three-letter ISO 4217 code") String currency,
+        @DecimalMin(value = "0", inclusive = false) Double exchangeRate,
+        @Min(1000) @Max(100000) Integer draws,
+        Long seed) {
+
+    /** New pumps going in during a projection year (1 = the first year). */
+    public record Installation(@NotNull @Min(1) @Max(10) Integer year, @NotNull @Min(0) @Max(100000) Integer count,
+                               @NotBlank String modelCode, @NotNull @DecimalMin(value = "0", inclusive = false) Double depthM,
+                               @DecimalMin("0") @DecimalMax("24") Double usageHoursPerDay, @NotBlank String depotCode) {
+    }
+
+    int drawsOrDefault() {
+        return draws == null ? 10_000 : draws;
+    }
+
+    long seedOrDefault() {
+        return seed == null ? 1L : seed;
+    }
+
+    double usageFactor() {
+        return 1 + (usageChangePercent == null ? 0 : usageChangePercent) / 100;
+    }
+
+    double survivalPerYear() {
+        return 1 - (decommissionPercentPerYear == null ? 0 : decommissionPercentPerYear) / 100;
+    }
+
+    /** Price factor for 0-based year y: escalation compounded, then converted. */
+    double priceFactor(int year) {
+        double escalation = priceEscalationPercentPerYear == null ? 0 : priceEscalationPercentPerYear / 100;
+        return Math.pow(1 + escalation, year) * (exchangeRate == null ? 1 : exchangeRate);
+    }
+}

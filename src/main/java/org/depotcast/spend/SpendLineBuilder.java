@@ -1,0 +1,168 @@
+package org.depotcast.spend;
+
+import org.depotcast.catalogue.BomLine;
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PumpModel;
+import org.depotcast.core.forecast.PreventiveSchedule;
+import org.depotcast.core.spend.SpendLine;
+import org.depotcast.forecasting.FleetModelResponse;
+import org.depotcast.forecasting.FleetSnapshot;
+
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Expected demand per projection year, part and depot, from the fleet model of each family (rate per operating hour
+ * × each pump's hours, with age advancing a year at a time and the scenario's usage change and decommissioning),
+ * scheduled-service kits as pumps cross their interval, new installations from their year on (half a year in the
+ * year they go in), and in the first year the stock needed to bring the programme up to its policy levels.
+ */
+final class SpendLineBuilder {
+    static final double DAYS_PER_YEAR = 365.25;
+    /** σ of the log rate for a family without a fitted model: a wide, stated range (about ×/÷ 1.65 at one σ). */
+    static final double PRIOR_LOG_SD = 0.5;
+
+    final List<String> familyNames = new ArrayList<>();
+    final List<String> partNumbers = new ArrayList<>();
+    final List<String> depotCodes = new ArrayList<>();
+    final double[] groupLogSd;
+    final double[] groupDispersion;
+    private final Map<String, double[]> cells = new LinkedHashMap<>();
+    private final Map<String, Integer> partIndex = new HashMap<>();
+    private final Map<String, Integer> depotIndex = new HashMap<>();
+    private final Map<ComponentFamily, FleetModelResponse> models;
+    private final Map<Long, Part> partsById;
+    private final ScenarioDefinition scenario;
+    private final int years;
+
+    SpendLineBuilder(Map<ComponentFamily, FleetModelResponse> models, Map<Long, Part> partsById, ScenarioDefinition scenario) {
+        this.models = models;
+        this.partsById = partsById;
+        this.scenario = scenario;
+        this.years = scenario.horizonYears();
+        for (ComponentFamily f : ComponentFamily.values()) {
+            familyNames.add(f.name());
+        }
+        groupLogSd = new double[familyNames.size()];
+        groupDispersion = new double[familyNames.size()];
+        for (ComponentFamily f : ComponentFamily.values()) {
+            FleetModelResponse m = models.get(f);
+            boolean fitted = m != null && "fit".equals(m.source());
+            groupLogSd[f.ordinal()] = fitted ? m.standardErrors().getOrDefault("intercept", PRIOR_LOG_SD) : PRIOR_LOG_SD;
+            groupDispersion[f.ordinal()] = fitted && m.overdispersed() && m.dispersion() != null ? m.dispersion() : 1.0;
+        }
+    }
+
+    /** Today's pumps, from the forecast origin on. */
+    void addFleet(FleetSnapshot snapshot, Map<Long, String> depotCodesById) {
+        long origin = snapshot.historyEnd().toEpochDay();
+        for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
+            if (pump.endDay() <= origin) {
+                continue;
+            }
+            double hoursPerDay = pump.usage().hoursPerDayOn(origin) * scenario.usageFactor();
+            double ageNow = (origin - pump.installedDay()) / DAYS_PER_YEAR;
+            double since = pump.usage().hoursBetween(Math.max(pump.lastServiceDay(), pump.installedDay()), origin);
+            addPump(depotCodesById.get(pump.depotId()), pump.depthM(), hoursPerDay, ageNow, 0, since,
+                    pump.serviceIntervalHours(), bomOf(pump), 1.0);
+        }
+    }
+
+    /** New pumps of the scenario, each batch from its year on. */
+    void addInstallation(ScenarioDefinition.Installation installation, PumpModel model) {
+        List<FleetSnapshot.BomPart> bom = new ArrayList<>();
+        for (BomLine line : model.bom) {
+            bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(installation.depthM())));
+        }
+        double hours = (installation.usageHoursPerDay() == null ? 5.0 : installation.usageHoursPerDay()) * scenario.usageFactor();
+        addPump(installation.depotCode(), installation.depthM(), hours, 0, installation.year() - 1, 0,
+                model.serviceIntervalHours, bom, installation.count());
+    }
+
+    /** Stock needed now to reach the policy levels, bought in the first year at the central store. */
+    void addTopUp(String centralCode, String partNumber, long partId, double units) {
+        if (units > 0) {
+            cell(0, partsById.get(partId), centralCode)[1] += units;
+        }
+    }
+
+    private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstYear, double hoursSinceService,
+                         int serviceInterval, List<FleetSnapshot.BomPart> bom, double pumps) {
+        double[] monthlyHours = new double[12 * years];
+        for (int m = 12 * firstYear; m < monthlyHours.length; m++) {
+            int year = m / 12;
+            double surviving = Math.pow(scenario.survivalPerYear(), year - firstYear + 0.5);
+            monthlyHours[m] = hoursPerDay * DAYS_PER_YEAR / 12 * surviving;
+        }
+        int[] services = PreventiveSchedule.servicesDue(hoursSinceService, monthlyHours, serviceInterval);
+        for (int y = firstYear; y < years; y++) {
+            double fraction = y == firstYear && firstYear > 0 ? 0.5 : 1.0;
+            double hours = 0;
+            int serviced = 0;
+            for (int m = 12 * y; m < 12 * y + 12; m++) {
+                hours += monthlyHours[m];
+                serviced += services[m];
+            }
+            hours *= fraction;
+            double age = ageAtStart + (y - firstYear) + fraction / 2;
+            for (FleetSnapshot.BomPart part : bom) {
+                double[] cell = cell(y, partsById.get(part.partId()), depot);
+                FleetModelResponse model = models.get(part.family());
+                cell[0] += pumps * ratePerHour(model, depthM, age, hours / (DAYS_PER_YEAR * fraction)) * hours;
+                cell[1] += pumps * serviced * part.serviceKitQuantity();
+                cell[2] = model == null ? 1 : model.unitsPerEvent();
+            }
+        }
+    }
+
+    private static double ratePerHour(FleetModelResponse model, double depthM, double age, double hoursPerDay) {
+        if (model == null) {
+            return 0;
+        }
+        double eta = 0;
+        for (Map.Entry<String, Double> term : model.coefficients().entrySet()) {
+            eta += term.getValue() * switch (term.getKey()) {
+                case "intercept" -> 1.0;
+                case "log_depth" -> Math.log(depthM / 30.0);
+                case "age_years" -> age;
+                case "usage_hours" -> hoursPerDay;
+                default -> 0.0;
+            };
+        }
+        return Math.exp(eta);
+    }
+
+    private double[] cell(int year, Part part, String depot) {
+        partIndex.computeIfAbsent(part.partNumber, k -> {
+            partNumbers.add(k);
+            return partNumbers.size() - 1;
+        });
+        depotIndex.computeIfAbsent(depot, k -> {
+            depotCodes.add(k);
+            return depotCodes.size() - 1;
+        });
+        return cells.computeIfAbsent(year + "|" + part.id + "|" + depot, k -> new double[]{0, 0, 1});
+    }
+
+    private static List<FleetSnapshot.BomPart> bomOf(FleetSnapshot.PumpRecord pump) {
+        return pump.bom();
+    }
+
+    SpendLine[] lines() {
+        List<SpendLine> lines = new ArrayList<>();
+        for (Map.Entry<String, double[]> e : cells.entrySet()) {
+            String[] key = e.getKey().split("\\|", 3);
+            int year = Integer.parseInt(key[0]);
+            Part part = partsById.get(Long.parseLong(key[1]));
+            double price = part.unitCost.doubleValue() * scenario.priceFactor(year);
+            double[] v = e.getValue();
+            lines.add(new SpendLine(year, part.family.ordinal(), partIndex.get(part.partNumber), depotIndex.get(key[2]),
+                    v[0], v[2], v[1], price));
+        }
+        return lines.toArray(new SpendLine[0]);
+    }
+}

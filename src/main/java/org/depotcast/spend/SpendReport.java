@@ -1,0 +1,109 @@
+package org.depotcast.spend;
+
+import org.depotcast.common.CsvOut;
+import org.depotcast.core.spend.SpendSimulation;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+
+/** Spend results as CSV for a spreadsheet and as one printable HTML page with a chart of spend per year. */
+final class SpendReport {
+    private SpendReport() {
+    }
+
+    static String csv(SpendResults r) {
+        List<List<?>> rows = new ArrayList<>();
+        for (SpendResults.Year y : r.years()) {
+            rows.add(row(y.year(), "total", "all", y.total(), r.currency()));
+            y.families().forEach((k, s) -> rows.add(row(y.year(), "family", k, s, r.currency())));
+            y.parts().forEach((k, s) -> rows.add(row(y.year(), "part", k, s, r.currency())));
+            y.depots().forEach((k, s) -> rows.add(row(y.year(), "depot", k, s, r.currency())));
+        }
+        return CsvOut.write(List.of("year", "level", "key", "mean", "p2_5", "p10", "p50", "p90", "p97_5", "currency"),
+                rows, x -> x);
+    }
+
+    private static List<?> row(int year, String level, String key, SpendSimulation.Summary s, String currency) {
+        return List.of(year, level, key, money(s.mean()), money(s.p2_5()), money(s.p10()), money(s.p50()),
+                money(s.p90()), money(s.p97_5()), currency);
+    }
+
+    static String html(SpendResults r) {
+        StringBuilder h = new StringBuilder();
+        h.append("<!doctype html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>Parts spend projection: ")
+                .append(escape(r.scenario())).append("</title><style>body{font-family:sans-serif;margin:2em;color:#222}"
+                        + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #999;padding:4px 8px;text-align:right}"
+                        + "th:first-child,td:first-child{text-align:left}.note{font-size:90%;color:#444}</style></head><body>");
+        h.append("<h1>Parts spend projection</h1><p>Scenario <strong>").append(escape(r.scenario()))
+                .append("</strong>, in ").append(escape(r.currency())).append(", ").append(r.draws())
+                .append(" Monte Carlo draws (seed ").append(r.seed()).append(").</p>");
+        h.append(chart(r));
+        h.append("<h2>Total per year</h2><table><tr><th>Year</th><th>Expected</th><th>80% range</th><th>95% range</th></tr>");
+        for (SpendResults.Year y : r.years()) {
+            h.append("<tr><td>").append(y.year()).append("</td><td>").append(money(y.total().mean())).append("</td><td>")
+                    .append(money(y.total().p10())).append(" – ").append(money(y.total().p90())).append("</td><td>")
+                    .append(money(y.total().p2_5())).append(" – ").append(money(y.total().p97_5())).append("</td></tr>");
+        }
+        h.append("</table><h2>Per component family (expected, 80% range)</h2><table><tr><th>Family</th>");
+        r.years().forEach(y -> h.append("<th>").append(y.year()).append("</th>"));
+        h.append("</tr>");
+        for (String family : r.years().get(0).families().keySet()) {
+            h.append("<tr><td>").append(family.toLowerCase(Locale.ROOT).replace('_', ' ')).append("</td>");
+            for (SpendResults.Year y : r.years()) {
+                SpendSimulation.Summary s = y.families().get(family);
+                h.append("<td>").append(s == null ? "–" : money(s.mean()) + "<br><small>" + money(s.p10()) + " – "
+                        + money(s.p90()) + "</small>").append("</td>");
+            }
+            h.append("</tr>");
+        }
+        h.append("</table>");
+        r.notes().forEach(n -> h.append("<p class=\"note\">").append(escape(n)).append("</p>"));
+        h.append("<p class=\"note\">Parts figures only: labour, transport and the work itself are not included. Repairs "
+                + "on boreholes and hand pumps, and any part in contact with drinking water, follow local codes, national "
+                + "drinking-water quality rules and trained, licensed practice.</p></body></html>");
+        return h.toString();
+    }
+
+    /** Bars of expected spend per year with the 95% range as a whisker and the 80% range as a thicker band. */
+    private static String chart(SpendResults r) {
+        double max = r.years().stream().mapToDouble(y -> y.total().p97_5()).max().orElse(1);
+        int width = 120 * r.years().size() + 80, height = 260;
+        StringBuilder svg = new StringBuilder("<svg xmlns=\"http://www.w3.org/2000/svg\" width=\"" + width
+                + "\" height=\"" + height + "\" role=\"img\" aria-label=\"Expected parts spend per year with ranges\">");
+        svg.append("<line x1=\"60\" y1=\"220\" x2=\"").append(width - 10).append("\" y2=\"220\" stroke=\"#333\"/>");
+        for (int i = 0; i < r.years().size(); i++) {
+            SpendResults.Year y = r.years().get(i);
+            double x = 80 + i * 120;
+            double top = 220 - 200 * y.total().mean() / max;
+            svg.append(String.format(Locale.ROOT, "<rect x=\"%.0f\" y=\"%.1f\" width=\"60\" height=\"%.1f\" fill=\"#8aa8c8\"/>",
+                    x, top, 220 - top));
+            double lo95 = 220 - 200 * y.total().p2_5() / max, hi95 = 220 - 200 * y.total().p97_5() / max;
+            double lo80 = 220 - 200 * y.total().p10() / max, hi80 = 220 - 200 * y.total().p90() / max;
+            svg.append(String.format(Locale.ROOT, "<line x1=\"%.0f\" y1=\"%.1f\" x2=\"%.0f\" y2=\"%.1f\" stroke=\"#222\"/>",
+                    x + 30, lo95, x + 30, hi95));
+            svg.append(String.format(Locale.ROOT, "<rect x=\"%.0f\" y=\"%.1f\" width=\"8\" height=\"%.1f\" fill=\"#222\"/>",
+                    x + 26, hi80, Math.max(1, lo80 - hi80)));
+            svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"240\" font-size=\"12\">%d</text>", x + 14, y.year()));
+            svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"%.1f\" font-size=\"11\">%s</text>", x, top - 4,
+                    money(y.total().mean())));
+        }
+        return svg.append("</svg>").toString();
+    }
+
+    private static String money(double value) {
+        return String.format(Locale.ROOT, "%.2f", value);
+    }
+
+    private static String escape(String text) {
+        return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
+    }
+
+    static Map<String, Object> compareRow(String scenario, SpendResults r) {
+        Map<String, Object> row = new java.util.LinkedHashMap<>();
+        row.put("scenario", scenario);
+        r.years().forEach(y -> row.put(Integer.toString(y.year()), y.total()));
+        return row;
+    }
+}

@@ -1,0 +1,112 @@
+package org.depotcast.spend;
+
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotNull;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.MediaType;
+import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
+import org.depotcast.access.Roles;
+import org.depotcast.common.InvalidInputException;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+
+@Path("/api/spend")
+@Produces(MediaType.APPLICATION_JSON)
+@RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.STORES_OFFICER})
+class SpendResource {
+    private final SpendService service;
+
+    SpendResource(SpendService service) {
+        this.service = service;
+    }
+
+    record ScenarioView(long id, String name, ScenarioDefinition definition) {
+    }
+
+    record RunView(long id, long scenarioId, String status, String phase, int draws, long seed, String message) {
+        static RunView from(SpendRun r) {
+            return new RunView(r.id, r.scenarioId, r.status.name(), r.phase, r.draws, r.seed, r.message);
+        }
+    }
+
+    @POST
+    @Path("scenarios")
+    @Consumes(MediaType.APPLICATION_JSON)
+    public Response save(@Valid @NotNull ScenarioDefinition definition, UriInfo uri) {
+        SpendScenario s = service.save(definition);
+        return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(s.id)).build())
+                .entity(new ScenarioView(s.id, s.name, definition)).build();
+    }
+
+    @GET
+    @Path("scenarios")
+    public List<ScenarioView> scenarios() {
+        return service.scenarios().stream().map(s -> new ScenarioView(s.id, s.name, service.fromJson(s.definition))).toList();
+    }
+
+    /** Starts a run; 202 with the run to poll. */
+    @POST
+    @Path("scenarios/{id}/runs")
+    public Response start(@PathParam("id") long id, UriInfo uri) {
+        SpendRun run = service.start(id);
+        return Response.accepted(RunView.from(run))
+                .location(uri.getBaseUriBuilder().path("api/spend/runs").path(Long.toString(run.id)).build()).build();
+    }
+
+    @GET
+    @Path("runs/{id}")
+    public RunView run(@PathParam("id") long id) {
+        return RunView.from(service.run(id));
+    }
+
+    @GET
+    @Path("runs/{id}/results")
+    public SpendResults results(@PathParam("id") long id) {
+        return service.results(id);
+    }
+
+    @GET
+    @Path("runs/{id}/results.csv")
+    @Produces("text/csv")
+    public String csv(@PathParam("id") long id) {
+        return SpendReport.csv(service.results(id));
+    }
+
+    @GET
+    @Path("runs/{id}/report")
+    @Produces(MediaType.TEXT_HTML)
+    public String report(@PathParam("id") long id) {
+        return SpendReport.html(service.results(id));
+    }
+
+    /** Totals per year of several finished runs side by side, e.g. ?runs=3,4 (baseline first). */
+    @GET
+    @Path("compare")
+    public List<Map<String, Object>> compare(@QueryParam("runs") String runIds) {
+        if (runIds == null || runIds.isBlank()) {
+            throw new InvalidInputException("runs", "name the runs to compare, e.g. runs=3,4");
+        }
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (String part : runIds.split(",")) {
+            long id;
+            try {
+                id = Long.parseLong(part.strip());
+            } catch (NumberFormatException e) {
+                throw new InvalidInputException("runs", "must be run ids separated by commas, was '" + runIds + "'");
+            }
+            SpendResults r = service.results(id);
+            rows.add(SpendReport.compareRow(r.scenario(), r));
+        }
+        return rows;
+    }
+}

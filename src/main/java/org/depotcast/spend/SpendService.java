@@ -1,0 +1,329 @@
+package org.depotcast.spend;
+
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.logging.Log;
+import io.quarkus.narayana.jta.QuarkusTransaction;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PumpModel;
+import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.core.spend.SpendDraws;
+import org.depotcast.core.spend.SpendLine;
+import org.depotcast.core.spend.SpendSimulation;
+import org.depotcast.forecasting.FleetModelResponse;
+import org.depotcast.forecasting.FleetSnapshot;
+import org.depotcast.forecasting.FleetSnapshotLoader;
+import org.depotcast.forecasting.ForecastQueryService;
+import org.depotcast.forecasting.ForecastRunService;
+import org.depotcast.planning.PlanningService;
+import org.depotcast.planning.StockPolicy;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Annual parts-spend projections: saved scenarios, runs in the background with their phase shown, results kept per
+ * run. A failed run is marked FAILED and leaves earlier runs' results untouched; the same scenario on the same data
+ * gives the same numbers (fixed seed).
+ */
+@ApplicationScoped
+public class SpendService {
+    private final Scenarios scenarios;
+    private final Runs runs;
+    private final PartService parts;
+    private final PumpModelService models;
+    private final LocationService locations;
+    private final FleetSnapshotLoader fleet;
+    private final ForecastQueryService forecasts;
+    private final ForecastRunService forecastRuns;
+    private final PlanningService planning;
+    private final AccessScope scope;
+    private final CurrentUser currentUser;
+    private final AuditService audit;
+    private final ObjectMapper json;
+    /** A plain thread, outside any request: background runs act as the system once the caller was checked. */
+    private final java.util.concurrent.ExecutorService background = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
+        Thread t = new Thread(r, "spend-projection");
+        t.setDaemon(true);
+        return t;
+    });
+
+    @ApplicationScoped
+    static class Scenarios implements PanacheRepository<SpendScenario> {
+    }
+
+    @ApplicationScoped
+    static class Runs implements PanacheRepository<SpendRun> {
+    }
+
+    SpendService(Scenarios scenarios, Runs runs, PartService parts, PumpModelService models, LocationService locations,
+                 FleetSnapshotLoader fleet, ForecastQueryService forecasts, ForecastRunService forecastRuns,
+                 PlanningService planning, AccessScope scope, CurrentUser currentUser, AuditService audit,
+                 ObjectMapper json) {
+        this.scenarios = scenarios;
+        this.runs = runs;
+        this.parts = parts;
+        this.models = models;
+        this.locations = locations;
+        this.fleet = fleet;
+        this.forecasts = forecasts;
+        this.forecastRuns = forecastRuns;
+        this.planning = planning;
+        this.scope = scope;
+        this.currentUser = currentUser;
+        this.audit = audit;
+        this.json = json;
+    }
+
+    @Transactional
+    public SpendScenario save(ScenarioDefinition definition) {
+        scope.requireProgramme();
+        if (scenarios.count("name", definition.name()) > 0) {
+            throw new ConflictException("name", "a scenario named '" + definition.name() + "' exists");
+        }
+        List<ScenarioDefinition.Installation> installs = definition.installations() == null ? List.of() : definition.installations();
+        for (int i = 0; i < installs.size(); i++) {
+            ScenarioDefinition.Installation inst = installs.get(i);
+            models.require("installations[" + i + "].modelCode", inst.modelCode());
+            Location depot = locations.require("installations[" + i + "].depotCode", inst.depotCode());
+            if (depot.kind != LocationKind.DEPOT) {
+                throw new BusinessRuleException("installations[" + i + "].depotCode", "'" + inst.depotCode() + "' is not a depot");
+            }
+            if (inst.year() > definition.horizonYears()) {
+                throw new BusinessRuleException("installations[" + i + "].year", "is after the horizon of "
+                        + definition.horizonYears() + " years");
+            }
+        }
+        SpendScenario scenario = new SpendScenario();
+        scenario.name = definition.name();
+        scenario.definition = toJson(definition);
+        scenario.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+        scenario.createdBy = currentUser.name();
+        scenarios.persist(scenario);
+        audit.record("SPEND_SCENARIO_SAVED", "spend_scenario", scenario.name, null, definition);
+        return scenario;
+    }
+
+    @Transactional
+    public List<SpendScenario> scenarios() {
+        scope.requireProgramme();
+        return scenarios.listAll(io.quarkus.panache.common.Sort.by("id"));
+    }
+
+    /** Starts a run in the background; poll {@link #run(long)} for its phase and results. */
+    public SpendRun start(long scenarioId) {
+        scope.requireProgramme();
+        SpendScenario scenario = QuarkusTransaction.requiringNew().call(() -> scenarios.findByIdOptional(scenarioId)
+                .orElseThrow(() -> new EntityMissingException(null, "spend scenario", scenarioId)));
+        ScenarioDefinition definition = fromJson(scenario.definition);
+        if (forecastRuns.latestFinished().isEmpty()) {
+            throw new BusinessRuleException("scenarioId", "no forecast run has finished yet: run the forecasts first");
+        }
+        SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
+            SpendRun r = new SpendRun();
+            r.scenarioId = scenarioId;
+            r.status = SpendRun.Status.RUNNING;
+            r.phase = "queued";
+            r.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
+            r.draws = definition.drawsOrDefault();
+            r.seed = definition.seedOrDefault();
+            runs.persist(r);
+            return r;
+        });
+        // The caller's programme-wide view was checked above; the background work acts for it.
+        background.submit(() -> {
+            // Reads outside a transaction need a request context; nobody is signed in on it, so it acts as the system.
+            var context = io.quarkus.arc.Arc.container().requestContext();
+            context.activate();
+            try {
+                execute(run.id, scenario.name, definition);
+            } finally {
+                context.terminate();
+            }
+        });
+        return run;
+    }
+
+    /** Runs to the end in the caller's thread (tests, benchmarks). */
+    public SpendRun runNow(long scenarioId) {
+        SpendRun run = start(scenarioId);
+        long deadline = System.currentTimeMillis() + 600_000;
+        while (System.currentTimeMillis() < deadline) {
+            SpendRun current = run(run.id);
+            if (current.status != SpendRun.Status.RUNNING) {
+                return current;
+            }
+            try {
+                Thread.sleep(100);
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                break;
+            }
+        }
+        return run(run.id);
+    }
+
+    public SpendRun run(long id) {
+        return QuarkusTransaction.requiringNew().call(() -> runs.findByIdOptional(id)
+                .orElseThrow(() -> new EntityMissingException(null, "spend run", id)));
+    }
+
+    public SpendResults results(long id) {
+        scope.requireProgramme();
+        SpendRun run = run(id);
+        if (run.status != SpendRun.Status.DONE) {
+            throw new BusinessRuleException("id", "spend run " + id + " is " + run.status + ": " + (run.message == null ? run.phase : run.message));
+        }
+        try {
+            return json.readValue(run.results, SpendResults.class);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("stored results of run " + id + " cannot be read", e);
+        }
+    }
+
+    private void execute(long runId, String name, ScenarioDefinition definition) {
+        try {
+            phase(runId, "reading the fleet");
+            LocalDate today = LocalDate.now(ZoneOffset.UTC);
+            FleetSnapshot snapshot = fleet.load(today, 24);
+            Map<ComponentFamily, FleetModelResponse> fits = new EnumMap<>(ComponentFamily.class);
+            for (ComponentFamily family : ComponentFamily.values()) {
+                try {
+                    fits.put(family, forecasts.fleetModel(family.name()));
+                } catch (EntityMissingException none) {
+                    // A family with no stored model contributes no breakdown demand.
+                }
+            }
+            Map<Long, Part> partsById = new HashMap<>();
+            parts.all().forEach(p -> partsById.put(p.id, p));
+            String currency = checkCurrency(definition, partsById);
+            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, definition);
+            Map<Long, String> depotCodes = new HashMap<>();
+            locations.all().forEach(l -> depotCodes.put(l.id, l.code));
+            builder.addFleet(snapshot, depotCodes);
+            for (ScenarioDefinition.Installation inst : definition.installations() == null
+                    ? List.<ScenarioDefinition.Installation>of() : definition.installations()) {
+                PumpModel model = QuarkusTransaction.requiringNew().call(() -> {
+                    PumpModel m = models.require("modelCode", inst.modelCode());
+                    m.bom.forEach(l -> l.part.family.name());
+                    return m;
+                });
+                builder.addInstallation(inst, model);
+            }
+            String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+            for (StockPolicy p : planning.programmePolicies()) {
+                Part part = parts.require("partNumber", p.partNumber());
+                builder.addTopUp(central, p.partNumber(), part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+            }
+            SpendLine[] lines = builder.lines();
+            phase(runId, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");
+            SpendDraws draws = SpendSimulation.run(lines, definition.horizonYears(), builder.familyNames.size(),
+                    builder.partNumbers.size(), builder.depotCodes.size(), builder.groupLogSd, builder.groupDispersion,
+                    definition.drawsOrDefault(), definition.seedOrDefault());
+            phase(runId, "summarising");
+            SpendResults results = summarise(name, currency, definition, today.getYear(), builder, draws);
+            String stored = toJson(results);
+            QuarkusTransaction.requiringNew().run(() -> {
+                SpendRun run = runs.findById(runId);
+                run.results = stored;
+                run.status = SpendRun.Status.DONE;
+                run.phase = "done";
+                run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+            });
+        } catch (RuntimeException e) {
+            Log.error("spend run " + runId + " failed", e);
+            QuarkusTransaction.requiringNew().run(() -> {
+                SpendRun run = runs.findById(runId);
+                run.status = SpendRun.Status.FAILED;
+                run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+                String message = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
+                run.message = message.substring(0, Math.min(1000, message.length()));
+            });
+        }
+    }
+
+    /** Every part in one catalogue currency; the scenario converts it with its own rate. */
+    private static String checkCurrency(ScenarioDefinition definition, Map<Long, Part> partsById) {
+        String catalogue = partsById.values().stream().map(p -> p.currency).findFirst().orElse("USD");
+        for (Part p : partsById.values()) {
+            if (!p.currency.equals(catalogue)) {
+                throw new BusinessRuleException("exchangeRate", "part " + p.partNumber + " is priced in " + p.currency
+                        + ", others in " + catalogue + ": one catalogue currency is needed");
+            }
+        }
+        return definition.currency() == null ? catalogue : definition.currency();
+    }
+
+    private static SpendResults summarise(String name, String currency, ScenarioDefinition definition, int firstYear,
+                                          SpendLineBuilder builder, SpendDraws draws) {
+        List<SpendResults.Year> years = new ArrayList<>();
+        for (int y = 0; y < draws.years(); y++) {
+            Map<String, SpendSimulation.Summary> families = new LinkedHashMap<>();
+            for (int g = 0; g < draws.groups(); g++) {
+                SpendSimulation.Summary s = SpendSimulation.Summary.of(draws.group(y, g));
+                if (s.mean() > 0) {
+                    families.put(builder.familyNames.get(g), s);
+                }
+            }
+            Map<String, SpendSimulation.Summary> partSummaries = new LinkedHashMap<>();
+            for (int p = 0; p < draws.parts(); p++) {
+                partSummaries.put(builder.partNumbers.get(p), SpendSimulation.Summary.of(draws.part(y, p)));
+            }
+            Map<String, SpendSimulation.Summary> depots = new LinkedHashMap<>();
+            for (int d = 0; d < draws.depots(); d++) {
+                depots.put(builder.depotCodes.get(d), SpendSimulation.Summary.of(draws.depot(y, d)));
+            }
+            double[] total = draws.total(y);
+            double[] half = java.util.Arrays.copyOf(total, total.length / 2);
+            SpendSimulation.Summary all = SpendSimulation.Summary.of(total);
+            SpendSimulation.Summary first = SpendSimulation.Summary.of(half);
+            years.add(new SpendResults.Year(firstYear + y, all, families, partSummaries, depots,
+                    new SpendResults.Stability(half.length, first.p10(), first.p90(), all.p10(), all.p90())));
+        }
+        return new SpendResults(name, currency, definition.drawsOrDefault(), definition.seedOrDefault(), firstYear, years,
+                List.of("Year 1 includes the stock needed to bring the programme to its policy levels.",
+                        "Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = its "
+                                + "intercept's standard error) and overdispersion where the fit found it."));
+    }
+
+    private void phase(long runId, String phase) {
+        QuarkusTransaction.requiringNew().run(() -> runs.findById(runId).phase = phase);
+    }
+
+    private String toJson(Object value) {
+        try {
+            return json.writeValueAsString(value);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    ScenarioDefinition fromJson(String text) {
+        try {
+            return json.readValue(text, ScenarioDefinition.class);
+        } catch (JsonProcessingException e) {
+            throw new IllegalStateException("stored scenario cannot be read", e);
+        }
+    }
+}

@@ -1,0 +1,138 @@
+package org.depotcast.spend;
+
+import io.quarkus.test.junit.QuarkusTest;
+import io.restassured.path.json.JsonPath;
+import jakarta.inject.Inject;
+import org.depotcast.TestData;
+import org.depotcast.forecasting.ForecastRunService;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+
+import java.time.LocalDate;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.depotcast.TestData.as;
+import static org.hamcrest.Matchers.containsString;
+import static org.hamcrest.Matchers.equalTo;
+import static org.hamcrest.Matchers.hasItem;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+@QuarkusTest
+class SpendResourceTest {
+    private static final String PROBLEM = "application/problem+json";
+
+    @Inject
+    ForecastRunService forecasts;
+
+    @BeforeEach
+    void forecastsExist() {
+        if (forecasts.latestFinished().isEmpty()) {
+            forecasts.runNow("test", LocalDate.of(2026, 12, 2));
+        }
+    }
+
+    private static Map<String, Object> scenario(String name, Object... extra) {
+        Map<String, Object> body = new HashMap<>();
+        body.put("name", name);
+        body.put("horizonYears", 3);
+        body.put("draws", 2000);
+        body.put("seed", 7);
+        for (int i = 0; i < extra.length; i += 2) {
+            body.put((String) extra[i], extra[i + 1]);
+        }
+        return body;
+    }
+
+    private static JsonPath runToEnd(Map<String, Object> body) throws InterruptedException {
+        long scenario = as("lead").contentType("application/json").body(body).post("/api/spend/scenarios")
+                .then().statusCode(201).extract().jsonPath().getLong("id");
+        long run = as("lead").post("/api/spend/scenarios/" + scenario + "/runs").then().statusCode(202)
+                .extract().jsonPath().getLong("id");
+        for (int i = 0; i < 600; i++) {
+            String status = as("lead").get("/api/spend/runs/" + run).then().extract().jsonPath().getString("status");
+            if (!"RUNNING".equals(status)) {
+                assertEquals("DONE", status);
+                break;
+            }
+            Thread.sleep(100);
+        }
+        String json = as("lead").get("/api/spend/runs/" + run + "/results").then().statusCode(200).extract().asString();
+        return new JsonPath(json).using(io.restassured.path.json.config.JsonPathConfig.jsonPathConfig()
+                .numberReturnType(io.restassured.path.json.config.JsonPathConfig.NumberReturnType.DOUBLE));
+    }
+
+    @Test
+    void baselineProjectionHasOrderedIntervalsAndReports() throws Exception {
+        JsonPath r = runToEnd(scenario(TestData.unique("baseline")));
+        assertEquals(3, r.getList("years").size());
+        for (int y = 0; y < 3; y++) {
+            String t = "years[" + y + "].total.";
+            double lo95 = r.getDouble(t + "p2_5"), lo80 = r.getDouble(t + "p10"), mean = r.getDouble(t + "mean"),
+                    hi80 = r.getDouble(t + "p90"), hi95 = r.getDouble(t + "p97_5");
+            assertTrue(mean > 0 && lo95 <= lo80 && lo80 <= mean && mean <= hi80 && hi80 <= hi95, "year " + y);
+            // The interval from half the draws is already close to the one from all of them.
+            double half = r.getDouble("years[" + y + "].stability.p90Half");
+            assertTrue(Math.abs(half - hi80) / hi80 < 0.05, "stable 90th percentile: " + half + " vs " + hi80);
+        }
+        assertTrue(r.getMap("years[1].families").containsKey("CUP_SEAL"));
+        assertTrue(r.getMap("years[1].depots").containsKey("DEP-QUILLAN"));
+    }
+
+    @Test
+    void growthAndEscalationMoveTheFigures() throws Exception {
+        JsonPath base = runToEnd(scenario(TestData.unique("base")));
+        JsonPath dearer = runToEnd(scenario(TestData.unique("dearer"), "priceEscalationPercentPerYear", 10));
+        // Same seed and data, every price ×1.1 from year 2: every draw scales exactly, so does the mean.
+        assertEquals(1.1 * base.getDouble("years[1].total.mean"), dearer.getDouble("years[1].total.mean"),
+                1e-6 * base.getDouble("years[1].total.mean"));
+        assertEquals(base.getDouble("years[0].total.mean"), dearer.getDouble("years[0].total.mean"), 1e-6);
+        JsonPath grown = runToEnd(scenario(TestData.unique("grown"), "installations", List.of(Map.of("year", 1,
+                "count", 300, "modelCode", "RB-2", "depthM", 45, "usageHoursPerDay", 5, "depotCode", "DEP-QUILLAN"))));
+        // New pumps are young (rods and pipes wear with age) and years from their first service, so 25 % more pumps
+        // add less than 25 % spend; the increase must be clear and sit at the depot where they go in.
+        double increase = grown.getDouble("years[1].total.mean") - base.getDouble("years[1].total.mean");
+        double atQuillan = grown.getDouble("years[1].depots.DEP-QUILLAN.mean") - base.getDouble("years[1].depots.DEP-QUILLAN.mean");
+        assertTrue(increase > 0.05 * base.getDouble("years[1].total.mean"), "increase " + increase);
+        assertTrue(atQuillan > 0.8 * increase, "increase at the new pumps' depot " + atQuillan + " of " + increase);
+    }
+
+    @Test
+    void reportCsvAndComparison() throws Exception {
+        long scenario = as("lead").contentType("application/json").body(scenario(TestData.unique("report")))
+                .post("/api/spend/scenarios").then().statusCode(201).extract().jsonPath().getLong("id");
+        long run = as("lead").post("/api/spend/scenarios/" + scenario + "/runs").then().statusCode(202)
+                .extract().jsonPath().getLong("id");
+        for (int i = 0; i < 600 && "RUNNING".equals(as("lead").get("/api/spend/runs/" + run).jsonPath().getString("status")); i++) {
+            Thread.sleep(100);
+        }
+        as("lead").get("/api/spend/runs/" + run + "/report").then().statusCode(200)
+                .body(containsString("<svg")).body(containsString("drinking-water"));
+        String csv = as("lead").get("/api/spend/runs/" + run + "/results.csv").then().statusCode(200).extract().asString();
+        assertTrue(csv.startsWith("year,level,key,mean"));
+        as("lead").get("/api/spend/compare?runs=" + run + "," + run).then().statusCode(200).body("size()", equalTo(2));
+    }
+
+    @Test
+    void badScenariosAreRefused() {
+        as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "horizonYears", 11))
+                .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("horizonYears"));
+        as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "installations", List.of(Map.of(
+                "year", 1, "count", -5, "modelCode", "RB-2", "depthM", 40, "depotCode", "DEP-QUILLAN"))))
+                .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM)
+                .body("errors.field", hasItem("installations[0].count"));
+        as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "installations", List.of(Map.of(
+                "year", 1, "count", 5, "modelCode", "ZZ-9", "depthM", 40, "depotCode", "DEP-QUILLAN"))))
+                .post("/api/spend/scenarios").then().statusCode(422).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("installations[0].modelCode"));
+        String name = TestData.unique("dup");
+        as("lead").contentType("application/json").body(scenario(name)).post("/api/spend/scenarios").then().statusCode(201);
+        as("lead").contentType("application/json").body(scenario(name)).post("/api/spend/scenarios").then().statusCode(409);
+        as("mechanic1").contentType("application/json").body(scenario(TestData.unique("m"))).post("/api/spend/scenarios")
+                .then().statusCode(403).contentType(PROBLEM);
+        as("officer2").contentType("application/json").body(scenario(TestData.unique("o"))).post("/api/spend/scenarios")
+                .then().statusCode(403).contentType(PROBLEM);
+    }
+}
