@@ -4,7 +4,6 @@ import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.DemandProfile;
 import org.depotcast.core.forecast.ErrorScores;
 import org.depotcast.core.forecast.ForecastMethod;
-import org.depotcast.core.forecast.PreventiveSchedule;
 import org.depotcast.core.forecast.SeriesFitter;
 import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
@@ -151,8 +150,7 @@ final class DemandAssembler {
         double hoursPerDay = pump.usage().hoursPerDayOn(origin);
         double[] hoursPerMonth = new double[horizon];
         Arrays.fill(hoursPerMonth, hoursPerDay * DAYS_PER_MONTH);
-        double since = pump.usage().hoursBetween(Math.max(pump.lastServiceDay(), pump.installedDay()), origin);
-        int[] due = PreventiveSchedule.servicesDue(since, hoursPerMonth, pump.serviceIntervalHours());
+        double[] due = pump.servicesPerMonth(origin, hoursPerMonth);
         if (Arrays.stream(due).sum() == 0) {
             return;
         }

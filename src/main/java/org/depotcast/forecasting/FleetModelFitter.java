@@ -70,7 +70,9 @@ final class FleetModelFitter {
             long[] events = eventDays.getOrDefault(pump.id(), new long[0]);
             for (int b = skipRecentBlocks; b < blocks; b++) {
                 LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
-                long from = Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay());
+                // Hours before the first repair on record would count as event-free: leave them out.
+                long from = Math.max(Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay()),
+                        snapshot.recordsStartDay());
                 long to = Math.min(blockEnd.toEpochDay(), pump.endDay());
                 double hours = pump.usage().hoursBetween(from, to);
                 if (to - from < 1 || hours < 1) {

@@ -18,10 +18,11 @@ import java.util.Map;
  * @param kitByMechanic kit location code of each mechanic
  * @param locationCodes code of each depot and kit by id
  * @param partNumbers  part number by id
+ * @param recordsStartDay epoch day of the earliest repair on record: exposure before it has no events to match
  */
 public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<PumpRecord> pumps, List<Consumption> consumption,
                      Map<String, String> kitByMechanic, Map<Long, String> locationCodes, Map<Long, String> partNumbers,
-                     Map<Long, ComponentFamily> partFamilies) {
+                     Map<Long, ComponentFamily> partFamilies, long recordsStartDay) {
 
     int months() {
         return (int) java.time.temporal.ChronoUnit.MONTHS.between(historyStart, historyEnd);
@@ -35,8 +36,28 @@ public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<P
     public record BomPart(long partId, ComponentFamily family, double serviceKitQuantity) {
     }
 
+    /**
+     * {@code serviceKnown}: a service is on record, or the records cover the pump's whole life. When not,
+     * {@code lastServiceDay} is the start of the records: no service is known since then.
+     */
     public record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
-                      int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay) {
+                      int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay,
+                      boolean serviceKnown) {
+
+        /** Services due (or expected, when the last one is unknown) in each coming month. */
+        public double[] servicesPerMonth(long origin, double[] hoursPerMonth) {
+            double since = usage.hoursBetween(Math.max(lastServiceDay, installedDay), origin);
+            if (!serviceKnown) {
+                return org.depotcast.core.forecast.PreventiveSchedule.expectedServices(hoursPerMonth, serviceIntervalHours, since);
+            }
+            int[] due = org.depotcast.core.forecast.PreventiveSchedule.servicesDue(since, hoursPerMonth, serviceIntervalHours);
+            double[] out = new double[due.length];
+            for (int m = 0; m < due.length; m++) {
+                out[m] = due[m];
+            }
+            return out;
+        }
+
         public boolean inServiceOn(long day) {
             return day >= installedDay && day < endDay;
         }

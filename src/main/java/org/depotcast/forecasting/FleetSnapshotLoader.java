@@ -57,19 +57,23 @@ public class FleetSnapshotLoader {
         }
         List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
         Map<Long, Long> lastService = new HashMap<>();
+        long firstRecord = Long.MAX_VALUE;
         for (Object[] row : repairs.consumptionRows()) {
             LocalDate day = (LocalDate) row[5];
+            firstRecord = Math.min(firstRecord, day.toEpochDay());
             boolean breakdown = row[4] == RepairKind.BREAKDOWN;
             long pumpId = (Long) row[1];
             consumption.add(new FleetSnapshot.Consumption((Long) row[0], pumpId, (Long) row[2], (String) row[3],
                     breakdown, day, ((BigDecimal) row[6]).doubleValue()));
-            if (!breakdown) {
+            // Only services before the origin count: a back-check as of a past date must not see later ones.
+            if (!breakdown && day.isBefore(historyEnd)) {
                 lastService.merge(pumpId, day.toEpochDay(), Math::max);
             }
         }
         Map<Long, PumpModel> modelsById = new HashMap<>();
         models.all().forEach(m -> modelsById.put(m.id, m));
         List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
+        long recordsStart = firstRecord;
         for (Object[] row : pumps.planningRows()) {
             long pumpId = (Long) row[0];
             LocalDate installed = (LocalDate) row[4];
@@ -90,7 +94,9 @@ public class FleetSnapshotLoader {
             }
             records.add(new FleetSnapshot.PumpRecord(pumpId, (Long) row[1], (String) row[2], depth,
                     installed.toEpochDay(), end, model.serviceIntervalHours, timeline, List.copyOf(bom),
-                    lastService.getOrDefault(pumpId, installed.toEpochDay())));
+                    lastService.getOrDefault(pumpId, Math.max(installed.toEpochDay(), recordsStart == Long.MAX_VALUE
+                            ? installed.toEpochDay() : recordsStart)),
+                    lastService.containsKey(pumpId) || installed.toEpochDay() >= recordsStart));
         }
         Map<String, String> kits = new HashMap<>();
         Map<Long, String> codes = new HashMap<>();
@@ -106,6 +112,7 @@ public class FleetSnapshotLoader {
             partNumbers.put(p.id, p.partNumber);
             families.put(p.id, p.family);
         });
-        return new FleetSnapshot(historyStart, historyEnd, records, consumption, kits, codes, partNumbers, families);
+        return new FleetSnapshot(historyStart, historyEnd, records, consumption, kits, codes, partNumbers, families,
+                recordsStart == Long.MAX_VALUE ? historyStart.toEpochDay() : recordsStart);
     }
 }

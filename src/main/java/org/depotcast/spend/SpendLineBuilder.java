@@ -61,14 +61,13 @@ final class SpendLineBuilder {
     void addFleet(FleetSnapshot snapshot, Map<Long, String> depotCodesById) {
         long origin = snapshot.historyEnd().toEpochDay();
         for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
-            if (pump.endDay() <= origin) {
+            if (pump.endDay() <= origin || pump.installedDay() > origin) {
                 continue;
             }
             double hoursPerDay = pump.usage().hoursPerDayOn(origin) * scenario.usageFactor();
             double ageNow = (origin - pump.installedDay()) / DAYS_PER_YEAR;
-            double since = pump.usage().hoursBetween(Math.max(pump.lastServiceDay(), pump.installedDay()), origin);
-            addPump(depotCodesById.get(pump.depotId()), pump.depthM(), hoursPerDay, ageNow, 0, since,
-                    pump.serviceIntervalHours(), bomOf(pump), 1.0);
+            addPump(depotCodesById.get(pump.depotId()), pump.depthM(), hoursPerDay, ageNow, 0,
+                    months -> pump.servicesPerMonth(origin, months), bomOf(pump), 1.0);
         }
     }
 
@@ -79,8 +78,9 @@ final class SpendLineBuilder {
             bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(installation.depthM())));
         }
         double hours = (installation.usageHoursPerDay() == null ? 5.0 : installation.usageHoursPerDay()) * scenario.usageFactor();
-        addPump(installation.depotCode(), installation.depthM(), hours, 0, installation.year() - 1, 0,
-                model.serviceIntervalHours, bom, installation.count());
+        addPump(installation.depotCode(), installation.depthM(), hours, 0, installation.year() - 1,
+                months -> toDoubles(PreventiveSchedule.servicesDue(0, months, model.serviceIntervalHours)), bom,
+                installation.count());
     }
 
     /** Stock needed now to reach the policy levels, bought in the first year at the central store. */
@@ -90,19 +90,28 @@ final class SpendLineBuilder {
         }
     }
 
-    private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstYear, double hoursSinceService,
-                         int serviceInterval, List<FleetSnapshot.BomPart> bom, double pumps) {
+    private static double[] toDoubles(int[] values) {
+        double[] out = new double[values.length];
+        for (int i = 0; i < values.length; i++) {
+            out[i] = values[i];
+        }
+        return out;
+    }
+
+    private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstYear,
+                         java.util.function.Function<double[], double[]> servicesPerMonth,
+                         List<FleetSnapshot.BomPart> bom, double pumps) {
         double[] monthlyHours = new double[12 * years];
         for (int m = 12 * firstYear; m < monthlyHours.length; m++) {
             int year = m / 12;
             double surviving = Math.pow(scenario.survivalPerYear(), year - firstYear + 0.5);
             monthlyHours[m] = hoursPerDay * DAYS_PER_YEAR / 12 * surviving;
         }
-        int[] services = PreventiveSchedule.servicesDue(hoursSinceService, monthlyHours, serviceInterval);
+        double[] services = servicesPerMonth.apply(monthlyHours);
         for (int y = firstYear; y < years; y++) {
             double fraction = y == firstYear && firstYear > 0 ? 0.5 : 1.0;
             double hours = 0;
-            int serviced = 0;
+            double serviced = 0;
             for (int m = 12 * y; m < 12 * y + 12; m++) {
                 hours += monthlyHours[m];
                 serviced += services[m];

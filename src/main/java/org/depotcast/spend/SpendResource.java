@@ -25,9 +25,18 @@ import java.util.Map;
 @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.STORES_OFFICER})
 class SpendResource {
     private final SpendService service;
+    private final BackCheckService backCheck;
 
-    SpendResource(SpendService service) {
+    SpendResource(SpendService service, BackCheckService backCheck) {
         this.service = service;
+        this.backCheck = backCheck;
+    }
+
+    /** Past years: the projection made with only earlier data, beside what was actually used. */
+    @GET
+    @Path("back-check")
+    public List<BackCheckService.YearCheck> backCheck(@QueryParam("years") String years) {
+        return backCheck.check(org.depotcast.common.QueryParams.intInRange("years", years, 3, 1, 5));
     }
 
     record ScenarioView(long id, String name, ScenarioDefinition definition) {

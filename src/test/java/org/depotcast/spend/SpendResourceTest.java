@@ -116,6 +116,27 @@ class SpendResourceTest {
     }
 
     @Test
+    void backCheckSetsPastProjectionsBesideWhatWasUsed() {
+        List<Map<String, Object>> checks = as("lead").get("/api/spend/back-check?years=3").then().statusCode(200)
+                .extract().jsonPath().getList("$");
+        assertEquals(3, checks.size());
+        // The demo was drawn from the planted model, so the method should track it: within 15 % every year, and
+        // inside the 95 % range once there are three or more years of records before the year checked (the first
+        // year has two, and its fit is thinner).
+        for (int i = 0; i < checks.size(); i++) {
+            Map<String, Object> c = checks.get(i);
+            double projected = ((Number) c.get("projectedMean")).doubleValue();
+            double actual = ((Number) c.get("actual")).doubleValue();
+            assertTrue(Math.abs(projected - actual) / actual < 0.15, "back-check " + c);
+            if (i > 0) {
+                assertTrue((Boolean) c.get("within95"), "back-check " + c);
+            }
+        }
+        as("lead").get("/api/spend/back-check?years=9").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("years"));
+    }
+
+    @Test
     void badScenariosAreRefused() {
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "horizonYears", 11))
                 .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("horizonYears"));

@@ -10,6 +10,39 @@ public final class PreventiveSchedule {
     }
 
     /**
+     * Expected services per month when the date of the last service is not known, only that none happened in the
+     * last {@code hoursWithoutService} operating hours on record. With the pump's place in its service cycle
+     * otherwise uniform, the next service falls uniformly within the remaining (interval − W) hours and every
+     * interval after it: E[services by H] = Σ_k clamp((H − k·interval) / (interval − W), 0, 1). With W = 0 this is
+     * the long-run renewal rate H / interval; a pump with W ≥ interval is overdue and serviced in the first month.
+     */
+    public static double[] expectedServices(double[] hoursPerMonth, double intervalHours, double hoursWithoutService) {
+        if (!(intervalHours > 0) || hoursWithoutService < 0) {
+            throw new IllegalArgumentException("intervalHours must be > 0 and hoursWithoutService ≥ 0");
+        }
+        double[] expected = new double[hoursPerMonth.length];
+        if (hoursWithoutService >= intervalHours) {
+            int[] due = servicesDue(hoursWithoutService, hoursPerMonth, intervalHours);
+            for (int m = 0; m < due.length; m++) {
+                expected[m] = due[m];
+            }
+            return expected;
+        }
+        double window = intervalHours - hoursWithoutService;
+        double cumulative = 0, before = 0;
+        for (int m = 0; m < expected.length; m++) {
+            cumulative += hoursPerMonth[m];
+            double count = 0;
+            for (int k = 0; k * intervalHours <= cumulative; k++) {
+                count += Math.min(1, Math.max(0, (cumulative - k * intervalHours) / window));
+            }
+            expected[m] = count - before;
+            before = count;
+        }
+        return expected;
+    }
+
+    /**
      * @param hoursSinceService operating hours accumulated since the last service (or installation)
      * @param hoursPerMonth     expected operating hours in each coming month
      * @param intervalHours     service interval in operating hours (&gt; 0)

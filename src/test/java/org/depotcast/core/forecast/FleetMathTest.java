@@ -26,4 +26,18 @@ class FleetMathTest {
         // overdue pumps are serviced at once
         assertArrayEquals(new int[]{1, 0, 0}, PreventiveSchedule.servicesDue(9_500, months, 9_125));
     }
+
+    @Test
+    void unknownLastServiceUsesTheRenewalRate() {
+        // 1,825 h a year (5 h/day) against 9,125 h: 0.2 services a year, 1/60 a month of 152.08 h.
+        double[] months = new double[12];
+        java.util.Arrays.fill(months, 1825.0 / 12);
+        double[] expected = PreventiveSchedule.expectedServices(months, 9_125, 0);
+        assertEquals(0.2, java.util.Arrays.stream(expected).sum(), 1e-12);
+        // No service in the last 5,475 h on record: the next falls within the remaining 3,650 h, so a year of
+        // 1,825 h expects 1,825 / 3,650 = 0.5 services (hand-worked).
+        assertEquals(0.5, java.util.Arrays.stream(PreventiveSchedule.expectedServices(months, 9_125, 5_475)).sum(), 1e-12);
+        // Overdue: serviced in the first month.
+        assertEquals(1.0, PreventiveSchedule.expectedServices(months, 9_125, 9_500)[0], 1e-12);
+    }
 }

@@ -1,0 +1,104 @@
+package org.depotcast.spend;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.core.spend.SpendDraws;
+import org.depotcast.core.spend.SpendSimulation;
+import org.depotcast.forecasting.FleetModelResponse;
+import org.depotcast.forecasting.FleetModelsAsOf;
+import org.depotcast.forecasting.FleetSnapshot;
+import org.depotcast.forecasting.FleetSnapshotLoader;
+import org.depotcast.stock.LocationService;
+
+import java.time.LocalDate;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * How good the projection has been on this programme: for each of the last complete calendar years, the one-year
+ * projection made with only the data before 1 January of that year (fleet models refitted on it, the fleet as it
+ * stood), beside what the repairs of that year actually used, both at today's catalogue prices (price history is not
+ * kept). Stock top-ups are left out: they are purchases, not use.
+ */
+@ApplicationScoped
+public class BackCheckService {
+    private static final int DRAWS = 4_000;
+
+    private final FleetSnapshotLoader fleet;
+    private final FleetModelsAsOf models;
+    private final PartService parts;
+    private final LocationService locations;
+    private final AccessScope scope;
+
+    BackCheckService(FleetSnapshotLoader fleet, FleetModelsAsOf models, PartService parts, LocationService locations,
+                     AccessScope scope) {
+        this.fleet = fleet;
+        this.models = models;
+        this.parts = parts;
+        this.locations = locations;
+        this.scope = scope;
+    }
+
+    /** {@code projectedBreakdowns}/{@code projectedServices} and {@code actualBreakdowns}/{@code actualServices} split the figures. */
+    public record YearCheck(int year, double projectedMean, double projectedP10, double projectedP90,
+                            double projectedP2_5, double projectedP97_5, double actual, boolean within80, boolean within95,
+                            double projectedBreakdowns, double projectedServices, double actualBreakdowns,
+                            double actualServices) {
+    }
+
+    @Transactional
+    public List<YearCheck> check(int years) {
+        scope.requireProgramme();
+        if (years < 1 || years > 5) {
+            throw new InvalidInputException("years", "must be between 1 and 5, was " + years);
+        }
+        Map<Long, Part> partsById = new HashMap<>();
+        parts.all().forEach(p -> partsById.put(p.id, p));
+        Map<Long, String> codes = new HashMap<>();
+        locations.all().forEach(l -> codes.put(l.id, l.code));
+        int lastComplete = LocalDate.now(ZoneOffset.UTC).getYear() - 1;
+        List<YearCheck> checks = new ArrayList<>();
+        for (int year = lastComplete - years + 1; year <= lastComplete; year++) {
+            LocalDate origin = LocalDate.of(year, 1, 1);
+            FleetSnapshot snapshot = fleet.load(origin, 36);
+            Map<ComponentFamily, FleetModelResponse> fits = models.fit(snapshot);
+            ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + year, 1, null, null, null, null, null,
+                    null, DRAWS, (long) year);
+            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, oneYear);
+            builder.addFleet(snapshot, codes);
+            var lines = builder.lines();
+            double expectedBreakdowns = 0, expectedServices = 0;
+            for (var line : lines) {
+                expectedBreakdowns += line.expectedEvents() * line.unitsPerEvent() * line.unitPrice();
+                expectedServices += line.deterministicUnits() * line.unitPrice();
+            }
+            SpendDraws draws = SpendSimulation.run(lines, 1, builder.familyNames.size(), builder.partNumbers.size(),
+                    Math.max(1, builder.depotCodes.size()), builder.groupLogSd, builder.groupDispersion, DRAWS, year);
+            SpendSimulation.Summary s = SpendSimulation.Summary.of(draws.total(0));
+            double actualBreakdowns = 0, actualServices = 0;
+            for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+                if (c.day().getYear() == year) {
+                    double spent = c.quantity() * partsById.get(c.partId()).unitCost.doubleValue();
+                    if (c.breakdown()) {
+                        actualBreakdowns += spent;
+                    } else {
+                        actualServices += spent;
+                    }
+                }
+            }
+            double actual = actualBreakdowns + actualServices;
+            checks.add(new YearCheck(year, s.mean(), s.p10(), s.p90(), s.p2_5(), s.p97_5(), actual,
+                    actual >= s.p10() && actual <= s.p90(), actual >= s.p2_5() && actual <= s.p97_5(),
+                    expectedBreakdowns, expectedServices, actualBreakdowns, actualServices));
+        }
+        return checks;
+    }
+}
