@@ -32,6 +32,10 @@ public final class PlanningRequests {
                                       @Digits(integer = 12, fraction = 2) BigDecimal budget, LocalDate planningDate) {
     }
 
+    public record LaneCostRequest(@NotBlank String from, @NotBlank String to,
+                                  @NotNull @DecimalMin(value = "0", message = "must not be negative") BigDecimal unitCost) {
+    }
+
     public record TransferRequest(@NotBlank String partNumber, @NotBlank String from, @NotBlank String to,
                                   @NotNull BigDecimal quantity) {
     }

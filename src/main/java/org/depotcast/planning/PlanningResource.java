@@ -6,6 +6,7 @@ import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PUT;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
@@ -91,6 +92,16 @@ class PlanningResource {
     @Path("transfers/suggestions")
     public List<TransferResponses.Suggestion> suggestions(@QueryParam("part") String part) {
         return transfers.suggest(part);
+    }
+
+    /** Overrides the distance-based transport cost of one lane; a negative cost is refused. */
+    @PUT
+    @Path("transfer-costs")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public Response laneCost(@Valid @NotNull PlanningRequests.LaneCostRequest r) {
+        transfers.setLaneCost(r.from(), r.to(), r.unitCost());
+        return Response.noContent().build();
     }
 
     @POST

@@ -44,14 +44,17 @@ public class TransferService {
     private final PlanningSettings settings;
     private final Orders orders;
     private final org.depotcast.access.AccessScope scope;
+    private final org.depotcast.access.AuditService audit;
 
     @ApplicationScoped
     static class Orders implements PanacheRepository<TransferOrder> {
     }
 
     TransferService(PlanningService planning, LocationService locations, PartService parts, StockLedgerService ledger,
-                    CurrentUser currentUser, PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope) {
+                    CurrentUser currentUser, PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope,
+                    org.depotcast.access.AuditService audit) {
         this.scope = scope;
+        this.audit = audit;
         this.planning = planning;
         this.locations = locations;
         this.parts = parts;
@@ -106,10 +109,12 @@ public class TransferService {
         }
         double[][] cost = new double[donors.size()][receivers.size()];
         double[][] km = new double[donors.size()][receivers.size()];
+        Map<String, Double> lanes = laneCosts();
         for (int i = 0; i < donors.size(); i++) {
             for (int j = 0; j < receivers.size(); j++) {
                 km[i][j] = distanceKm(donors.get(i), receivers.get(j));
-                cost[i][j] = km[i][j] * settings.transferCostPerUnitKm();
+                Double set = lanes.get(donors.get(i).id + ">" + receivers.get(j).id);
+                cost[i][j] = set != null ? set : km[i][j] * settings.transferCostPerUnitKm();
             }
         }
         double pumpDaysPerUnit = (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
@@ -122,6 +127,33 @@ public class TransferService {
         }
         out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
         return out;
+    }
+
+    /** Per-unit costs set for particular lanes, keyed "fromId>toId"; other lanes use the distance-based default. */
+    private Map<String, Double> laneCosts() {
+        Map<String, Double> lanes = new HashMap<>();
+        for (Object row : orders.getEntityManager().createNativeQuery("select from_id, to_id, unit_cost from transfer_lane_cost")
+                .getResultList()) {
+            Object[] r = (Object[]) row;
+            lanes.put(((Number) r[0]).longValue() + ">" + ((Number) r[1]).longValue(), ((Number) r[2]).doubleValue());
+        }
+        return lanes;
+    }
+
+    /** Sets the per-unit transport cost of one lane (programme lead or admin). */
+    @Transactional
+    public void setLaneCost(String fromCode, String toCode, BigDecimal unitCost) {
+        Location from = locations.require("from", fromCode);
+        Location to = locations.require("to", toCode);
+        if (from.id.equals(to.id)) {
+            throw new BusinessRuleException("to", "a lane joins two different stores");
+        }
+        var em = orders.getEntityManager();
+        em.createNativeQuery("delete from transfer_lane_cost where from_id = ?1 and to_id = ?2")
+                .setParameter(1, from.id).setParameter(2, to.id).executeUpdate();
+        em.createNativeQuery("insert into transfer_lane_cost (from_id, to_id, unit_cost) values (?1, ?2, ?3)")
+                .setParameter(1, from.id).setParameter(2, to.id).setParameter(3, unitCost).executeUpdate();
+        audit.record("LANE_COST_SET", "transfer_lane", fromCode + ">" + toCode, null, java.util.Map.of("unitCost", unitCost));
     }
 
     private static double distanceKm(Location a, Location b) {

@@ -146,6 +146,23 @@ class PlanningResourceTest {
     }
 
     @Test
+    void laneCostsAreSetAndNeverNegative() {
+        as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "unitCost", -1))
+                .put("/api/planning/transfer-costs").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("unitCost"));
+        as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "NOWHERE", "unitCost", 1))
+                .put("/api/planning/transfer-costs").then().statusCode(422).contentType(PROBLEM);
+        as("officer").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "unitCost", 1))
+                .put("/api/planning/transfer-costs").then().statusCode(403);
+        as("lead").contentType("application/json").body(Map.of("from", "DEP-QUILLAN", "to", "DEP-MARROWFORD", "unitCost", 0.75))
+                .put("/api/planning/transfer-costs").then().statusCode(204);
+        List<Map<String, Object>> suggestions = as("officer").get("/api/planning/transfers/suggestions")
+                .then().statusCode(200).extract().jsonPath().getList("$");
+        suggestions.stream().filter(s -> "DEP-QUILLAN".equals(s.get("from")) && "DEP-MARROWFORD".equals(s.get("to")))
+                .forEach(s -> assertEquals(0.75, ((Number) s.get("unitCost")).doubleValue(), 1e-9));
+    }
+
+    @Test
     void acceptedTransferMovesThroughTransitAndIsReceivedOnce() {
         BigDecimal fromBefore = stock.onHand("OB-CS-63", "DEP-TESHVALE");
         BigDecimal toBefore = stock.onHand("OB-CS-63", "DEP-QUILLAN");
