@@ -32,6 +32,9 @@ public final class PlanningRequests {
                                       @Digits(integer = 12, fraction = 2) BigDecimal budget, LocalDate planningDate) {
     }
 
+    public record ServiceLevelRequest(@NotBlank String partClass, @NotNull Double level) {
+    }
+
     public record LaneCostRequest(@NotBlank String from, @NotBlank String to,
                                   @NotNull @DecimalMin(value = "0", message = "must not be negative") BigDecimal unitCost) {
     }

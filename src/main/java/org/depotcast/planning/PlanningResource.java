@@ -94,6 +94,15 @@ class PlanningResource {
         return transfers.suggest(part);
     }
 
+    @PUT
+    @Path("service-levels")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public Response serviceLevel(@Valid @NotNull PlanningRequests.ServiceLevelRequest r) {
+        planning.setServiceLevel(r.partClass(), r.level());
+        return Response.noContent().build();
+    }
+
     /** Overrides the distance-based transport cost of one lane; a negative cost is refused. */
     @PUT
     @Path("transfer-costs")

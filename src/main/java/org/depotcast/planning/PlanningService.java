@@ -40,6 +40,7 @@ public class PlanningService {
     private final AlertActionRepository actions;
     private final CurrentUser currentUser;
     private final PolicyCalculator calculator;
+    private final PlanningSettings settings;
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
     private final org.depotcast.requests.RequestService requests;
@@ -59,6 +60,7 @@ public class PlanningService {
         this.actions = actions;
         this.currentUser = currentUser;
         this.calculator = new PolicyCalculator(settings);
+        this.settings = settings;
     }
 
     /** Policies of every part with stock, stock on order or forecast demand at the location. */
@@ -77,6 +79,7 @@ public class PlanningService {
             onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
         }
         Map<String, java.math.BigDecimal> committed = requests.committed();
+        PolicyCalculator.ServiceLevels levels = serviceLevels(null);
         List<StockPolicy> policies = new ArrayList<>();
         for (Part part : parts.all()) {
             ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
@@ -87,7 +90,8 @@ public class PlanningService {
             policies.add(calculator.policy(part, location.code, location.kind, rate == null ? 0 : rate.monthlyMean(),
                     rate == null ? 0 : rate.monthlyVariance(), rate == null ? "none" : rate.method(),
                     held == null ? 0 : held[0], held == null ? 0 : held[1],
-                    committed.getOrDefault(location.code + "|" + part.partNumber, java.math.BigDecimal.ZERO).doubleValue()));
+                    committed.getOrDefault(location.code + "|" + part.partNumber, java.math.BigDecimal.ZERO).doubleValue(),
+                    levels));
         }
         return policies;
     }
@@ -98,7 +102,14 @@ public class PlanningService {
      */
     @Transactional
     public List<StockPolicy> programmePolicies() {
+        return programmePolicies(null);
+    }
+
+    /** As {@link #programmePolicies()}, with one cycle service level for every part when {@code serviceLevel} is given. */
+    @Transactional
+    public List<StockPolicy> programmePolicies(Double serviceLevel) {
         scope.requireProgramme();
+        PolicyCalculator.ServiceLevels levels = serviceLevels(serviceLevel);
         Location central = locations.ofKind(LocationKind.CENTRAL_STORE).stream().findFirst()
                 .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
@@ -115,9 +126,41 @@ public class PlanningService {
             double[] held = echelon.getOrDefault(part.partNumber, new double[3]);
             policies.add(calculator.policy(part, central.code, LocationKind.CENTRAL_STORE,
                     rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
-                    rate == null ? "none" : rate.method(), held[0], held[1], 0));
+                    rate == null ? "none" : rate.method(), held[0], held[1], 0, levels));
         }
         return policies;
+    }
+
+    /** The levels in force: a scenario's override, else the lead's settings, else the configured defaults. */
+    PolicyCalculator.ServiceLevels serviceLevels(Double override) {
+        if (override != null) {
+            return new PolicyCalculator.ServiceLevels(override, override);
+        }
+        Map<String, Double> set = new HashMap<>();
+        for (Object row : actions.getEntityManager().createNativeQuery("select part_class, level from service_level").getResultList()) {
+            Object[] r = (Object[]) row;
+            set.put((String) r[0], ((Number) r[1]).doubleValue());
+        }
+        return new PolicyCalculator.ServiceLevels(set.getOrDefault("CRITICAL", settings.serviceLevelCritical()),
+                set.getOrDefault("STANDARD", settings.serviceLevelStandard()));
+    }
+
+    /** The programme lead sets the target cycle service level of critical or standard parts. */
+    @Transactional
+    public void setServiceLevel(String partClass, double level) {
+        if (!partClass.equals("CRITICAL") && !partClass.equals("STANDARD")) {
+            throw new InvalidInputException("partClass", "must be CRITICAL or STANDARD, was '" + partClass + "'");
+        }
+        if (!(level > 0 && level < 1)) {
+            throw new InvalidInputException("level", "must be in (0, 1), was " + level);
+        }
+        PolicyCalculator.ServiceLevels before = serviceLevels(null);
+        var em = actions.getEntityManager();
+        em.createNativeQuery("delete from service_level where part_class = ?1").setParameter(1, partClass).executeUpdate();
+        em.createNativeQuery("insert into service_level (part_class, level, set_by, set_at) values (?1, ?2, ?3, ?4)")
+                .setParameter(1, partClass).setParameter(2, level).setParameter(3, currentUser.name())
+                .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate();
+        audit.record("SERVICE_LEVEL_SET", "service_level", partClass, before, Map.of("level", level));
     }
 
     /** Alerts at one location (or every depot and the central store), worst consequence first. */

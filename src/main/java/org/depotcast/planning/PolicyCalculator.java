@@ -30,8 +30,15 @@ final class PolicyCalculator {
                 : DemandDistribution.fromMoments(mean, variance);
     }
 
+    /** Service levels in force: for critical parts and the rest. */
+    record ServiceLevels(double critical, double standard) {
+        double of(Part part) {
+            return part.critical ? critical : standard;
+        }
+    }
+
     StockPolicy policy(Part part, String locationCode, LocationKind level, double monthlyMean, double monthlyVariance,
-                       String method, double onHand, double onOrder, double committed) {
+                       String method, double onHand, double onOrder, double committed, ServiceLevels levels) {
         int protection = switch (level) {
             case CENTRAL_STORE -> part.leadTimeDays + settings.centralReviewDays();
             case DEPOT -> settings.depotTransferLeadDays() + settings.depotReviewDays();
@@ -42,7 +49,7 @@ final class PolicyCalculator {
         double leadSd = level == LocationKind.CENTRAL_STORE ? settings.supplierLeadTimeCv() * part.leadTimeDays : 0;
         double[] moments = ReorderPoint.leadTimeMoments(daily, dailyVariance, protection, leadSd);
         DemandDistribution demand = distribution(moments[0], moments[1]);
-        double serviceLevel = part.critical ? settings.serviceLevelCritical() : settings.serviceLevelStandard();
+        double serviceLevel = levels.of(part);
         double annual = daily * 365.25;
         double quantity;
         if (level == LocationKind.KIT) {

@@ -71,7 +71,7 @@ public class BackCheckService {
             FleetSnapshot snapshot = fleet.load(origin, 36);
             Map<ComponentFamily, FleetModelResponse> fits = models.fit(snapshot);
             ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + year, 1, null, null, null, null, null,
-                    null, DRAWS, (long) year);
+                    null, null, DRAWS, (long) year);
             SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, oneYear);
             builder.addFleet(snapshot, codes);
             var lines = builder.lines();

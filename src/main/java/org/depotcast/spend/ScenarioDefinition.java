@@ -20,6 +20,8 @@ import java.util.List;
  * @param usageChangePercent         change of every pump's daily load, e.g. 10 for 10 % more use
  * @param priceEscalationPercentPerYear price rise per year, compounded from year 2
  * @param currency                   projection currency; {@code exchangeRate} converts catalogue prices into it
+ * @param serviceLevel               one cycle service level for every part, for the year-1 stock top-up (else the
+ *                                   levels in force)
  */
 public record ScenarioDefinition(
         @NotBlank @Size(max = 120) String name,
@@ -30,6 +32,7 @@ public record ScenarioDefinition(
         @DecimalMin("-50") @DecimalMax("200") Double priceEscalationPercentPerYear,
         @Pattern(regexp = "[A-Z]{3}", message = "must be a three-letter ISO 4217 code") String currency,
         @DecimalMin(value = "0", inclusive = false) Double exchangeRate,
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "1", inclusive = false) Double serviceLevel,
         @Min(1000) @Max(100000) Integer draws,
         Long seed) {
 

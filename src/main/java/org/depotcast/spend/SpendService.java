@@ -232,7 +232,7 @@ public class SpendService {
                 builder.addInstallation(inst, model);
             }
             String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
-            for (StockPolicy p : planning.programmePolicies()) {
+            for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
                 Part part = parts.require("partNumber", p.partNumber());
                 builder.addTopUp(central, p.partNumber(), part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
             }

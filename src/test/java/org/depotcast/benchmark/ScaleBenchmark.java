@@ -102,7 +102,7 @@ class ScaleBenchmark {
 
         // Issue 6 figure: a 5-year projection with 10,000 Monte Carlo draws at the same scale.
         long scenario = spend.save(new org.depotcast.spend.ScenarioDefinition("scale five years", 5, null, 2.0, null, 5.0,
-                null, null, 10_000, 42L)).id;
+                null, null, null, 10_000, 42L)).id;
         double[] spendSeconds = new double[3];
         for (int round = 0; round < spendSeconds.length; round++) {
             long spendStart = System.nanoTime();

@@ -146,6 +146,31 @@ class PlanningResourceTest {
     }
 
     @Test
+    void theLeadSetsServiceLevelsAndPoliciesFollow() {
+        double before = policyOf("OB-CS-50", "DEP-TESHVALE").get("reorderPoint");
+        as("lead").contentType("application/json").body(Map.of("partClass", "CRITICAL", "level", 0.999))
+                .put("/api/planning/service-levels").then().statusCode(204);
+        Map<String, Double> after = policyOf("OB-CS-50", "DEP-TESHVALE");
+        assertEquals(0.999, after.get("serviceLevel"), 1e-6); // read back through a JSON float
+        assertTrue(after.get("reorderPoint") >= before);
+        as("lead").contentType("application/json").body(Map.of("partClass", "CRITICAL", "level", 0.98))
+                .put("/api/planning/service-levels").then().statusCode(204);
+        as("lead").contentType("application/json").body(Map.of("partClass", "CRITICAL", "level", 1.2))
+                .put("/api/planning/service-levels").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("level"));
+        as("officer").contentType("application/json").body(Map.of("partClass", "STANDARD", "level", 0.9))
+                .put("/api/planning/service-levels").then().statusCode(403);
+    }
+
+    private static Map<String, Double> policyOf(String part, String location) {
+        List<Map<String, Object>> policies = as("lead").queryParam("location", location).get("/api/planning/policies")
+                .then().statusCode(200).extract().jsonPath().getList("$");
+        Map<String, Object> p = policies.stream().filter(x -> part.equals(x.get("partNumber"))).findFirst().orElseThrow();
+        return Map.of("reorderPoint", ((Number) p.get("reorderPoint")).doubleValue(),
+                "serviceLevel", ((Number) p.get("serviceLevel")).doubleValue());
+    }
+
+    @Test
     void laneCostsAreSetAndNeverNegative() {
         as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "unitCost", -1))
                 .put("/api/planning/transfer-costs").then().statusCode(400).contentType(PROBLEM)

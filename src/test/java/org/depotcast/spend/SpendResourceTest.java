@@ -97,6 +97,11 @@ class SpendResourceTest {
         double atQuillan = grown.getDouble("years[1].depots.DEP-QUILLAN.mean") - base.getDouble("years[1].depots.DEP-QUILLAN.mean");
         assertTrue(increase > 0.05 * base.getDouble("years[1].total.mean"), "increase " + increase);
         assertTrue(atQuillan > 0.8 * increase, "increase at the new pumps' depot " + atQuillan + " of " + increase);
+        // A higher service level buys more stock in year 1 only.
+        JsonPath safer = runToEnd(scenario(TestData.unique("safer"), "serviceLevel", 0.995));
+        assertTrue(safer.getDouble("years[0].total.mean") > base.getDouble("years[0].total.mean"));
+        assertEquals(base.getDouble("years[2].total.mean"), safer.getDouble("years[2].total.mean"),
+                1e-6 * base.getDouble("years[2].total.mean"));
     }
 
     @Test
