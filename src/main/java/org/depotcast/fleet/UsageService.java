@@ -23,8 +23,10 @@ public class UsageService {
 
     private final UsageReadingRepository readings;
     private final PumpService pumps;
+    private final org.depotcast.access.AuditService audit;
 
-    UsageService(UsageReadingRepository readings, PumpService pumps) {
+    UsageService(UsageReadingRepository readings, PumpService pumps, org.depotcast.access.AuditService audit) {
+        this.audit = audit;
         this.readings = readings;
         this.pumps = pumps;
     }
@@ -46,6 +48,7 @@ public class UsageService {
         }
         UsageReading reading = add(pump, request.readOn(), request.hoursPerDay(), request.source());
         refreshCurrentUsage(pump);
+        audit.record("USAGE_RECORDED", "pump", assetId, null, request);
         return reading;
     }
 
@@ -91,6 +94,9 @@ public class UsageService {
             pump.usageHoursPerDay = (BigDecimal) newest[0];
             pump.usageSource = (UsageSource) newest[1];
         }
+        // A history import is one change: one entry with its size, not one per reading.
+        audit.record("USAGE_IMPORTED", "usage_reading", rows.size() + " rows", null, java.util.Map.of("rows", rows.size(),
+                "pumps", pumpCache.size()));
         return rows.size();
     }
 

@@ -44,9 +44,11 @@ public class RepairService {
     private final LocationService locations;
     private final StockLedgerService ledger;
     private final CurrentUser currentUser;
+    private final org.depotcast.access.AuditService audit;
 
     RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
-                  StockLedgerService ledger, CurrentUser currentUser) {
+                  StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit) {
+        this.audit = audit;
         this.repairs = repairs;
         this.pumps = pumps;
         this.parts = parts;
@@ -131,7 +133,9 @@ public class RepairService {
         if (repair.ledgerPosted) {
             consumeFromKit(repair);
         }
-        return new Recorded(RepairResponse.from(repair), false);
+        RepairResponse recorded = RepairResponse.from(repair);
+        audit.record("REPAIR_RECORDED", "repair", repair.repairRef, null, recorded);
+        return new Recorded(recorded, false);
     }
 
     private void consumeFromKit(Repair repair) {
@@ -164,6 +168,8 @@ public class RepairService {
             readRow(row, pumpsById, partsByNumber, storedRefs, visible, byRef);
         }
         table.problems().throwIfAny();
+        audit.record("REPAIRS_IMPORTED", "repair", byRef.size() + " repairs", null,
+                java.util.Map.of("repairs", byRef.size(), "rows", table.rows().size()));
         int written = 0;
         for (Repair repair : byRef.values()) {
             repairs.persist(repair);

@@ -24,9 +24,11 @@ public class LocationService {
             "mechanic_username");
 
     private final LocationRepository locations;
+    private final org.depotcast.access.AuditService audit;
 
-    LocationService(LocationRepository locations) {
+    LocationService(LocationRepository locations, org.depotcast.access.AuditService audit) {
         this.locations = locations;
+        this.audit = audit;
     }
 
     public List<Location> all() {
@@ -128,7 +130,9 @@ public class LocationService {
         };
     }
 
-    private static void apply(Location location, LocationRequest r, Location parent) {
+    private void apply(Location location, LocationRequest r, Location parent) {
+        audit.record(location.id == null ? "LOCATION_CREATED" : "LOCATION_UPDATED", "location", r.code(),
+                location.id == null ? null : LocationResponse.from(location), r);
         if (r.kind() != LocationKind.KIT && r.mechanicUsername() != null) {
             throw new InvalidInputException("mechanicUsername", "only a kit is carried by a mechanic");
         }

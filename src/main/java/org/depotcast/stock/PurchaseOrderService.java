@@ -32,9 +32,12 @@ public class PurchaseOrderService {
     private final LocationService locations;
     private final StockLedgerService ledger;
     private final org.depotcast.access.AccessScope scope;
+    private final org.depotcast.access.AuditService audit;
 
     PurchaseOrderService(PurchaseOrderRepository orders, PartService parts, LocationService locations,
-                         StockLedgerService ledger, org.depotcast.access.AccessScope scope) {
+                         StockLedgerService ledger, org.depotcast.access.AccessScope scope,
+                         org.depotcast.access.AuditService audit) {
+        this.audit = audit;
         this.scope = scope;
         this.orders = orders;
         this.parts = parts;
@@ -96,6 +99,7 @@ public class PurchaseOrderService {
             order.addLine(line);
         }
         orders.persist(order);
+        audit.record("PURCHASE_ORDER_PLACED", "purchase_order", order.orderNumber, null, request);
         return order;
     }
 
@@ -131,6 +135,8 @@ public class PurchaseOrderService {
             throw new BusinessRuleException("orderNumber", "only an open order can be cancelled; this one is " + order.status);
         }
         order.status = PurchaseOrderStatus.CANCELLED;
+        audit.record("PURCHASE_ORDER_CANCELLED", "purchase_order", order.orderNumber, PurchaseOrderStatus.OPEN,
+                PurchaseOrderStatus.CANCELLED);
         return order;
     }
 
