@@ -70,10 +70,10 @@ public class ForecastQueryService {
 
     @Transactional
     public StoredForecastResponse forPart(String partNumber, String locationCode) {
-        ForecastRun run = latestRun();
-        Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         String location = locationCode == null ? DemandAssembler.PROGRAMME : locationCode;
         requireVisible(location);
+        ForecastRun run = latestRun();
+        Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         PartForecast f = repository.forecastOf(run.id, part.id, location).orElseThrow(() ->
                 new EntityMissingException(null, "forecast of part at location", partNumber + " @ " + location));
         return response(run, part.partNumber, f);
