@@ -15,7 +15,6 @@ import jakarta.ws.rs.core.MediaType;
 import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
-import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 

@@ -3,7 +3,6 @@ package org.depotcast.forecasting;
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.catalogue.ComponentFamily;
 
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.LinkedHashMap;

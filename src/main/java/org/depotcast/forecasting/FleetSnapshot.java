@@ -43,24 +43,15 @@ public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<P
     public record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
                       int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay,
                       boolean serviceKnown) {
-
         /** Services due (or expected, when the last one is unknown) in each coming month. */
         public double[] servicesPerMonth(long origin, double[] hoursPerMonth) {
             double since = usage.hoursBetween(Math.max(lastServiceDay, installedDay), origin);
             if (!serviceKnown) {
                 return org.depotcast.core.forecast.PreventiveSchedule.expectedServices(hoursPerMonth, serviceIntervalHours, since);
             }
-            int[] due = org.depotcast.core.forecast.PreventiveSchedule.servicesDue(since, hoursPerMonth, serviceIntervalHours);
-            double[] out = new double[due.length];
-            for (int m = 0; m < due.length; m++) {
-                out[m] = due[m];
-            }
-            return out;
+            return org.depotcast.core.forecast.PreventiveSchedule.servicesDuePerMonth(since, hoursPerMonth, serviceIntervalHours);
         }
 
-        public boolean inServiceOn(long day) {
-            return day >= installedDay && day < endDay;
-        }
     }
 
     public record Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,

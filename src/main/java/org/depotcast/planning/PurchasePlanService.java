@@ -4,7 +4,6 @@ import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;

@@ -2,11 +2,8 @@ package org.depotcast.repairs;
 
 import jakarta.annotation.security.RolesAllowed;
 import jakarta.validation.Valid;
-import jakarta.validation.constraints.Max;
-import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
-import jakarta.ws.rs.DefaultValue;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
 import jakarta.ws.rs.Path;
@@ -20,7 +17,6 @@ import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 
-import java.time.LocalDate;
 import java.util.List;
 
 @Path("/api/repairs")

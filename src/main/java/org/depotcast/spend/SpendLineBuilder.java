@@ -67,7 +67,7 @@ final class SpendLineBuilder {
             double hoursPerDay = pump.usage().hoursPerDayOn(origin) * scenario.usageFactor();
             double ageNow = (origin - pump.installedDay()) / DAYS_PER_YEAR;
             addPump(depotCodesById.get(pump.depotId()), pump.depthM(), hoursPerDay, ageNow, 0,
-                    months -> pump.servicesPerMonth(origin, months), bomOf(pump), 1.0);
+                    months -> pump.servicesPerMonth(origin, months), pump.bom(), 1.0);
         }
     }
 
@@ -79,23 +79,15 @@ final class SpendLineBuilder {
         }
         double hours = (installation.usageHoursPerDay() == null ? 5.0 : installation.usageHoursPerDay()) * scenario.usageFactor();
         addPump(installation.depotCode(), installation.depthM(), hours, 0, installation.year() - 1,
-                months -> toDoubles(PreventiveSchedule.servicesDue(0, months, model.serviceIntervalHours)), bom,
+                months -> PreventiveSchedule.servicesDuePerMonth(0, months, model.serviceIntervalHours), bom,
                 installation.count());
     }
 
     /** Stock needed now to reach the policy levels, bought in the first year at the central store. */
-    void addTopUp(String centralCode, String partNumber, long partId, double units) {
+    void addTopUp(String centralCode, long partId, double units) {
         if (units > 0) {
             cell(0, partsById.get(partId), centralCode)[1] += units;
         }
-    }
-
-    private static double[] toDoubles(int[] values) {
-        double[] out = new double[values.length];
-        for (int i = 0; i < values.length; i++) {
-            out[i] = values[i];
-        }
-        return out;
     }
 
     private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstYear,
@@ -155,10 +147,6 @@ final class SpendLineBuilder {
             return depotCodes.size() - 1;
         });
         return cells.computeIfAbsent(year + "|" + part.id + "|" + depot, k -> new double[]{0, 0, 1});
-    }
-
-    private static List<FleetSnapshot.BomPart> bomOf(FleetSnapshot.PumpRecord pump) {
-        return pump.bom();
     }
 
     SpendLine[] lines() {

@@ -234,7 +234,7 @@ public class SpendService {
             String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
             for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
                 Part part = parts.require("partNumber", p.partNumber());
-                builder.addTopUp(central, p.partNumber(), part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+                builder.addTopUp(central, part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
             }
             SpendLine[] lines = builder.lines();
             phase(runId, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");

@@ -15,14 +15,4 @@ public record MovementCommand(MovementKind kind, String partNumber, String fromC
                                      BigDecimal quantity, String reference) {
         return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, null, null, reference, null, null, null);
     }
-
-    public MovementCommand withLinks(Long purchaseOrderLineId, Long repairId, String idempotencyKey) {
-        return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, occurredAt, reason, reference,
-                idempotencyKey, purchaseOrderLineId, repairId);
-    }
-
-    public MovementCommand at(OffsetDateTime when) {
-        return new MovementCommand(kind, partNumber, fromCode, toCode, quantity, when, reason, reference,
-                idempotencyKey, purchaseOrderLineId, repairId);
-    }
 }

@@ -2,11 +2,8 @@ package org.depotcast.stock;
 
 import jakarta.annotation.security.RolesAllowed;
 import jakarta.validation.Valid;
-import jakarta.validation.constraints.Max;
-import jakarta.validation.constraints.Min;
 import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
-import jakarta.ws.rs.DefaultValue;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
 import jakarta.ws.rs.Path;
@@ -19,7 +16,6 @@ import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 
-import java.time.OffsetDateTime;
 import java.util.List;
 
 @Path("/api/stock")

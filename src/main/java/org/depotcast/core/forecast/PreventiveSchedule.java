@@ -22,11 +22,7 @@ public final class PreventiveSchedule {
         }
         double[] expected = new double[hoursPerMonth.length];
         if (hoursWithoutService >= intervalHours) {
-            int[] due = servicesDue(hoursWithoutService, hoursPerMonth, intervalHours);
-            for (int m = 0; m < due.length; m++) {
-                expected[m] = due[m];
-            }
-            return expected;
+            return servicesDuePerMonth(hoursWithoutService, hoursPerMonth, intervalHours);
         }
         double window = intervalHours - hoursWithoutService;
         double cumulative = 0, before = 0;
@@ -40,6 +36,16 @@ public final class PreventiveSchedule {
             before = count;
         }
         return expected;
+    }
+
+    /** {@link #servicesDue} as numbers, the form in which expected and known services are added up. */
+    public static double[] servicesDuePerMonth(double hoursSinceService, double[] hoursPerMonth, double intervalHours) {
+        int[] due = servicesDue(hoursSinceService, hoursPerMonth, intervalHours);
+        double[] out = new double[due.length];
+        for (int m = 0; m < due.length; m++) {
+            out[m] = due[m];
+        }
+        return out;
     }
 
     /**
