@@ -16,10 +16,10 @@ import static org.hamcrest.Matchers.hasItems;
 import static org.hamcrest.Matchers.hasSize;
 
 @QuarkusTest
-class CatalogueResourceTest {
+public class CatalogueResourceTest {
     private static final String PROBLEM = "application/problem+json";
 
-    static Map<String, Object> part(String number) {
+    public static Map<String, Object> part(String number) {
         Map<String, Object> body = new HashMap<>();
         body.put("partNumber", number);
         body.put("description", "Cup seal for tests");

@@ -142,6 +142,40 @@ class SpendResourceTest {
     }
 
     @Test
+    void aFailedRunLeavesEarlierResultsUntouched() throws Exception {
+        long scenario = as("lead").contentType("application/json").body(scenario(TestData.unique("kept")))
+                .post("/api/spend/scenarios").then().statusCode(201).extract().jsonPath().getLong("id");
+        long good = startAndWait(scenario);
+        String before = as("lead").get("/api/spend/runs/" + good + "/results").then().statusCode(200).extract().asString();
+        // A part priced in a second currency makes a run fail (no rate between the two is known).
+        String odd = TestData.unique("EURPART").toUpperCase();
+        Map<String, Object> part = new HashMap<>(org.depotcast.catalogue.CatalogueResourceTest.part(odd));
+        part.put("currency", "EUR");
+        as("officer").contentType("application/json").body(part).post("/api/parts").then().statusCode(201);
+        try {
+            long failed = startAndWait(scenario);
+            as("lead").get("/api/spend/runs/" + failed).then().body("status", equalTo("FAILED"))
+                    .body("message", containsString("EUR"));
+            as("lead").get("/api/spend/runs/" + failed + "/results").then().statusCode(422).contentType(PROBLEM);
+            assertEquals(before, as("lead").get("/api/spend/runs/" + good + "/results").then().statusCode(200)
+                    .extract().asString());
+        } finally {
+            part.put("currency", "USD");
+            part.put("version", 0);
+            as("officer").contentType("application/json").body(part).put("/api/parts/" + odd).then().statusCode(200);
+        }
+    }
+
+    private static long startAndWait(long scenario) throws InterruptedException {
+        long run = as("lead").post("/api/spend/scenarios/" + scenario + "/runs").then().statusCode(202)
+                .extract().jsonPath().getLong("id");
+        for (int i = 0; i < 600 && "RUNNING".equals(as("lead").get("/api/spend/runs/" + run).jsonPath().getString("status")); i++) {
+            Thread.sleep(100);
+        }
+        return run;
+    }
+
+    @Test
     void badScenariosAreRefused() {
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "horizonYears", 11))
                 .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("horizonYears"));
