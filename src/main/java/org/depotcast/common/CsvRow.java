@@ -138,11 +138,10 @@ public final class CsvRow {
         if (value == null) {
             return null;
         }
-        try {
-            return Enum.valueOf(type, value.toUpperCase(Locale.ROOT).replace('-', '_'));
-        } catch (IllegalArgumentException e) {
-            reject(column, "must be one of " + java.util.Arrays.toString(type.getEnumConstants()) + ", was '" + value + "'");
-            return null;
+        E parsed = EnumNames.parse(type, value).orElse(null);
+        if (parsed == null) {
+            reject(column, "must be one of " + EnumNames.allowed(type) + ", was '" + value + "'");
         }
+        return parsed;
     }
 }

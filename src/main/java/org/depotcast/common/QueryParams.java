@@ -3,8 +3,6 @@ package org.depotcast.common;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.format.DateTimeParseException;
-import java.util.Arrays;
-import java.util.Locale;
 
 /**
  * Typed query parameters that fail with a 400 naming the parameter. JAX-RS would answer a failed conversion of a
@@ -18,12 +16,8 @@ public final class QueryParams {
         if (value == null || value.isBlank()) {
             return null;
         }
-        try {
-            return Enum.valueOf(type, value.strip().toUpperCase(Locale.ROOT).replace('-', '_'));
-        } catch (IllegalArgumentException e) {
-            throw new InvalidInputException(name, "must be one of " + Arrays.toString(type.getEnumConstants())
-                    + ", was '" + value + "'");
-        }
+        return EnumNames.parse(type, value).orElseThrow(() -> new InvalidInputException(name,
+                "must be one of " + EnumNames.allowed(type) + ", was '" + value + "'"));
     }
 
     public static LocalDate optionalDate(String name, String value) {

@@ -49,6 +49,7 @@ final class DemandAssembler {
         this.holdoutModels = holdoutModels;
         this.horizon = horizon;
         this.months = snapshot.months();
+        collect();
     }
 
     /** Series keys are "partId|locationCode". */
@@ -68,17 +69,10 @@ final class DemandAssembler {
     }
 
     int seriesCount() {
-        collect();
         return history.size();
     }
 
-    private boolean collected;
-
     private void collect() {
-        if (collected) {
-            return;
-        }
-        collected = true;
         for (FleetSnapshot.Consumption c : snapshot.consumption()) {
             int m = snapshot.monthIndex(c.day());
             if (!c.breakdown() || m < 0 || m >= months) {
@@ -170,7 +164,6 @@ final class DemandAssembler {
 
     /** Forecasts every series; {@code progress} is told after each one. */
     List<PartForecastResult> assemble(IntConsumer progress) {
-        collect();
         // Series are independent and the maps are read-only from here on: use every core.
         java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
         return history.entrySet().parallelStream().map(entry -> {

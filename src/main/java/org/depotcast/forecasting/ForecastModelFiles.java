@@ -132,11 +132,7 @@ public class ForecastModelFiles {
     }
 
     private static <E extends Enum<E>> E parseEnum(String file, String field, String value, Class<E> type) {
-        try {
-            return Enum.valueOf(type, value.toUpperCase(Locale.ROOT).replace('-', '_'));
-        } catch (IllegalArgumentException e) {
-            throw new MalformedModelFile(file, field, "'" + value + "' is not one of "
-                    + java.util.Arrays.toString(type.getEnumConstants()).toLowerCase(Locale.ROOT));
-        }
+        return org.depotcast.common.EnumNames.parse(type, value).orElseThrow(() -> new MalformedModelFile(file, field,
+                "'" + value + "' is not one of " + org.depotcast.common.EnumNames.allowed(type).toLowerCase(Locale.ROOT)));
     }
 }

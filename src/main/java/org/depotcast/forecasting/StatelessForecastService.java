@@ -69,8 +69,8 @@ public class StatelessForecastService {
         for (double p : QUANTILES) {
             quantiles.add(new SeriesResponse.Quantile(p, total.quantile(p)));
         }
-        return new SeriesResponse(f.forecast(), f.method().name().toLowerCase(Locale.ROOT), finite(f.alpha()),
-                finite(f.beta()), finite(f.profile().adi()), finite(f.profile().cv2()),
+        return new SeriesResponse(f.forecast(), f.method().name().toLowerCase(Locale.ROOT), ForecastRecords.finite(f.alpha()),
+                ForecastRecords.finite(f.beta()), ForecastRecords.finite(f.profile().adi()), ForecastRecords.finite(f.profile().cv2()),
                 f.profile().demandClass().name().toLowerCase(Locale.ROOT), f.profile().periods(), f.profile().demands(),
                 scores, new SeriesResponse.HorizonDemand(total.name(), total.mean(), total.variance(), quantiles));
     }
@@ -142,7 +142,7 @@ public class StatelessForecastService {
         terms.add("intercept");
         terms.addAll(names);
         return new RateFitResponse(named(terms, fit.coefficients()), named(terms, fit.standardErrors()), fit.deviance(),
-                fit.dfResidual(), finite(fit.dispersion()), fit.overdispersed(), named(terms, fit.adjustedStandardErrors()),
+                fit.dfResidual(), ForecastRecords.finite(fit.dispersion()), fit.overdispersed(), named(terms, fit.adjustedStandardErrors()),
                 fit.iterations());
     }
 
@@ -155,11 +155,7 @@ public class StatelessForecastService {
     }
 
     private static SeriesResponse.Scores scores(ErrorScores s) {
-        return new SeriesResponse.Scores(finite(s.mase()), finite(s.rmsse()), finite(s.scaledBias()));
-    }
-
-    static Double finite(double value) {
-        return Double.isFinite(value) ? value : null;
+        return new SeriesResponse.Scores(ForecastRecords.finite(s.mase()), ForecastRecords.finite(s.rmsse()), ForecastRecords.finite(s.scaledBias()));
     }
 
     private static String blank(double value) {
