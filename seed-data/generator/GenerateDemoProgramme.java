@@ -12,7 +12,7 @@ import java.util.Map;
 import java.util.SplittableRandom;
 
 /**
- * Writes the invented demo programme (the Orrin Basin rural water programme) as CSV files.
+ * Writes the invented demo programme (the Ostrevane Basin rural water programme) as CSV files.
  * Breakdowns are drawn from planted per-component Poisson rates that depend on depth and pump age, per operating
  * hour, so that the forecasting can be checked against known truth. Run from the repository root:
  *
@@ -70,7 +70,7 @@ public class GenerateDemoProgramme {
         List<Depot> depots = List.of(
                 new Depot("DEP-TESHVALE", "Teshvale district depot", 0.42, 1.18, 40),
                 new Depot("DEP-MARROWFORD", "Marrowford district depot", -0.61, 2.05, 35),
-                new Depot("DEP-QUILLAN", "Quillan Flats district depot", 0.95, 2.86, 25));
+                new Depot("DEP-PELLOWDENE", "Pellowdene Flats district depot", 0.95, 2.86, 25));
         writeLocations(out, depots);
         writeParts(out, parts);
         writeModels(out, models);
@@ -80,7 +80,7 @@ public class GenerateDemoProgramme {
     }
 
     static List<PartRow> parts() {
-        String a = "Halden Castings", b = "Veyra Polymers", c = "Orrin Steel Supply";
+        String a = "Tolvery Castings", b = "Veyra Polymers", c = "Ostrevane Steel Supply";
         return List.of(
                 new PartRow("OB-CS-50", "Cup seal, 50 mm cylinder, nitrile", "CUP_SEAL", "EACH", 10, 20, 1.40, b, 45, 1095, true),
                 new PartRow("OB-CS-63", "Cup seal, 63 mm cylinder, nitrile", "CUP_SEAL", "EACH", 10, 20, 1.75, b, 45, 1095, true),
@@ -101,7 +101,7 @@ public class GenerateDemoProgramme {
                 new PartRow("OB-HD-STD", "Handle assembly, standard lever", "HANDLE", "EACH", 1, 1, 42.00, a, 90, null, false),
                 new PartRow("OB-CY-50", "Cylinder, 50 mm brass-lined", "CYLINDER", "EACH", 1, 1, 65.00, a, 120, null, false),
                 new PartRow("OB-CY-63", "Cylinder, 63 mm brass-lined", "CYLINDER", "EACH", 1, 1, 78.00, a, 120, null, false),
-                new PartRow("OB-GR-1KG", "Food-grade grease for pump head", "OTHER", "KILOGRAM", 1, 5, 6.00, b, 30, 730, false));
+                new PartRow("OB-GR-1KG", "Grease for pump head bearings (check local approval for drinking-water contact)", "OTHER", "KILOGRAM", 1, 5, 6.00, b, 30, 730, false));
     }
 
     static List<Model> models() {
@@ -133,7 +133,7 @@ public class GenerateDemoProgramme {
     static void writeLocations(Path out, List<Depot> depots) throws IOException {
         try (PrintWriter w = new PrintWriter(Files.newBufferedWriter(out.resolve("locations.csv")))) {
             w.println("code,name,kind,parent_code,latitude,longitude,mechanic_username");
-            w.println("CENTRAL,Orrin Basin central store,CENTRAL_STORE,,0.100000,1.900000,");
+            w.println("CENTRAL,Ostrevane Basin central store,CENTRAL_STORE,,0.100000,1.900000,");
             int mechanic = 1;
             for (Depot d : depots) {
                 w.printf(Locale.ROOT, "%s,%s,DEPOT,CENTRAL,%.6f,%.6f,%n", d.code(), d.name(), d.lat(), d.lon());
@@ -373,9 +373,9 @@ public class GenerateDemoProgramme {
             w.println("PO-2026-031,Veyra Polymers,CENTRAL,2026-10-20,2026-12-04,OB-CS-50,200");
             w.println("PO-2026-031,Veyra Polymers,CENTRAL,2026-10-20,2026-12-04,OB-CS-63,100");
             w.println("PO-2026-031,Veyra Polymers,CENTRAL,2026-10-20,2026-12-04,OB-OR-SET,50");
-            w.println("PO-2026-034,Halden Castings,CENTRAL,2026-11-02,2027-01-31,OB-FV-50,20");
-            w.println("PO-2026-034,Halden Castings,CENTRAL,2026-11-02,2027-01-31,OB-PL-50,10");
-            w.println("PO-2026-036,Orrin Steel Supply,DEP-MARROWFORD,2026-11-15,2027-03-15,OB-ROD-16,30");
+            w.println("PO-2026-034,Tolvery Castings,CENTRAL,2026-11-02,2027-01-31,OB-FV-50,20");
+            w.println("PO-2026-034,Tolvery Castings,CENTRAL,2026-11-02,2027-01-31,OB-PL-50,10");
+            w.println("PO-2026-036,Ostrevane Steel Supply,DEP-MARROWFORD,2026-11-15,2027-03-15,OB-ROD-16,30");
         }
     }
 }

@@ -109,7 +109,7 @@ class DemoProgrammeLoader {
                 .map(l -> l.id).toList());
         // A second officer who runs one depot only: shows how stores officers are scoped.
         accounts.create("officer2", "officer2-demo", Set.of(Roles.STORES_OFFICER), null);
-        accounts.assignLocations("officer2", List.of(locations.require("location", "DEP-QUILLAN").id));
+        accounts.assignLocations("officer2", List.of(locations.require("location", "DEP-PELLOWDENE").id));
         accounts.create("lead", "lead-demo", Set.of(Roles.PROGRAMME_LEAD), null);
         accounts.create("admin", "admin-demo", Set.of(Roles.ADMIN), null);
         for (Location kit : locations.ofKind(LocationKind.KIT)) {

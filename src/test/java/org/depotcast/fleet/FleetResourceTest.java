@@ -65,7 +65,7 @@ class FleetResourceTest {
     @Test
     void mechanicsSeeOnlyTheirPumpsAndOfficersOnlyTheirDepots() {
         as("mechanic2").get("/api/pumps").then().statusCode(200).body("assignedMechanic", org.hamcrest.Matchers.everyItem(equalTo("mechanic2")));
-        as("officer2").get("/api/pumps").then().statusCode(200).body("depotCode", org.hamcrest.Matchers.everyItem(equalTo("DEP-QUILLAN")));
+        as("officer2").get("/api/pumps").then().statusCode(200).body("depotCode", org.hamcrest.Matchers.everyItem(equalTo("DEP-PELLOWDENE")));
         as("officer2").queryParam("depot", "DEP-TESHVALE").get("/api/pumps").then().statusCode(403).contentType(PROBLEM);
         String export = as("officer2").get("/api/pumps/export").then().statusCode(200).extract().asString();
         org.junit.jupiter.api.Assertions.assertFalse(export.contains("DEP-TESHVALE"));
@@ -73,7 +73,7 @@ class FleetResourceTest {
 
     @Test
     void demoFleetIsListedPerDepot() {
-        as("officer").queryParam("depot", "DEP-QUILLAN").get("/api/pumps")
+        as("officer").queryParam("depot", "DEP-PELLOWDENE").get("/api/pumps")
                 .then().statusCode(200).body("size()", greaterThan(200));
         as("officer").get("/api/pumps/OB-00001/usage").then().statusCode(200).body("size()", greaterThan(5));
     }

@@ -83,7 +83,7 @@ class FleetModelRecoveryTest {
         var programme = as("lead").get("/api/forecast/parts/OB-BR-20").then().statusCode(200).extract().jsonPath();
         double[] history = new double[72];
         double[] preventive = new double[24];
-        for (String depot : new String[]{"DEP-TESHVALE", "DEP-MARROWFORD", "DEP-QUILLAN"}) {
+        for (String depot : new String[]{"DEP-TESHVALE", "DEP-MARROWFORD", "DEP-PELLOWDENE"}) {
             var f = as("lead").queryParam("location", depot).get("/api/forecast/parts/OB-BR-20").then().statusCode(200)
                     .extract().jsonPath();
             for (int m = 0; m < 72; m++) {

@@ -78,21 +78,21 @@ class PlanningResourceTest {
 
     @Test
     void snoozedAlertsLeaveTheListUntilTheirDate() {
-        List<Map<String, Object>> alerts = as("officer").queryParam("location", "DEP-QUILLAN")
+        List<Map<String, Object>> alerts = as("officer").queryParam("location", "DEP-PELLOWDENE")
                 .get("/api/planning/alerts").then().statusCode(200).extract().jsonPath().getList("$");
         Map<String, Object> target = alerts.get(alerts.size() - 1);
         Map<String, Object> body = new HashMap<>();
         body.put("partNumber", target.get("partNumber"));
-        body.put("location", "DEP-QUILLAN");
+        body.put("location", "DEP-PELLOWDENE");
         body.put("kind", target.get("kind"));
         body.put("action", "SNOOZE");
         body.put("snoozeUntil", LocalDate.now().plusDays(7).toString());
         as("officer").contentType("application/json").body(body).post("/api/planning/alerts/actions").then().statusCode(201);
-        List<Map<String, Object>> after = as("officer").queryParam("location", "DEP-QUILLAN")
+        List<Map<String, Object>> after = as("officer").queryParam("location", "DEP-PELLOWDENE")
                 .get("/api/planning/alerts").then().extract().jsonPath().getList("$");
         assertTrue(after.stream().noneMatch(a -> a.get("partNumber").equals(target.get("partNumber"))
                 && a.get("kind").equals(target.get("kind"))));
-        as("officer").queryParam("location", "DEP-QUILLAN").queryParam("includeSnoozed", "true")
+        as("officer").queryParam("location", "DEP-PELLOWDENE").queryParam("includeSnoozed", "true")
                 .get("/api/planning/alerts").then().body("snoozedUntil", hasItem(LocalDate.now().plusDays(7).toString()));
         body.put("snoozeUntil", LocalDate.now().minusDays(1).toString());
         as("officer").contentType("application/json").body(body).post("/api/planning/alerts/actions")
@@ -172,38 +172,38 @@ class PlanningResourceTest {
 
     @Test
     void laneCostsAreSetAndNeverNegative() {
-        as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "unitCost", -1))
+        as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-PELLOWDENE", "unitCost", -1))
                 .put("/api/planning/transfer-costs").then().statusCode(400).contentType(PROBLEM)
                 .body("errors[0].field", equalTo("unitCost"));
         as("lead").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "NOWHERE", "unitCost", 1))
                 .put("/api/planning/transfer-costs").then().statusCode(422).contentType(PROBLEM);
-        as("officer").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "unitCost", 1))
+        as("officer").contentType("application/json").body(Map.of("from", "DEP-TESHVALE", "to", "DEP-PELLOWDENE", "unitCost", 1))
                 .put("/api/planning/transfer-costs").then().statusCode(403);
-        as("lead").contentType("application/json").body(Map.of("from", "DEP-QUILLAN", "to", "DEP-MARROWFORD", "unitCost", 0.75))
+        as("lead").contentType("application/json").body(Map.of("from", "DEP-PELLOWDENE", "to", "DEP-MARROWFORD", "unitCost", 0.75))
                 .put("/api/planning/transfer-costs").then().statusCode(204);
         List<Map<String, Object>> suggestions = as("officer").get("/api/planning/transfers/suggestions")
                 .then().statusCode(200).extract().jsonPath().getList("$");
-        suggestions.stream().filter(s -> "DEP-QUILLAN".equals(s.get("from")) && "DEP-MARROWFORD".equals(s.get("to")))
+        suggestions.stream().filter(s -> "DEP-PELLOWDENE".equals(s.get("from")) && "DEP-MARROWFORD".equals(s.get("to")))
                 .forEach(s -> assertEquals(0.75, ((Number) s.get("unitCost")).doubleValue(), 1e-9));
     }
 
     @Test
     void acceptedTransferMovesThroughTransitAndIsReceivedOnce() {
         BigDecimal fromBefore = stock.onHand("OB-CS-63", "DEP-TESHVALE");
-        BigDecimal toBefore = stock.onHand("OB-CS-63", "DEP-QUILLAN");
+        BigDecimal toBefore = stock.onHand("OB-CS-63", "DEP-PELLOWDENE");
         long id = as("officer").contentType("application/json")
-                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "quantity", 2))
+                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-PELLOWDENE", "quantity", 2))
                 .post("/api/planning/transfers").then().statusCode(201).body("status", equalTo("IN_TRANSIT"))
                 .extract().jsonPath().getLong("id");
         assertEquals(0, fromBefore.subtract(BigDecimal.valueOf(2)).compareTo(stock.onHand("OB-CS-63", "DEP-TESHVALE")));
         as("officer").post("/api/planning/transfers/" + id + "/receive").then().statusCode(200).body("status", equalTo("RECEIVED"));
         as("officer").post("/api/planning/transfers/" + id + "/receive").then().statusCode(422).contentType(PROBLEM);
-        assertEquals(0, toBefore.add(BigDecimal.valueOf(2)).compareTo(stock.onHand("OB-CS-63", "DEP-QUILLAN")));
+        assertEquals(0, toBefore.add(BigDecimal.valueOf(2)).compareTo(stock.onHand("OB-CS-63", "DEP-PELLOWDENE")));
         as("officer").contentType("application/json")
                 .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-TESHVALE", "quantity", 1))
                 .post("/api/planning/transfers").then().statusCode(422).contentType(PROBLEM);
         as("officer").contentType("application/json")
-                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-QUILLAN", "quantity", 100000))
+                .body(Map.of("partNumber", "OB-CS-63", "from", "DEP-TESHVALE", "to", "DEP-PELLOWDENE", "quantity", 100000))
                 .post("/api/planning/transfers").then().statusCode(422).contentType(PROBLEM);
         assertTrue(stock.reconcile().consistent());
         TestData.as("lead").get("/api/stock/reconcile").then().body("consistent", equalTo(true));

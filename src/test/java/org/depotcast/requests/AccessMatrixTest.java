@@ -8,7 +8,7 @@ import static io.restassured.RestAssured.given;
 import static org.depotcast.TestData.as;
 
 /**
- * Role × endpoint group × own/other depot. officer2 runs DEP-QUILLAN only; mechanic1 carries KIT-M01 at
+ * Role × endpoint group × own/other depot. officer2 runs DEP-PELLOWDENE only; mechanic1 carries KIT-M01 at
  * DEP-TESHVALE; officer runs the central store and all three depots. Every refusal is a 403 problem.
  */
 @QuarkusTest
@@ -17,7 +17,7 @@ class AccessMatrixTest {
     @ParameterizedTest(name = "{0} {1} {2} -> {3}")
     @CsvSource({
             // stock, own and other depot
-            "officer2, GET, /api/stock/balances?location=DEP-QUILLAN, 200",
+            "officer2, GET, /api/stock/balances?location=DEP-PELLOWDENE, 200",
             "officer2, GET, /api/stock/balances?location=DEP-TESHVALE, 403",
             "officer2, GET, /api/stock/movements?location=DEP-TESHVALE, 403",
             "officer2, GET, /api/stock/counts/export?location=DEP-TESHVALE, 403",
@@ -26,7 +26,7 @@ class AccessMatrixTest {
             "mechanic1, GET, /api/stock/balances?location=DEP-TESHVALE, 403",
             "lead, GET, /api/stock/balances?location=DEP-TESHVALE, 200",
             // fleet and repairs
-            "officer2, GET, /api/pumps?depot=DEP-QUILLAN, 200",
+            "officer2, GET, /api/pumps?depot=DEP-PELLOWDENE, 200",
             "officer2, GET, /api/pumps?depot=DEP-MARROWFORD, 403",
             "mechanic1, GET, /api/pumps?depot=DEP-TESHVALE, 403",
             // catalogue: everyone reads, mechanics and leads do not edit
@@ -37,7 +37,7 @@ class AccessMatrixTest {
             "mechanic1, POST, /api/purchase-orders, 403",
             "officer2, GET, /api/planning/purchase-plans/1, 403",
             "officer2, GET, /api/planning/policies, 403",
-            "officer2, GET, /api/planning/policies?location=DEP-QUILLAN, 200",
+            "officer2, GET, /api/planning/policies?location=DEP-PELLOWDENE, 200",
             "officer2, GET, /api/planning/policies?location=DEP-TESHVALE, 403",
             "officer2, GET, /api/planning/alerts?location=DEP-TESHVALE, 403",
             // forecasts: programme-wide only for the lead and the central store

@@ -18,16 +18,16 @@ class ScopedListsTest {
     @Test
     void officerListsShowOnlyTheirDepot() {
         as("officer2").get("/api/stock/balances").then().statusCode(200)
-                .body("locationCode", everyItem(oneOf("DEP-QUILLAN", "KIT-M09", "KIT-M10", "KIT-M11", "KIT-M12")));
+                .body("locationCode", everyItem(oneOf("DEP-PELLOWDENE", "KIT-M09", "KIT-M10", "KIT-M11", "KIT-M12")));
         String counts = as("officer2").get("/api/stock/counts/export").then().statusCode(200).extract().asString();
         assertFalse(counts.contains("DEP-TESHVALE") || counts.contains("CENTRAL,"));
         List<String> repairDepots = as("officer2").get("/api/repairs?limit=500").then().statusCode(200)
                 .extract().jsonPath().getList("depotCode");
-        assertTrue(repairDepots.stream().allMatch("DEP-QUILLAN"::equals));
+        assertTrue(repairDepots.stream().allMatch("DEP-PELLOWDENE"::equals));
         String repairs = as("officer2").get("/api/repairs/export").then().statusCode(200).extract().asString();
         assertFalse(repairs.isBlank());
-        as("officer2").get("/api/planning/alerts").then().statusCode(200).body("locationCode", everyItem(equalTo("DEP-QUILLAN")));
-        as("officer2").get("/api/purchase-orders").then().statusCode(200).body("destination", everyItem(equalTo("DEP-QUILLAN")));
+        as("officer2").get("/api/planning/alerts").then().statusCode(200).body("locationCode", everyItem(equalTo("DEP-PELLOWDENE")));
+        as("officer2").get("/api/purchase-orders").then().statusCode(200).body("destination", everyItem(equalTo("DEP-PELLOWDENE")));
     }
 
     @Test

@@ -78,7 +78,7 @@ class SpendResourceTest {
             assertTrue(Math.abs(half - hi80) / hi80 < 0.05, "stable 90th percentile: " + half + " vs " + hi80);
         }
         assertTrue(r.getMap("years[1].families").containsKey("CUP_SEAL"));
-        assertTrue(r.getMap("years[1].depots").containsKey("DEP-QUILLAN"));
+        assertTrue(r.getMap("years[1].depots").containsKey("DEP-PELLOWDENE"));
     }
 
     @Test
@@ -90,13 +90,13 @@ class SpendResourceTest {
                 1e-6 * base.getDouble("years[1].total.mean"));
         assertEquals(base.getDouble("years[0].total.mean"), dearer.getDouble("years[0].total.mean"), 1e-6);
         JsonPath grown = runToEnd(scenario(TestData.unique("grown"), "installations", List.of(Map.of("year", 1,
-                "count", 300, "modelCode", "RB-2", "depthM", 45, "usageHoursPerDay", 5, "depotCode", "DEP-QUILLAN"))));
+                "count", 300, "modelCode", "RB-2", "depthM", 45, "usageHoursPerDay", 5, "depotCode", "DEP-PELLOWDENE"))));
         // New pumps are young (rods and pipes wear with age) and years from their first service, so 25 % more pumps
         // add less than 25 % spend; the increase must be clear and sit at the depot where they go in.
         double increase = grown.getDouble("years[1].total.mean") - base.getDouble("years[1].total.mean");
-        double atQuillan = grown.getDouble("years[1].depots.DEP-QUILLAN.mean") - base.getDouble("years[1].depots.DEP-QUILLAN.mean");
+        double atPellowdene = grown.getDouble("years[1].depots.DEP-PELLOWDENE.mean") - base.getDouble("years[1].depots.DEP-PELLOWDENE.mean");
         assertTrue(increase > 0.05 * base.getDouble("years[1].total.mean"), "increase " + increase);
-        assertTrue(atQuillan > 0.8 * increase, "increase at the new pumps' depot " + atQuillan + " of " + increase);
+        assertTrue(atPellowdene > 0.8 * increase, "increase at the new pumps' depot " + atPellowdene + " of " + increase);
         // A higher service level buys more stock in year 1 only.
         JsonPath safer = runToEnd(scenario(TestData.unique("safer"), "serviceLevel", 0.995));
         assertTrue(safer.getDouble("years[0].total.mean") > base.getDouble("years[0].total.mean"));
@@ -180,11 +180,11 @@ class SpendResourceTest {
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "horizonYears", 11))
                 .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("horizonYears"));
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "installations", List.of(Map.of(
-                "year", 1, "count", -5, "modelCode", "RB-2", "depthM", 40, "depotCode", "DEP-QUILLAN"))))
+                "year", 1, "count", -5, "modelCode", "RB-2", "depthM", 40, "depotCode", "DEP-PELLOWDENE"))))
                 .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM)
                 .body("errors.field", hasItem("installations[0].count"));
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "installations", List.of(Map.of(
-                "year", 1, "count", 5, "modelCode", "ZZ-9", "depthM", 40, "depotCode", "DEP-QUILLAN"))))
+                "year", 1, "count", 5, "modelCode", "ZZ-9", "depthM", 40, "depotCode", "DEP-PELLOWDENE"))))
                 .post("/api/spend/scenarios").then().statusCode(422).contentType(PROBLEM)
                 .body("errors[0].field", equalTo("installations[0].modelCode"));
         String name = TestData.unique("dup");
