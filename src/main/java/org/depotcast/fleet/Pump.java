@@ -50,6 +50,11 @@ public class Pump {
     public LocalDate brokenSince;
     @Column(name = "decommissioned_on")
     public LocalDate decommissionedOn;
+    /** The date the current status began (null for a working pump with no record of when it was last fixed). */
+    @Column(name = "status_since")
+    public LocalDate statusSince;
+    @Column(name = "status_note")
+    public String statusNote;
     @Column(name = "usage_hours_per_day", nullable = false)
     public BigDecimal usageHoursPerDay;
     @Enumerated(EnumType.STRING)
@@ -59,8 +64,10 @@ public class Pump {
     public long version;
 
     /** Keeps status and its dates consistent: a broken pump says since when, a decommissioned one when. */
-    void setStatus(PumpStatus newStatus, LocalDate since) {
+    void setStatus(PumpStatus newStatus, LocalDate since, String note) {
         status = newStatus;
+        statusSince = since;
+        statusNote = note;
         brokenSince = newStatus == PumpStatus.BROKEN ? since : null;
         decommissionedOn = newStatus == PumpStatus.DECOMMISSIONED ? since : null;
     }

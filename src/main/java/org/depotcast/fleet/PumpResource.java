@@ -6,6 +6,7 @@ import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PATCH;
 import jakarta.ws.rs.PUT;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
@@ -26,10 +27,12 @@ import java.util.List;
 @Produces(MediaType.APPLICATION_JSON)
 class PumpResource {
     private final PumpService pumps;
+    private final PumpStatusService status;
     private final UsageService usage;
 
-    PumpResource(PumpService pumps, UsageService usage) {
+    PumpResource(PumpService pumps, PumpStatusService status, UsageService usage) {
         this.pumps = pumps;
+        this.status = status;
         this.usage = usage;
     }
 
@@ -59,12 +62,30 @@ class PumpResource {
                 .entity(PumpResponse.from(pump)).build();
     }
 
+    /** Changes only the fields sent; fields left out keep their values (PUT and PATCH alike). */
     @PUT
     @Path("{assetId}")
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public PumpResponse update(@PathParam("assetId") String assetId, @Valid @NotNull PumpRequest request) {
+    public PumpResponse update(@PathParam("assetId") String assetId, @Valid @NotNull PumpUpdate request) {
         return PumpResponse.from(pumps.update(assetId, request));
+    }
+
+    @PATCH
+    @Path("{assetId}")
+    @Consumes({MediaType.APPLICATION_JSON, "application/merge-patch+json"})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public PumpResponse patch(@PathParam("assetId") String assetId, @Valid @NotNull PumpUpdate request) {
+        return PumpResponse.from(pumps.update(assetId, request));
+    }
+
+    /** A mechanic's report that an assigned pump is broken or working again, without the whole pump record. */
+    @POST
+    @Path("{assetId}/status")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.MECHANIC, Roles.STORES_OFFICER, Roles.ADMIN})
+    public PumpResponse reportStatus(@PathParam("assetId") String assetId, @Valid @NotNull StatusReport report) {
+        return PumpResponse.from(status.report(assetId, report));
     }
 
     @GET

@@ -36,10 +36,12 @@ public class PumpService {
     private final LocationService locations;
     private final AccessScope scope;
     private final org.depotcast.access.AuditService audit;
+    private final RepairRecords repairs;
 
     PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope,
-                org.depotcast.access.AuditService audit) {
+                org.depotcast.access.AuditService audit, RepairRecords repairs) {
         this.audit = audit;
+        this.repairs = repairs;
         this.scope = scope;
         this.pumps = pumps;
         this.models = models;
@@ -117,14 +119,60 @@ public class PumpService {
         return pump;
     }
 
+    /** Changes only the fields sent (see {@link PumpUpdate}); the pump's depot before and after must be the caller's. */
     @Transactional
-    public Pump update(String assetId, PumpRequest request) {
+    public Pump update(String assetId, PumpUpdate u) {
         Pump pump = requireVisible(null, assetId);
-        if (!assetId.equals(request.assetId())) {
+        if (u.assetId() != null && !assetId.equals(u.assetId())) {
             throw new ConflictException("assetId", "the asset id in the body must match the one in the path");
         }
-        apply(pump, request, models.require("modelCode", request.modelCode()), depot("depotCode", request.depotCode()));
+        PumpResponse before = PumpResponse.from(pump);
+        if (u.modelCode() != null) {
+            pump.model = models.require("modelCode", u.modelCode());
+        }
+        if (u.depotCode() != null) {
+            Location depot = depot("depotCode", u.depotCode());
+            scope.require(depot.id, depot.code);
+            pump.depot = depot;
+        }
+        pump.depthM = u.depthM() != null ? u.depthM() : pump.depthM;
+        pump.installedOn = u.installedOn() != null ? u.installedOn() : pump.installedOn;
+        pump.latitude = u.latitude() != null ? u.latitude() : pump.latitude;
+        pump.longitude = u.longitude() != null ? u.longitude() : pump.longitude;
+        if (u.assignedMechanic() != null) {
+            pump.assignedMechanic = u.assignedMechanic().isBlank() ? null : u.assignedMechanic().strip();
+        }
+        if (u.status() != null || u.statusSince() != null) {
+            PumpStatus status = u.status() != null ? u.status() : pump.status;
+            change(pump, status, u.statusSince() != null ? u.statusSince()
+                    : status == pump.status ? pump.statusSince : null, u.statusNote());
+        }
+        if (u.usageHoursPerDay() != null) {
+            pump.usageHoursPerDay = u.usageHoursPerDay();
+            pump.usageSource = u.usageSource() == null ? UsageSource.SURVEYED : u.usageSource();
+        } else if (u.usageSource() != null) {
+            pump.usageSource = u.usageSource();
+        }
+        if (pump.statusSince != null && pump.statusSince.isBefore(pump.installedOn)) {
+            throw new BusinessRuleException("statusSince", "is before the pump was installed on " + pump.installedOn);
+        }
+        audit.record("PUMP_UPDATED", "pump", assetId, before, u);
         return pump;
+    }
+
+    /** Sets a status chosen by a person; WORKING is refused while a breakdown repair of the pump is open. */
+    void change(Pump pump, PumpStatus status, LocalDate since, String note) {
+        if (status == PumpStatus.WORKING && pump.id != null) {
+            RepairFacts facts = repairs.factsOf(pump.id);
+            if (facts.openRepairRef() != null) {
+                throw new BusinessRuleException("status", "repair '" + facts.openRepairRef() + "' of this pump is still "
+                        + "open: record its fix date on the repair and the pump becomes WORKING");
+            }
+        }
+        if (status != PumpStatus.WORKING && since == null) {
+            throw new BusinessRuleException("statusSince", "a " + status + " pump needs the date it became so");
+        }
+        pump.setStatus(status, since == null ? LocalDate.now(java.time.ZoneOffset.UTC) : since, note);
     }
 
     /** All or nothing; existing asset ids are updated. */
@@ -169,13 +217,19 @@ public class PumpService {
                     row.optionalText("assigned_mechanic"), status, row.optionalDate("status_since"), usage, source));
         }
         table.problems().throwIfAny();
+        List<Pump> updated = new java.util.ArrayList<>();
         for (PumpRequest request : requests) {
             Pump pump = pumps.byAssetId(request.assetId()).orElseGet(Pump::new);
+            if (pump.id != null) {
+                updated.add(pump);
+            }
             apply(pump, request, modelCache.get(request.modelCode()), depotCache.get(request.depotCode()));
             if (pump.id == null) {
                 pumps.persist(pump);
             }
         }
+        // A row cannot make a pump WORKING while one of its breakdown repairs is open: the repairs decide.
+        followRepairs(updated);
         return requests.size();
     }
 
@@ -183,7 +237,7 @@ public class PumpService {
         return CsvOut.write(CSV_COLUMNS, search(null, null), p -> java.util.Arrays.asList(p.assetId, p.model.code,
                 p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude), p.depot.code,
                 p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
-                p.brokenSince != null ? p.brokenSince : p.decommissionedOn != null ? p.decommissionedOn : "",
+                p.statusSince == null ? "" : p.statusSince,
                 p.usageHoursPerDay.toPlainString(), p.usageSource));
     }
 
@@ -210,7 +264,7 @@ public class PumpService {
         if (status != PumpStatus.WORKING && r.statusSince() == null) {
             throw new BusinessRuleException("statusSince", "a " + status + " pump needs the date it became so");
         }
-        pump.setStatus(status, r.statusSince());
+        pump.setStatus(status, r.statusSince(), null);
         if (r.usageHoursPerDay() == null) {
             pump.usageHoursPerDay = Pump.DEFAULT_HOURS_PER_DAY;
             pump.usageSource = UsageSource.DEFAULT;
@@ -218,6 +272,19 @@ public class PumpService {
             pump.usageHoursPerDay = r.usageHoursPerDay();
             pump.usageSource = r.usageSource() == null ? UsageSource.SURVEYED : r.usageSource();
         }
+    }
+
+    /** Brings the pumps' status in line with their repairs (see {@link PumpStatusService}). */
+    int followRepairs(java.util.Collection<Pump> many) {
+        if (many.isEmpty()) {
+            return 0;
+        }
+        Map<Long, RepairFacts> facts = repairs.factsOfAll();
+        int changed = 0;
+        for (Pump pump : many) {
+            changed += PumpStatusService.follow(pump, facts.getOrDefault(pump.id, RepairFacts.NONE)) ? 1 : 0;
+        }
+        return changed;
     }
 
     private static String plain(BigDecimal value) {

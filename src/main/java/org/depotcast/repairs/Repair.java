@@ -52,7 +52,7 @@ public class Repair {
     public String fault;
     @Column(name = "ledger_posted", nullable = false)
     public boolean ledgerPosted;
-    @OneToMany(mappedBy = "repair", cascade = CascadeType.ALL)
+    @OneToMany(mappedBy = "repair", cascade = CascadeType.ALL, orphanRemoval = true)
     @OrderBy("id")
     public List<RepairLine> lines = new ArrayList<>();
 

@@ -45,6 +45,32 @@ class RepairRepository implements PanacheRepository<Repair> {
                 Object[].class).setParameter("since", since).getResultList();
     }
 
+    /** Open breakdown repairs, earliest reported first: rows pump id, repair ref, reported on. All pumps when null. */
+    List<Object[]> openBreakdownsOf(Long pumpId) {
+        String query = """
+                select r.pump.id, r.repairRef, r.reportedOn from Repair r
+                where r.fixedOn is null and r.kind = org.depotcast.repairs.RepairKind.BREAKDOWN %s
+                order by r.reportedOn, r.id""";
+        return onePumpOrAll(query, pumpId);
+    }
+
+    /** Fixed repairs, latest fix first: rows pump id, repair ref, fixed on. All pumps when null. */
+    List<Object[]> fixesOf(Long pumpId) {
+        String query = """
+                select r.pump.id, r.repairRef, r.fixedOn from Repair r
+                where r.fixedOn is not null %s
+                order by r.fixedOn desc, r.id desc""";
+        return onePumpOrAll(query, pumpId);
+    }
+
+    private List<Object[]> onePumpOrAll(String query, Long pumpId) {
+        if (pumpId == null) {
+            return getEntityManager().createQuery(query.formatted(""), Object[].class).getResultList();
+        }
+        return getEntityManager().createQuery(query.formatted("and r.pump.id = :pump"), Object[].class)
+                .setParameter("pump", pumpId).getResultList();
+    }
+
     List<Repair> allInOrder() {
         return listAll(Sort.by("repairRef"));
     }

@@ -5,6 +5,7 @@ import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
+import jakarta.ws.rs.PATCH;
 import jakarta.ws.rs.POST;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
@@ -50,6 +51,15 @@ class RepairResource {
         RepairResponse body = recorded.repair();
         return recorded.replayed() ? Response.ok(body).build()
                 : Response.created(uri.getAbsolutePathBuilder().path(body.repairRef()).build()).entity(body).build();
+    }
+
+    /** Dates reached and parts needed since the repair was reported; fields left out keep their values. */
+    @PATCH
+    @Path("{repairRef}")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.MECHANIC, Roles.STORES_OFFICER, Roles.ADMIN})
+    public RepairResponse progress(@PathParam("repairRef") String repairRef, @Valid @NotNull RepairProgress progress) {
+        return service.progress(repairRef, progress);
     }
 
     @POST

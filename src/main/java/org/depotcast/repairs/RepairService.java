@@ -16,6 +16,7 @@ import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
 import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpStatusService;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.MovementCommand;
@@ -45,10 +46,13 @@ public class RepairService {
     private final StockLedgerService ledger;
     private final CurrentUser currentUser;
     private final org.depotcast.access.AuditService audit;
+    private final PumpStatusService pumpStatus;
 
     RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
-                  StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit) {
+                  StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit,
+                  PumpStatusService pumpStatus) {
         this.audit = audit;
+        this.pumpStatus = pumpStatus;
         this.repairs = repairs;
         this.pumps = pumps;
         this.parts = parts;
@@ -105,8 +109,13 @@ public class RepairService {
     public Recorded record(RepairRequest request) {
         Optional<Repair> earlier = repairs.byRef(request.repairRef());
         if (earlier.isPresent()) {
-            if (!earlier.get().pump.assetId.equals(request.assetId())) {
+            if (!pumps.visible(earlier.get().pump)) {
                 throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' was recorded for another pump");
+            }
+            String differs = RepairResend.firstDifference(earlier.get(), request);
+            if (differs != null) {
+                throw new ConflictException(differs, "repair '" + request.repairRef() + "' was recorded with another "
+                        + differs + "; a new repair needs a new reference");
             }
             return new Recorded(RepairResponse.from(earlier.get()), true);
         }
@@ -118,7 +127,71 @@ public class RepairService {
             throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
         }
         Repair repair = newRepair(request, pumps.requireVisible("assetId", request.assetId()), mechanic);
-        List<RepairRequest.Line> lines = request.lines() == null ? List.of() : request.lines();
+        addLines(repair, request.lines() == null ? List.of() : request.lines());
+        repair.ledgerPosted = repair.fixedOn != null && !repair.lines.isEmpty();
+        repairs.persist(repair);
+        repairs.flush();
+        if (repair.ledgerPosted) {
+            consumeFromKit(repair);
+        }
+        pumpStatus.followRepairs(repair.pump);
+        RepairResponse recorded = RepairResponse.from(repair);
+        audit.record("REPAIR_RECORDED", "repair", repair.repairRef, null, recorded);
+        return new Recorded(recorded, false);
+    }
+
+    /**
+     * Records what happened since a repair was reported (see {@link RepairProgress}): dates reached, the parts it
+     * needs until it is fixed; the fix consumes them from the mechanic's kit and the pump's status follows.
+     */
+    @Transactional
+    public RepairResponse progress(String repairRef, RepairProgress p) {
+        Repair repair = repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
+        pumps.requireVisible(null, repair.pump.assetId);
+        RepairResponse before = RepairResponse.from(repair);
+        repair.diagnosedOn = keepOrSet("diagnosedOn", repair.diagnosedOn, p.diagnosedOn());
+        repair.partsAvailableOn = keepOrSet("partsAvailableOn", repair.partsAvailableOn, p.partsAvailableOn());
+        boolean fixesNow = repair.fixedOn == null && p.fixedOn() != null;
+        repair.fixedOn = keepOrSet("fixedOn", repair.fixedOn, p.fixedOn());
+        String dateProblem = dateOrderProblem(repair.reportedOn, repair.diagnosedOn, repair.partsAvailableOn, repair.fixedOn);
+        if (dateProblem != null) {
+            throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
+        }
+        if (p.fault() != null) {
+            repair.fault = p.fault();
+        }
+        if (p.lines() != null && !RepairResend.sameLines(repair.lines, p.lines())) {
+            if (!fixesNow && repair.fixedOn != null) {
+                throw new ConflictException("lines", "repair '" + repairRef + "' is fixed; its parts can no longer change");
+            }
+            repair.lines.clear();
+            repairs.flush();
+            addLines(repair, p.lines());
+        }
+        if (fixesNow && !repair.lines.isEmpty()) {
+            repair.ledgerPosted = true;
+            repairs.flush();
+            consumeFromKit(repair);
+        }
+        pumpStatus.followRepairs(repair.pump);
+        RepairResponse after = RepairResponse.from(repair);
+        if (!after.equals(before)) {
+            audit.record("REPAIR_PROGRESSED", "repair", repairRef, before, after);
+        }
+        return after;
+    }
+
+    private static LocalDate keepOrSet(String field, LocalDate stored, LocalDate sent) {
+        if (sent == null || sent.equals(stored)) {
+            return stored;
+        }
+        if (stored != null) {
+            throw new ConflictException(field, "is already recorded as " + stored);
+        }
+        return sent;
+    }
+
+    private void addLines(Repair repair, List<RepairRequest.Line> lines) {
         for (int i = 0; i < lines.size(); i++) {
             Part part = parts.require("lines[" + i + "].partNumber", lines.get(i).partNumber());
             BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", lines.get(i).quantity(), part.wholeUnits());
@@ -127,15 +200,6 @@ public class RepairService {
             }
             repair.addLine(line(part, quantity));
         }
-        repair.ledgerPosted = repair.fixedOn != null && !repair.lines.isEmpty();
-        repairs.persist(repair);
-        repairs.flush();
-        if (repair.ledgerPosted) {
-            consumeFromKit(repair);
-        }
-        RepairResponse recorded = RepairResponse.from(repair);
-        audit.record("REPAIR_RECORDED", "repair", repair.repairRef, null, recorded);
-        return new Recorded(recorded, false);
     }
 
     private void consumeFromKit(Repair repair) {
@@ -171,13 +235,18 @@ public class RepairService {
         audit.record("REPAIRS_IMPORTED", "repair", byRef.size() + " repairs", null,
                 java.util.Map.of("repairs", byRef.size(), "rows", table.rows().size()));
         int written = 0;
+        java.util.Set<String> touched = new java.util.HashSet<>();
         for (Repair repair : byRef.values()) {
+            touched.add(repair.pump.assetId);
             repairs.persist(repair);
             if (++written % 500 == 0) {
                 repairs.flush();
                 repairs.getEntityManager().clear();
             }
         }
+        repairs.flush();
+        // Each pump takes the status its repairs imply (an open breakdown: broken; else working since the last fix).
+        pumpStatus.followRepairs(pumps.all().stream().filter(p -> touched.contains(p.assetId)).toList());
         return table.rows().size();
     }
 

@@ -1,0 +1,29 @@
+package org.depotcast.fleet;
+
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import jakarta.validation.constraints.PastOrPresent;
+import jakarta.validation.constraints.Size;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+
+/**
+ * A change to a registered pump: only the fields sent change; a field left out (or null) keeps its value. An empty
+ * {@code assignedMechanic} removes the assignment. {@code assetId}, when sent, must match the path. A status change
+ * needs {@code statusSince} unless the pump becomes WORKING today.
+ */
+public record PumpUpdate(@Size(max = 40) String assetId,
+                         @Size(min = 1, max = 40) String modelCode,
+                         @DecimalMin(value = "0", inclusive = false) @DecimalMax("500") BigDecimal depthM,
+                         @PastOrPresent LocalDate installedOn,
+                         @DecimalMin("-90") @DecimalMax("90") BigDecimal latitude,
+                         @DecimalMin("-180") @DecimalMax("180") BigDecimal longitude,
+                         @Size(min = 1, max = 40) String depotCode,
+                         @Size(max = 60) String assignedMechanic,
+                         PumpStatus status,
+                         @PastOrPresent LocalDate statusSince,
+                         @Size(max = 300) String statusNote,
+                         @DecimalMin("0") @DecimalMax("24") BigDecimal usageHoursPerDay,
+                         UsageSource usageSource) {
+}
