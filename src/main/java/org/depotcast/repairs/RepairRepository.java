@@ -37,6 +37,18 @@ class RepairRepository implements PanacheRepository<Repair> {
                 group by r.pump.depot.code, l.part.partNumber""", Object[].class).getResultList();
     }
 
+    /**
+     * Parts that broken pumps wait for today: rows depot code, part number, asset id, repair ref, reported on,
+     * diagnosed on, one per line of an open repair whose parts have not come.
+     */
+    List<Object[]> openWaits() {
+        return getEntityManager().createQuery("""
+                select r.pump.depot.code, l.part.partNumber, r.pump.assetId, r.repairRef, r.reportedOn, r.diagnosedOn
+                from RepairLine l join l.repair r
+                where r.fixedOn is null and r.partsAvailableOn is null
+                order by r.reportedOn, r.id""", Object[].class).getResultList();
+    }
+
     /** Repairs reported since a date that waited for parts: rows depot code, diagnosed on, parts available on. */
     List<Object[]> waitsSince(LocalDate since) {
         return getEntityManager().createQuery("""

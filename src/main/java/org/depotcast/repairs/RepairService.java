@@ -90,6 +90,27 @@ public class RepairService {
         return waits;
     }
 
+    /**
+     * A broken pump waiting for a part today: since it was diagnosed (or reported, when not yet diagnosed).
+     *
+     * @param daysWaiting whole days from {@code waitingSince} to {@code today}
+     */
+    public record PumpWait(String depotCode, String partNumber, String assetId, String repairRef, LocalDate waitingSince,
+                           long daysWaiting) {
+    }
+
+    /** Every part that broken pumps wait for today, longest wait first. */
+    public List<PumpWait> waitingNow(LocalDate today) {
+        List<PumpWait> waits = new ArrayList<>();
+        for (Object[] row : repairs.openWaits()) {
+            LocalDate since = row[5] != null ? (LocalDate) row[5] : (LocalDate) row[4];
+            waits.add(new PumpWait((String) row[0], (String) row[1], (String) row[2], (String) row[3], since,
+                    Math.max(0, java.time.temporal.ChronoUnit.DAYS.between(since, today))));
+        }
+        waits.sort(java.util.Comparator.comparingLong(PumpWait::daysWaiting).reversed().thenComparing(PumpWait::repairRef));
+        return waits;
+    }
+
     /** Open repairs waiting for parts, keyed "depotCode|partNumber". */
     public Map<String, Long> openNeeds() {
         Map<String, Long> needs = new HashMap<>();

@@ -34,16 +34,27 @@ public final class RequestDtos {
     public record Reason(@NotBlank @Size(max = 300) String reason) {
     }
 
+    /** A request as the API shows it; {@code cautions} says what a substitute in contact with drinking water needs. */
     public record View(long id, String clientRef, String mechanic, String kit, String depot, String assetId,
                        PartsRequest.Urgency urgency, String fault, RequestStatus status, OffsetDateTime raisedAt,
-                       OffsetDateTime issuedAt, long version, List<LineView> lines, List<EventView> history) {
+                       OffsetDateTime issuedAt, long version, List<LineView> lines, List<EventView> history,
+                       List<String> cautions) {
         static View from(PartsRequest r) {
             return new View(r.id, r.clientRef, r.mechanic, r.kit.code, r.depot.code,
                     r.pump == null ? null : r.pump.assetId, r.urgency, r.fault, r.status, r.raisedAt, r.issuedAt,
                     r.version, r.lines.stream().map(l -> new LineView(l.part.partNumber, l.quantityRequested,
                     l.approvedPart == null ? null : l.approvedPart.partNumber, l.quantityApproved, l.quantityIssued)).toList(),
-                    r.events.stream().map(e -> new EventView(e.status, e.actor, e.at, e.reason)).toList());
+                    r.events.stream().map(e -> new EventView(e.status, e.actor, e.at, e.reason)).toList(),
+                    r.lines.stream().filter(l -> l.approvedPart != null && (l.part.family.touchesDrinkingWater()
+                            || l.approvedPart.family.touchesDrinkingWater())).map(l -> substituteCaution(
+                            l.approvedPart.partNumber, l.part.partNumber)).toList());
         }
+    }
+
+    static String substituteCaution(String substitute, String part) {
+        return substitute + " is issued in place of " + part + ", which is in contact with drinking water: the "
+                + "substitute must be approved for drinking-water contact where the pump is installed (national "
+                + "drinking-water quality rules and local codes), whatever the compatibility list says.";
     }
 
     public record LineView(String partNumber, BigDecimal requested, String substitute, BigDecimal approved,
@@ -53,8 +64,12 @@ public final class RequestDtos {
     public record EventView(RequestStatus status, String actor, OffsetDateTime at, String reason) {
     }
 
-    /** Per depot: how fast requests are issued and how long pumps waited for parts (last 365 days). */
+    /**
+     * Per depot: how fast requests are issued and how long pumps waited for parts (repairs reported in the last 365
+     * days whose parts came), and the pumps broken and waiting for parts today with the days they have waited so far.
+     */
     public record DepotReport(String depot, long requestsIssued, Double meanHoursToIssue, Double medianHoursToIssue,
-                              long repairsWaitingForParts, long pumpDaysWaitingForParts) {
+                              long repairsWaitingForParts, long pumpDaysWaitingForParts, long pumpsWaitingNow,
+                              long pumpDaysWaitingNow) {
     }
 }

@@ -34,7 +34,13 @@ public class RequestReportService {
     @Transactional
     public List<RequestDtos.DepotReport> perDepot() {
         OffsetDateTime since = OffsetDateTime.now(ZoneOffset.UTC).minusDays(365);
-        Map<String, long[]> waits = repairs.waitingForPartsSince(LocalDate.now(ZoneOffset.UTC).minusDays(365));
+        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        Map<String, long[]> waits = repairs.waitingForPartsSince(today.minusDays(365));
+        // Today's waits: a pump counts once however many parts it waits for, at its longest wait.
+        Map<String, Map<String, Long>> waitingNow = new java.util.HashMap<>();
+        for (RepairService.PumpWait w : repairs.waitingNow(today)) {
+            waitingNow.computeIfAbsent(w.depotCode(), k -> new java.util.HashMap<>()).merge(w.assetId(), w.daysWaiting(), Math::max);
+        }
         List<PartsRequest> issued = requests.issuedSince(since);
         AccessScope.Scope visible = scope.current();
         List<RequestDtos.DepotReport> out = new ArrayList<>();
@@ -45,9 +51,11 @@ public class RequestReportService {
             double[] hours = issued.stream().filter(r -> r.depot.id.equals(depot.id))
                     .mapToDouble(r -> Duration.between(r.raisedAt, r.issuedAt).toMinutes() / 60.0).sorted().toArray();
             long[] wait = waits.getOrDefault(depot.code, new long[2]);
+            Map<String, Long> now = waitingNow.getOrDefault(depot.code, Map.of());
             out.add(new RequestDtos.DepotReport(depot.code, hours.length,
                     hours.length == 0 ? null : java.util.Arrays.stream(hours).average().orElse(0),
-                    hours.length == 0 ? null : median(hours), wait[0], wait[1]));
+                    hours.length == 0 ? null : median(hours), wait[0], wait[1], now.size(),
+                    now.values().stream().mapToLong(Long::longValue).sum()));
         }
         return out;
     }

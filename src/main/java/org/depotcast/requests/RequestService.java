@@ -79,6 +79,11 @@ public class RequestService {
             if (!earlier.get().mechanic.equals(mechanic)) {
                 throw new ConflictException("clientRef", "reference '" + body.clientRef() + "' belongs to another request");
             }
+            String differs = firstDifference(earlier.get(), body);
+            if (differs != null) {
+                throw new ConflictException(differs, "request '" + body.clientRef() + "' was raised with another "
+                        + differs + "; a new request needs a new client reference");
+            }
             return new Raised(RequestDtos.View.from(earlier.get()), true);
         }
         Location kit = locations.kitOf(mechanic).orElseThrow(() ->
@@ -109,6 +114,34 @@ public class RequestService {
         requests.persist(request);
         audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
         return new Raised(RequestDtos.View.from(request), false);
+    }
+
+    /** The first field in which a resent request differs from the one raised under its reference, or null. */
+    private static String firstDifference(PartsRequest stored, RequestDtos.Raise resend) {
+        if (!java.util.Objects.equals(stored.pump == null ? null : stored.pump.assetId, resend.assetId())) {
+            return "assetId";
+        }
+        if (stored.urgency != resend.urgency()) {
+            return "urgency";
+        }
+        if (!java.util.Objects.equals(stored.fault, resend.fault())) {
+            return "fault";
+        }
+        if (stored.lines.size() != resend.lines().size()) {
+            return "lines";
+        }
+        for (int i = 0; i < resend.lines().size(); i++) {
+            RequestDtos.Line sent = resend.lines().get(i);
+            PartsRequestLine kept = stored.lines.stream().filter(l -> l.part.partNumber.equals(sent.partNumber()))
+                    .findFirst().orElse(null);
+            if (kept == null) {
+                return "lines[" + i + "].partNumber";
+            }
+            if (sent.quantity() == null || kept.quantityRequested.compareTo(sent.quantity()) != 0) {
+                return "lines[" + i + "].quantity";
+            }
+        }
+        return null;
     }
 
     @Transactional
