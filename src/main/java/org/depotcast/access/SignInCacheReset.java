@@ -6,16 +6,16 @@ import jakarta.enterprise.event.Observes;
 /** Drops remembered sign-ins and scopes whenever an account or its assignments change. */
 @ApplicationScoped
 class SignInCacheReset {
-    private final AccountIdentityProvider provider;
+    private final PasswordCheck passwords;
     private final AccessScope scope;
 
-    SignInCacheReset(AccountIdentityProvider provider, AccessScope scope) {
-        this.provider = provider;
+    SignInCacheReset(PasswordCheck passwords, AccessScope scope) {
+        this.passwords = passwords;
         this.scope = scope;
     }
 
     void onChange(@Observes AccountService.AccountsChanged event) {
-        provider.forgetAll();
+        passwords.forgetAll();
         scope.forgetAll();
     }
 }

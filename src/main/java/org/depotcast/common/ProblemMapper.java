@@ -86,6 +86,17 @@ public class ProblemMapper {
     }
 
     @ServerExceptionMapper
+    public Response signInRefused(SignInRefusedException e, UriInfo uri) {
+        return respond(401, "sign-in-refused", "Sign-in refused", e.getMessage(), uri, List.of());
+    }
+
+    @ServerExceptionMapper
+    public Response tooManyAttempts(TooManyAttemptsException e, UriInfo uri) {
+        return Response.fromResponse(respond(429, "too-many-attempts", "Too many sign-in attempts", e.getMessage(), uri,
+                List.of())).header("Retry-After", e.retryAfterSeconds()).build();
+    }
+
+    @ServerExceptionMapper
     public Response forbidden(ForbiddenException e, UriInfo uri) {
         String detail = e.getMessage() == null || e.getMessage().isBlank()
                 ? "your role does not allow this action" : e.getMessage();
@@ -116,6 +127,19 @@ public class ProblemMapper {
                                     List<FieldError> errors) {
         Problem body = new Problem("/problems/" + type, title, status, detail, uri == null ? null : uri.getPath(), errors);
         return Response.status(status).type(Problem.MEDIA_TYPE).entity(body).build();
+    }
+
+    /**
+     * The bodies of the answers the sign-in layer gives before a request reaches an endpoint (a 401 challenge, a
+     * paused sign-in): the same problems as the mappers above give.
+     */
+    public static Problem beforeEndpoint(RuntimeException e, String path) {
+        if (e instanceof TooManyAttemptsException paused) {
+            return new Problem("/problems/too-many-attempts", "Too many sign-in attempts", 429, paused.getMessage(), path,
+                    List.of());
+        }
+        return new Problem("/problems/unauthorized", "Sign-in required", 401, "valid credentials are required", path,
+                List.of());
     }
 
     private static List<FieldError> fieldList(String field, String message) {
