@@ -12,6 +12,8 @@ import java.util.HexFormat;
 import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
 import java.util.concurrent.ConcurrentHashMap;
 
 /**
@@ -20,7 +22,8 @@ import java.util.concurrent.ConcurrentHashMap;
  * answer takes as long as for a known account and its timing does not tell which accounts exist. bcrypt is slow on
  * purpose (~50 ms), so a verified pair is remembered for a few minutes as a SHA-256 digest (never the password
  * itself); a phone posting movements one by one then costs one bcrypt check, not one per request. Any account change
- * clears the memory.
+ * clears the memory. Simultaneous checks of the same name and password (a phone sending its queue at once) wait for
+ * one bcrypt check and share its outcome, so they take one place in the throttle, not one each.
  */
 @ApplicationScoped
 public class PasswordCheck {
@@ -30,6 +33,7 @@ public class PasswordCheck {
     }
 
     private final Map<String, Verified> verified = new ConcurrentHashMap<>();
+    private final Map<String, CompletableFuture<Set<String>>> checking = new ConcurrentHashMap<>();
     private final AccountService accounts;
     private final SignInThrottle throttle;
     private final String dummyHash;
@@ -59,6 +63,25 @@ public class PasswordCheck {
 
     /** The full check (blocking: reads the account and runs bcrypt). */
     public Set<String> check(String username, String password, String address) {
+        String digest = digest(username, password);
+        CompletableFuture<Set<String>> mine = new CompletableFuture<>();
+        CompletableFuture<Set<String>> running = checking.putIfAbsent(username + "\u0000" + digest, mine);
+        if (running != null) {
+            return outcomeOf(running);
+        }
+        try {
+            Set<String> roles = checkOnce(username, password, digest, address);
+            mine.complete(roles);
+            return roles;
+        } catch (RuntimeException e) {
+            mine.completeExceptionally(e);
+            throw e;
+        } finally {
+            checking.remove(username + "\u0000" + digest, mine);
+        }
+    }
+
+    private Set<String> checkOnce(String username, String password, String digest, String address) {
         SignInThrottle.Attempt attempt = throttle.begin(username, address);
         try {
             Optional<UserAccount> account = accounts.findEnabled(username);
@@ -69,11 +92,21 @@ public class PasswordCheck {
             }
             attempt.succeeded();
             Set<String> roles = account.get().roleSet();
-            verified.put(username, new Verified(digest(username, password), roles,
-                    System.currentTimeMillis() + REMEMBER_MILLIS));
+            verified.put(username, new Verified(digest, roles, System.currentTimeMillis() + REMEMBER_MILLIS));
             return roles;
         } finally {
             attempt.abandoned();
+        }
+    }
+
+    private static Set<String> outcomeOf(CompletableFuture<Set<String>> running) {
+        try {
+            return running.join();
+        } catch (CompletionException e) {
+            if (e.getCause() instanceof RuntimeException cause) {
+                throw cause;
+            }
+            throw e;
         }
     }
 

@@ -2,6 +2,7 @@ package org.depotcast.repairs;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.common.IdempotencyKey;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.access.Roles;
 import org.depotcast.catalogue.Part;
@@ -230,7 +231,7 @@ public class RepairService {
             MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, line.part.partNumber, kit.code, null,
                     line.quantity, repair.fixedOn.atStartOfDay().atOffset(ZoneOffset.UTC),
                     repair.kind == RepairKind.BREAKDOWN ? "breakdown repair" : "preventive service",
-                    repair.repairRef, "repair:" + repair.repairRef + ":" + line.part.partNumber, null, repair.id);
+                    repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + line.part.partNumber), null, repair.id);
             ledger.postWithin(command);
         }
     }

@@ -6,6 +6,7 @@ import io.quarkus.security.ForbiddenException;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.LockModeType;
 import jakarta.transaction.Transactional;
+import org.depotcast.common.IdempotencyKey;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
@@ -204,7 +205,7 @@ public class RequestService {
             if (line.quantityApproved.signum() > 0) {
                 ledger.postWithin(new MovementCommand(MovementKind.ISSUE_TO_KIT, line.partToIssue().partNumber,
                         request.depot.code, request.kit.code, line.quantityApproved, null, "parts request",
-                        request.clientRef, "request:" + request.id + ":" + line.id, null, null));
+                        request.clientRef, IdempotencyKey.internal("request", request.id + ":" + line.id), null, null));
                 line.quantityIssued = line.quantityApproved;
             }
         }

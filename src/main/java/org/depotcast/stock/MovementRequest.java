@@ -1,6 +1,7 @@
 package org.depotcast.stock;
 
 import jakarta.validation.constraints.NotBlank;
+import org.depotcast.common.IdempotencyKey;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
 
@@ -16,7 +17,7 @@ public record MovementRequest(@NotNull MovementKind kind, @NotBlank String partN
                               @NotNull BigDecimal quantity, OffsetDateTime occurredAt, @Size(max = 200) String reason,
                               @Size(max = 80) String reference, @Size(max = 80) String idempotencyKey) {
     MovementCommand toCommand() {
-        return new MovementCommand(kind, partNumber, from, to, quantity, occurredAt, reason, reference, idempotencyKey,
-                null, null);
+        return new MovementCommand(kind, partNumber, from, to, quantity, occurredAt, reason, reference,
+                IdempotencyKey.client("movement", idempotencyKey), null, null);
     }
 }

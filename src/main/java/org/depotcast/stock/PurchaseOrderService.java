@@ -2,6 +2,7 @@ package org.depotcast.stock;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.common.IdempotencyKey;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
@@ -117,7 +118,7 @@ public class PurchaseOrderService {
                         "part '" + receipt.partNumber() + "' is not on order '" + orderNumber + "'"));
         MovementCommand command = new MovementCommand(MovementKind.RECEIPT, receipt.partNumber(), null,
                 order.destination.code, receipt.quantity(), receipt.occurredAt(), "goods received", orderNumber,
-                receipt.idempotencyKey(), line.id, null);
+                IdempotencyKey.client("receipt", receipt.idempotencyKey()), line.id, null);
         PostedMovement posted = ledger.postWithin(command);
         if (!posted.replayed()) {
             line.receive(posted.movement().quantity());

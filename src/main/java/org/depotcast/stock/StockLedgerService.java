@@ -11,6 +11,7 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
+import org.depotcast.common.IdempotencyKey;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
 
@@ -49,19 +50,22 @@ public class StockLedgerService {
     }
 
     /**
-     * Posts in a transaction of its own. A race on creating a new balance row or on the idempotency key surfaces as
-     * a constraint violation; it is retried, and a resend under a known key returns the movement already posted.
+     * Posts a movement a client asked for, in a transaction of its own. Stock enters and leaves transit only with a
+     * transfer order (see planning's transfers), never as a movement of its own: the order knows where the stock is
+     * going, so nobody can re-point it to another depot. A race on creating a new balance row or on the idempotency
+     * key surfaces as a constraint violation; it is retried, and a resend under a known key returns the movement
+     * already posted (read and compared inside a transaction, so the loser of a race is answered like any resend).
      */
     public PostedMovement post(MovementCommand command) {
         String actor = currentUser.name();
         for (int attempt = 1; ; attempt++) {
             try {
-                return QuarkusTransaction.requiringNew().call(() -> postAs(command, actor));
+                return QuarkusTransaction.requiringNew().call(() -> postAs(command, actor, false));
             } catch (PersistenceException e) {
-                Optional<StockMovement> earlier = command.idempotencyKey() == null ? Optional.empty()
-                        : QuarkusTransaction.requiringNew().call(() -> movements.byIdempotencyKey(command.idempotencyKey()));
+                Optional<PostedMovement> earlier = command.idempotencyKey() == null ? Optional.empty()
+                        : QuarkusTransaction.requiringNew().call(() -> earlier(command, actor));
                 if (earlier.isPresent()) {
-                    return replay(earlier.get(), command);
+                    return earlier.get();
                 }
                 if (attempt == ATTEMPTS) {
                     throw new ConflictException(null, "the stock record was busy; try again");
@@ -70,18 +74,25 @@ public class StockLedgerService {
         }
     }
 
-    /** Posts inside the caller's transaction (a repair with its consumptions, a receipt with its order line). */
+    /**
+     * Posts inside the caller's transaction (a repair with its consumptions, a receipt with its order line, a
+     * transfer's legs into and out of transit).
+     */
     @Transactional(Transactional.TxType.MANDATORY)
     public PostedMovement postWithin(MovementCommand command) {
-        return postAs(command, currentUser.name());
+        try {
+            return postAs(command, currentUser.name(), true);
+        } catch (SameKeyPostedMeanwhile e) {
+            // The caller's transaction rolls back with this; a resend then gets the movement posted meanwhile.
+            throw new ConflictException("idempotencyKey", "a movement under this key was posted at the same moment; "
+                    + "send again to receive it");
+        }
     }
 
-    private PostedMovement postAs(MovementCommand command, String actor) {
-        if (command.idempotencyKey() != null) {
-            Optional<StockMovement> earlier = movements.byIdempotencyKey(command.idempotencyKey());
-            if (earlier.isPresent()) {
-                return replay(earlier.get(), command);
-            }
+    private PostedMovement postAs(MovementCommand command, String actor, boolean fromService) {
+        Optional<PostedMovement> resent = earlier(command, actor);
+        if (resent.isPresent()) {
+            return resent.get();
         }
         if (command.kind() == null) {
             throw new InvalidInputException("kind", "is required");
@@ -102,8 +113,19 @@ public class StockLedgerService {
                 throw new BusinessRuleException("to", "kit '" + kit.code + "' belongs to depot '" + kit.parent.code + "'");
             }
         }
+        if (!fromService && (isTransit(from) || isTransit(to))) {
+            throw new BusinessRuleException(isTransit(from) ? "from" : "to", "stock goes into and out of transit only by "
+                    + "dispatching and receiving a transfer (/api/planning/transfers)");
+        }
         requireMayAct(command.kind(), from, to);
         applyToBalances(part, from, to, quantity);
+        if (command.idempotencyKey() != null) {
+            // Same-key posts queue on the balance locks just taken; the one after the winner sees its movement.
+            resent = earlier(command, actor);
+            if (resent.isPresent()) {
+                throw new SameKeyPostedMeanwhile();
+            }
+        }
         StockMovement movement = new StockMovement();
         movement.kind = command.kind();
         movement.part = part;
@@ -115,7 +137,10 @@ public class StockLedgerService {
         movement.actor = actor;
         movement.reason = command.reason();
         movement.reference = command.reference();
-        movement.idempotencyKey = command.idempotencyKey();
+        if (command.idempotencyKey() != null) {
+            movement.idempotencyOwner = command.idempotencyKey().ownerFor(actor);
+            movement.idempotencyKey = command.idempotencyKey().key();
+        }
         movement.purchaseOrderLineId = command.purchaseOrderLineId();
         movement.repairId = command.repairId();
         movements.persist(movement);
@@ -123,6 +148,22 @@ public class StockLedgerService {
         MovementResponse posted = MovementResponse.from(movement);
         audit.record("MOVEMENT_POSTED", "stock_movement", Long.toString(movement.id), null, posted);
         return new PostedMovement(posted, false);
+    }
+
+    /**
+     * A same-key movement committed while this one waited for the balance locks: roll this attempt back (its balance
+     * changes too) and answer as a resend.
+     */
+    private static final class SameKeyPostedMeanwhile extends PersistenceException {
+    }
+
+    /** The movement already posted under this command's key by the same owner, if any, checked to be the same. */
+    private Optional<PostedMovement> earlier(MovementCommand command, String actor) {
+        IdempotencyKey key = command.idempotencyKey();
+        if (key == null) {
+            return Optional.empty();
+        }
+        return movements.byIdempotencyKey(key.ownerFor(actor), key.key()).map(m -> replay(m, command));
     }
 
     /**
@@ -139,6 +180,10 @@ public class StockLedgerService {
         }
         Location acting = from != null && from.kind != LocationKind.IN_TRANSIT ? from : to;
         scope.require(acting.id, acting.code);
+    }
+
+    private static boolean isTransit(Location location) {
+        return location != null && location.kind == LocationKind.IN_TRANSIT;
     }
 
     private void applyToBalances(Part part, Location from, Location to, BigDecimal quantity) {
@@ -181,9 +226,11 @@ public class StockLedgerService {
     private static PostedMovement replay(StockMovement earlier, MovementCommand command) {
         boolean same = earlier.kind == command.kind()
                 && Objects.equals(earlier.part.partNumber, command.partNumber())
-                && command.quantity() != null && earlier.quantity.compareTo(command.quantity()) == 0;
+                && command.quantity() != null && earlier.quantity.compareTo(command.quantity()) == 0
+                && Objects.equals(earlier.fromLocation == null ? null : earlier.fromLocation.code, command.fromCode())
+                && Objects.equals(earlier.toLocation == null ? null : earlier.toLocation.code, command.toCode());
         if (!same) {
-            throw new ConflictException("idempotencyKey", "key '" + command.idempotencyKey()
+            throw new ConflictException("idempotencyKey", "key '" + command.idempotencyKey().key()
                     + "' was already used for a different movement");
         }
         return new PostedMovement(MovementResponse.from(earlier), true);

@@ -47,6 +47,9 @@ public class StockMovement {
     public String actor;
     public String reason;
     public String reference;
+    /** Whose key it is: see {@link org.depotcast.common.IdempotencyKey#ownerFor(String)}. */
+    @Column(name = "idempotency_owner")
+    public String idempotencyOwner;
     @Column(name = "idempotency_key")
     public String idempotencyKey;
     @Column(name = "purchase_order_line_id")

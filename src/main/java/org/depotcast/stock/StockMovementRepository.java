@@ -12,8 +12,8 @@ import java.util.Optional;
 
 @ApplicationScoped
 class StockMovementRepository implements PanacheRepository<StockMovement> {
-    Optional<StockMovement> byIdempotencyKey(String key) {
-        return find("idempotencyKey", key).firstResultOptional();
+    Optional<StockMovement> byIdempotencyKey(String owner, String key) {
+        return find("idempotencyOwner = ?1 and idempotencyKey = ?2", owner, key).firstResultOptional();
     }
 
     /** @param visibleIds locations the caller may see, null for all */
