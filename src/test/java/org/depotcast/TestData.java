@@ -2,6 +2,7 @@ package org.depotcast;
 
 import io.restassured.specification.RequestSpecification;
 import jakarta.enterprise.context.ApplicationScoped;
+import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.PartRequest;
 import org.depotcast.catalogue.PartService;
@@ -15,10 +16,14 @@ import org.depotcast.stock.StockLedgerService;
 
 import java.math.BigDecimal;
 import java.util.concurrent.atomic.AtomicInteger;
+import java.util.function.Supplier;
 
 import static io.restassured.RestAssured.given;
 
-/** Builders for test data that never clash with the demo programme or with other tests. */
+/**
+ * Builders for test data that never clash with the demo programme or with other tests. They run as the system (a test
+ * thread has no one signed in, and the access scope grants such a caller nothing).
+ */
 @ApplicationScoped
 public class TestData {
     private static final AtomicInteger SEQUENCE = new AtomicInteger();
@@ -27,10 +32,12 @@ public class TestData {
     private final LocationService locations;
     private final StockLedgerService ledger;
     private final org.depotcast.access.AccountService accounts;
+    private final SystemWork system;
 
     TestData(PartService parts, LocationService locations, StockLedgerService ledger,
-             org.depotcast.access.AccountService accounts) {
+             org.depotcast.access.AccountService accounts, SystemWork system) {
         this.accounts = accounts;
+        this.system = system;
         this.parts = parts;
         this.locations = locations;
         this.ledger = ledger;
@@ -44,29 +51,40 @@ public class TestData {
         return given().auth().preemptive().basic(user, user + "-demo");
     }
 
+    /** Runs a direct service call as the system, as background work does. */
+    public <T> T asSystem(Supplier<T> work) {
+        return system.call("test", work);
+    }
+
+    public void asSystem(Runnable work) {
+        system.run("test", work);
+    }
+
     public String part(UnitOfIssue unit) {
         String number = unique("TP").toUpperCase();
-        parts.create(new PartRequest(number, "test part", ComponentFamily.CUP_SEAL, unit, 10, 10,
-                new BigDecimal("2.50"), "USD", "Test Supplier", 30, null, false, null));
+        asSystem(() -> parts.create(new PartRequest(number, "test part", ComponentFamily.CUP_SEAL, unit, 10, 10,
+                new BigDecimal("2.50"), "USD", "Test Supplier", 30, null, false, null)));
         return number;
     }
 
     public String depot() {
         String code = unique("TDEP").toUpperCase();
-        var depot = locations.create(new LocationRequest(code, "test depot", LocationKind.DEPOT, "CENTRAL", null, null, null));
-        accounts.addLocation("officer", depot.id);
+        asSystem(() -> {
+            var depot = locations.create(new LocationRequest(code, "test depot", LocationKind.DEPOT, "CENTRAL", null, null, null));
+            accounts.addLocation("officer", depot.id);
+        });
         return code;
     }
 
     public String kit(String depot, String mechanic) {
         String code = unique("TKIT").toUpperCase();
-        locations.create(new LocationRequest(code, "test kit", LocationKind.KIT, depot, null, null, mechanic));
+        asSystem(() -> locations.create(new LocationRequest(code, "test kit", LocationKind.KIT, depot, null, null, mechanic)));
         return code;
     }
 
     /** Puts stock at a location through the ledger, as a count that found it there. */
     public void stock(String part, String location, int quantity) {
-        ledger.post(MovementCommand.of(MovementKind.COUNT_ADJUSTMENT, part, null, location, BigDecimal.valueOf(quantity),
-                "test stock"));
+        asSystem(() -> ledger.post(MovementCommand.of(MovementKind.COUNT_ADJUSTMENT, part, null, location,
+                BigDecimal.valueOf(quantity), "test stock")));
     }
 }

@@ -1,6 +1,5 @@
 package org.depotcast.access;
 
-import io.quarkus.arc.Arc;
 import io.quarkus.security.ForbiddenException;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.EntityManager;
@@ -13,13 +12,16 @@ import java.util.Set;
 /**
  * Which stock locations the signed-in account may see and act on. Programme leads and admins: all. Stores
  * officers: the locations assigned to them (user_location) and the kits of their depots. Mechanics: their own kit.
- * Work done by the system itself (start-up loading, scheduled runs) is not limited. A scope is remembered per
- * account for {@link #REMEMBER_MILLIS} (every movement asks), and forgotten at once when any account or location
- * assignment changes.
+ * With no one signed in: nothing (the scope fails closed). Work done by the system itself (start-up loading,
+ * scheduled and background runs) runs inside {@link SystemWork} and sees everything; no request can obtain that.
+ * Account names carry no power. A scope is remembered per account for {@link #REMEMBER_MILLIS} (every movement
+ * asks), and forgotten at once when any account or location assignment changes.
  */
 @ApplicationScoped
 public class AccessScope {
     private static final long REMEMBER_MILLIS = 30_000;
+    private static final Scope EVERYTHING = new Scope(null, true, null);
+    private static final Scope NOTHING = new Scope(Set.of(), false, null);
 
     private final CurrentUser currentUser;
     private final EntityManager em;
@@ -51,9 +53,14 @@ public class AccessScope {
 
     @Transactional
     public Scope current() {
-        if (!Arc.container().requestContext().isActive() || CurrentUser.SYSTEM.equals(currentUser.name())
-                || currentUser.hasRole(Roles.ADMIN) || currentUser.hasRole(Roles.PROGRAMME_LEAD)) {
-            return new Scope(null, true, null);
+        if (currentUser.isSystem()) {
+            return EVERYTHING;
+        }
+        if (!currentUser.isSignedIn()) {
+            return NOTHING;
+        }
+        if (currentUser.hasRole(Roles.ADMIN) || currentUser.hasRole(Roles.PROGRAMME_LEAD)) {
+            return EVERYTHING;
         }
         String name = currentUser.name();
         Remembered known = remembered.get(name);
@@ -98,6 +105,16 @@ public class AccessScope {
     public void requireProgramme() {
         if (!current().programme()) {
             throw new ForbiddenException("programme-wide figures are for the programme lead and the central store");
+        }
+    }
+
+    /**
+     * 403 unless the account keeps the programme's catalogue (parts, substitutes, pump models): officers of the
+     * central store and admins (roles keep the lead and mechanics to reading it). Depot officers read it.
+     */
+    public void requireCatalogue() {
+        if (!current().programme()) {
+            throw new ForbiddenException("the catalogue (parts, substitutes, pump models) is kept by the central store");
         }
     }
 

@@ -17,6 +17,9 @@ public class AccountService {
     public record AccountsChanged() {
     }
 
+    /** Names that must never be an account, though no name carries any power. */
+    private static final Set<String> RESERVED_NAMES = Set.of("system", "anonymous", "internal");
+    private static final java.util.regex.Pattern NAME = java.util.regex.Pattern.compile("[a-z0-9._-]{1,60}");
     private static final Set<String> KNOWN_ROLES = Set.of(Roles.STORES_OFFICER, Roles.MECHANIC, Roles.PROGRAMME_LEAD,
             Roles.ADMIN);
 
@@ -70,6 +73,12 @@ public class AccountService {
 
     @Transactional
     public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId) {
+        if (username == null || !NAME.matcher(username).matches()) {
+            throw new InvalidInputException("username", "may hold 1 to 60 lower-case letters, digits and . _ - only");
+        }
+        if (RESERVED_NAMES.contains(username)) {
+            throw new InvalidInputException("username", "'" + username + "' is reserved");
+        }
         if (accounts.byUsername(username).isPresent()) {
             throw new ConflictException("username", "account '" + username + "' already exists");
         }

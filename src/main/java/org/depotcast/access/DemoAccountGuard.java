@@ -18,12 +18,14 @@ import java.util.Set;
 @ApplicationScoped
 class DemoAccountGuard {
     private final AccountService accounts;
+    private final SystemWork system;
     private final String mode;
     private final Optional<String> bootstrapAdminPassword;
 
-    DemoAccountGuard(AccountService accounts, @ConfigProperty(name = "depotcast.mode") String mode,
+    DemoAccountGuard(AccountService accounts, SystemWork system, @ConfigProperty(name = "depotcast.mode") String mode,
                      @ConfigProperty(name = "depotcast.bootstrap.admin-password") Optional<String> bootstrapAdminPassword) {
         this.accounts = accounts;
+        this.system = system;
         this.mode = mode;
         this.bootstrapAdminPassword = bootstrapAdminPassword;
     }
@@ -33,7 +35,7 @@ class DemoAccountGuard {
             return;
         }
         if (accounts.count() == 0 && bootstrapAdminPassword.isPresent()) {
-            accounts.create("admin", bootstrapAdminPassword.get(), Set.of(Roles.ADMIN), null);
+            system.run("bootstrap", () -> accounts.create("admin", bootstrapAdminPassword.get(), Set.of(Roles.ADMIN), null));
         }
         List<String> demo = withDemoPasswords(accounts.all());
         if (!demo.isEmpty()) {

@@ -2,6 +2,7 @@ package org.depotcast.catalogue;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.CsvOut;
@@ -24,10 +25,12 @@ public class PartService {
 
     private final PartRepository parts;
     private final AuditService audit;
+    private final AccessScope scope;
 
-    PartService(PartRepository parts, AuditService audit) {
+    PartService(PartRepository parts, AuditService audit, AccessScope scope) {
         this.parts = parts;
         this.audit = audit;
+        this.scope = scope;
     }
 
     public List<Part> all() {
@@ -65,6 +68,7 @@ public class PartService {
     /** Declares that {@code substitute} may be issued for {@code partNumber} (one direction). */
     @Transactional
     public void addSubstitute(String partNumber, String substitute) {
+        scope.requireCatalogue();
         Part part = parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         Part other = require("partNumber", substitute);
         if (part.id.equals(other.id)) {
@@ -79,6 +83,7 @@ public class PartService {
 
     @Transactional
     public Part create(PartRequest request) {
+        scope.requireCatalogue();
         if (parts.byPartNumber(request.partNumber()).isPresent()) {
             throw new ConflictException("partNumber", "part '" + request.partNumber() + "' already exists");
         }
@@ -91,6 +96,7 @@ public class PartService {
 
     @Transactional
     public Part update(String partNumber, PartRequest request) {
+        scope.requireCatalogue();
         Part part = parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         if (!partNumber.equals(request.partNumber())) {
             throw new ConflictException("partNumber", "the part number in the body must match the one in the path");
@@ -108,6 +114,7 @@ public class PartService {
     /** Creates or updates every part in the file, or, if any row is wrong, changes nothing. */
     @Transactional
     public int importCsv(String csv) {
+        scope.requireCatalogue();
         CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 11));
         Set<String> seen = new HashSet<>();
         List<PartRequest> requests = table.rows().stream().map(row -> read(row, seen)).toList();

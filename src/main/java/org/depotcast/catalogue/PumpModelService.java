@@ -26,8 +26,11 @@ public class PumpModelService {
     private final PumpModelRepository models;
     private final PartService parts;
     private final org.depotcast.access.AuditService audit;
+    private final org.depotcast.access.AccessScope scope;
 
-    PumpModelService(PumpModelRepository models, PartService parts, org.depotcast.access.AuditService audit) {
+    PumpModelService(PumpModelRepository models, PartService parts, org.depotcast.access.AuditService audit,
+                     org.depotcast.access.AccessScope scope) {
+        this.scope = scope;
         this.audit = audit;
         this.models = models;
         this.parts = parts;
@@ -116,7 +119,9 @@ public class PumpModelService {
         return CsvOut.write(CSV_COLUMNS, rows, List::of);
     }
 
+    /** Every change of a model (JSON or an import row) passes here: only those who keep the catalogue may make it. */
     private void apply(PumpModel model, PumpModelRequest request) {
+        scope.requireCatalogue();
         audit.record(model.id == null ? "PUMP_MODEL_CREATED" : "PUMP_MODEL_UPDATED", "pump_model", request.code(),
                 model.id == null ? null : PumpModelResponse.from(model), request);
         model.code = request.code();

@@ -8,6 +8,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.enterprise.event.Observes;
 import org.depotcast.access.AccountService;
 import org.depotcast.access.Roles;
+import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.fleet.PumpService;
@@ -43,12 +44,13 @@ class DemoProgrammeLoader {
     private final StockCountService counts;
     private final PurchaseOrderService orders;
     private final AccountService accounts;
+    private final SystemWork system;
     private final String mode;
     private final Path seedDirectory;
 
     DemoProgrammeLoader(PartService parts, PumpModelService models, LocationService locations, PumpService pumps,
                         UsageService usage, RepairService repairs, StockCountService counts,
-                        PurchaseOrderService orders, AccountService accounts,
+                        PurchaseOrderService orders, AccountService accounts, SystemWork system,
                         @ConfigProperty(name = "depotcast.mode") String mode,
                         @ConfigProperty(name = "depotcast.seed.directory") String seedDirectory) {
         this.parts = parts;
@@ -60,11 +62,16 @@ class DemoProgrammeLoader {
         this.counts = counts;
         this.orders = orders;
         this.accounts = accounts;
+        this.system = system;
         this.mode = mode;
         this.seedDirectory = Path.of(seedDirectory);
     }
 
     void load(@Observes @Priority(20) StartupEvent event) {
+        system.run("demo-load", this::loadIfEmpty);
+    }
+
+    private void loadIfEmpty() {
         if (!"demo".equals(mode) || !parts.all().isEmpty()) {
             return;
         }

@@ -249,7 +249,20 @@ public class PumpService {
         return location;
     }
 
+    /**
+     * The depot a pump leaves and the depot it goes to must both be the caller's, on every path that places a pump
+     * (registration, a JSON update, an import row): reading another depot's pump is refused, so is moving it.
+     */
+    private void requireMayPlace(Pump pump, Location depot) {
+        if (pump.id != null && !visible(pump)) {
+            throw new io.quarkus.security.ForbiddenException("pump '" + pump.assetId + "' is at depot '" + pump.depot.code
+                    + "', outside the locations assigned to you");
+        }
+        scope.require(depot.id, depot.code);
+    }
+
     private void apply(Pump pump, PumpRequest r, PumpModel model, Location depot) {
+        requireMayPlace(pump, depot);
         audit.record(pump.id == null ? "PUMP_REGISTERED" : "PUMP_UPDATED", "pump", r.assetId(),
                 pump.id == null ? null : PumpResponse.from(pump), r);
         pump.assetId = r.assetId();

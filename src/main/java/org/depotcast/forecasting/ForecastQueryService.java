@@ -92,8 +92,10 @@ public class ForecastQueryService {
         return out;
     }
 
+    /** A programme-wide model fit: for leads, admins and central-store officers (and the system's own runs). */
     @Transactional
     public FleetModelResponse fleetModel(String family) {
+        scope.requireProgramme();
         ComponentFamily parsed = QueryParams.optionalEnum("family", family, ComponentFamily.class);
         ForecastRun run = latestRun();
         FleetModelFitRecord r = repository.fitOf(run.id, parsed.name())

@@ -67,6 +67,7 @@ class ForecastResource {
 
     @GET
     @Path("runs/{id}")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public RunResponse run(@PathParam("id") long id) {
         return RunResponse.from(runs.run(id));
     }

@@ -4,6 +4,8 @@ import io.quarkus.logging.Log;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import io.quarkus.scheduler.Scheduled;
 import jakarta.enterprise.context.ApplicationScoped;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.common.ConflictException;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
@@ -30,12 +32,14 @@ public class ForecastRunService {
     private final FleetSnapshotLoader loader;
     private final ForecastRepository repository;
     private final ManagedExecutor executor;
+    private final SystemWork system;
+    private final AccessScope scope;
     private final int historyMonths;
     private final int horizonMonths;
     private final AtomicBoolean running = new AtomicBoolean();
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
-                       ManagedExecutor executor,
+                       ManagedExecutor executor, SystemWork system, AccessScope scope,
                        @ConfigProperty(name = "depotcast.forecast.history-months") int historyMonths,
                        @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths) {
         if (historyMonths < 24) {
@@ -48,6 +52,8 @@ public class ForecastRunService {
         this.loader = loader;
         this.repository = repository;
         this.executor = executor;
+        this.system = system;
+        this.scope = scope;
         this.historyMonths = historyMonths;
         this.horizonMonths = horizonMonths;
     }
@@ -55,17 +61,21 @@ public class ForecastRunService {
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
         if (running.compareAndSet(false, true)) {
-            execute(createRun("schedule"), LocalDate.now(ZoneOffset.UTC));
+            system.run("forecast-schedule", () -> execute(createRun("schedule"), LocalDate.now(ZoneOffset.UTC)));
         }
     }
 
-    /** Starts a run in the background and returns its id at once; 409 while another run is going. */
+    /**
+     * Starts a run in the background and returns its id at once; 409 while another run is going. A run recomputes
+     * the whole programme, so it is for the lead, admins and officers of the central store (403 otherwise).
+     */
     public long start(String trigger) {
+        scope.requireProgramme();
         if (!running.compareAndSet(false, true)) {
             throw new ConflictException(null, "a forecast run is already in progress");
         }
         long runId = createRun(trigger);
-        executor.runAsync(() -> execute(runId, LocalDate.now(ZoneOffset.UTC)));
+        executor.runAsync(() -> system.run("forecast-run", () -> execute(runId, LocalDate.now(ZoneOffset.UTC))));
         return runId;
     }
 
@@ -75,7 +85,7 @@ public class ForecastRunService {
             throw new ConflictException(null, "a forecast run is already in progress");
         }
         long runId = createRun(trigger);
-        execute(runId, today);
+        system.run("forecast-run", () -> execute(runId, today));
         return QuarkusTransaction.requiringNew().call(() -> repository.run(runId).orElseThrow());
     }
 

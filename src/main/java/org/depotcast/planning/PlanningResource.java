@@ -90,6 +90,7 @@ class PlanningResource {
 
     @GET
     @Path("transfers/suggestions")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public List<TransferResponses.Suggestion> suggestions(@QueryParam("part") String part) {
         return transfers.suggest(part);
     }

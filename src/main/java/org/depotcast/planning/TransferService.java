@@ -5,6 +5,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.LockModeType;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.CurrentUser;
+import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.EntityMissingException;
@@ -45,6 +46,7 @@ public class TransferService {
     private final Orders orders;
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
+    private final SystemWork system;
 
     @ApplicationScoped
     static class Orders implements PanacheRepository<TransferOrder> {
@@ -52,7 +54,8 @@ public class TransferService {
 
     TransferService(PlanningService planning, LocationService locations, PartService parts, StockLedgerService ledger,
                     CurrentUser currentUser, PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope,
-                    org.depotcast.access.AuditService audit) {
+                    org.depotcast.access.AuditService audit, SystemWork system) {
+        this.system = system;
         this.scope = scope;
         this.audit = audit;
         this.planning = planning;
@@ -71,17 +74,21 @@ public class TransferService {
         }
         List<Location> depots = locations.ofKind(LocationKind.DEPOT);
         var visible = scope.current();
-        Map<String, Map<String, StockPolicy>> byPart = new HashMap<>();
-        for (Location depot : depots) {
-            for (StockPolicy p : planning.policies(depot.code)) {
-                if (partNumber == null || partNumber.equals(p.partNumber())) {
-                    byPart.computeIfAbsent(p.partNumber(), k -> new HashMap<>()).put(depot.code, p);
+        // The plan balances every depot against every other, so it is made over all of them, as the system; an
+        // officer then sees the moves that touch the depots assigned to them.
+        List<TransferResponses.Suggestion> suggestions = system.call("transfer-suggestions", () -> {
+            Map<String, Map<String, StockPolicy>> byPart = new HashMap<>();
+            for (Location depot : depots) {
+                for (StockPolicy p : planning.policies(depot.code)) {
+                    if (partNumber == null || partNumber.equals(p.partNumber())) {
+                        byPart.computeIfAbsent(p.partNumber(), k -> new HashMap<>()).put(depot.code, p);
+                    }
                 }
             }
-        }
-        List<TransferResponses.Suggestion> suggestions = new ArrayList<>();
-        byPart.keySet().stream().sorted().forEach(part -> suggestions.addAll(suggestFor(part, depots, byPart.get(part))));
-        // An officer sees the moves that touch the depots assigned to them.
+            List<TransferResponses.Suggestion> all = new ArrayList<>();
+            byPart.keySet().stream().sorted().forEach(part -> all.addAll(suggestFor(part, depots, byPart.get(part))));
+            return all;
+        });
         Map<String, Long> ids = new HashMap<>();
         depots.forEach(d -> ids.put(d.code, d.id));
         return suggestions.stream().filter(s -> visible.sees(ids.get(s.from())) || visible.sees(ids.get(s.to()))).toList();

@@ -10,6 +10,7 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
+import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
@@ -61,6 +62,7 @@ public class SpendService {
     private final AccessScope scope;
     private final CurrentUser currentUser;
     private final AuditService audit;
+    private final SystemWork system;
     private final ObjectMapper json;
     /** A plain thread, outside any request: background runs act as the system once the caller was checked. */
     private final java.util.concurrent.ExecutorService background = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
@@ -80,7 +82,7 @@ public class SpendService {
     SpendService(Scenarios scenarios, Runs runs, PartService parts, PumpModelService models, LocationService locations,
                  FleetSnapshotLoader fleet, ForecastQueryService forecasts, ForecastRunService forecastRuns,
                  PlanningService planning, AccessScope scope, CurrentUser currentUser, AuditService audit,
-                 ObjectMapper json) {
+                 SystemWork system, ObjectMapper json) {
         this.scenarios = scenarios;
         this.runs = runs;
         this.parts = parts;
@@ -93,6 +95,7 @@ public class SpendService {
         this.scope = scope;
         this.currentUser = currentUser;
         this.audit = audit;
+        this.system = system;
         this.json = json;
     }
 
@@ -152,16 +155,7 @@ public class SpendService {
             return r;
         });
         // The caller's programme-wide view was checked above; the background work acts for it.
-        background.submit(() -> {
-            // Reads outside a transaction need a request context; nobody is signed in on it, so it acts as the system.
-            var context = io.quarkus.arc.Arc.container().requestContext();
-            context.activate();
-            try {
-                execute(run.id, scenario.name, definition);
-            } finally {
-                context.terminate();
-            }
-        });
+        background.submit(() -> system.run("spend-run", () -> execute(run.id, scenario.name, definition)));
         return run;
     }
 
@@ -185,6 +179,7 @@ public class SpendService {
     }
 
     public SpendRun run(long id) {
+        scope.requireProgramme();
         return QuarkusTransaction.requiringNew().call(() -> runs.findByIdOptional(id)
                 .orElseThrow(() -> new EntityMissingException(null, "spend run", id)));
     }

@@ -65,6 +65,74 @@ class AccessMatrixTest {
         }
     }
 
+    private static final String PART = "{\"partNumber\":\"{unique}\",\"description\":\"matrix part\","
+            + "\"family\":\"CUP_SEAL\",\"unitOfIssue\":\"EACH\",\"packSize\":1,\"minOrderQty\":1,\"unitCost\":1.5,"
+            + "\"currency\":\"USD\",\"supplier\":\"Matrix Supplies\",\"leadTimeDays\":30,\"critical\":false}";
+    private static final String MODEL = "{\"code\":\"{unique}\",\"name\":\"matrix model\",\"serviceIntervalHours\":9125,"
+            + "\"bom\":[{\"partNumber\":\"OB-CS-50\",\"basis\":\"PER_PUMP\",\"quantity\":1}]}";
+
+    /**
+     * Programme-wide things. The catalogue (parts, substitutes, pump models) is kept by the central store's officers
+     * and admins; depot officers and mechanics read it. Programme forecast runs, fleet-model fits, purchase plans and
+     * spend are for the lead, admins and central-store officers. Mechanics read no programme-wide fits or run counts.
+     * Bodies are valid, so a refusal is the access rule and not the validation.
+     */
+    @ParameterizedTest(name = "{0} {1} {2} -> {4}")
+    @CsvSource(delimiter = '|', value = {
+            // catalogue: read by all, changed by the central store and admins
+            "officer2 | GET | /api/parts | | 200",
+            "officer2 | GET | /api/pump-models | | 200",
+            "mechanic1 | GET | /api/pump-models | | 200",
+            "officer2 | POST | /api/parts | PART | 403",
+            "officer2 | PUT | /api/parts/OB-CS-50 | PART | 403",
+            "officer2 | POST | /api/parts/import | CSV | 403",
+            "officer2 | POST | /api/parts/OB-CS-50/substitutes | {\"partNumber\":\"OB-CS-63\"} | 403",
+            "officer2 | POST | /api/pump-models | MODEL | 403",
+            "officer | POST | /api/parts | PART | 201",
+            "admin | POST | /api/parts | PART | 201",
+            "officer | POST | /api/pump-models | MODEL | 201",
+            "lead | POST | /api/pump-models | MODEL | 403",
+            "mechanic1 | POST | /api/pump-models | MODEL | 403",
+            // programme forecasts and fits
+            "officer2 | POST | /api/forecast/runs | | 403",
+            "mechanic1 | POST | /api/forecast/runs | | 403",
+            "officer2 | GET | /api/forecast/fleet-models/pump_rod | | 403",
+            "mechanic1 | GET | /api/forecast/fleet-models/pump_rod | | 403",
+            "mechanic1 | GET | /api/forecast/runs/1 | | 403",
+            // purchase plans and spend
+            "officer2 | POST | /api/planning/purchase-plans | {\"budget\":100} | 403",
+            "officer2 | POST | /api/spend/scenarios | {\"name\":\"{unique}\",\"horizonYears\":1} | 403",
+            "officer2 | GET | /api/spend/scenarios | | 403",
+            "officer2 | GET | /api/spend/runs/1 | | 403",
+            "mechanic1 | GET | /api/spend/scenarios | | 403",
+            "officer | GET | /api/spend/scenarios | | 200",
+            "lead | GET | /api/spend/scenarios | | 200",
+    })
+    void programmeWideThings(String user, String method, String path, String body, int status) {
+        String unique = org.depotcast.TestData.unique("MX").toUpperCase();
+        String content = body == null ? "" : switch (body) {
+            case "PART" -> PART.replace("{unique}", unique);
+            case "MODEL" -> MODEL.replace("{unique}", unique);
+            case "CSV" -> "part_number,description,family,unit_of_issue,pack_size,min_order_qty,unit_cost,currency,"
+                    + "supplier,lead_time_days,shelf_life_days\n" + unique + ",csv part,CUP_SEAL,EACH,1,1,1.5,USD,S,30,\n";
+            default -> body.replace("{unique}", unique);
+        };
+        if (path.equals("/api/parts/OB-CS-50")) {
+            content = PART.replace("{unique}", "OB-CS-50");
+        }
+        var request = as(user).contentType(body != null && body.equals("CSV") ? "text/csv" : "application/json")
+                .body(content);
+        var response = switch (method) {
+            case "GET" -> request.get(path);
+            case "PUT" -> request.put(path);
+            default -> request.post(path);
+        };
+        response.then().statusCode(status);
+        if (status == 403) {
+            response.then().contentType("application/problem+json");
+        }
+    }
+
     @ParameterizedTest(name = "anonymous {0} -> 401")
     @CsvSource({"/api/parts", "/api/stock/balances", "/api/requests", "/api/audit", "/api/accounts"})
     void everyApiNeedsSignIn(String path) {

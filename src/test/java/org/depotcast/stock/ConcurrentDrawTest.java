@@ -43,7 +43,8 @@ class ConcurrentDrawTest {
             results.add(pool.submit(() -> {
                 start.await();
                 try {
-                    ledger.post(MovementCommand.of(MovementKind.ISSUE_TO_KIT, part, depot, kit, BigDecimal.ONE, "race"));
+                    data.asSystem(() -> ledger.post(MovementCommand.of(MovementKind.ISSUE_TO_KIT, part, depot, kit,
+                            BigDecimal.ONE, "race")));
                     return true;
                 } catch (BusinessRuleException refused) {
                     return false;
@@ -59,7 +60,7 @@ class ConcurrentDrawTest {
         assertEquals(5, succeeded);
         assertEquals(0, queries.onHand(part, depot).signum());
         assertEquals(0, new BigDecimal(5).compareTo(queries.onHand(part, kit)));
-        assertTrue(queries.reconcile().consistent());
+        assertTrue(data.asSystem(queries::reconcile).consistent());
     }
 
     @Test
@@ -72,7 +73,8 @@ class ConcurrentDrawTest {
         for (int i = 0; i < 8; i++) {
             results.add(pool.submit(() -> {
                 start.await();
-                return ledger.post(MovementCommand.of(MovementKind.COUNT_ADJUSTMENT, part, null, depot, BigDecimal.ONE, "found"));
+                return data.asSystem(() -> ledger.post(MovementCommand.of(MovementKind.COUNT_ADJUSTMENT, part, null,
+                        depot, BigDecimal.ONE, "found")));
             }));
         }
         start.countDown();

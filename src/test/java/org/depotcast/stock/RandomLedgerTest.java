@@ -55,7 +55,7 @@ class RandomLedgerTest {
             String fromKey = command.fromCode() == null ? null : part + "@" + command.fromCode();
             boolean enough = fromKey == null || model.getOrDefault(fromKey, 0) >= quantityOf(command);
             try {
-                ledger.post(command);
+                data.asSystem(() -> ledger.post(command));
                 assertTrue(enough, "ledger accepted a draw the model says is short");
                 if (fromKey != null) {
                     model.merge(fromKey, -quantityOf(command), Integer::sum);
@@ -74,7 +74,7 @@ class RandomLedgerTest {
             assertEquals(cell.getValue().intValue(), queries.onHand(key[0], key[1]).intValueExact(), cell.getKey());
             assertTrue(cell.getValue() >= 0);
         }
-        ReconcileReport report = queries.reconcile();
+        ReconcileReport report = data.asSystem(queries::reconcile);
         assertTrue(report.consistent(), () -> "mismatches: " + report.mismatches());
     }
 
