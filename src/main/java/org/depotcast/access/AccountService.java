@@ -42,6 +42,19 @@ public class AccountService {
         return accounts.allByName();
     }
 
+    /** The signed-in account as the pages need it: roles, assigned locations, kit. */
+    public record Profile(String username, Set<String> roles, List<String> locationCodes, String kitCode) {
+    }
+
+    @Transactional
+    public Profile profile(String username) {
+        UserAccount account = accounts.byUsername(username)
+                .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
+        String kit = account.kitLocationId == null ? null : accounts.locationCode(account.kitLocationId).orElse(null);
+        return new Profile(account.username, new java.util.TreeSet<>(account.roleSet()),
+                accounts.assignedLocationCodes(account.id), kit);
+    }
+
     public long count() {
         return accounts.count();
     }

@@ -14,6 +14,15 @@ class ForecastRepository implements PanacheRepository<PartForecast> {
                 .setParameter("done", ForecastRun.Status.DONE).setMaxResults(1).getResultStream().findFirst();
     }
 
+    List<ForecastRun> recentRuns(ForecastRun.Status status, int limit) {
+        if (status == null) {
+            return getEntityManager().createQuery("select r from ForecastRun r order by r.id desc", ForecastRun.class)
+                    .setMaxResults(limit).getResultList();
+        }
+        return getEntityManager().createQuery("select r from ForecastRun r where r.status = :status order by r.id desc",
+                ForecastRun.class).setParameter("status", status).setMaxResults(limit).getResultList();
+    }
+
     Optional<ForecastRun> run(long id) {
         return Optional.ofNullable(getEntityManager().find(ForecastRun.class, id));
     }

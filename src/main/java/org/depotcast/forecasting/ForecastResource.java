@@ -65,6 +65,14 @@ class ForecastResource {
                 .location(uri.getAbsolutePathBuilder().path(Long.toString(id)).build()).build();
     }
 
+    /** Recent runs, newest first: {@code status=DONE&limit=1} is the run whose forecasts planning uses now. */
+    @GET
+    @Path("runs")
+    public List<RunResponse> runs(@QueryParam("status") String status, @QueryParam("limit") String limit) {
+        return runs.recent(QueryParams.optionalEnum("status", status, ForecastRun.Status.class),
+                QueryParams.intInRange("limit", limit, 10, 1, 100)).stream().map(RunResponse::from).toList();
+    }
+
     @GET
     @Path("runs/{id}")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})

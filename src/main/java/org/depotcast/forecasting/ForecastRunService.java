@@ -93,6 +93,11 @@ public class ForecastRunService {
         return QuarkusTransaction.requiringNew().call(repository::latestFinishedRun);
     }
 
+    /** Newest first; {@code status} null for every state. */
+    public java.util.List<ForecastRun> recent(ForecastRun.Status status, int limit) {
+        return QuarkusTransaction.requiringNew().call(() -> repository.recentRuns(status, limit));
+    }
+
     public ForecastRun run(long id) {
         return QuarkusTransaction.requiringNew().call(() -> repository.run(id)
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "forecast run", id)));
