@@ -26,7 +26,7 @@ function s(tag, attrs = {}, ...children) {
             el.setAttribute(k, v);
         }
     }
-    children.flat().forEach(c => c !== null && c !== undefined && el.append(c instanceof Node ? c : document.createTextNode(String(c))));
+    children.flat(Infinity).forEach(c => c !== null && c !== undefined && el.append(c instanceof Node ? c : document.createTextNode(String(c))));
     return el;
 }
 
