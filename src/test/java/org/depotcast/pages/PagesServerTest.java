@@ -35,7 +35,7 @@ class PagesServerTest {
                 .body("locationCodes", empty()).body("home", equalTo("/app/mechanic/"));
         as("lead").get("/api/me").then().statusCode(200).body("home", equalTo("/app/lead/"));
         as("admin").get("/api/me").then().statusCode(200).body("home", equalTo("/app/admin/"));
-        given().get("/api/me").then().statusCode(401);
+        given().get("/api/me").then().statusCode(401).contentType(PROBLEM);
     }
 
     @Test

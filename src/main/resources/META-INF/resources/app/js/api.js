@@ -12,7 +12,7 @@
  * refused (403), offline.
  */
 export const PAGE_HEADER = 'X-Requested-With';
-const PAGE_HEADER_VALUE = 'depotcast-pages';
+export const PAGE_HEADER_VALUE = 'depotcast';
 export const SIGNED_IN_MARK = 'depotcast.signed-in';
 
 export class ApiError extends Error {

@@ -28,7 +28,7 @@ export function roleWords(roles) {
 export async function signOut() {
     try {
         await fetch('/sign-out', {method: 'POST', credentials: 'same-origin',
-            headers: {Accept: 'application/json', [api.PAGE_HEADER]: 'depotcast-pages'}});
+            headers: {Accept: 'application/json', [api.PAGE_HEADER]: api.PAGE_HEADER_VALUE}});
     } finally {
         localStorage.removeItem(api.SIGNED_IN_MARK);
         location.assign('/sign-in.html?signed-out');

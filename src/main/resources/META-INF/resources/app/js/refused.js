@@ -15,7 +15,7 @@ const which = (PAGE_WORDS.find(([path]) => page.startsWith(path)) || [null, 'thi
 const whom = forRoles.map(r => `${ROLE_WORDS[r] || r}s`).join(' and ');
 const own = LINKS.filter(l => me.roles.includes(l.role));
 mount(document.getElementById('explain'),
-    h('p', {}, `You opened ${which}${whom ? `, which is for ${whom}` : ''}.`),
+    h('p', {}, `You opened ${which}${whom ? ` (for ${whom})` : ''}.`),
     h('p', {}, `You are signed in as ${me.username} (${roleWords(me.roles)}).`),
     own.length ? h('p', {}, 'Your own pages: ', own.map((l, i) => [i ? ', ' : '', h('a', {href: l.href}, l.label)])) : null,
     h('p', {}, 'If you need this page for your work, ask the programme\'s administrator to give your account that role. '
