@@ -50,8 +50,8 @@ class PagesServerTest {
 
     @Test
     void pagesAndTheirFilesAreServedWithoutSignIn() {
-        given().get("/app/officer/").then().statusCode(200).contentType(containsString("text/html"))
-                .body(containsString("Morning board"));
+        given().get("/app/mechanic/").then().statusCode(200).contentType(containsString("text/html"))
+                .body(containsString("My kit and pumps"));
         given().get("/app/js/api.js").then().statusCode(200).contentType(containsString("javascript"));
         given().get("/app/css/app.css").then().statusCode(200).contentType(containsString("text/css"));
         given().get("/app/favicon.svg").then().statusCode(200).contentType(containsString("svg"));

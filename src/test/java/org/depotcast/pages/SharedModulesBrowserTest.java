@@ -76,9 +76,9 @@ class SharedModulesBrowserTest extends BrowserSession {
 
     @Test
     void aPageOpenedWithoutSignInGoesToTheSignInPageAndComesBackAfterwards() {
-        open("/app/officer/");
+        open("/app/mechanic/");
         wait(Duration.ofSeconds(20)).until(d -> d.getCurrentUrl().contains("/sign-in.html"));
-        assertTrue(driver.getCurrentUrl().contains("next=%2Fapp%2Fofficer%2F"), driver.getCurrentUrl());
+        assertTrue(driver.getCurrentUrl().contains("next=%2Fapp%2Fmechanic%2F"), driver.getCurrentUrl());
         assertTrue(!driver.getCurrentUrl().contains("expired"), "never signed in here: no 'session ended' message");
         List<String> problems = pageProblems();
         assertTrue(problems.stream().allMatch(p -> p.contains("401") && p.contains("/api/me")), problems.toString());
