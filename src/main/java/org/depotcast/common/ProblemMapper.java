@@ -73,6 +73,11 @@ public class ProblemMapper {
         return respond(409, "conflict", "Conflict with current state", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
     }
 
+    @ServerExceptionMapper
+    public Response noForecastYet(NoForecastYetException e, UriInfo uri) {
+        return respond(409, "no-forecast-yet", "Run the forecasts first", e.getMessage(), uri, List.of());
+    }
+
     @ServerExceptionMapper({OptimisticLockException.class, StaleObjectStateException.class})
     public Response stale(RuntimeException e, UriInfo uri) {
         return respond(409, "conflict", "Conflict with current state",

@@ -68,6 +68,31 @@ public class ForecastQueryService {
         return rates;
     }
 
+    /** Whether any forecast run has finished: planning answers nothing before one has. */
+    @Transactional
+    public boolean anyRunFinished() {
+        return repository.latestFinishedRun().isPresent();
+    }
+
+    /**
+     * Breakdown demand alone per part number at a location from the latest finished run (scheduled services left
+     * out): what a kit's shortfall costs in pumps without water, services being planned work.
+     */
+    @Transactional
+    public Map<String, DemandRate> breakdownsAt(String locationCode) {
+        Map<String, DemandRate> rates = new java.util.HashMap<>();
+        Optional<ForecastRun> run = repository.latestFinishedRun();
+        if (run.isEmpty()) {
+            return rates;
+        }
+        Map<Long, String> numbers = new java.util.HashMap<>();
+        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
+            rates.put(numbers.get(f.partId), new DemandRate(f.breakdownPerMonth, f.variancePerMonth, f.method));
+        }
+        return rates;
+    }
+
     @Transactional
     public StoredForecastResponse forPart(String partNumber, String locationCode) {
         String location = locationCode == null ? DemandAssembler.PROGRAMME : locationCode;

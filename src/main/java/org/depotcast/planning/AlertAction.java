@@ -31,6 +31,8 @@ public class AlertAction {
     @Enumerated(EnumType.STRING)
     @Column(nullable = false)
     public Action action;
+    /** Every reason the alert had when the action was taken, comma-separated; {@code alertKind} is the first. */
+    public String reasons;
     @Column(name = "snoozed_until")
     public LocalDate snoozedUntil;
     public String note;

@@ -23,9 +23,17 @@ public final class PlanningRequests {
                                        double expectedBackorders, String distribution) {
     }
 
-    public record AlertActionRequest(@NotBlank String partNumber, @NotBlank String location, @NotNull AlertKind kind,
+    /**
+     * Acknowledges or snoozes the alert of a part at a location; it covers every reason the alert has now. With
+     * {@code kind}, the alert must carry that reason (else 404).
+     */
+    public record AlertActionRequest(@NotBlank String partNumber, @NotBlank String location, AlertKind kind,
                                      @NotNull AlertAction.Action action, LocalDate snoozeUntil,
                                      @Size(max = 300) String note) {
+    }
+
+    public record AlertActionResponse(long id, AlertAction.Action action, String actor, java.util.List<String> reasons,
+                                      LocalDate snoozedUntil) {
     }
 
     public record PurchasePlanRequest(@NotNull @DecimalMin(value = "0", inclusive = false)

@@ -25,11 +25,14 @@ import java.util.List;
 @Produces(MediaType.APPLICATION_JSON)
 class PlanningResource {
     private final PlanningService planning;
+    private final AlertService alerts;
     private final PurchasePlanService purchasePlans;
     private final TransferService transfers;
 
-    PlanningResource(PlanningService planning, PurchasePlanService purchasePlans, TransferService transfers) {
+    PlanningResource(PlanningService planning, AlertService alerts, PurchasePlanService purchasePlans,
+                     TransferService transfers) {
         this.planning = planning;
+        this.alerts = alerts;
         this.purchasePlans = purchasePlans;
         this.transfers = transfers;
     }
@@ -40,12 +43,15 @@ class PlanningResource {
         return location == null ? planning.programmePolicies() : planning.policies(location);
     }
 
-    /** Alerts for one location (or every depot and the central store), worst consequence first. */
+    /**
+     * One alert per part and location (the named one, or every depot and the central store), with every reason that
+     * applies, worst expected pump-days without water first; {@code kind} keeps those carrying that reason.
+     */
     @GET
     @Path("alerts")
     public List<ReorderAlert> alerts(@QueryParam("location") String location, @QueryParam("kind") String kind,
                                      @QueryParam("includeSnoozed") String includeSnoozed) {
-        return planning.alerts(location, QueryParams.optionalEnum("kind", kind, AlertKind.class),
+        return alerts.alerts(location, QueryParams.optionalEnum("kind", kind, AlertKind.class),
                 "true".equalsIgnoreCase(includeSnoozed));
     }
 
@@ -54,8 +60,9 @@ class PlanningResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public Response act(@Valid @NotNull PlanningRequests.AlertActionRequest r) {
-        AlertAction a = planning.act(r.partNumber(), r.location(), r.kind(), r.action(), r.snoozeUntil(), r.note());
-        return Response.status(201).entity(java.util.Map.of("id", a.id, "action", a.action, "actor", a.actor)).build();
+        AlertAction a = alerts.act(r.partNumber(), r.location(), r.kind(), r.action(), r.snoozeUntil(), r.note());
+        return Response.status(201).entity(new PlanningRequests.AlertActionResponse(a.id, a.action, a.actor,
+                List.of(a.reasons.split(",")), a.snoozedUntil)).build();
     }
 
     @POST

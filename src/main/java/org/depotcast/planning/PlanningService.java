@@ -6,9 +6,9 @@ import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.NoForecastYetException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.forecasting.ForecastQueryService;
-import org.depotcast.repairs.RepairService;
 import org.depotcast.stock.BalanceView;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
@@ -19,7 +19,6 @@ import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
-import java.util.Comparator;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -36,7 +35,6 @@ public class PlanningService {
     private final LocationService locations;
     private final StockQueryService stock;
     private final ForecastQueryService forecasts;
-    private final RepairService repairs;
     private final AlertActionRepository actions;
     private final CurrentUser currentUser;
     private final PolicyCalculator calculator;
@@ -46,7 +44,7 @@ public class PlanningService {
     private final org.depotcast.requests.RequestService requests;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
-                    RepairService repairs, AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings,
+                    AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings,
                     org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
                     org.depotcast.requests.RequestService requests) {
         this.requests = requests;
@@ -56,24 +54,41 @@ public class PlanningService {
         this.locations = locations;
         this.stock = stock;
         this.forecasts = forecasts;
-        this.repairs = repairs;
         this.actions = actions;
         this.currentUser = currentUser;
         this.calculator = new PolicyCalculator(settings);
         this.settings = settings;
     }
 
-    /** Policies of every part with stock, stock on order or forecast demand at the location. */
+    /**
+     * Policies of every part with stock, stock on order or forecast demand at the location. A part held here with no
+     * forecast in the latest run says so ({@code forecastMethod} "no forecast"); its demand is not taken as zero.
+     * 409 before the first forecast run.
+     */
     @Transactional
     public List<StockPolicy> policies(String locationCode) {
+        requireForecasts();
         Location location = locations.require("location", locationCode);
         scope.require(location.id, location.code);
+        return policiesAt(location, false);
+    }
+
+    /** 409 (run the forecasts first) until a forecast run has finished: planning from no demand would mislead. */
+    void requireForecasts() {
+        if (!forecasts.anyRunFinished()) {
+            throw new NoForecastYetException();
+        }
+    }
+
+    /** Policies at a location in scope; with {@code breakdownsOnly}, from breakdown demand alone (no services). */
+    List<StockPolicy> policiesAt(Location location, boolean breakdownsOnly) {
         if (location.kind == LocationKind.IN_TRANSIT) {
             throw new InvalidInputException("location", "stock in transit has no reorder policy");
         }
         String forecastKey = location.kind == LocationKind.CENTRAL_STORE ? PROGRAMME : location.code;
         int horizonMonths = location.kind == LocationKind.KIT ? 2 : 3;
-        Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(forecastKey, horizonMonths);
+        Map<String, ForecastQueryService.DemandRate> demand = breakdownsOnly ? forecasts.breakdownsAt(forecastKey)
+                : forecasts.demandAt(forecastKey, horizonMonths);
         Map<String, double[]> onHandOnOrder = new HashMap<>();
         for (BalanceView b : stock.balances(location.code)) {
             onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
@@ -88,7 +103,7 @@ public class PlanningService {
                 continue;
             }
             policies.add(calculator.policy(part, location.code, location.kind, rate == null ? 0 : rate.monthlyMean(),
-                    rate == null ? 0 : rate.monthlyVariance(), rate == null ? "none" : rate.method(),
+                    rate == null ? 0 : rate.monthlyVariance(), rate == null ? AlertRules.NO_FORECAST : rate.method(),
                     held == null ? 0 : held[0], held == null ? 0 : held[1],
                     committed.getOrDefault(location.code + "|" + part.partNumber, java.math.BigDecimal.ZERO).doubleValue(),
                     levels));
@@ -109,6 +124,7 @@ public class PlanningService {
     @Transactional
     public List<StockPolicy> programmePolicies(Double serviceLevel) {
         scope.requireProgramme();
+        requireForecasts();
         PolicyCalculator.ServiceLevels levels = serviceLevels(serviceLevel);
         Location central = locations.ofKind(LocationKind.CENTRAL_STORE).stream().findFirst()
                 .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
@@ -126,7 +142,7 @@ public class PlanningService {
             double[] held = echelon.getOrDefault(part.partNumber, new double[3]);
             policies.add(calculator.policy(part, central.code, LocationKind.CENTRAL_STORE,
                     rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
-                    rate == null ? "none" : rate.method(), held[0], held[1], 0, levels));
+                    rate == null ? AlertRules.NO_FORECAST : rate.method(), held[0], held[1], 0, levels));
         }
         return policies;
     }
@@ -161,68 +177,5 @@ public class PlanningService {
                 .setParameter(1, partClass).setParameter(2, level).setParameter(3, currentUser.name())
                 .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate();
         audit.record("SERVICE_LEVEL_SET", "service_level", partClass, before, Map.of("level", level));
-    }
-
-    /** Alerts at one location (or every depot and the central store), worst consequence first. */
-    @Transactional
-    public List<ReorderAlert> alerts(String locationCode, AlertKind onlyKind, boolean includeSnoozed) {
-        List<String> codes = new ArrayList<>();
-        if (locationCode != null) {
-            codes.add(locationCode);
-        } else {
-            var visible = scope.current();
-            locations.ofKind(LocationKind.CENTRAL_STORE).stream().filter(l -> visible.sees(l.id)).forEach(l -> codes.add(l.code));
-            locations.ofKind(LocationKind.DEPOT).stream().filter(l -> visible.sees(l.id)).forEach(l -> codes.add(l.code));
-        }
-        Map<String, Long> waiting = repairs.openNeeds();
-        Map<String, AlertAction> latestActions = new HashMap<>();
-        Map<Long, String> partNumbers = new HashMap<>();
-        parts.all().forEach(p -> partNumbers.put(p.id, p.partNumber));
-        for (AlertAction a : actions.at(locationCode)) {
-            latestActions.put(partNumbers.get(a.partId) + "|" + a.locationCode + "|" + a.alertKind, a);
-        }
-        LocalDate today = LocalDate.now(ZoneOffset.UTC);
-        List<ReorderAlert> alerts = new ArrayList<>();
-        for (String code : codes) {
-            for (StockPolicy p : policies(code)) {
-                for (ReorderAlert alert : AlertRules.raise(p, waiting.getOrDefault(code + "|" + p.partNumber(), 0L))) {
-                    AlertAction action = latestActions.get(alert.partNumber() + "|" + code + "|" + alert.kind());
-                    boolean snoozed = action != null && action.action == AlertAction.Action.SNOOZE
-                            && action.snoozedUntil != null && action.snoozedUntil.isAfter(today);
-                    if ((onlyKind != null && alert.kind() != onlyKind) || (snoozed && !includeSnoozed)) {
-                        continue;
-                    }
-                    alerts.add(AlertRules.withAction(alert, action != null, snoozed ? action.snoozedUntil : null));
-                }
-            }
-        }
-        alerts.sort(Comparator.comparingDouble(ReorderAlert::pumpDaysAtRisk).reversed()
-                .thenComparing(ReorderAlert::partNumber));
-        return alerts;
-    }
-
-    /** Records an acknowledgement or a snooze; the alert itself is recomputed from stock and forecasts each time. */
-    @Transactional
-    public AlertAction act(String partNumber, String locationCode, AlertKind kind, AlertAction.Action action,
-                           LocalDate snoozeUntil, String note) {
-        Part part = parts.require("partNumber", partNumber);
-        Location location = locations.require("location", locationCode);
-        scope.require(location.id, location.code);
-        if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(ZoneOffset.UTC)))) {
-            throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
-        }
-        AlertAction record = new AlertAction();
-        record.partId = part.id;
-        record.locationCode = locationCode;
-        record.alertKind = kind;
-        record.action = action;
-        record.snoozedUntil = action == AlertAction.Action.SNOOZE ? snoozeUntil : null;
-        record.note = note;
-        record.actor = currentUser.name();
-        record.actedAt = OffsetDateTime.now(ZoneOffset.UTC);
-        actions.persist(record);
-        audit.record("ALERT_" + action.name(), "alert", partNumber + "@" + locationCode + ":" + kind, null,
-                java.util.Map.of("snoozedUntil", String.valueOf(record.snoozedUntil), "note", String.valueOf(note)));
-        return record;
     }
 }

@@ -141,7 +141,7 @@ public class SpendService {
                 .orElseThrow(() -> new EntityMissingException(null, "spend scenario", scenarioId)));
         ScenarioDefinition definition = fromJson(scenario.definition);
         if (forecastRuns.latestFinished().isEmpty()) {
-            throw new BusinessRuleException("scenarioId", "no forecast run has finished yet: run the forecasts first");
+            throw new org.depotcast.common.NoForecastYetException();
         }
         SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
             SpendRun r = new SpendRun();

@@ -39,7 +39,7 @@ class ScaleBenchmark {
     @Inject
     ForecastRunService runs;
     @Inject
-    org.depotcast.planning.PlanningService planning;
+    org.depotcast.planning.AlertService alertService;
     @Inject
     org.depotcast.planning.PurchasePlanService purchasePlans;
     @Inject
@@ -94,7 +94,7 @@ class ScaleBenchmark {
         for (int round = 0; round < planSeconds.length; round++) {
             long planStart = System.nanoTime();
             // Called directly, with no one signed in: the programme-wide view is the system's.
-            alerts = system.call("benchmark", () -> planning.alerts(null, null, false).size());
+            alerts = system.call("benchmark", () -> alertService.alerts(null, null, false).size());
             lines = system.call("benchmark", () -> purchasePlans.propose(new java.math.BigDecimal("250000"),
                     LocalDate.of(2026, 12, 2)).lines().size());
             suggestions = system.call("benchmark", () -> transfers.suggest(null).size());

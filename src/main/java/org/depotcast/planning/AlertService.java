@@ -1,0 +1,176 @@
+package org.depotcast.planning;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.repairs.RepairService;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Reorder alerts: one per part and location, recomputed from stock, forecasts and waiting pumps each time, and the
+ * officers' acknowledgements and snoozes that quieten them. Reads stock only; planning never changes it.
+ */
+@ApplicationScoped
+public class AlertService {
+    private final PlanningService planning;
+    private final PartService parts;
+    private final LocationService locations;
+    private final RepairService repairs;
+    private final AlertActionRepository actions;
+    private final CurrentUser currentUser;
+    private final PlanningSettings settings;
+    private final AccessScope scope;
+    private final AuditService audit;
+
+    AlertService(PlanningService planning, PartService parts, LocationService locations, RepairService repairs,
+                 AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings, AccessScope scope,
+                 AuditService audit) {
+        this.planning = planning;
+        this.parts = parts;
+        this.locations = locations;
+        this.repairs = repairs;
+        this.actions = actions;
+        this.currentUser = currentUser;
+        this.settings = settings;
+        this.scope = scope;
+        this.audit = audit;
+    }
+
+    /**
+     * One alert per part and location (the named one, or every depot and the central store the caller sees, and a
+     * mechanic's own kit), each with every reason that applies, worst expected pump-days without water first.
+     * 409 before the first forecast run.
+     */
+    @Transactional
+    public List<ReorderAlert> alerts(String locationCode, AlertKind onlyKind, boolean includeSnoozed) {
+        planning.requireForecasts();
+        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        Map<String, AlertAction> latest = latestActions(locationCode);
+        Map<String, List<ReorderAlert.WaitingPump>> waiting = waitingPumps(today);
+        List<ReorderAlert> alerts = new ArrayList<>();
+        for (Location location : alertLocations(locationCode)) {
+            for (ReorderAlert raised : raiseAt(location, waiting)) {
+                ReorderAlert alert = AlertActionFold.apply(raised, latest.get(raised.partNumber() + "|" + location.code),
+                        today, reviewDays(location));
+                if ((onlyKind == null || alert.has(onlyKind)) && (includeSnoozed || alert.snoozedUntil() == null)) {
+                    alerts.add(alert);
+                }
+            }
+        }
+        alerts.sort(Comparator.comparingDouble(ReorderAlert::pumpDaysAtRisk).reversed()
+                .thenComparing(ReorderAlert::locationCode).thenComparing(ReorderAlert::partNumber));
+        return alerts;
+    }
+
+    private List<Location> alertLocations(String locationCode) {
+        if (locationCode != null) {
+            Location location = locations.require("location", locationCode);
+            scope.require(location.id, location.code);
+            return List.of(location);
+        }
+        var visible = scope.current();
+        List<Location> where = new ArrayList<>();
+        locations.ofKind(LocationKind.CENTRAL_STORE).stream().filter(l -> visible.sees(l.id)).forEach(where::add);
+        locations.ofKind(LocationKind.DEPOT).stream().filter(l -> visible.sees(l.id)).forEach(where::add);
+        if (visible.mechanic() != null) {
+            locations.kitOf(visible.mechanic()).ifPresent(where::add);
+        }
+        return where;
+    }
+
+    /** The alerts raised at one location; a kit's are ranked by breakdown risk alone. */
+    private List<ReorderAlert> raiseAt(Location location, Map<String, List<ReorderAlert.WaitingPump>> waiting) {
+        Map<String, StockPolicy> breakdowns = new HashMap<>();
+        if (location.kind == LocationKind.KIT) {
+            planning.policiesAt(location, true).forEach(p -> breakdowns.put(p.partNumber(), p));
+        }
+        List<ReorderAlert> raised = new ArrayList<>();
+        for (StockPolicy p : planning.policiesAt(location, false)) {
+            ReorderAlert alert = AlertRules.raise(p, waiting.getOrDefault(location.code + "|" + p.partNumber(), List.of()),
+                    breakdowns.get(p.partNumber()));
+            if (alert != null) {
+                raised.add(alert);
+            }
+        }
+        return raised;
+    }
+
+    /** Broken pumps waiting for parts today, keyed "depotCode|partNumber", longest wait first. */
+    private Map<String, List<ReorderAlert.WaitingPump>> waitingPumps(LocalDate today) {
+        Map<String, List<ReorderAlert.WaitingPump>> waiting = new HashMap<>();
+        for (RepairService.PumpWait w : repairs.waitingNow(today)) {
+            waiting.computeIfAbsent(w.depotCode() + "|" + w.partNumber(), k -> new ArrayList<>())
+                    .add(new ReorderAlert.WaitingPump(w.assetId(), w.daysWaiting(), w.repairRef()));
+        }
+        return waiting;
+    }
+
+    /** The latest action per "partNumber|locationCode". */
+    private Map<String, AlertAction> latestActions(String locationCode) {
+        Map<Long, String> partNumbers = new HashMap<>();
+        parts.all().forEach(p -> partNumbers.put(p.id, p.partNumber));
+        Map<String, AlertAction> latest = new HashMap<>();
+        for (AlertAction a : actions.at(locationCode)) {
+            latest.put(partNumbers.get(a.partId) + "|" + a.locationCode, a);
+        }
+        return latest;
+    }
+
+    /** An acknowledgement holds until the location's next review. */
+    private int reviewDays(Location location) {
+        return location.kind == LocationKind.CENTRAL_STORE ? settings.centralReviewDays() : settings.depotReviewDays();
+    }
+
+    /**
+     * Acknowledges or snoozes the alert of a part at a location: the action covers every reason the alert has now
+     * (see {@link AlertActionFold}). 404 when the part has no alert there (or, with {@code kind}, no such reason).
+     */
+    @Transactional
+    public AlertAction act(String partNumber, String locationCode, AlertKind kind, AlertAction.Action action,
+                           LocalDate snoozeUntil, String note) {
+        planning.requireForecasts();
+        Part part = parts.require("partNumber", partNumber);
+        Location location = locations.require("location", locationCode);
+        scope.require(location.id, location.code);
+        if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(ZoneOffset.UTC)))) {
+            throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
+        }
+        ReorderAlert alert = raiseAt(location, waitingPumps(LocalDate.now(ZoneOffset.UTC))).stream()
+                .filter(a -> a.partNumber().equals(part.partNumber)).findFirst()
+                .filter(a -> kind == null || a.has(kind))
+                .orElseThrow(() -> new EntityMissingException(null, "alert", part.partNumber + " at " + locationCode
+                        + (kind == null ? "" : " (" + kind + ")")));
+        AlertAction record = new AlertAction();
+        record.partId = part.id;
+        record.locationCode = locationCode;
+        record.alertKind = alert.kind();
+        record.reasons = AlertActionFold.join(alert.reasons());
+        record.action = action;
+        record.snoozedUntil = action == AlertAction.Action.SNOOZE ? snoozeUntil : null;
+        record.note = note;
+        record.actor = currentUser.name();
+        record.actedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        actions.persist(record);
+        audit.record("ALERT_" + action.name(), "alert", partNumber + "@" + locationCode, null,
+                java.util.Map.of("reasons", record.reasons, "snoozedUntil", String.valueOf(record.snoozedUntil),
+                        "note", String.valueOf(note)));
+        return record;
+    }
+}

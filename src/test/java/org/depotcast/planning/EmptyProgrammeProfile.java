@@ -1,0 +1,18 @@
+package org.depotcast.planning;
+
+import io.quarkus.test.junit.QuarkusTestProfile;
+
+import java.util.Map;
+
+/** A fresh install: its own empty in-memory database, production mode (no demo), one admin account. */
+public class EmptyProgrammeProfile implements QuarkusTestProfile {
+    static final String ADMIN_PASSWORD = "fresh-install-admin-1";
+
+    @Override
+    public Map<String, String> getConfigOverrides() {
+        return Map.of(
+                "quarkus.datasource.jdbc.url", "jdbc:h2:mem:depotcast-fresh;DB_CLOSE_DELAY=-1",
+                "depotcast.mode", "production",
+                "depotcast.bootstrap.admin-password", ADMIN_PASSWORD);
+    }
+}
