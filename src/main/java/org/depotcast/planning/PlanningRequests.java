@@ -47,7 +47,13 @@ public final class PlanningRequests {
                                   @NotNull @DecimalMin(value = "0", message = "must not be negative") BigDecimal unitCost) {
     }
 
+    /** A dispatch; a client that may resend it sends an {@code idempotencyKey}, so no second transfer is made. */
     public record TransferRequest(@NotBlank String partNumber, @NotBlank String from, @NotBlank String to,
-                                  @NotNull BigDecimal quantity) {
+                                  @NotNull BigDecimal quantity, @Size(max = 80) String idempotencyKey) {
+    }
+
+    /** An arrival: what came in, what was lost or damaged on the way and why; everything outstanding when empty. */
+    public record ReceiveRequest(@DecimalMin("0") BigDecimal receivedQuantity, @DecimalMin("0") BigDecimal writtenOffQuantity,
+                                 @Size(max = 300) String writeOffReason, @Size(max = 80) String idempotencyKey) {
     }
 }

@@ -28,13 +28,15 @@ class PlanningResource {
     private final AlertService alerts;
     private final PurchasePlanService purchasePlans;
     private final TransferService transfers;
+    private final TransferOrderService transferOrders;
 
     PlanningResource(PlanningService planning, AlertService alerts, PurchasePlanService purchasePlans,
-                     TransferService transfers) {
+                     TransferService transfers, TransferOrderService transferOrders) {
         this.planning = planning;
         this.alerts = alerts;
         this.purchasePlans = purchasePlans;
         this.transfers = transfers;
+        this.transferOrders = transferOrders;
     }
 
     @GET
@@ -121,18 +123,49 @@ class PlanningResource {
         return Response.noContent().build();
     }
 
+    /** 201 with the new transfer; 200 with the first one when the same dispatch is sent again under its key. */
     @POST
     @Path("transfers")
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public Response dispatch(@Valid @NotNull PlanningRequests.TransferRequest r) {
-        return Response.status(201).entity(transfers.dispatch(r.partNumber(), r.from(), r.to(), r.quantity())).build();
+    public Response dispatch(@Valid @NotNull PlanningRequests.TransferRequest r, UriInfo uri) {
+        TransferOrderService.Dispatched d = transferOrders.dispatch(r);
+        return d.replayed() ? Response.ok(d.order()).build()
+                : Response.created(uri.getAbsolutePathBuilder().path(Long.toString(d.order().id())).build())
+                .entity(d.order()).build();
     }
 
+    /** Transfers touching the caller's locations, in transit first; filters {@code from}, {@code to}, {@code state}. */
+    @GET
+    @Path("transfers")
+    public List<TransferResponses.Order> transfers(@QueryParam("from") String from, @QueryParam("to") String to,
+                                                   @QueryParam("state") String state) {
+        return transferOrders.list(from, to, QueryParams.optionalEnum("state", state, TransferOrder.Status.class));
+    }
+
+    @GET
+    @Path("transfers/{id}")
+    public TransferResponses.Order transfer(@PathParam("id") long id) {
+        return transferOrders.get(id);
+    }
+
+    /**
+     * Books an arrival: everything outstanding without a body, or {@code receivedQuantity} and/or
+     * {@code writtenOffQuantity} with a {@code writeOffReason}. A transfer that has ended answers 200 as it is.
+     */
+    @POST
+    @Path("transfers/{id}/receive")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public TransferResponses.Order receive(@PathParam("id") long id, @Valid PlanningRequests.ReceiveRequest r) {
+        return transferOrders.receive(id, r);
+    }
+
+    /** Without a body: everything still outstanding arrived. */
     @POST
     @Path("transfers/{id}/receive")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public TransferResponses.Order receive(@PathParam("id") long id) {
-        return transfers.receive(id);
+    public TransferResponses.Order receiveAll(@PathParam("id") long id) {
+        return transferOrders.receive(id, null);
     }
 }

@@ -2,6 +2,7 @@ package org.depotcast.planning;
 
 import java.math.BigDecimal;
 import java.time.OffsetDateTime;
+import java.util.List;
 
 /** Transfer suggestions and orders as the API shows them. */
 public final class TransferResponses {
@@ -13,11 +14,25 @@ public final class TransferResponses {
                              double unitCost, double pumpDaysAvoided) {
     }
 
-    public record Order(long id, String partNumber, String from, String to, BigDecimal quantity, String status,
-                        OffsetDateTime dispatchedAt, OffsetDateTime receivedAt, String actor) {
+    /**
+     * A transfer: {@code quantity} dispatched; {@code receivedQuantity} and {@code writtenOffQuantity} booked so far;
+     * {@code outstanding} still in transit. RECEIVED once nothing is outstanding.
+     */
+    public record Order(long id, String partNumber, String from, String to, BigDecimal quantity,
+                        BigDecimal receivedQuantity, BigDecimal writtenOffQuantity, BigDecimal outstanding,
+                        String status, OffsetDateTime dispatchedAt, OffsetDateTime receivedAt, String actor,
+                        String idempotencyKey, List<Receipt> receipts) {
         static Order from(TransferOrder t) {
-            return new Order(t.id, t.part.partNumber, t.from.code, t.to.code, t.quantity, t.status.name(),
-                    t.dispatchedAt, t.receivedAt, t.actor);
+            return new Order(t.id, t.part.partNumber, t.from.code, t.to.code, t.quantity, t.receivedQuantity,
+                    t.writtenOffQuantity, t.outstanding(), t.status.name(), t.dispatchedAt, t.receivedAt, t.actor,
+                    t.idempotencyKey, t.receipts.stream().map(Receipt::from).toList());
+        }
+    }
+
+    public record Receipt(BigDecimal receivedQuantity, BigDecimal writtenOffQuantity, String writeOffReason,
+                          OffsetDateTime recordedAt, String actor) {
+        static Receipt from(TransferReceipt r) {
+            return new Receipt(r.receivedQuantity, r.writtenOffQuantity, r.writeOffReason, r.recordedAt, r.actor);
         }
     }
 }

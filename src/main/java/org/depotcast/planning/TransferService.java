@@ -2,25 +2,16 @@ package org.depotcast.planning;
 
 import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import jakarta.enterprise.context.ApplicationScoped;
-import jakarta.persistence.LockModeType;
 import jakarta.transaction.Transactional;
-import org.depotcast.access.CurrentUser;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
-import org.depotcast.common.EntityMissingException;
-import org.depotcast.common.Quantities;
 import org.depotcast.core.policy.TransferPlanner;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
-import org.depotcast.stock.MovementCommand;
-import org.depotcast.stock.MovementKind;
-import org.depotcast.stock.StockLedgerService;
 
 import java.math.BigDecimal;
-import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -31,17 +22,13 @@ import java.util.Map;
  * Transfers between depots before buying: suggestions from the transportation LP of {@link TransferPlanner}
  * (donors give only what they hold above their own reorder point; receivers at or below their reorder point ask up
  * to their order-up-to level; cost per unit = distance × cost per unit-km; a unit short is worth the pump-days it
- * would cost), and the dispatch/receive steps that move the stock through the ledger.
+ * would cost). Dispatching and receiving are {@link TransferOrderService}'s.
  */
 @ApplicationScoped
 public class TransferService {
-    static final String IN_TRANSIT = "IN-TRANSIT";
-
     private final PlanningService planning;
     private final LocationService locations;
     private final PartService parts;
-    private final StockLedgerService ledger;
-    private final CurrentUser currentUser;
     private final PlanningSettings settings;
     private final Orders orders;
     private final org.depotcast.access.AccessScope scope;
@@ -52,8 +39,8 @@ public class TransferService {
     static class Orders implements PanacheRepository<TransferOrder> {
     }
 
-    TransferService(PlanningService planning, LocationService locations, PartService parts, StockLedgerService ledger,
-                    CurrentUser currentUser, PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope,
+    TransferService(PlanningService planning, LocationService locations, PartService parts,
+                    PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope,
                     org.depotcast.access.AuditService audit, SystemWork system) {
         this.system = system;
         this.scope = scope;
@@ -61,8 +48,6 @@ public class TransferService {
         this.planning = planning;
         this.locations = locations;
         this.parts = parts;
-        this.ledger = ledger;
-        this.currentUser = currentUser;
         this.settings = settings;
         this.orders = orders;
     }
@@ -169,53 +154,5 @@ public class TransferService {
         }
         return TransferPlanner.distanceKm(a.latitude.doubleValue(), a.longitude.doubleValue(),
                 b.latitude.doubleValue(), b.longitude.doubleValue());
-    }
-
-    /** Sends stock on its way: out of the donor into transit, in one transaction with the transfer order. */
-    @Transactional
-    public TransferResponses.Order dispatch(String partNumber, String fromCode, String toCode, BigDecimal quantity) {
-        Location from = locations.require("from", fromCode);
-        Location to = locations.require("to", toCode);
-        scope.require(from.id, from.code);
-        for (Location l : List.of(from, to)) {
-            if (l.kind != LocationKind.DEPOT && l.kind != LocationKind.CENTRAL_STORE) {
-                throw new BusinessRuleException(l == from ? "from" : "to", "transfers run between the central store and depots");
-            }
-        }
-        if (from.id.equals(to.id)) {
-            throw new BusinessRuleException("to", "from and to must be different locations");
-        }
-        TransferOrder order = new TransferOrder();
-        order.part = parts.require("partNumber", partNumber);
-        order.quantity = Quantities.requirePositive("quantity", quantity, order.part.wholeUnits());
-        order.from = from;
-        order.to = to;
-        order.status = TransferOrder.Status.IN_TRANSIT;
-        order.dispatchedAt = OffsetDateTime.now(ZoneOffset.UTC);
-        order.actor = currentUser.name();
-        orders.persist(order);
-        orders.flush();
-        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, partNumber, fromCode, IN_TRANSIT, order.quantity,
-                order.dispatchedAt, "transfer dispatched to " + toCode, "transfer " + order.id, null, null, null));
-        return TransferResponses.Order.from(order);
-    }
-
-    /** Receives a transfer at its destination; a second receipt of the same order is refused. */
-    @Transactional
-    public TransferResponses.Order receive(long id) {
-        TransferOrder order = orders.findById(id, LockModeType.PESSIMISTIC_WRITE);
-        if (order == null) {
-            throw new EntityMissingException(null, "transfer", id);
-        }
-        scope.require(order.to.id, order.to.code);
-        if (order.status != TransferOrder.Status.IN_TRANSIT) {
-            throw new BusinessRuleException("id", "transfer " + id + " was already received");
-        }
-        order.status = TransferOrder.Status.RECEIVED;
-        order.receivedAt = OffsetDateTime.now(ZoneOffset.UTC);
-        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, order.part.partNumber, IN_TRANSIT, order.to.code,
-                order.quantity, order.receivedAt, "transfer received from " + order.from.code, "transfer " + order.id,
-                null, null, null));
-        return TransferResponses.Order.from(order);
     }
 }

@@ -118,11 +118,31 @@ public class StockLedgerService {
                     + "dispatching and receiving a transfer (/api/planning/transfers)");
         }
         requireMayAct(command.kind(), from, to);
+        return write(command, part, from, to, quantity, actor);
+    }
+
+    /**
+     * Writes off stock lost or damaged on the way, out of the in-transit location, inside the caller's transaction.
+     * Only transfers use transit: their service has checked that the caller may receive at the destination, and the
+     * movement API cannot reach transit stock this way.
+     */
+    @Transactional(Transactional.TxType.MANDATORY)
+    public PostedMovement writeOffFromTransitWithin(MovementCommand command) {
+        Location from = locations.require("from", command.fromCode());
+        if (command.kind() != MovementKind.WRITE_OFF || command.toCode() != null || from.kind != LocationKind.IN_TRANSIT) {
+            throw new IllegalArgumentException("a write-off from transit leaves the in-transit location for nowhere");
+        }
+        Part part = parts.require("partNumber", command.partNumber());
+        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.wholeUnits());
+        return write(command, part, from, null, quantity, currentUser.name());
+    }
+
+    private PostedMovement write(MovementCommand command, Part part, Location from, Location to, BigDecimal quantity,
+                                 String actor) {
         applyToBalances(part, from, to, quantity);
         if (command.idempotencyKey() != null) {
             // Same-key posts queue on the balance locks just taken; the one after the winner sees its movement.
-            resent = earlier(command, actor);
-            if (resent.isPresent()) {
+            if (earlier(command, actor).isPresent()) {
                 throw new SameKeyPostedMeanwhile();
             }
         }

@@ -1,0 +1,279 @@
+package org.depotcast.planning;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.narayana.jta.QuarkusTransaction;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.LockModeType;
+import jakarta.persistence.PersistenceException;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.ConflictException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.IdempotencyKey;
+import org.depotcast.common.Quantities;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.MovementCommand;
+import org.depotcast.stock.MovementKind;
+import org.depotcast.stock.StockLedgerService;
+
+import java.math.BigDecimal;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+
+/**
+ * Transfers between the central store and depots: dispatched out of the donor into transit, received at the
+ * destination in one or more receipts, with what was lost or damaged on the way written off out of transit, all
+ * through the ledger. A dispatch sent again under the same idempotency key is answered with the first transfer; a
+ * receipt sent again under its key changes nothing; receiving a transfer that has ended answers it as it is.
+ */
+@ApplicationScoped
+public class TransferOrderService {
+    static final String IN_TRANSIT = "IN-TRANSIT";
+
+    private final Orders orders;
+    private final LocationService locations;
+    private final PartService parts;
+    private final StockLedgerService ledger;
+    private final CurrentUser currentUser;
+    private final AccessScope scope;
+    private final AuditService audit;
+
+    @ApplicationScoped
+    static class Orders implements PanacheRepository<TransferOrder> {
+        Optional<TransferOrder> byKey(String owner, String key) {
+            return find("idempotencyOwner = ?1 and idempotencyKey = ?2", owner, key).firstResultOptional();
+        }
+
+        /** In transit first, newest first within each state; each filter only when given. */
+        List<TransferOrder> search(Long fromId, Long toId, TransferOrder.Status state) {
+            StringBuilder where = new StringBuilder("1 = 1");
+            io.quarkus.panache.common.Parameters params = new io.quarkus.panache.common.Parameters();
+            if (fromId != null) {
+                where.append(" and from.id = :from");
+                params = params.and("from", fromId);
+            }
+            if (toId != null) {
+                where.append(" and to.id = :to");
+                params = params.and("to", toId);
+            }
+            if (state != null) {
+                where.append(" and status = :state");
+                params = params.and("state", state);
+            }
+            // Stored as text, IN_TRANSIT sorts before RECEIVED.
+            return list(where + " order by status, id desc", params);
+        }
+    }
+
+    TransferOrderService(Orders orders, LocationService locations, PartService parts, StockLedgerService ledger,
+                         CurrentUser currentUser, AccessScope scope, AuditService audit) {
+        this.orders = orders;
+        this.locations = locations;
+        this.parts = parts;
+        this.ledger = ledger;
+        this.currentUser = currentUser;
+        this.scope = scope;
+        this.audit = audit;
+    }
+
+    /** A dispatch, and whether it was made before under the same key (a resend). */
+    public record Dispatched(TransferResponses.Order order, boolean replayed) {
+    }
+
+    /**
+     * Sends stock on its way: out of the donor into transit, in one transaction with the transfer. With a key, a
+     * resend of the same dispatch returns the first transfer and a different dispatch under it is a 409 naming the
+     * field that differs; two resends racing are settled by the key's unique constraint.
+     */
+    public Dispatched dispatch(PlanningRequests.TransferRequest r) {
+        String actor = currentUser.name();
+        IdempotencyKey key = IdempotencyKey.client("transfer-dispatch", r.idempotencyKey());
+        try {
+            return QuarkusTransaction.requiringNew().call(() -> dispatchOnce(r, actor, key));
+        } catch (PersistenceException e) {
+            Optional<TransferOrder> earlier = key == null ? Optional.empty()
+                    : QuarkusTransaction.requiringNew().call(() -> orders.byKey(key.ownerFor(actor), key.key()));
+            if (earlier.isEmpty()) {
+                throw e;
+            }
+            return QuarkusTransaction.requiringNew().call(() -> replay(orders.findById(earlier.get().id), r));
+        }
+    }
+
+    private Dispatched dispatchOnce(PlanningRequests.TransferRequest r, String actor, IdempotencyKey key) {
+        if (key != null) {
+            Optional<TransferOrder> earlier = orders.byKey(key.ownerFor(actor), key.key());
+            if (earlier.isPresent()) {
+                return replay(earlier.get(), r);
+            }
+        }
+        Location from = locations.require("from", r.from());
+        Location to = locations.require("to", r.to());
+        scope.require(from.id, from.code);
+        for (Location l : List.of(from, to)) {
+            if (l.kind != LocationKind.DEPOT && l.kind != LocationKind.CENTRAL_STORE) {
+                throw new BusinessRuleException(l == from ? "from" : "to", "transfers run between the central store and depots");
+            }
+        }
+        if (from.id.equals(to.id)) {
+            throw new BusinessRuleException("to", "from and to must be different locations");
+        }
+        TransferOrder order = new TransferOrder();
+        order.part = parts.require("partNumber", r.partNumber());
+        order.quantity = Quantities.requirePositive("quantity", r.quantity(), order.part.wholeUnits());
+        order.from = from;
+        order.to = to;
+        order.status = TransferOrder.Status.IN_TRANSIT;
+        order.dispatchedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        order.actor = actor;
+        if (key != null) {
+            order.idempotencyOwner = key.ownerFor(actor);
+            order.idempotencyKey = key.key();
+        }
+        orders.persist(order);
+        orders.flush();
+        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, r.partNumber(), from.code, IN_TRANSIT, order.quantity,
+                order.dispatchedAt, "transfer dispatched to " + to.code, "transfer " + order.id, null, null, null));
+        TransferResponses.Order dispatched = TransferResponses.Order.from(order);
+        audit.record("TRANSFER_DISPATCHED", "transfer_order", Long.toString(order.id), null, dispatched);
+        return new Dispatched(dispatched, false);
+    }
+
+    private static Dispatched replay(TransferOrder earlier, PlanningRequests.TransferRequest r) {
+        String differs = !earlier.part.partNumber.equals(r.partNumber()) ? "partNumber"
+                : !earlier.from.code.equals(r.from()) ? "from"
+                : !earlier.to.code.equals(r.to()) ? "to"
+                : r.quantity() == null || earlier.quantity.compareTo(r.quantity()) != 0 ? "quantity" : null;
+        if (differs != null) {
+            throw new ConflictException(differs, "key '" + r.idempotencyKey() + "' was already used for transfer "
+                    + earlier.id + " with another " + differs);
+        }
+        return new Dispatched(TransferResponses.Order.from(earlier), true);
+    }
+
+    /**
+     * Books an arrival: {@code received} into the destination, {@code writtenOff} (with its reason) out of transit
+     * as lost or damaged. Without quantities, everything still outstanding is received. A transfer that has ended
+     * is answered as it is; a receipt sent again under its key changes nothing.
+     */
+    @Transactional
+    public TransferResponses.Order receive(long id, PlanningRequests.ReceiveRequest r) {
+        TransferOrder order = orders.findById(id, LockModeType.PESSIMISTIC_WRITE);
+        if (order == null) {
+            throw new EntityMissingException(null, "transfer", id);
+        }
+        scope.require(order.to.id, order.to.code);
+        PlanningRequests.ReceiveRequest body = r == null ? new PlanningRequests.ReceiveRequest(null, null, null, null) : r;
+        IdempotencyKey key = IdempotencyKey.client("transfer-receipt", body.idempotencyKey());
+        if (key != null) {
+            String owner = key.ownerFor(currentUser.name());
+            Optional<TransferReceipt> earlier = order.receipts.stream()
+                    .filter(x -> owner.equals(x.idempotencyOwner) && key.key().equals(x.idempotencyKey)).findFirst();
+            if (earlier.isPresent()) {
+                requireSame(earlier.get(), body);
+                return TransferResponses.Order.from(order);
+            }
+        }
+        if (order.status == TransferOrder.Status.RECEIVED) {
+            return TransferResponses.Order.from(order);
+        }
+        TransferReceipt receipt = receipt(order, body);
+        if (key != null) {
+            receipt.idempotencyOwner = key.ownerFor(currentUser.name());
+            receipt.idempotencyKey = key.key();
+        }
+        TransferResponses.Order before = TransferResponses.Order.from(order);
+        order.book(receipt);
+        orders.flush();
+        post(order, receipt);
+        TransferResponses.Order after = TransferResponses.Order.from(order);
+        audit.record("TRANSFER_RECEIVED", "transfer_order", Long.toString(order.id), before, after);
+        return after;
+    }
+
+    private TransferReceipt receipt(TransferOrder order, PlanningRequests.ReceiveRequest body) {
+        boolean wholeUnits = order.part.wholeUnits();
+        BigDecimal writtenOff = body.writtenOffQuantity() == null || body.writtenOffQuantity().signum() == 0 ? BigDecimal.ZERO
+                : Quantities.requirePositive("writtenOffQuantity", body.writtenOffQuantity(), wholeUnits);
+        BigDecimal received = body.receivedQuantity() == null
+                ? (writtenOff.signum() == 0 ? order.outstanding() : BigDecimal.ZERO)
+                : body.receivedQuantity().signum() == 0 ? BigDecimal.ZERO
+                : Quantities.requirePositive("receivedQuantity", body.receivedQuantity(), wholeUnits);
+        if (received.add(writtenOff).signum() == 0) {
+            throw new BusinessRuleException("receivedQuantity", "receive or write off at least one unit");
+        }
+        if (received.add(writtenOff).compareTo(order.outstanding()) > 0) {
+            throw new BusinessRuleException(body.receivedQuantity() != null ? "receivedQuantity" : "writtenOffQuantity",
+                    "only " + order.outstanding().stripTrailingZeros().toPlainString() + " of transfer " + order.id
+                            + " is still in transit");
+        }
+        if (writtenOff.signum() > 0 && (body.writeOffReason() == null || body.writeOffReason().isBlank())) {
+            throw new BusinessRuleException("writeOffReason", "say why stock is written off (lost, damaged in transit…)");
+        }
+        TransferReceipt receipt = new TransferReceipt();
+        receipt.receivedQuantity = received;
+        receipt.writtenOffQuantity = writtenOff;
+        receipt.writeOffReason = writtenOff.signum() > 0 ? body.writeOffReason().strip() : null;
+        receipt.recordedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        receipt.actor = currentUser.name();
+        return receipt;
+    }
+
+    private void post(TransferOrder order, TransferReceipt receipt) {
+        String reference = "transfer " + order.id;
+        if (receipt.receivedQuantity.signum() > 0) {
+            ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, order.part.partNumber, IN_TRANSIT, order.to.code,
+                    receipt.receivedQuantity, receipt.recordedAt, "transfer received from " + order.from.code, reference,
+                    null, null, null));
+        }
+        if (receipt.writtenOffQuantity.signum() > 0) {
+            ledger.writeOffFromTransitWithin(new MovementCommand(MovementKind.WRITE_OFF, order.part.partNumber,
+                    IN_TRANSIT, null, receipt.writtenOffQuantity, receipt.recordedAt,
+                    "in transit from " + order.from.code + " to " + order.to.code + ": " + receipt.writeOffReason,
+                    reference, null, null, null));
+        }
+    }
+
+    private static void requireSame(TransferReceipt earlier, PlanningRequests.ReceiveRequest body) {
+        String differs = body.receivedQuantity() != null && earlier.receivedQuantity.compareTo(body.receivedQuantity()) != 0
+                ? "receivedQuantity"
+                : body.writtenOffQuantity() != null && earlier.writtenOffQuantity.compareTo(body.writtenOffQuantity()) != 0
+                ? "writtenOffQuantity"
+                : body.writeOffReason() != null && !Objects.equals(body.writeOffReason().strip(), earlier.writeOffReason)
+                ? "writeOffReason" : null;
+        if (differs != null) {
+            throw new ConflictException(differs, "key '" + body.idempotencyKey() + "' was already used for a receipt "
+                    + "with another " + differs);
+        }
+    }
+
+    /** Transfers touching the caller's locations, in transit first, newest first within each state. */
+    @Transactional
+    public List<TransferResponses.Order> list(String fromCode, String toCode, TransferOrder.Status state) {
+        Long fromId = fromCode == null ? null : locations.require("from", fromCode).id;
+        Long toId = toCode == null ? null : locations.require("to", toCode).id;
+        var visible = scope.current();
+        return orders.search(fromId, toId, state).stream()
+                .filter(t -> visible.sees(t.from.id) || visible.sees(t.to.id))
+                .map(TransferResponses.Order::from).toList();
+    }
+
+    @Transactional
+    public TransferResponses.Order get(long id) {
+        TransferOrder order = orders.findByIdOptional(id).orElseThrow(() -> new EntityMissingException(null, "transfer", id));
+        var visible = scope.current();
+        if (!visible.sees(order.from.id) && !visible.sees(order.to.id)) {
+            throw new io.quarkus.security.ForbiddenException("transfer " + id + " runs between locations not assigned to you");
+        }
+        return TransferResponses.Order.from(order);
+    }
+}
