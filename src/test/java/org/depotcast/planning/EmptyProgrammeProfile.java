@@ -13,6 +13,7 @@ public class EmptyProgrammeProfile implements QuarkusTestProfile {
         return Map.of(
                 "quarkus.datasource.jdbc.url", "jdbc:h2:mem:depotcast-fresh;DB_CLOSE_DELAY=-1",
                 "depotcast.mode", "production",
+                "depotcast.session.key", "an-empty-programme-test-session-key-0123456789",
                 "depotcast.bootstrap.admin-password", ADMIN_PASSWORD);
     }
 }
