@@ -46,6 +46,11 @@ public class PurchasePlan {
     @Enumerated(EnumType.STRING)
     @Column(nullable = false)
     public Status status;
+    /** The days over which pump-days without water are counted: each part's lead time + central review. */
+    @Column(name = "horizon_days_min")
+    public Integer horizonDaysMin;
+    @Column(name = "horizon_days_max")
+    public Integer horizonDaysMax;
     @OneToMany(mappedBy = "plan", cascade = CascadeType.ALL)
     @OrderBy("id")
     public List<PurchasePlanLine> lines = new ArrayList<>();

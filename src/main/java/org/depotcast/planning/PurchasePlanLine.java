@@ -40,4 +40,10 @@ public class PurchasePlanLine {
     public double orderUpTo;
     @Column(name = "shortfall_after", nullable = false)
     public double shortfallAfter;
+    /** Units the part needed to reach its order-up-to level that the plan did not buy (whole packs). */
+    @Column(name = "unfunded_quantity", nullable = false)
+    public BigDecimal unfundedQuantity = BigDecimal.ZERO;
+    /** Why the part stayed below its reorder point: BUDGET, OTHER_CURRENCY or NO_FORECAST; null when it did not. */
+    @Column(name = "left_out_reason")
+    public String leftOutReason;
 }

@@ -64,14 +64,16 @@ public class PurchasePlanService {
     public PurchasePlanResponse propose(BigDecimal budget, LocalDate planningDate) {
         List<StockPolicy> policies = planning.programmePolicies();
         String currency = programmeCurrency(policies);
-        List<StockPolicy> priced = policies.stream().filter(p -> p.currency().equals(currency)).toList();
+        List<StockPolicy> priced = policies.stream().filter(p -> p.currency().equals(currency)
+                && !AlertRules.NO_FORECAST.equals(p.forecastMethod())).toList();
         List<MarginalAllocation.Item> items = new ArrayList<>();
-        for (StockPolicy p : priced) {
-            int step = (int) OrderQuantity.roundUpToPacks(Math.max(p.packSize(), p.minOrderQty()), p.packSize());
-            long room = (long) Math.max(0, Math.ceil(p.orderUpTo() - p.position()));
+        long[] wanted = new long[priced.size()];
+        for (int i = 0; i < priced.size(); i++) {
+            StockPolicy p = priced.get(i);
+            int step = step(p);
+            wanted[i] = OrderQuantity.roundUpToPacks((long) Math.max(0, Math.ceil(p.orderUpTo() - p.position())), step);
             items.add(new MarginalAllocation.Item(PolicyCalculator.distribution(p.demandMean(), p.demandVariance()),
-                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0,
-                    OrderQuantity.roundUpToPacks(room, step)));
+                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0, wanted[i]));
         }
         MarginalAllocation.Plan allocation = MarginalAllocation.allocate(items, budget.doubleValue());
         PurchasePlan plan = new PurchasePlan();
@@ -83,30 +85,55 @@ public class PurchasePlanService {
         plan.pumpDaysBefore = allocation.backordersBefore();
         plan.pumpDaysAfter = allocation.backordersAfter();
         plan.status = PurchasePlan.Status.PROPOSED;
+        plan.horizonDaysMin = priced.stream().mapToInt(StockPolicy::protectionDays).min().orElse(0);
+        plan.horizonDaysMax = priced.stream().mapToInt(StockPolicy::protectionDays).max().orElse(0);
         BigDecimal spent = BigDecimal.ZERO;
         for (int i = 0; i < priced.size(); i++) {
             StockPolicy p = priced.get(i);
             long units = allocation.unitsPerItem()[i];
-            double after = p.position() + units;
-            if (units == 0 && after > p.reorderPoint()) {
+            if (units == 0 && p.position() > p.reorderPoint()) {
                 continue;
             }
-            PurchasePlanLine line = new PurchasePlanLine();
-            line.plan = plan;
-            line.part = parts.require("partNumber", p.partNumber());
-            line.packs = (int) (units / p.packSize());
-            line.quantity = BigDecimal.valueOf(units);
-            line.cost = BigDecimal.valueOf(p.unitCost()).multiply(line.quantity).setScale(2, RoundingMode.HALF_UP);
-            line.positionBefore = p.position();
-            line.reorderPoint = p.reorderPoint();
-            line.orderUpTo = p.orderUpTo();
-            line.shortfallAfter = Math.max(0, p.reorderPoint() - after);
+            PurchasePlanLine line = line(plan, p, units);
+            if (line.shortfallAfter > 0) {
+                line.unfundedQuantity = BigDecimal.valueOf(Math.max(0, wanted[i] - units));
+                line.leftOutReason = "BUDGET";
+            }
             spent = spent.add(line.cost);
             plan.lines.add(line);
+        }
+        // Parts the plan could not weigh: priced in another currency (no rate is set), or with no forecast.
+        for (StockPolicy p : policies) {
+            boolean noForecast = AlertRules.NO_FORECAST.equals(p.forecastMethod());
+            if (noForecast || (!p.currency().equals(currency) && p.position() <= p.reorderPoint())) {
+                PurchasePlanLine line = line(plan, p, 0);
+                line.leftOutReason = noForecast ? "NO_FORECAST" : "OTHER_CURRENCY";
+                line.unfundedQuantity = noForecast ? BigDecimal.ZERO : BigDecimal.valueOf(
+                        OrderQuantity.roundUpToPacks((long) Math.max(0, Math.ceil(p.orderUpTo() - p.position())), step(p)));
+                plan.lines.add(line);
+            }
         }
         plan.spent = spent;
         plans.persist(plan);
         return PurchasePlanResponse.from(plan);
+    }
+
+    private static int step(StockPolicy p) {
+        return (int) OrderQuantity.roundUpToPacks(Math.max(p.packSize(), p.minOrderQty()), p.packSize());
+    }
+
+    private PurchasePlanLine line(PurchasePlan plan, StockPolicy p, long units) {
+        PurchasePlanLine line = new PurchasePlanLine();
+        line.plan = plan;
+        line.part = parts.require("partNumber", p.partNumber());
+        line.packs = (int) (units / p.packSize());
+        line.quantity = BigDecimal.valueOf(units);
+        line.cost = BigDecimal.valueOf(p.unitCost()).multiply(line.quantity).setScale(2, RoundingMode.HALF_UP);
+        line.positionBefore = p.position();
+        line.reorderPoint = p.reorderPoint();
+        line.orderUpTo = p.orderUpTo();
+        line.shortfallAfter = Math.max(0, p.reorderPoint() - (p.position() + units));
+        return line;
     }
 
     @Transactional
@@ -145,14 +172,21 @@ public class PurchasePlanService {
         return accepted;
     }
 
+    /** The lines bought, then the objective and the caution as two labelled rows, so a spreadsheet shows them. */
     @Transactional
     public String exportCsv(long id) {
         scope.requireProgramme();
         PurchasePlan plan = require(id);
-        return CsvOut.write(List.of("part_number", "description", "supplier", "packs", "quantity", "unit_cost", "cost",
-                "currency"), plan.lines.stream().filter(l -> l.packs > 0).toList(), l -> List.of(l.part.partNumber,
-                l.part.description, l.part.supplier, l.packs, l.quantity.toPlainString(),
-                l.part.unitCost.toPlainString(), l.cost.toPlainString(), plan.currency));
+        PurchasePlanResponse response = PurchasePlanResponse.from(plan);
+        List<String> columns = List.of("part_number", "description", "supplier", "packs", "quantity", "unit_cost", "cost",
+                "currency");
+        List<List<?>> rows = new ArrayList<>();
+        plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> rows.add(List.of(l.part.partNumber,
+                l.part.description, l.part.supplier, l.packs, l.quantity.toPlainString(), l.part.unitCost.toPlainString(),
+                l.cost.toPlainString(), plan.currency)));
+        rows.add(List.of("objective", response.objective().statement(), "", "", "", "", "", ""));
+        rows.add(List.of("caution", response.caution(), "", "", "", "", "", ""));
+        return CsvOut.write(columns, rows, r -> r);
     }
 
     private PurchasePlan require(long id) {

@@ -116,7 +116,7 @@ class PlanningResourceTest {
         assertEquals(plan.getDouble("spent"), sum, 0.01);
         long id = plan.getLong("id");
         String csv = as("lead").get("/api/planning/purchase-plans/" + id + "/export").then().statusCode(200).extract().asString();
-        assertEquals(lines.size() + 1, csv.strip().split("\n").length);
+        assertEquals(lines.size() + 3, csv.strip().split("\n").length); // header, lines, objective, caution
         as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(200).body("status", equalTo("ACCEPTED"));
         as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(409).contentType(PROBLEM);
         as("lead").queryParam("status", "OPEN").get("/api/purchase-orders").then().body("orderNumber", hasItem("PP" + id + "-1"));
