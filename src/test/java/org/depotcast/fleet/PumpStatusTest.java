@@ -167,7 +167,7 @@ class PumpStatusTest {
                 .body("usageSource", equalTo("SURVEYED")).body("latitude", equalTo(0.41f))
                 .body("longitude", equalTo(1.22f)).body("assignedMechanic", equalTo("mechanic5"))
                 .body("depthM", equalTo(38.0f));
-        as("officer").contentType("application/json").body(Map.of("assignedMechanic", ""))
+        as("officer").contentType("application/merge-patch+json").body("{\"assignedMechanic\": \"\"}")
                 .patch("/api/pumps/" + asset).then().statusCode(200).body("assignedMechanic", nullValue())
                 .body("latitude", equalTo(0.41f));
         as("officer").contentType("application/json").body(Map.of("assetId", "SOMETHING-ELSE"))
