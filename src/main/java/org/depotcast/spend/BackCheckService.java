@@ -23,8 +23,8 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * How good the projection has been on this programme: for each of the last complete calendar years, the one-year
- * projection made with only the data before 1 January of that year (fleet models refitted on it, the fleet as it
+ * How good the projection has been on this programme: for each of the last complete financial years (see
+ * {@link FinancialYearService}), the one-year projection made with only the data before that year began (fleet models refitted on it, the fleet as it
  * stood), beside what the repairs of that year actually used, both at today's catalogue prices (price history is not
  * kept). Stock top-ups are left out: they are purchases, not use.
  */
@@ -37,9 +37,11 @@ public class BackCheckService {
     private final PartService parts;
     private final LocationService locations;
     private final AccessScope scope;
+    private final FinancialYearService financialYears;
 
     BackCheckService(FleetSnapshotLoader fleet, FleetModelsAsOf models, PartService parts, LocationService locations,
-                     AccessScope scope) {
+                     AccessScope scope, FinancialYearService financialYears) {
+        this.financialYears = financialYears;
         this.fleet = fleet;
         this.models = models;
         this.parts = parts;
@@ -48,7 +50,7 @@ public class BackCheckService {
     }
 
     /** {@code projectedBreakdowns}/{@code projectedServices} and {@code actualBreakdowns}/{@code actualServices} split the figures. */
-    public record YearCheck(int year, double projectedMean, double projectedP10, double projectedP90,
+    public record YearCheck(int year, String label, String months, double projectedMean, double projectedP10, double projectedP90,
                             double projectedP2_5, double projectedP97_5, double actual, boolean within80, boolean within95,
                             double projectedBreakdowns, double projectedServices, double actualBreakdowns,
                             double actualServices) {
@@ -64,15 +66,15 @@ public class BackCheckService {
         parts.all().forEach(p -> partsById.put(p.id, p));
         Map<Long, String> codes = new HashMap<>();
         locations.all().forEach(l -> codes.put(l.id, l.code));
-        int lastComplete = LocalDate.now(ZoneOffset.UTC).getYear() - 1;
         List<YearCheck> checks = new ArrayList<>();
-        for (int year = lastComplete - years + 1; year <= lastComplete; year++) {
-            LocalDate origin = LocalDate.of(year, 1, 1);
+        for (FinancialYears.Period period : financialYears.current().completedBefore(LocalDate.now(ZoneOffset.UTC), years)) {
+            LocalDate origin = period.startsOn();
+            int year = origin.getYear();
             FleetSnapshot snapshot = fleet.load(origin, 36);
             Map<ComponentFamily, FleetModelResponse> fits = models.fit(snapshot);
-            ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + year, 1, null, null, null, null, null,
-                    null, null, DRAWS, (long) year);
-            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, oneYear);
+            ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + period.label(), 1, null, null, null, null,
+                    null, null, null, DRAWS, (long) year);
+            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, oneYear, List.of(period));
             builder.addFleet(snapshot, codes);
             var lines = builder.lines();
             double expectedBreakdowns = 0, expectedServices = 0;
@@ -85,7 +87,7 @@ public class BackCheckService {
             SpendSimulation.Summary s = SpendSimulation.Summary.of(draws.total(0));
             double actualBreakdowns = 0, actualServices = 0;
             for (FleetSnapshot.Consumption c : snapshot.consumption()) {
-                if (c.day().getYear() == year) {
+                if (!c.day().isBefore(period.startsOn()) && !c.day().isAfter(period.endsOn())) {
                     double spent = c.quantity() * partsById.get(c.partId()).unitCost.doubleValue();
                     if (c.breakdown()) {
                         actualBreakdowns += spent;
@@ -95,7 +97,7 @@ public class BackCheckService {
                 }
             }
             double actual = actualBreakdowns + actualServices;
-            checks.add(new YearCheck(year, s.mean(), s.p10(), s.p90(), s.p2_5(), s.p97_5(), actual,
+            checks.add(new YearCheck(year, period.label(), period.months(), s.mean(), s.p10(), s.p90(), s.p2_5(), s.p97_5(), actual,
                     actual >= s.p10() && actual <= s.p90(), actual >= s.p2_5() && actual <= s.p97_5(),
                     expectedBreakdowns, expectedServices, actualBreakdowns, actualServices));
         }

@@ -16,10 +16,12 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * Expected demand per projection year, part and depot, from the fleet model of each family (rate per operating hour
- * × each pump's hours, with age advancing a year at a time and the scenario's usage change and decommissioning),
- * scheduled-service kits as pumps cross their interval, new installations from their year on (half a year in the
- * year they go in), and in the first year the stock needed to bring the programme up to its policy levels.
+ * Expected demand per projection period, part and depot, from the fleet model of each family (rate per operating
+ * hour × each pump's hours, with age advancing month by month and the scenario's usage change and decommissioning),
+ * scheduled-service kits as pumps cross their interval, new installations from their financial year on (half a year
+ * in the year they go in), and in the first period the stock needed to bring the programme up to its policy levels.
+ * Periods are the programme's financial years ({@link FinancialYears}): the months left in the year in progress,
+ * then whole years; month 0 is the month the projection starts.
  */
 final class SpendLineBuilder {
     static final double DAYS_PER_YEAR = 365.25;
@@ -37,13 +39,29 @@ final class SpendLineBuilder {
     private final Map<ComponentFamily, FleetModelResponse> models;
     private final Map<Long, Part> partsById;
     private final ScenarioDefinition scenario;
-    private final int years;
+    private final List<FinancialYears.Period> periods;
+    /** Per month from the start: its period, and the first month of each period. */
+    private final int[] periodOfMonth;
+    private final int[] firstMonthOf;
+    /** 1 when the first period is the rest of the year in progress: whole year k is then period k. */
+    private final int stubPeriods;
 
-    SpendLineBuilder(Map<ComponentFamily, FleetModelResponse> models, Map<Long, Part> partsById, ScenarioDefinition scenario) {
+    SpendLineBuilder(Map<ComponentFamily, FleetModelResponse> models, Map<Long, Part> partsById, ScenarioDefinition scenario,
+                     List<FinancialYears.Period> periods) {
         this.models = models;
         this.partsById = partsById;
         this.scenario = scenario;
-        this.years = scenario.horizonYears();
+        this.periods = periods;
+        this.stubPeriods = periods.get(0).partial() ? 1 : 0;
+        int months = periods.stream().mapToInt(FinancialYears.Period::monthCount).sum();
+        periodOfMonth = new int[months];
+        firstMonthOf = new int[periods.size()];
+        for (int p = 0, m = 0; p < periods.size(); p++) {
+            firstMonthOf[p] = m;
+            for (int i = 0; i < periods.get(p).monthCount(); i++) {
+                periodOfMonth[m++] = p;
+            }
+        }
         for (ComponentFamily f : ComponentFamily.values()) {
             familyNames.add(f.name());
         }
@@ -71,14 +89,15 @@ final class SpendLineBuilder {
         }
     }
 
-    /** New pumps of the scenario, each batch from its year on. */
+    /** New pumps of the scenario, each batch from its financial year on (year 1 = the first whole year). */
     void addInstallation(ScenarioDefinition.Installation installation, PumpModel model) {
         List<FleetSnapshot.BomPart> bom = new ArrayList<>();
         for (BomLine line : model.bom) {
             bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(installation.depthM())));
         }
         double hours = (installation.usageHoursPerDay() == null ? 5.0 : installation.usageHoursPerDay()) * scenario.usageFactor();
-        addPump(installation.depotCode(), installation.depthM(), hours, 0, installation.year() - 1,
+        int period = Math.min(periods.size() - 1, installation.year() - 1 + stubPeriods);
+        addPump(installation.depotCode(), installation.depthM(), hours, 0, period,
                 months -> PreventiveSchedule.servicesDuePerMonth(0, months, model.serviceIntervalHours), bom,
                 installation.count());
     }
@@ -90,30 +109,34 @@ final class SpendLineBuilder {
         }
     }
 
-    private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstYear,
+    /** A pump (or a batch of {@code pumps} alike) from the start of period {@code firstPeriod} on. */
+    private void addPump(String depot, double depthM, double hoursPerDay, double ageAtStart, int firstPeriod,
                          java.util.function.Function<double[], double[]> servicesPerMonth,
                          List<FleetSnapshot.BomPart> bom, double pumps) {
-        double[] monthlyHours = new double[12 * years];
-        for (int m = 12 * firstYear; m < monthlyHours.length; m++) {
-            int year = m / 12;
-            double surviving = Math.pow(scenario.survivalPerYear(), year - firstYear + 0.5);
+        int firstMonth = firstMonthOf[firstPeriod];
+        double[] monthlyHours = new double[periodOfMonth.length];
+        for (int m = firstMonth; m < monthlyHours.length; m++) {
+            double surviving = Math.pow(scenario.survivalPerYear(), (m - firstMonth + 0.5) / 12.0);
             monthlyHours[m] = hoursPerDay * DAYS_PER_YEAR / 12 * surviving;
         }
         double[] services = servicesPerMonth.apply(monthlyHours);
-        for (int y = firstYear; y < years; y++) {
-            double fraction = y == firstYear && firstYear > 0 ? 0.5 : 1.0;
+        for (int p = firstPeriod; p < periods.size(); p++) {
+            // New pumps go in through their first year: on average half of it.
+            double fraction = p == firstPeriod && firstPeriod > 0 ? 0.5 : 1.0;
+            int months = periods.get(p).monthCount();
             double hours = 0;
             double serviced = 0;
-            for (int m = 12 * y; m < 12 * y + 12; m++) {
+            for (int m = firstMonthOf[p]; m < firstMonthOf[p] + months; m++) {
                 hours += monthlyHours[m];
                 serviced += services[m];
             }
             hours *= fraction;
-            double age = ageAtStart + (y - firstYear) + fraction / 2;
+            double age = ageAtStart + (firstMonthOf[p] - firstMonth + months * fraction / 2) / 12.0;
+            double days = DAYS_PER_YEAR / 12 * months * fraction;
             for (FleetSnapshot.BomPart part : bom) {
-                double[] cell = cell(y, partsById.get(part.partId()), depot);
+                double[] cell = cell(p, partsById.get(part.partId()), depot);
                 FleetModelResponse model = models.get(part.family());
-                cell[0] += pumps * ratePerHour(model, depthM, age, hours / (DAYS_PER_YEAR * fraction)) * hours;
+                cell[0] += pumps * ratePerHour(model, depthM, age, hours / days) * hours;
                 cell[1] += pumps * serviced * part.serviceKitQuantity();
                 cell[2] = model == null ? 1 : model.unitsPerEvent();
             }
@@ -153,11 +176,12 @@ final class SpendLineBuilder {
         List<SpendLine> lines = new ArrayList<>();
         for (Map.Entry<String, double[]> e : cells.entrySet()) {
             String[] key = e.getKey().split("\\|", 3);
-            int year = Integer.parseInt(key[0]);
+            int period = Integer.parseInt(key[0]);
             Part part = partsById.get(Long.parseLong(key[1]));
-            double price = part.unitCost.doubleValue() * scenario.priceFactor(year);
+            // Prices rise from the second whole year; the rest of the year in progress is at today's prices.
+            double price = part.unitCost.doubleValue() * scenario.priceFactor(Math.max(0, period - stubPeriods));
             double[] v = e.getValue();
-            lines.add(new SpendLine(year, part.family.ordinal(), partIndex.get(part.partNumber), depotIndex.get(key[2]),
+            lines.add(new SpendLine(period, part.family.ordinal(), partIndex.get(part.partNumber), depotIndex.get(key[2]),
                     v[0], v[2], v[1], price));
         }
         return lines.toArray(new SpendLine[0]);

@@ -16,18 +16,18 @@ final class SpendReport {
     static String csv(SpendResults r) {
         List<List<?>> rows = new ArrayList<>();
         for (SpendResults.Year y : r.years()) {
-            rows.add(row(y.year(), "total", "all", y.total(), r.currency()));
-            y.families().forEach((k, s) -> rows.add(row(y.year(), "family", k, s, r.currency())));
-            y.parts().forEach((k, s) -> rows.add(row(y.year(), "part", k, s, r.currency())));
-            y.depots().forEach((k, s) -> rows.add(row(y.year(), "depot", k, s, r.currency())));
+            rows.add(row(y, "total", "all", y.total(), r.currency()));
+            y.families().forEach((k, s) -> rows.add(row(y, "family", k, s, r.currency())));
+            y.parts().forEach((k, s) -> rows.add(row(y, "part", k, s, r.currency())));
+            y.depots().forEach((k, s) -> rows.add(row(y, "depot", k, s, r.currency())));
         }
-        return CsvOut.write(List.of("year", "level", "key", "mean", "p2_5", "p10", "p50", "p90", "p97_5", "currency"),
-                rows, x -> x);
+        return CsvOut.write(List.of("financial_year", "months", "level", "key", "mean", "p2_5", "p10", "p50", "p90",
+                "p97_5", "currency"), rows, x -> x);
     }
 
-    private static List<?> row(int year, String level, String key, SpendSimulation.Summary s, String currency) {
-        return List.of(year, level, key, money(s.mean()), money(s.p2_5()), money(s.p10()), money(s.p50()),
-                money(s.p90()), money(s.p97_5()), currency);
+    private static List<?> row(SpendResults.Year y, String level, String key, SpendSimulation.Summary s, String currency) {
+        return List.of(y.label(), y.months(), level, key, money(s.mean()), money(s.p2_5()), money(s.p10()),
+                money(s.p50()), money(s.p90()), money(s.p97_5()), currency);
     }
 
     static String html(SpendResults r) {
@@ -40,14 +40,16 @@ final class SpendReport {
                 .append("</strong>, in ").append(escape(r.currency())).append(", ").append(r.draws())
                 .append(" Monte Carlo draws (seed ").append(r.seed()).append(").</p>");
         h.append(chart(r));
-        h.append("<h2>Total per year</h2><table><tr><th>Year</th><th>Expected</th><th>80% range</th><th>95% range</th></tr>");
+        h.append("<h2>Total per financial year</h2><table><tr><th>Financial year</th><th>Months</th><th>Expected</th>"
+                + "<th>80% range</th><th>95% range</th></tr>");
         for (SpendResults.Year y : r.years()) {
-            h.append("<tr><td>").append(y.year()).append("</td><td>").append(money(y.total().mean())).append("</td><td>")
+            h.append("<tr><td>").append(escape(y.label())).append("</td><td>").append(escape(y.months())).append("</td><td>").append(money(y.total().mean())).append("</td><td>")
                     .append(money(y.total().p10())).append(" – ").append(money(y.total().p90())).append("</td><td>")
                     .append(money(y.total().p2_5())).append(" – ").append(money(y.total().p97_5())).append("</td></tr>");
         }
         h.append("</table><h2>Per component family (expected, 80% range)</h2><table><tr><th>Family</th>");
-        r.years().forEach(y -> h.append("<th>").append(y.year()).append("</th>"));
+        r.years().forEach(y -> h.append("<th>").append(escape(y.label())).append("<br><small>")
+                .append(escape(y.months())).append("</small></th>"));
         h.append("</tr>");
         for (String family : r.years().get(0).families().keySet()) {
             h.append("<tr><td>").append(family.toLowerCase(Locale.ROOT).replace('_', ' ')).append("</td>");
@@ -85,7 +87,8 @@ final class SpendReport {
                     x + 30, lo95, x + 30, hi95));
             svg.append(String.format(Locale.ROOT, "<rect x=\"%.0f\" y=\"%.1f\" width=\"8\" height=\"%.1f\" fill=\"#222\"/>",
                     x + 26, hi80, Math.max(1, lo80 - hi80)));
-            svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"240\" font-size=\"12\">%d</text>", x + 14, y.year()));
+            svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"240\" font-size=\"12\">%s</text>", x + 4,
+                    escape(y.label() + (y.partial() ? " (part)" : ""))));
             svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"%.1f\" font-size=\"11\">%s</text>", x, top - 4,
                     money(y.total().mean())));
         }
@@ -100,10 +103,40 @@ final class SpendReport {
         return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;").replace("\"", "&quot;");
     }
 
-    static Map<String, Object> compareRow(String scenario, SpendResults r) {
-        Map<String, Object> row = new java.util.LinkedHashMap<>();
-        row.put("scenario", scenario);
-        r.years().forEach(y -> row.put(Integer.toString(y.year()), y.total()));
-        return row;
+    /**
+     * Runs side by side, the first as the baseline: each run's currency and financial-year periods with their totals,
+     * and per period the difference from the baseline's same period only when both are in the same currency (amounts
+     * in different currencies are never added or subtracted; no exchange rate is assumed).
+     */
+    static List<Map<String, Object>> compare(List<SpendResults> runs) {
+        SpendResults baseline = runs.get(0);
+        List<Map<String, Object>> rows = new ArrayList<>();
+        for (SpendResults r : runs) {
+            Map<String, Object> row = new java.util.LinkedHashMap<>();
+            row.put("scenario", r.scenario());
+            row.put("currency", r.currency());
+            row.put("financialYearStartMonth", r.financialYearStartMonth());
+            boolean comparable = r.currency().equals(baseline.currency());
+            List<Map<String, Object>> years = new ArrayList<>();
+            double total = 0;
+            for (SpendResults.Year y : r.years()) {
+                Map<String, Object> cell = new java.util.LinkedHashMap<>();
+                cell.put("financialYear", y.label());
+                cell.put("months", y.months());
+                cell.put("total", y.total());
+                SpendResults.Year same = baseline.years().stream().filter(b -> b.months().equals(y.months())).findFirst().orElse(null);
+                cell.put("differenceFromBaseline", comparable && same != null ? y.total().mean() - same.total().mean() : null);
+                years.add(cell);
+                total += y.total().mean();
+            }
+            row.put("years", years);
+            row.put("expectedTotal", total);
+            if (!comparable) {
+                row.put("note", "in " + r.currency() + ", the baseline in " + baseline.currency()
+                        + ": not compared, since no exchange rate is assumed");
+            }
+            rows.add(row);
+        }
+        return rows;
     }
 }

@@ -6,6 +6,7 @@ import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PUT;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
@@ -26,10 +27,39 @@ import java.util.Map;
 class SpendResource {
     private final SpendService service;
     private final BackCheckService backCheck;
+    private final FinancialYearService financialYears;
 
-    SpendResource(SpendService service, BackCheckService backCheck) {
+    SpendResource(SpendService service, BackCheckService backCheck, FinancialYearService financialYears) {
         this.service = service;
         this.backCheck = backCheck;
+        this.financialYears = financialYears;
+    }
+
+    /** The month the programme's financial year starts, and the current year's label and months. */
+    record FinancialYearView(int startMonth, String currentYear, String currentYearMonths) {
+        static FinancialYearView of(FinancialYears fy) {
+            FinancialYears.Period now = fy.projection(fy.startOfYearContaining(java.time.LocalDate.now(java.time.ZoneOffset.UTC)), 1).get(0);
+            return new FinancialYearView(fy.startMonth(), now.label(), now.months());
+        }
+    }
+
+    record FinancialYearRequest(@NotNull @jakarta.validation.constraints.Min(1) @jakarta.validation.constraints.Max(12)
+                                Integer startMonth) {
+    }
+
+    @GET
+    @Path("financial-year")
+    public FinancialYearView financialYear() {
+        return FinancialYearView.of(financialYears.current());
+    }
+
+    /** The programme lead sets the month the financial year starts (1 = January); later runs use it. */
+    @PUT
+    @Path("financial-year")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public FinancialYearView setFinancialYear(@Valid @NotNull FinancialYearRequest request) {
+        return FinancialYearView.of(financialYears.set(request.startMonth()));
     }
 
     /** Past years: the projection made with only earlier data, beside what was actually used. */
@@ -55,6 +85,13 @@ class SpendResource {
         SpendScenario s = service.save(definition);
         return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(s.id)).build())
                 .entity(new ScenarioView(s.id, s.name, definition)).build();
+    }
+
+    @GET
+    @Path("scenarios/{id}")
+    public ScenarioView scenario(@PathParam("id") long id) {
+        SpendScenario s = service.scenario(id);
+        return new ScenarioView(s.id, s.name, service.fromJson(s.definition));
     }
 
     @GET
@@ -98,14 +135,14 @@ class SpendResource {
         return SpendReport.html(service.results(id));
     }
 
-    /** Totals per year of several finished runs side by side, e.g. ?runs=3,4 (baseline first). */
+    /** Totals per financial year of several finished runs side by side, e.g. ?runs=3,4 (baseline first). */
     @GET
     @Path("compare")
     public List<Map<String, Object>> compare(@QueryParam("runs") String runIds) {
         if (runIds == null || runIds.isBlank()) {
             throw new InvalidInputException("runs", "name the runs to compare, e.g. runs=3,4");
         }
-        List<Map<String, Object>> rows = new ArrayList<>();
+        List<SpendResults> runs = new ArrayList<>();
         for (String part : runIds.split(",")) {
             long id;
             try {
@@ -113,9 +150,8 @@ class SpendResource {
             } catch (NumberFormatException e) {
                 throw new InvalidInputException("runs", "must be run ids separated by commas, was '" + runIds + "'");
             }
-            SpendResults r = service.results(id);
-            rows.add(SpendReport.compareRow(r.scenario(), r));
+            runs.add(service.results(id));
         }
-        return rows;
+        return SpendReport.compare(runs);
     }
 }

@@ -64,6 +64,7 @@ public class SpendService {
     private final AuditService audit;
     private final SystemWork system;
     private final ObjectMapper json;
+    private final FinancialYearService financialYears;
     /** A plain thread, outside any request: background runs act as the system once the caller was checked. */
     private final java.util.concurrent.ExecutorService background = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
         Thread t = new Thread(r, "spend-projection");
@@ -82,7 +83,8 @@ public class SpendService {
     SpendService(Scenarios scenarios, Runs runs, PartService parts, PumpModelService models, LocationService locations,
                  FleetSnapshotLoader fleet, ForecastQueryService forecasts, ForecastRunService forecastRuns,
                  PlanningService planning, AccessScope scope, CurrentUser currentUser, AuditService audit,
-                 SystemWork system, ObjectMapper json) {
+                 SystemWork system, ObjectMapper json, FinancialYearService financialYears) {
+        this.financialYears = financialYears;
         this.scenarios = scenarios;
         this.runs = runs;
         this.parts = parts;
@@ -129,6 +131,12 @@ public class SpendService {
     }
 
     @Transactional
+    public SpendScenario scenario(long id) {
+        scope.requireProgramme();
+        return scenarios.findByIdOptional(id).orElseThrow(() -> new EntityMissingException(null, "spend scenario", id));
+    }
+
+    @Transactional
     public List<SpendScenario> scenarios() {
         scope.requireProgramme();
         return scenarios.listAll(io.quarkus.panache.common.Sort.by("id"));
@@ -143,6 +151,7 @@ public class SpendService {
         if (forecastRuns.latestFinished().isEmpty()) {
             throw new org.depotcast.common.NoForecastYetException();
         }
+        FinancialYears years = financialYears.current();
         SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
             SpendRun r = new SpendRun();
             r.scenarioId = scenarioId;
@@ -155,7 +164,7 @@ public class SpendService {
             return r;
         });
         // The caller's programme-wide view was checked above; the background work acts for it.
-        background.submit(() -> system.run("spend-run", () -> execute(run.id, scenario.name, definition)));
+        background.submit(() -> system.run("spend-run", () -> execute(run.id, scenario.name, definition, years)));
         return run;
     }
 
@@ -197,11 +206,12 @@ public class SpendService {
         }
     }
 
-    private void execute(long runId, String name, ScenarioDefinition definition) {
+    private void execute(long runId, String name, ScenarioDefinition definition, FinancialYears financialYears) {
         try {
             phase(runId, "reading the fleet");
             LocalDate today = LocalDate.now(ZoneOffset.UTC);
             FleetSnapshot snapshot = fleet.load(today, 24);
+            List<FinancialYears.Period> periods = financialYears.projection(snapshot.historyEnd(), definition.horizonYears());
             Map<ComponentFamily, FleetModelResponse> fits = new EnumMap<>(ComponentFamily.class);
             for (ComponentFamily family : ComponentFamily.values()) {
                 try {
@@ -213,7 +223,7 @@ public class SpendService {
             Map<Long, Part> partsById = new HashMap<>();
             parts.all().forEach(p -> partsById.put(p.id, p));
             String currency = checkCurrency(definition, partsById);
-            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, definition);
+            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, definition, periods);
             Map<Long, String> depotCodes = new HashMap<>();
             locations.all().forEach(l -> depotCodes.put(l.id, l.code));
             builder.addFleet(snapshot, depotCodes);
@@ -233,11 +243,11 @@ public class SpendService {
             }
             SpendLine[] lines = builder.lines();
             phase(runId, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");
-            SpendDraws draws = SpendSimulation.run(lines, definition.horizonYears(), builder.familyNames.size(),
+            SpendDraws draws = SpendSimulation.run(lines, periods.size(), builder.familyNames.size(),
                     builder.partNumbers.size(), builder.depotCodes.size(), builder.groupLogSd, builder.groupDispersion,
                     definition.drawsOrDefault(), definition.seedOrDefault());
             phase(runId, "summarising");
-            SpendResults results = summarise(name, currency, definition, today.getYear(), builder, draws);
+            SpendResults results = summarise(name, currency, definition, financialYears, periods, builder, draws);
             String stored = toJson(results);
             QuarkusTransaction.requiringNew().run(() -> {
                 SpendRun run = runs.findById(runId);
@@ -270,7 +280,8 @@ public class SpendService {
         return definition.currency() == null ? catalogue : definition.currency();
     }
 
-    private static SpendResults summarise(String name, String currency, ScenarioDefinition definition, int firstYear,
+    private static SpendResults summarise(String name, String currency, ScenarioDefinition definition,
+                                          FinancialYears financialYears, List<FinancialYears.Period> periods,
                                           SpendLineBuilder builder, SpendDraws draws) {
         List<SpendResults.Year> years = new ArrayList<>();
         for (int y = 0; y < draws.years(); y++) {
@@ -293,13 +304,21 @@ public class SpendService {
             double[] half = java.util.Arrays.copyOf(total, total.length / 2);
             SpendSimulation.Summary all = SpendSimulation.Summary.of(total);
             SpendSimulation.Summary first = SpendSimulation.Summary.of(half);
-            years.add(new SpendResults.Year(firstYear + y, all, families, partSummaries, depots,
-                    new SpendResults.Stability(half.length, first.p10(), first.p90(), all.p10(), all.p90())));
+            FinancialYears.Period period = periods.get(y);
+            years.add(new SpendResults.Year(financialYears.startOfYearContaining(period.startsOn()).getYear(),
+                    period.label(), period.months(), period.startsOn(), period.endsOn(), period.partial(), all, families,
+                    partSummaries, depots, new SpendResults.Stability(half.length, first.p10(), first.p90(), all.p10(), all.p90())));
         }
-        return new SpendResults(name, currency, definition.drawsOrDefault(), definition.seedOrDefault(), firstYear, years,
-                List.of("Year 1 includes the stock needed to bring the programme to its policy levels.",
-                        "Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = its "
-                                + "intercept's standard error) and overdispersion where the fit found it."));
+        List<String> notes = new ArrayList<>();
+        notes.add("Years are the programme's financial years, starting in "
+                + java.time.Month.of(financialYears.startMonth()).getDisplayName(java.time.format.TextStyle.FULL, java.util.Locale.ENGLISH)
+                + (periods.get(0).partial() ? "; the first period is the months left in the year in progress (" + periods.get(0).months()
+                + "), then " + definition.horizonYears() + " whole years." : "."));
+        notes.add("The first period includes the stock needed now to bring the programme to its policy levels.");
+        notes.add("Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = its "
+                + "intercept's standard error) and overdispersion where the fit found it.");
+        return new SpendResults(name, currency, definition.drawsOrDefault(), definition.seedOrDefault(),
+                financialYears.startMonth(), years, notes);
     }
 
     private void phase(long runId, String phase) {
