@@ -1,0 +1,206 @@
+/*
+ * The morning board: the store's alerts in the API's order (worst expected pump-days without water first), the
+ * numbers behind each, and what can be done about it here: acknowledge, snooze, send a suggested transfer, put the
+ * part into the purchase plan. Counts of the other work waiting link to its page.
+ */
+import * as api from '/app/js/api.js';
+import * as fmt from '/app/js/format.js';
+import {provenance} from '/app/js/provenance.js';
+import {h, mount, table, state, say, busy, figures, caution} from '/app/js/ui.js';
+import {startOfficer, kindWords, describe, ready, purchasePlan, orderQuantity, storeName} from './officer.js';
+
+const {me, store, stores, parts} = await startOfficer({page: 'board', title: 'Morning board'});
+const main = document.getElementById('content');
+const unit = p => (parts.get(p) || {}).unitOfIssue;
+// In the table the unit is said once, beside the part; the cells hold the bare number.
+const n = (value, p) => fmt.wholeUnits(unit(p)) ? fmt.num(Math.round(value)) : fmt.num(value, 2);
+const UNIT_NAMES = {EACH: 'pieces', PAIR: 'pairs', SET: 'sets', LENGTH: 'lengths', METRE: 'metres', KILOGRAM: 'kg', LITRE: 'litres'};
+const names = new Map(stores.map(s => [s.code, s.name]));
+
+async function load() {
+    if (!store) {
+        ready();
+        return;
+    }
+    const run = await provenance(document.getElementById('provenance'), me);
+    if (!run) {
+        mount(main);
+        ready();
+        return;
+    }
+    const query = {location: store.code};
+    const [alerts, policies, suggestions, waiting, inbound] = await Promise.all([
+        api.get('/api/planning/alerts', query), api.get('/api/planning/policies', query),
+        api.get('/api/planning/transfers/suggestions'), api.get('/api/requests', {status: 'RAISED'}),
+        api.get('/api/planning/transfers', {to: store.code, state: 'IN_TRANSIT'})]);
+    const policyOf = new Map(policies.map(p => [p.partNumber, p]));
+    const mine = suggestions.filter(s => s.to === store.code || s.from === store.code);
+    const requests = waiting.filter(r => r.depot === store.code);
+    mount(main, summary(alerts, requests, inbound, mine),
+        h('section', {'aria-labelledby': 'alerts-title'},
+            h('h2', {id: 'alerts-title'}, 'Alerts, most pump-days without water first'),
+            alertTable(alerts, policyOf, mine)),
+        caution());
+    ready();
+}
+
+function summary(alerts, requests, inbound, suggestions) {
+    const link = (page, words) => h('a', {href: `/app/officer/${page}?location=${encodeURIComponent(store.code)}`}, words);
+    const open = alerts.filter(a => !a.acknowledged);
+    return h('div', {class: 'card board-summary'}, figures([
+        ['Alerts not yet acknowledged', fmt.num(open.length)],
+        ['Expected pump-days without water', fmt.num(alerts.reduce((t, a) => t + a.pumpDaysAtRisk, 0))],
+        ['Pumps waiting for parts', fmt.num(new Set(alerts.flatMap(a => a.waitingPumps.map(p => p.assetId))).size)],
+        ['Requests to approve', link('requests.html', fmt.num(requests.length))],
+        ['Transfers on the way here', link('transfers.html', fmt.num(inbound.length))],
+        ['Suggested transfers', link('transfers.html', fmt.num(suggestions.length))]
+    ]));
+}
+
+function reasons(alert) {
+    return h('div', {class: 'reasons'}, alert.reasons.map(r => state(kindWords(r.kind)[0], kindWords(r.kind)[1])),
+        alert.acknowledged ? state('Acknowledged', 'ok') : null,
+        alert.raisedAgainBy.length ? state('Raised again', 'warn') : null);
+}
+
+function pumps(alert) {
+    if (!alert.waitingPumps.length) {
+        return 'none';
+    }
+    return h('span', {class: 'pump-list'}, `${alert.pumpsWaiting}: `,
+        alert.waitingPumps.map((p, i) => [i ? ', ' : '', h('span', {class: 'nowrap'}, `${p.assetId} (${fmt.num(p.daysWaiting)} d)`)]));
+}
+
+function alertTable(alerts, policyOf, suggestions) {
+    const rows = alerts.map((a, i) => ({a, i, policy: policyOf.get(a.partNumber)}));
+    const wrap = table({
+        caption: `${fmt.num(alerts.length)} alerts at ${storeName(store)}`, id: 'alerts',
+        empty: 'No alerts at this store: every part is above its reorder point.',
+        columns: [
+            {label: 'Rank', value: r => String(r.i + 1), num: true},
+            {label: 'Part', value: r => [describe(parts, r.a.partNumber),
+                h('span', {class: 'hint'}, `counted in ${UNIT_NAMES[unit(r.a.partNumber)] || 'units'}`)]},
+            {label: 'Why', value: r => reasons(r.a)},
+            {label: 'Pump-days without water', value: r => fmt.num(r.a.pumpDaysAtRisk, 1), num: true},
+            {label: 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
+            {label: 'On order', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
+            {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
+            {label: 'Reorder point', value: r => n(r.a.reorderPoint, r.a.partNumber), num: true},
+            {label: 'Order up to', value: r => n(r.a.orderUpTo, r.a.partNumber), num: true},
+            {label: 'Lead-time demand', value: r => r.policy
+                ? h('span', {}, n(r.policy.demandMean, r.a.partNumber), h('span', {class: 'hint'}, `in ${fmt.num(r.policy.protectionDays)} days`))
+                : '–', num: true},
+            {label: 'Pumps waiting', value: r => pumps(r.a)},
+            {label: 'Actions', value: r => actions(r.a, r.policy, suggestions.filter(s => s.partNumber === r.a.partNumber))}
+        ],
+        rows
+    });
+    wrap.querySelectorAll('tbody tr').forEach((tr, i) => {
+        tr.dataset.part = alerts[i].partNumber;
+        tr.dataset.pumpDays = String(alerts[i].pumpDaysAtRisk);
+        tr.classList.add('alert-row');
+        // The details open in a row of their own below the alert, as wide as the table.
+        tr.after(h('tr', {class: 'details-row', hidden: true, id: `details-${i}`},
+            h('td', {colspan: 12, 'data-label': `Details of ${alerts[i].partNumber}`}, h('div', {class: 'alert-details'}))));
+    });
+    wrap.querySelector('table').classList.add('alert-table');
+    return wrap;
+}
+
+function actions(alert, policy, suggestions) {
+    const box = h('div', {class: 'actions'});
+    const ack = h('button', {type: 'button', class: 'ack'}, 'Acknowledge');
+    ack.addEventListener('click', () => busy(ack, async () => {
+        await api.post('/api/planning/alerts/actions', {partNumber: alert.partNumber, location: alert.locationCode, action: 'ACKNOWLEDGE'});
+        say(`Alert for ${alert.partNumber} acknowledged until the next review.`);
+        await load();
+    }));
+    const more = h('button', {type: 'button', class: 'more', 'aria-expanded': 'false'}, 'Details, snooze, transfer, buy');
+    more.addEventListener('click', () => {
+        const row = more.closest('tr').nextElementSibling;
+        const details = row.querySelector('.alert-details');
+        row.hidden = !row.hidden;
+        more.setAttribute('aria-expanded', String(!row.hidden));
+        more.setAttribute('aria-controls', row.id);
+        if (!row.hidden && !details.childElementCount) {
+            mount(details, detailsOf(alert, policy, suggestions));
+        }
+    });
+    box.append(alert.acknowledged ? null : ack, more);
+    return box;
+}
+
+function detailsOf(alert, policy, suggestions) {
+    const u = unit(alert.partNumber);
+    return [
+        h('h4', {}, 'Reasons'),
+        h('ul', {}, alert.reasons.map(r => h('li', {}, `${kindWords(r.kind)[0]}: ${r.detail}`))),
+        figures([
+            ['Inventory position', fmt.qty(alert.position, u)],
+            ['Demand a day', fmt.num(alert.dailyDemand, 2)],
+            ['Days of cover', alert.daysOfCover === null ? '–' : fmt.num(alert.daysOfCover, 1)],
+            ['Forecast method', alert.forecastMethod || '–'],
+            policy ? ['Service level', fmt.percent(policy.serviceLevel)] : null
+        ]),
+        alert.waitingPumps.length ? table({caption: 'Pumps waiting for this part', rows: alert.waitingPumps, columns: [
+            {label: 'Pump', value: p => p.assetId}, {label: 'Days waiting', value: p => fmt.num(p.daysWaiting), num: true},
+            {label: 'Repair', value: p => p.repairRef}]}) : null,
+        suggestions.length ? h('h4', {}, 'Suggested transfers') : null,
+        suggestions.map(s => transferOffer(s, u)),
+        snoozeForm(alert),
+        planForm(alert, policy)
+    ];
+}
+
+function transferOffer(s, u) {
+    const send = h('button', {type: 'button', class: 'primary'}, 'Dispatch this transfer');
+    send.addEventListener('click', () => busy(send, async () => {
+        const order = await api.post('/api/planning/transfers', {partNumber: s.partNumber, from: s.from, to: s.to,
+            quantity: s.quantity, idempotencyKey: api.clientRef('dispatch')});
+        say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, u)} of ${s.partNumber} from ${s.from} to ${s.to}, now in transit.`);
+        await load();
+    }));
+    return h('div', {class: 'transfer'}, h('p', {}, `Send ${fmt.qty(s.quantity, u)} from ${names.get(s.from) || s.from} to `
+        + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.num(s.pumpDaysAvoided, 1)} pump-days without water.`),
+        me.locationCodes.length && !me.locationCodes.includes(s.from) && !me.roles.includes('admin')
+            ? h('p', {class: 'hint'}, `The officer of ${s.from} dispatches it.`) : send);
+}
+
+function snoozeForm(alert) {
+    const id = `snooze-${alert.partNumber}`;
+    const input = h('input', {type: 'date', id, name: 'snoozeUntil', value: fmt.isoDay(7), min: fmt.isoDay(1), required: true});
+    const note = h('input', {type: 'text', id: `${id}-note`, name: 'note', maxlength: 300});
+    const go = h('button', {type: 'submit'}, 'Snooze');
+    const form = h('form', {class: 'row'}, h('div', {class: 'inline-field'}, h('label', {for: id}, 'Snooze until'), input),
+        h('div', {class: 'inline-field'}, h('label', {for: `${id}-note`}, 'Note (optional)'), note), go);
+    form.addEventListener('submit', e => {
+        e.preventDefault();
+        busy(go, async () => {
+            await api.post('/api/planning/alerts/actions', {partNumber: alert.partNumber, location: alert.locationCode,
+                action: 'SNOOZE', snoozeUntil: input.value, note: note.value || null});
+            say(`Alert for ${alert.partNumber} snoozed until ${fmt.date(input.value)}.`);
+            await load();
+        }, form);
+    });
+    return h('div', {}, h('h4', {}, 'Snooze'), form);
+}
+
+function planForm(alert, policy) {
+    const part = parts.get(alert.partNumber);
+    const id = `plan-${alert.partNumber}`;
+    const suggested = orderQuantity(part, alert.position, alert.orderUpTo);
+    const input = h('input', {type: 'number', id, name: 'quantity', min: 1, value: suggested});
+    const go = h('button', {type: 'submit'}, 'Put into the purchase plan');
+    const form = h('form', {class: 'row'}, h('div', {class: 'inline-field'},
+        h('label', {for: id}, 'Quantity to buy', h('span', {class: 'hint'}, `up to the order-up-to level in packs of ${part ? part.packSize : 1}`)), input), go);
+    form.addEventListener('submit', e => {
+        e.preventDefault();
+        purchasePlan.add({partNumber: alert.partNumber, destination: alert.locationCode, quantity: Number(input.value),
+            supplier: policy ? policy.supplier : part && part.supplier, addedAt: new Date().toISOString()});
+        say(`${alert.partNumber} is in the purchase plan for ${alert.locationCode}.`, 'ok',
+            h('a', {href: `/app/officer/purchases.html?location=${encodeURIComponent(alert.locationCode)}`}, ' Open the purchase plan'));
+    });
+    return h('div', {}, h('h4', {}, 'Buy'), form);
+}
+
+await load();

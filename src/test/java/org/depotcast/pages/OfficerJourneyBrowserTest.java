@@ -1,0 +1,140 @@
+package org.depotcast.pages;
+
+import io.quarkus.test.junit.QuarkusTest;
+import io.restassured.path.json.JsonPath;
+import io.restassured.specification.RequestSpecification;
+import org.junit.jupiter.api.BeforeEach;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+
+import java.time.Duration;
+import java.util.List;
+import java.util.Map;
+import java.util.UUID;
+
+import static io.restassured.RestAssured.given;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The stores officer's day through the pages: the morning board of a depot shows the API's alerts in the API's
+ * order, a mechanic's request is approved, a suggested transfer is dispatched; the state is then read back
+ * through the API. A depot officer sees only their own depot.
+ */
+@QuarkusTest
+class OfficerJourneyBrowserTest extends BrowserSession {
+    private static final String DEPOT = "DEP-TESHVALE";
+
+    private RequestSpecification as(String account) {
+        return given().auth().preemptive().basic(account, account + "-demo").accept("application/json");
+    }
+
+    /** The board's numbers come from a finished forecast run; start one through the API when there is none. */
+    @BeforeEach
+    void forecastRun() throws InterruptedException {
+        if (!as("lead").get(url("/api/forecast/runs?status=DONE&limit=1")).jsonPath().getList("$").isEmpty()) {
+            return;
+        }
+        long id = as("lead").post(url("/api/forecast/runs")).then().statusCode(202).extract().jsonPath().getLong("id");
+        for (int i = 0; i < 240; i++) {
+            String status = as("lead").get(url("/api/forecast/runs/" + id)).jsonPath().getString("status");
+            if (!"RUNNING".equals(status)) {
+                assertEquals("DONE", status);
+                return;
+            }
+            Thread.sleep(500);
+        }
+        throw new AssertionError("the forecast run did not finish in two minutes");
+    }
+
+    private List<String> boardParts() {
+        return driver.findElements(By.cssSelector("#alerts tbody tr.alert-row")).stream()
+                .map(tr -> tr.getDomAttribute("data-part")).toList();
+    }
+
+    @Test
+    void theOfficerReadsTheBoardApprovesARequestAndDispatchesATransfer() throws Exception {
+        long requestId = as("mechanic1").contentType("application/json")
+                .body(Map.of("clientRef", "journey-" + UUID.randomUUID(), "urgency", "ROUTINE",
+                        "lines", List.of(Map.of("partNumber", "OB-CS-50", "quantity", 2))))
+                .post(url("/api/requests")).then().statusCode(201).extract().jsonPath().getLong("id");
+
+        signIn("officer", "officer-demo");
+        open("/app/officer/?location=" + DEPOT);
+        waitReady();
+        List<String> api = as("officer").get(url("/api/planning/alerts?location=" + DEPOT)).then().statusCode(200)
+                .extract().jsonPath().getList("partNumber", String.class);
+        assertFalse(api.isEmpty(), "the demo depot has alerts after a forecast run");
+        List<String> board = boardParts();
+        assertEquals(api.subList(0, Math.min(5, api.size())), board.subList(0, Math.min(5, board.size())),
+                "the board's top alerts are the API's, in its order");
+        assertEquals(api.size(), board.size());
+        String firstRow = driver.findElement(By.cssSelector("#alerts tbody tr.alert-row")).getText();
+        JsonPath top = as("officer").get(url("/api/planning/alerts?location=" + DEPOT)).jsonPath();
+        assertTrue(firstRow.contains(top.getString("[0].partNumber")), firstRow);
+        Object fits = driver.executeScript("const t = document.getElementById('alerts'); return t.scrollWidth <= t.parentElement.clientWidth + 1;");
+        assertEquals(Boolean.TRUE, fits, "every column of the board shows on a 1280 px screen");
+        screenshot("officer-board-desk");
+
+        driver.findElement(By.linkText("Requests")).click();
+        waitReady();
+        WebElement card = waitFor(By.cssSelector("form[data-request-id='" + requestId + "']"));
+        card.findElement(By.cssSelector("button.approve-full")).click();
+        wait(Duration.ofSeconds(20)).until(d -> d.findElement(By.id("status")).getText().contains("Request " + requestId + " approved in full"));
+        JsonPath approved = as("officer").get(url("/api/requests/" + requestId)).jsonPath();
+        assertEquals("APPROVED", approved.getString("status"));
+        assertEquals(2.0, approved.getDouble("lines[0].approved"), 1e-9);
+        assertEquals("officer", approved.getString("history[-1].actor"));
+
+        driver.findElement(By.linkText("Transfers")).click();
+        waitReady();
+        WebElement dispatch = waitFor(By.cssSelector("#suggestions button.dispatch"));
+        String part = dispatch.getDomAttribute("data-part");
+        String from = dispatch.getDomAttribute("data-from");
+        String to = dispatch.getDomAttribute("data-to");
+        double quantity = Double.parseDouble(dispatch.getDomAttribute("data-quantity"));
+        double fromBefore = onHand(from, part);
+        int inTransitBefore = inTransit(from, to, part).size();
+        dispatch.click();
+        wait(Duration.ofSeconds(20)).until(d -> d.findElement(By.id("status")).getText().contains("dispatched"));
+        List<Map<String, Object>> moving = inTransit(from, to, part);
+        assertEquals(inTransitBefore + 1, moving.size(), "exactly one new transfer");
+        assertEquals(quantity, ((Number) moving.get(0).get("quantity")).doubleValue(), 1e-9);
+        assertEquals("officer", moving.get(0).get("actor"));
+        assertEquals(fromBefore - quantity, onHand(from, part), 1e-9, "the stock left the sending store");
+        assertNoPageErrors();
+    }
+
+    private double onHand(String location, String part) {
+        List<Map<String, Object>> rows = as("officer").get(url("/api/stock/balances?location=" + location)).jsonPath().getList("$");
+        return rows.stream().filter(r -> part.equals(r.get("partNumber"))).mapToDouble(r -> ((Number) r.get("onHand")).doubleValue())
+                .sum();
+    }
+
+    private List<Map<String, Object>> inTransit(String from, String to, String part) {
+        List<Map<String, Object>> rows = as("officer").get(url("/api/planning/transfers?state=IN_TRANSIT&from=" + from + "&to=" + to))
+                .then().statusCode(200).extract().jsonPath().getList("$");
+        return rows.stream().filter(r -> part.equals(r.get("partNumber")))
+                .sorted((a, b) -> Long.compare(((Number) b.get("id")).longValue(), ((Number) a.get("id")).longValue())).toList();
+    }
+
+    @Test
+    void aDepotOfficerSeesOnlyTheirDepotOnAPhone() throws Exception {
+        signIn("officer2", "officer2-demo");
+        phone();
+        open("/app/officer/?location=" + DEPOT);
+        waitReady();
+        String heading = driver.findElement(By.tagName("h1")).getText();
+        assertTrue(heading.contains("DEP-PELLOWDENE") && !heading.contains(DEPOT), heading);
+        assertTrue(driver.findElements(By.id("store")).isEmpty(), "one store: no store picker");
+        List<String> api = as("officer2").get(url("/api/planning/alerts?location=DEP-PELLOWDENE")).then().statusCode(200)
+                .extract().jsonPath().getList("partNumber", String.class);
+        assertFalse(api.isEmpty());
+        assertEquals(api, boardParts());
+        as("officer2").get(url("/api/planning/alerts?location=" + DEPOT)).then().statusCode(403);
+        screenshot("officer2-board-phone");
+        assertNoPageErrors();
+    }
+}
