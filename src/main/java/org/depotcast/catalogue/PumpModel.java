@@ -12,7 +12,9 @@ import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 @Entity
 @Table(name = "pump_model")
@@ -32,11 +34,30 @@ public class PumpModel {
     @Version
     public long version;
 
+    /**
+     * Makes the bill of materials the given lines. A part already on it keeps its row and takes the new values:
+     * replacing the row would insert the new one before the old one is deleted, against the unique part per model.
+     */
     void replaceBom(List<BomLine> lines) {
-        bom.clear();
+        Map<Long, BomLine> kept = new HashMap<>();
         for (BomLine line : lines) {
-            line.pumpModel = this;
-            bom.add(line);
+            kept.put(line.part.id, line);
+        }
+        bom.removeIf(existing -> !kept.containsKey(existing.part.id));
+        Map<Long, BomLine> current = new HashMap<>();
+        for (BomLine existing : bom) {
+            current.put(existing.part.id, existing);
+        }
+        for (BomLine line : lines) {
+            BomLine existing = current.get(line.part.id);
+            if (existing == null) {
+                line.pumpModel = this;
+                bom.add(line);
+            } else {
+                existing.basis = line.basis;
+                existing.quantity = line.quantity;
+                existing.serviceKitQuantity = line.serviceKitQuantity;
+            }
         }
     }
 }

@@ -56,6 +56,12 @@ public class ProblemMapper {
     }
 
     @ServerExceptionMapper
+    public Response bodyTooLarge(BodyTooLargeException e, UriInfo uri) {
+        return respond(413, "body-too-large", "Request body too large", e.getMessage(), uri,
+                List.of(new FieldError("body", e.getMessage())));
+    }
+
+    @ServerExceptionMapper
     public Response missing(EntityMissingException e, UriInfo uri) {
         // A missing thing named in the path is 404; named inside a body it is an unprocessable request.
         int status = e.field() == null ? 404 : 422;

@@ -61,7 +61,7 @@ class PurchaseOrderResource {
     @Path("{orderNumber}/cancel")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public PurchaseOrderResponse cancel(@PathParam("orderNumber") String orderNumber) {
-        return PurchaseOrderResponse.from(service.cancel(orderNumber));
+        return service.cancel(orderNumber);
     }
 
     @POST

@@ -127,8 +127,9 @@ public class PurchaseOrderService {
         return posted;
     }
 
+    /** Answers the cancelled order read inside the transaction: its lines are lazy and gone once it commits. */
     @Transactional
-    public PurchaseOrder cancel(String orderNumber) {
+    public PurchaseOrderResponse cancel(String orderNumber) {
         PurchaseOrder order = orders.lockedByNumber(orderNumber)
                 .orElseThrow(() -> new EntityMissingException(null, "purchase order", orderNumber));
         scope.require(order.destination.id, order.destination.code);
@@ -138,7 +139,7 @@ public class PurchaseOrderService {
         order.status = PurchaseOrderStatus.CANCELLED;
         audit.record("PURCHASE_ORDER_CANCELLED", "purchase_order", order.orderNumber, PurchaseOrderStatus.OPEN,
                 PurchaseOrderStatus.CANCELLED);
-        return order;
+        return PurchaseOrderResponse.from(order);
     }
 
     /** One row per order line; rows sharing an order number make one order. All or nothing; orders must be new. */
