@@ -38,12 +38,15 @@ class AccountResource {
     record AccountView(String username, Set<String> roles, boolean enabled) {
     }
 
-    record CreateAccount(@NotBlank @Size(max = 60) @Pattern(regexp = "[a-z0-9._-]+", message = "may hold lower-case letters, digits and . _ - only") String username,
-                         @NotBlank @Size(min = 8, max = 200) String password, @NotEmpty Set<@NotBlank String> roles,
-                         String kitCode, List<String> locationCodes) {
+    record CreateAccount(@NotBlank @Size(max = 60)
+                         @Pattern(regexp = "[a-z0-9._-]+", message = "may hold lower-case letters, digits and . _ - only") String username,
+                         @NotBlank @Size(min = 8, max = 200) String password,
+                         @NotEmpty @Size(max = 10) Set<@NotBlank @Size(max = 40) String> roles,
+                         @Size(max = 40) String kitCode,
+                         @Size(max = 1000) List<@NotBlank @Size(max = 40) String> locationCodes) {
     }
 
-    record LocationCodes(@NotNull List<@NotBlank String> codes) {
+    record LocationCodes(@NotNull @Size(max = 1000) List<@NotBlank @Size(max = 40) String> codes) {
     }
 
     @GET

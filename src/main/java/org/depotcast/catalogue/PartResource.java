@@ -61,7 +61,7 @@ class PartResource {
         return PartResponse.from(service.update(partNumber, request));
     }
 
-    record SubstituteRequest(@jakarta.validation.constraints.NotBlank String partNumber) {
+    record SubstituteRequest(@jakarta.validation.constraints.NotBlank @jakarta.validation.constraints.Size(max = 40) String partNumber) {
     }
 
     @GET

@@ -1,6 +1,7 @@
 package org.depotcast.common;
 
 import com.fasterxml.jackson.core.JsonParseException;
+import com.fasterxml.jackson.core.exc.InputCoercionException;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.core.exc.StreamReadException;
 import com.fasterxml.jackson.databind.exc.InvalidFormatException;
@@ -17,6 +18,7 @@ import jakarta.ws.rs.WebApplicationException;
 import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.hibernate.StaleObjectStateException;
+import org.hibernate.validator.engine.HibernateConstraintViolation;
 import org.jboss.resteasy.reactive.server.ServerExceptionMapper;
 
 import java.util.ArrayList;
@@ -39,7 +41,20 @@ public class ProblemMapper {
             errors.add(new FieldError(fieldOf(v), v.getMessage()));
         }
         errors.sort(Comparator.comparing(FieldError::field));
+        if (e.getConstraintViolations().stream().allMatch(ProblemMapper::inTheFuture)) {
+            // Well-formed, but dated after it could have happened: not a typing slip a resend would fix.
+            return respond(422, "dated-in-future", "Dated in the future", new InvalidInputException(errors).getMessage(),
+                    uri, errors);
+        }
         return respond(400, "invalid-input", "Invalid input", new InvalidInputException(errors).getMessage(), uri, errors);
+    }
+
+    private static boolean inTheFuture(ConstraintViolation<?> v) {
+        try {
+            return v.unwrap(HibernateConstraintViolation.class).getDynamicPayload(DateBounds.InTheFuture.class) != null;
+        } catch (jakarta.validation.ValidationException notHibernate) {
+            return false;
+        }
     }
 
     // Named one by one: Quarkus REST ships its own mappers for the specific Jackson types, and the most specific wins.
@@ -49,6 +64,10 @@ public class ProblemMapper {
         String field = "body";
         if (e instanceof JsonMappingException m && !m.getPath().isEmpty()) {
             field = jsonPath(m.getPath());
+        } else if (e instanceof InputCoercionException coercion && coercion.getProcessor() != null
+                && coercion.getProcessor().getParsingContext() != null) {
+            // A number the parser itself refused (out of a whole number's range): where it stood.
+            field = pointerPath(coercion.getProcessor().getParsingContext().pathAsPointer().toString());
         }
         String detail = e instanceof JsonMappingException ? "value does not have the expected type or form"
                 : "body is not well-formed JSON";
@@ -167,6 +186,22 @@ public class ProblemMapper {
                 sb.append(ref.getFieldName());
             } else if (ref.getIndex() >= 0) {
                 sb.append('[').append(ref.getIndex()).append(']');
+            }
+        }
+        return sb.isEmpty() ? "body" : sb.toString();
+    }
+
+    /** "/lines/0/quantity" as "lines[0].quantity"; "body" for the root. */
+    static String pointerPath(String pointer) {
+        StringBuilder sb = new StringBuilder();
+        for (String step : pointer.split("/")) {
+            if (step.isEmpty()) {
+                continue;
+            }
+            if (step.chars().allMatch(Character::isDigit)) {
+                sb.append('[').append(step).append(']');
+            } else {
+                sb.append(sb.isEmpty() ? "" : ".").append(step.replace("~1", "/").replace("~0", "~"));
             }
         }
         return sb.isEmpty() ? "body" : sb.toString();

@@ -18,10 +18,20 @@ public final class Quantities {
         return quantity.stripTrailingZeros().scale() <= 0;
     }
 
-    /** Throws a 400 naming {@code field} unless the quantity is positive, has at most three decimals and is whole where it must be. */
+    /**
+     * Throws a 400 naming {@code field} unless the quantity is positive, at most {@link Bounds#QUANTITY_MAX}, has at
+     * most three decimals and is whole where it must be. Size and decimals are checked first, by comparison only, so
+     * a number like 1e3000000 is refused without being expanded.
+     */
     public static BigDecimal requirePositive(String field, BigDecimal quantity, boolean wholeUnits) {
         if (quantity == null) {
             throw new InvalidInputException(field, "is required");
+        }
+        if (quantity.abs().compareTo(Bounds.QUANTITY_MAX_VALUE) > 0) {
+            throw new InvalidInputException(field, "must be at most " + Bounds.QUANTITY_MAX);
+        }
+        if (quantity.signum() != 0 && quantity.stripTrailingZeros().scale() > SCALE) {
+            throw new InvalidInputException(field, "has more than " + SCALE + " decimals");
         }
         if (quantity.signum() <= 0) {
             throw new InvalidInputException(field, "must be greater than zero, was " + quantity.toPlainString());
@@ -29,9 +39,6 @@ public final class Quantities {
         if (wholeUnits && !isWhole(quantity)) {
             throw new InvalidInputException(field, "must be a whole number for a part issued in whole units, was "
                     + quantity.toPlainString());
-        }
-        if (quantity.stripTrailingZeros().scale() > SCALE) {
-            throw new InvalidInputException(field, "has more than " + SCALE + " decimals");
         }
         return normalise(quantity);
     }

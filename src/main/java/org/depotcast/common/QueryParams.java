@@ -17,41 +17,51 @@ public final class QueryParams {
             return null;
         }
         return EnumNames.parse(type, value).orElseThrow(() -> new InvalidInputException(name,
-                "must be one of " + EnumNames.allowed(type) + ", was '" + value + "'"));
+                "must be one of " + EnumNames.allowed(type) + ", was '" + shown(value) + "'"));
     }
 
     public static LocalDate optionalDate(String name, String value) {
         if (value == null || value.isBlank()) {
             return null;
         }
+        LocalDate date;
         try {
-            return LocalDate.parse(value.strip());
+            date = LocalDate.parse(value.strip());
         } catch (DateTimeParseException e) {
-            throw new InvalidInputException(name, "must be a date written yyyy-mm-dd, was '" + value + "'");
+            throw new InvalidInputException(name, "must be a date written yyyy-mm-dd, was '" + shown(value) + "'");
         }
+        return DateBounds.requirePlausible(name, date);
     }
 
     public static OffsetDateTime optionalInstant(String name, String value) {
         if (value == null || value.isBlank()) {
             return null;
         }
+        OffsetDateTime at;
         try {
-            return value.length() == 10 ? LocalDate.parse(value).atStartOfDay().atOffset(java.time.ZoneOffset.UTC)
+            at = value.length() == 10 ? LocalDate.parse(value).atStartOfDay().atOffset(java.time.ZoneOffset.UTC)
                     : OffsetDateTime.parse(value.strip());
         } catch (DateTimeParseException e) {
-            throw new InvalidInputException(name, "must be a date (yyyy-mm-dd) or an ISO-8601 date-time, was '" + value + "'");
+            throw new InvalidInputException(name, "must be a date (yyyy-mm-dd) or an ISO-8601 date-time, was '"
+                    + shown(value) + "'");
         }
+        return DateBounds.requirePlausible(name, at);
     }
 
     public static Double optionalDouble(String name, String value) {
         if (value == null || value.isBlank()) {
             return null;
         }
+        double parsed;
         try {
-            return Double.parseDouble(value.strip());
+            parsed = Double.parseDouble(value.strip());
         } catch (NumberFormatException e) {
-            throw new InvalidInputException(name, "must be a number, was '" + value + "'");
+            throw new InvalidInputException(name, "must be a number, was '" + shown(value) + "'");
         }
+        if (!Double.isFinite(parsed)) {
+            throw new InvalidInputException(name, "must be a finite number, was '" + shown(value) + "'");
+        }
+        return parsed;
     }
 
     public static Integer optionalInt(String name, String value) {
@@ -61,7 +71,7 @@ public final class QueryParams {
         try {
             return Integer.parseInt(value.strip());
         } catch (NumberFormatException e) {
-            throw new InvalidInputException(name, "must be a whole number, was '" + value + "'");
+            throw new InvalidInputException(name, "must be a whole number, was '" + shown(value) + "'");
         }
     }
 
@@ -76,7 +86,12 @@ public final class QueryParams {
             }
             return parsed;
         } catch (NumberFormatException e) {
-            throw new InvalidInputException(name, "must be a whole number, was '" + value + "'");
+            throw new InvalidInputException(name, "must be a whole number, was '" + shown(value) + "'");
         }
+    }
+
+    /** A client's value as quoted back in a message: cut short, so a huge parameter does not make a huge answer. */
+    public static String shown(String value) {
+        return value.length() <= 40 ? value : value.substring(0, 40) + "…";
     }
 }

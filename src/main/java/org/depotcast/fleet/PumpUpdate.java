@@ -1,8 +1,9 @@
 package org.depotcast.fleet;
 
+import jakarta.validation.constraints.Digits;
+import org.depotcast.common.EventDate;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
-import jakarta.validation.constraints.PastOrPresent;
 import jakarta.validation.constraints.Size;
 
 import java.math.BigDecimal;
@@ -15,15 +16,17 @@ import java.time.LocalDate;
  */
 public record PumpUpdate(@Size(max = 40) String assetId,
                          @Size(min = 1, max = 40) String modelCode,
-                         @DecimalMin(value = "0", inclusive = false) @DecimalMax("500") BigDecimal depthM,
-                         @PastOrPresent LocalDate installedOn,
-                         @DecimalMin("-90") @DecimalMax("90") BigDecimal latitude,
-                         @DecimalMin("-180") @DecimalMax("180") BigDecimal longitude,
+                         @DecimalMin(value = "0", inclusive = false) @DecimalMax("500")
+                         @Digits(integer = 3, fraction = 6) BigDecimal depthM,
+                         @EventDate LocalDate installedOn,
+                         @DecimalMin("-90") @DecimalMax("90") @Digits(integer = 2, fraction = 8) BigDecimal latitude,
+                         @DecimalMin("-180") @DecimalMax("180") @Digits(integer = 3, fraction = 8) BigDecimal longitude,
                          @Size(min = 1, max = 40) String depotCode,
                          @Size(max = 60) String assignedMechanic,
                          PumpStatus status,
-                         @PastOrPresent LocalDate statusSince,
+                         @EventDate LocalDate statusSince,
                          @Size(max = 300) String statusNote,
-                         @DecimalMin("0") @DecimalMax("24") BigDecimal usageHoursPerDay,
+                         @DecimalMin("0") @DecimalMax("24")
+                         @Digits(integer = 2, fraction = 4) BigDecimal usageHoursPerDay,
                          UsageSource usageSource) {
 }

@@ -1,6 +1,7 @@
 package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
+import org.depotcast.common.Bounds;
 import org.depotcast.common.CsvOut;
 import org.depotcast.common.CsvRow;
 import org.depotcast.common.CsvTable;
@@ -26,6 +27,9 @@ import java.util.TreeMap;
 @ApplicationScoped
 public class StatelessForecastService {
     static final int DEFAULT_HORIZON = 12;
+    /** Period numbers are whole numbers from 0 up to this (room for yyyymm numbering), so no span overflows. */
+    static final int PERIOD_MAX = 10_000_000;
+    private static final BigDecimal SERIES_VALUE_MAX = new BigDecimal(Bounds.SERIES_VALUE_MAX);
     private static final double[] QUANTILES = {0.5, 0.8, 0.9, 0.95, 0.99};
 
     /** Settings shared by the single and batch forms; checked once with the field names the client used. */
@@ -85,11 +89,29 @@ public class StatelessForecastService {
         Map<String, TreeMap<Integer, Double>> series = new LinkedHashMap<>();
         for (CsvRow row : table.rows()) {
             String id = row.text("series_id");
-            Integer period = row.integer("period", Integer.MIN_VALUE);
+            Integer period = row.integer("period", 0);
+            if (period != null && period > PERIOD_MAX) {
+                row.reject("period", "must be at most " + PERIOD_MAX + " (a period number such as 202401), was " + period);
+                period = null;
+            }
             BigDecimal quantity = row.decimal("quantity", BigDecimal.ZERO, false);
-            if (id != null && period != null && quantity != null
-                    && series.computeIfAbsent(id, k -> new TreeMap<>()).put(period, quantity.doubleValue()) != null) {
-                row.reject("period", "period " + period + " appears twice for series '" + id + "'");
+            if (quantity != null && quantity.compareTo(SERIES_VALUE_MAX) > 0) {
+                row.reject("quantity", "must be at most " + Bounds.SERIES_VALUE_MAX);
+                quantity = null;
+            }
+            if (id != null && !series.containsKey(id) && series.size() == Bounds.BATCH_SERIES_MAX) {
+                row.reject("series_id", "a batch holds at most " + Bounds.BATCH_SERIES_MAX + " series");
+                id = null;
+            }
+            if (id != null && period != null && quantity != null) {
+                TreeMap<Integer, Double> periods = series.computeIfAbsent(id, k -> new TreeMap<>());
+                if (periods.put(period, quantity.doubleValue()) != null) {
+                    row.reject("period", "period " + period + " appears twice for series '" + id + "'");
+                } else if (periods.lastKey() - periods.firstKey() >= Bounds.SERIES_PERIODS_MAX) {
+                    // The history array spans first to last period: its length is bounded, never a client's number.
+                    row.reject("period", "series '" + id + "' spans more than " + Bounds.SERIES_PERIODS_MAX + " periods");
+                    periods.remove(period);
+                }
             }
         }
         table.problems().throwIfAny();

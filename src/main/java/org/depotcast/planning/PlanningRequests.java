@@ -1,5 +1,8 @@
 package org.depotcast.planning;
 
+import jakarta.validation.constraints.DecimalMax;
+import org.depotcast.common.PlanDate;
+import org.depotcast.common.Bounds;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.Digits;
 import jakarta.validation.constraints.NotBlank;
@@ -14,9 +17,16 @@ public final class PlanningRequests {
     private PlanningRequests() {
     }
 
-    public record ReorderPointRequest(@NotNull @DecimalMin("0") Double leadTimeDemandMean, Double variance,
-                                      @NotNull Double serviceLevel, String distribution, String target,
-                                      @DecimalMin(value = "0", inclusive = false) Double orderQuantity) {
+    public record ReorderPointRequest(@NotNull @DecimalMin("0")
+                                      @DecimalMax(Bounds.LEAD_TIME_DEMAND_MEAN_MAX) Double leadTimeDemandMean,
+                                      @DecimalMin(value = "0", inclusive = false)
+                                      @DecimalMax(Bounds.LEAD_TIME_DEMAND_VARIANCE_MAX) Double variance,
+                                      @NotNull @DecimalMin(value = "0", inclusive = false)
+                                      @DecimalMax(value = "1", inclusive = false) Double serviceLevel,
+                                      @Size(max = 40) String distribution,
+                                      @Size(max = 40) String target,
+                                      @DecimalMin(value = "0", inclusive = false)
+                                      @DecimalMax(Bounds.ORDER_QUANTITY_MAX) Double orderQuantity) {
     }
 
     public record ReorderPointResponse(double reorderPoint, double cycleServiceLevel, double fillRate,
@@ -27,8 +37,10 @@ public final class PlanningRequests {
      * Acknowledges or snoozes the alert of a part at a location; it covers every reason the alert has now. With
      * {@code kind}, the alert must carry that reason (else 404).
      */
-    public record AlertActionRequest(@NotBlank String partNumber, @NotBlank String location, AlertKind kind,
-                                     @NotNull AlertAction.Action action, LocalDate snoozeUntil,
+    public record AlertActionRequest(@NotBlank @Size(max = 40) String partNumber,
+                                     @NotBlank @Size(max = 40) String location,
+                                     AlertKind kind,
+                                     @NotNull AlertAction.Action action, @PlanDate LocalDate snoozeUntil,
                                      @Size(max = 300) String note) {
     }
 
@@ -37,23 +49,38 @@ public final class PlanningRequests {
     }
 
     public record PurchasePlanRequest(@NotNull @DecimalMin(value = "0", inclusive = false)
-                                      @Digits(integer = 12, fraction = 2) BigDecimal budget, LocalDate planningDate) {
+                                      @DecimalMax(Bounds.BUDGET_MAX)
+                                      @Digits(integer = 13, fraction = 2) BigDecimal budget,
+                                      @PlanDate LocalDate planningDate) {
     }
 
-    public record ServiceLevelRequest(@NotBlank String partClass, @NotNull Double level) {
+    public record ServiceLevelRequest(@NotBlank @Size(max = 40) String partClass,
+                                      @NotNull @DecimalMin(value = "0", inclusive = false)
+                                      @DecimalMax(value = "1", inclusive = false) Double level) {
     }
 
-    public record LaneCostRequest(@NotBlank String from, @NotBlank String to,
-                                  @NotNull @DecimalMin(value = "0", message = "must not be negative") BigDecimal unitCost) {
+    public record LaneCostRequest(@NotBlank @Size(max = 40) String from, @NotBlank @Size(max = 40) String to,
+                                  @NotNull @DecimalMin(value = "0", message = "must not be negative")
+                                  @DecimalMax(Bounds.UNIT_COST_MAX)
+                                  @Digits(integer = 9, fraction = 4) BigDecimal unitCost) {
     }
 
     /** A dispatch; a client that may resend it sends an {@code idempotencyKey}, so no second transfer is made. */
-    public record TransferRequest(@NotBlank String partNumber, @NotBlank String from, @NotBlank String to,
-                                  @NotNull BigDecimal quantity, @Size(max = 80) String idempotencyKey) {
+    public record TransferRequest(@NotBlank @Size(max = 40) String partNumber, @NotBlank @Size(max = 40) String from,
+                                  @NotBlank @Size(max = 40) String to,
+                                  @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.QUANTITY_MAX)
+                                  @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                                  BigDecimal quantity,
+                                  @Size(max = 80) String idempotencyKey) {
     }
 
     /** An arrival: what came in, what was lost or damaged on the way and why; everything outstanding when empty. */
-    public record ReceiveRequest(@DecimalMin("0") BigDecimal receivedQuantity, @DecimalMin("0") BigDecimal writtenOffQuantity,
+    public record ReceiveRequest(@DecimalMin("0") @DecimalMax(Bounds.QUANTITY_MAX)
+                                 @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                                 BigDecimal receivedQuantity,
+                                 @DecimalMin("0") @DecimalMax(Bounds.QUANTITY_MAX)
+                                 @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                                 BigDecimal writtenOffQuantity,
                                  @Size(max = 300) String writeOffReason, @Size(max = 80) String idempotencyKey) {
     }
 }

@@ -1,8 +1,9 @@
 package org.depotcast.repairs;
 
+import org.depotcast.common.EventDate;
+import org.depotcast.common.Bounds;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotNull;
-import jakarta.validation.constraints.PastOrPresent;
 import jakarta.validation.constraints.Size;
 
 import java.time.LocalDate;
@@ -14,9 +15,9 @@ import java.util.List;
  * twice. Giving {@code fixedOn} consumes the lines from the mechanic's kit and the pump becomes WORKING unless another
  * breakdown repair of it is still open.
  */
-public record RepairProgress(@PastOrPresent LocalDate diagnosedOn,
-                             @PastOrPresent LocalDate partsAvailableOn,
-                             @PastOrPresent LocalDate fixedOn,
+public record RepairProgress(@EventDate LocalDate diagnosedOn,
+                             @EventDate LocalDate partsAvailableOn,
+                             @EventDate LocalDate fixedOn,
                              @Size(max = 300) String fault,
-                             List<RepairRequest.@Valid @NotNull Line> lines) {
+                             @Size(max = Bounds.LINES_MAX) List<RepairRequest.@Valid @NotNull Line> lines) {
 }

@@ -1,5 +1,9 @@
 package org.depotcast.requests;
 
+import jakarta.validation.constraints.Digits;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import org.depotcast.common.Bounds;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotEmpty;
@@ -16,26 +20,39 @@ public final class RequestDtos {
     }
 
     /** Raised on the phone, possibly offline; {@code clientRef} is made there so a resend never duplicates it. */
-    public record Raise(@NotBlank @Size(max = 80) String clientRef, String assetId,
+    public record Raise(@NotBlank @Size(max = 80) String clientRef, @Size(max = 40) String assetId,
                         @NotNull PartsRequest.Urgency urgency, @Size(max = 300) String fault,
-                        @NotEmpty List<@Valid @NotNull Line> lines) {
+                        @NotEmpty @Size(max = Bounds.LINES_MAX) List<@Valid @NotNull Line> lines) {
     }
 
-    public record Line(@NotBlank String partNumber, @NotNull BigDecimal quantity) {
+    public record Line(@NotBlank @Size(max = 40) String partNumber,
+                       @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.QUANTITY_MAX)
+                       @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                       BigDecimal quantity) {
     }
 
     /** Per requested part: how many to approve, optionally as a compatible substitute. */
-    public record Approve(@NotEmpty List<@Valid @NotNull ApprovedLine> lines, @Size(max = 300) String note) {
+    public record Approve(@NotEmpty @Size(max = Bounds.LINES_MAX) List<@Valid @NotNull ApprovedLine> lines,
+                          @Size(max = 300) String note) {
     }
 
-    public record ApprovedLine(@NotBlank String partNumber, @NotNull BigDecimal quantity, String substitutePartNumber) {
+    public record ApprovedLine(@NotBlank @Size(max = 40) String partNumber,
+                               @NotNull @DecimalMin("0") @DecimalMax(Bounds.QUANTITY_MAX)
+                               @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                               BigDecimal quantity,
+                               @Size(max = 40) String substitutePartNumber) {
     }
 
     public record Reason(@NotBlank @Size(max = 300) String reason) {
     }
 
     /** A request as the API shows it; {@code cautions} says what a substitute in contact with drinking water needs. */
-    public record View(long id, String clientRef, String mechanic, String kit, String depot, String assetId,
+    public record View(long id,
+                       String clientRef,
+                       String mechanic,
+                       String kit,
+                       String depot,
+                       @Size(max = 40) String assetId,
                        PartsRequest.Urgency urgency, String fault, RequestStatus status, OffsetDateTime raisedAt,
                        OffsetDateTime issuedAt, long version, List<LineView> lines, List<EventView> history,
                        List<String> cautions) {
@@ -43,7 +60,9 @@ public final class RequestDtos {
             return new View(r.id, r.clientRef, r.mechanic, r.kit.code, r.depot.code,
                     r.pump == null ? null : r.pump.assetId, r.urgency, r.fault, r.status, r.raisedAt, r.issuedAt,
                     r.version, r.lines.stream().map(l -> new LineView(l.part.partNumber, l.quantityRequested,
-                    l.approvedPart == null ? null : l.approvedPart.partNumber, l.quantityApproved, l.quantityIssued)).toList(),
+                    l.approvedPart == null ? null : l.approvedPart.partNumber,
+                    l.quantityApproved,
+                    l.quantityIssued)).toList(),
                     r.events.stream().map(e -> new EventView(e.status, e.actor, e.at, e.reason)).toList(),
                     r.lines.stream().filter(l -> l.approvedPart != null && (l.part.family.touchesDrinkingWater()
                             || l.approvedPart.family.touchesDrinkingWater())).map(l -> substituteCaution(

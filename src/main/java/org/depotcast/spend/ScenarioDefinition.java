@@ -1,5 +1,6 @@
 package org.depotcast.spend;
 
+import org.depotcast.common.Bounds;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
@@ -26,20 +27,22 @@ import java.util.List;
 public record ScenarioDefinition(
         @NotBlank @Size(max = 120) String name,
         @NotNull @Min(1) @Max(10) Integer horizonYears,
-        List<@Valid @NotNull Installation> installations,
+        @Size(max = Bounds.LINES_MAX) List<@Valid @NotNull Installation> installations,
         @DecimalMin("0") @DecimalMax("100") Double decommissionPercentPerYear,
         @DecimalMin("-90") @DecimalMax("500") Double usageChangePercent,
         @DecimalMin("-50") @DecimalMax("200") Double priceEscalationPercentPerYear,
         @Pattern(regexp = "[A-Z]{3}", message = "must be a three-letter ISO 4217 code") String currency,
-        @DecimalMin(value = "0", inclusive = false) Double exchangeRate,
+        @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.EXCHANGE_RATE_MAX) Double exchangeRate,
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "1", inclusive = false) Double serviceLevel,
         @Min(1000) @Max(100000) Integer draws,
         Long seed) {
 
     /** New pumps going in during a projection year (1 = the first year). */
     public record Installation(@NotNull @Min(1) @Max(10) Integer year, @NotNull @Min(0) @Max(100000) Integer count,
-                               @NotBlank String modelCode, @NotNull @DecimalMin(value = "0", inclusive = false) Double depthM,
-                               @DecimalMin("0") @DecimalMax("24") Double usageHoursPerDay, @NotBlank String depotCode) {
+                               @NotBlank @Size(max = 40) String modelCode,
+                               @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax("500") Double depthM,
+                               @DecimalMin("0") @DecimalMax("24") Double usageHoursPerDay,
+                               @NotBlank @Size(max = 40) String depotCode) {
     }
 
     int drawsOrDefault() {

@@ -136,19 +136,25 @@ class SpendResource {
     }
 
     /** Totals per financial year of several finished runs side by side, e.g. ?runs=3,4 (baseline first). */
+    static final int COMPARED_RUNS_MAX = 10;
+
     @GET
     @Path("compare")
     public List<Map<String, Object>> compare(@QueryParam("runs") String runIds) {
         if (runIds == null || runIds.isBlank()) {
             throw new InvalidInputException("runs", "name the runs to compare, e.g. runs=3,4");
         }
+        String[] ids = runIds.split(",", COMPARED_RUNS_MAX + 2);
+        if (ids.length > COMPARED_RUNS_MAX) {
+            throw new InvalidInputException("runs", "compare at most " + COMPARED_RUNS_MAX + " runs at a time");
+        }
         List<SpendResults> runs = new ArrayList<>();
-        for (String part : runIds.split(",")) {
+        for (String part : ids) {
             long id;
             try {
                 id = Long.parseLong(part.strip());
             } catch (NumberFormatException e) {
-                throw new InvalidInputException("runs", "must be run ids separated by commas, was '" + runIds + "'");
+                throw new InvalidInputException("runs", "must be run ids separated by commas, was '" + org.depotcast.common.QueryParams.shown(part.strip()) + "'");
             }
             runs.add(service.results(id));
         }

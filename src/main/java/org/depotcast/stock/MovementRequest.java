@@ -1,5 +1,10 @@
 package org.depotcast.stock;
 
+import jakarta.validation.constraints.Digits;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import org.depotcast.common.EventDate;
+import org.depotcast.common.Bounds;
 import jakarta.validation.constraints.NotBlank;
 import org.depotcast.common.IdempotencyKey;
 import jakarta.validation.constraints.NotNull;
@@ -13,8 +18,12 @@ import java.time.OffsetDateTime;
  * A phone that resends after a dropped connection sends the same {@code idempotencyKey} and is answered with the
  * movement already posted.
  */
-public record MovementRequest(@NotNull MovementKind kind, @NotBlank String partNumber, String from, String to,
-                              @NotNull BigDecimal quantity, OffsetDateTime occurredAt, @Size(max = 200) String reason,
+public record MovementRequest(@NotNull MovementKind kind, @NotBlank @Size(max = 40) String partNumber,
+                              @Size(max = 40) String from, @Size(max = 40) String to,
+                              @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.QUANTITY_MAX)
+                              @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                              BigDecimal quantity,
+                              @EventDate OffsetDateTime occurredAt, @Size(max = 200) String reason,
                               @Size(max = 80) String reference, @Size(max = 80) String idempotencyKey) {
     MovementCommand toCommand() {
         return new MovementCommand(kind, partNumber, from, to, quantity, occurredAt, reason, reference,

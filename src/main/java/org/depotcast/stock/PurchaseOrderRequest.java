@@ -1,5 +1,11 @@
 package org.depotcast.stock;
 
+import jakarta.validation.constraints.Digits;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
+import org.depotcast.common.PlanDate;
+import org.depotcast.common.EventDate;
+import org.depotcast.common.Bounds;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotEmpty;
@@ -12,10 +18,13 @@ import java.util.List;
 
 public record PurchaseOrderRequest(@NotBlank @Size(max = 40) String orderNumber,
                                    @NotBlank @Size(max = 120) String supplier,
-                                   @NotBlank String destination,
-                                   @NotNull LocalDate orderedOn,
-                                   LocalDate expectedOn,
-                                   @NotEmpty List<@Valid @NotNull Line> lines) {
-    public record Line(@NotBlank String partNumber, @NotNull BigDecimal quantity) {
+                                   @NotBlank @Size(max = 40) String destination,
+                                   @NotNull @EventDate LocalDate orderedOn,
+                                   @PlanDate LocalDate expectedOn,
+                                   @NotEmpty @Size(max = Bounds.LINES_MAX) List<@Valid @NotNull Line> lines) {
+    public record Line(@NotBlank @Size(max = 40) String partNumber,
+                       @NotNull @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.QUANTITY_MAX)
+                       @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS)
+                       BigDecimal quantity) {
     }
 }

@@ -11,6 +11,7 @@ import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 import org.depotcast.catalogue.Part;
+import org.depotcast.common.Bounds;
 import org.depotcast.common.BusinessRuleException;
 
 import java.math.BigDecimal;
@@ -34,7 +35,13 @@ public class StockBalance {
     public long version;
 
     void add(BigDecimal quantity) {
-        onHand = onHand.add(quantity);
+        BigDecimal after = onHand.add(quantity);
+        if (after.compareTo(Bounds.BALANCE_CAPACITY) > 0) {
+            // The database would refuse the row; say so instead of failing the write as if it were busy.
+            throw new BusinessRuleException("quantity", "the balance would exceed the largest the ledger holds ("
+                    + Bounds.BALANCE_CAPACITY.toPlainString() + ")");
+        }
+        onHand = after;
     }
 
     void take(BigDecimal quantity, String partNumber, String locationCode) {

@@ -4,7 +4,9 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.CsvOut;
+import org.depotcast.common.DateBounds;
 import org.depotcast.common.CsvRow;
 import org.depotcast.common.CsvTable;
 import org.depotcast.common.Quantities;
@@ -49,6 +51,7 @@ public class StockCountService {
         CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 3));
         List<Count> counts = new ArrayList<>();
         Set<String> seen = new HashSet<>();
+        Integer futureRow = null;
         for (CsvRow row : table.rows()) {
             String locationCode = row.text("location_code");
             Optional<Location> location = locationCode == null ? Optional.empty() : locations.find(locationCode);
@@ -70,10 +73,19 @@ public class StockCountService {
                 row.reject("part_number", "counted twice at '" + locationCode + "'");
             }
             var countedOn = row.optionalDate("counted_on");
+            if (countedOn != null && DateBounds.tooEarly(countedOn)) {
+                row.reject("counted_on", DateBounds.earliestMessage());
+            } else if (countedOn != null && DateBounds.eventInFuture(countedOn) && futureRow == null) {
+                futureRow = row.line();
+            }
             counts.add(new Count(locationCode, partNumber, quantity,
                     countedOn == null ? null : countedOn.atStartOfDay().atOffset(ZoneOffset.UTC)));
         }
         table.problems().throwIfAny();
+        if (futureRow != null) {
+            // Well-formed but not yet possible: refused like a movement dated ahead, nothing written.
+            throw new BusinessRuleException("row " + futureRow + ", column counted_on", DateBounds.futureMessage());
+        }
         for (Count count : counts) {
             BigDecimal difference = count.quantity().subtract(queries.onHand(count.partNumber(), count.locationCode()));
             if (difference.signum() == 0) {

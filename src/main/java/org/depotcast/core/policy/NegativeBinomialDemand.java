@@ -48,11 +48,23 @@ public record NegativeBinomialDemand(double mean, double variance) implements De
 
     @Override
     public double quantile(double p) {
-        return DiscreteDemand.quantile(this::pmf, p, mean, Math.sqrt(variance));
+        return DiscreteDemand.quantile(k -> cdf(k), p, mean, Math.sqrt(variance));
     }
 
+    /**
+     * G(s) = E[(D − s)+] for whole s = ⌊x⌋ ≥ 1 in closed form: since k·P_r(k) = m·P_{r+1}(k − 1) (Johnson, Kemp &amp;
+     * Kotz, ch. 5), E[D; D &gt; s] = m·P(D_{r+1} ≥ s), so G(s) = m·I_{1−p}(s, r + 1) − s·I_{1−p}(s + 1, r), with the
+     * upper tails written as regularised incomplete beta functions to keep their precision. Constant cost in s.
+     */
     @Override
     public double expectedShortfall(double x) {
-        return DiscreteDemand.expectedShortfall(this::pmf, mean, x);
+        int s = (int) Math.min(Integer.MAX_VALUE - 1L, (long) Math.floor(x));
+        if (s <= 0) {
+            return mean - Math.max(0, x);
+        }
+        double q = 1 - successProbability(), r = size();
+        double meanAbove = mean * Beta.regularizedBeta(q, s, r + 1);
+        double countAbove = Beta.regularizedBeta(q, s + 1.0, r);
+        return Math.max(0, meanAbove - s * countAbove);
     }
 }

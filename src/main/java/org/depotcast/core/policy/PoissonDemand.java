@@ -42,7 +42,7 @@ public record PoissonDemand(double mean) implements DemandDistribution {
             return 0;
         }
         PoissonDistribution d = distribution();
-        return DiscreteDemand.quantile(d::probability, p, mean, Math.sqrt(mean));
+        return DiscreteDemand.quantile(d::cumulativeProbability, p, mean, Math.sqrt(mean));
     }
 
     /** Closed form G(x) = (m − x)(1 − F(x)) + m·p(x) for whole x (Silver, Pyke &amp; Thomas 2017, appendix). */
@@ -51,7 +51,7 @@ public record PoissonDemand(double mean) implements DemandDistribution {
         if (x <= 0) {
             return mean - Math.max(0, x);
         }
-        int s = (int) Math.floor(x);
+        int s = (int) Math.min(Integer.MAX_VALUE - 1L, (long) Math.floor(x));
         return Math.max(0, (mean - s) * (1 - cdf(s)) + mean * pmf(s));
     }
 }

@@ -38,18 +38,42 @@ public final class ReorderPoint {
         if (kind == Target.CYCLE_SERVICE_LEVEL) {
             s = demand.quantile(target);
         } else if (demand instanceof NormalDemand) {
-            s = demand.quantile(0.5);
-            double step = Math.sqrt(demand.variance()) / 1000;
-            while (fillRate(demand, s, orderQuantity) < target) {
-                s += step;
-            }
+            // On a grid of sd/1000 from the median: the smallest grid point reaching the target.
+            double median = demand.quantile(0.5), step = Math.sqrt(demand.variance()) / 1000;
+            s = median + step * smallestReaching(k -> fillRate(demand, median + k * step, orderQuantity) >= target);
         } else {
-            s = 0;
-            while (fillRate(demand, s, orderQuantity) < target) {
-                s++;
-            }
+            s = smallestReaching(k -> fillRate(demand, k, orderQuantity) >= target);
         }
         return new Result(s, demand.cdf(s), fillRate(demand, s, orderQuantity), demand.expectedShortfall(s));
+    }
+
+    /**
+     * The smallest whole k ≥ 0 for which {@code reaches} holds, for a condition that once true stays true as k grows
+     * (fill rate rises with s, since the loss G is convex and decreasing): the bound is found by doubling, then the
+     * point by bisection (Press et al., Numerical Recipes, 3rd ed., 2007, section 9.1), so about 2·log2(k)
+     * evaluations instead of k steps of one unit. Gives up at 2^62 (the condition never holds).
+     */
+    static long smallestReaching(java.util.function.LongPredicate reaches) {
+        if (reaches.test(0)) {
+            return 0;
+        }
+        long below = 0, above = 1;
+        while (!reaches.test(above)) {
+            below = above;
+            if (above >= 1L << 62) {
+                return above;
+            }
+            above *= 2;
+        }
+        while (above - below > 1) {
+            long middle = below + (above - below) / 2;
+            if (reaches.test(middle)) {
+                above = middle;
+            } else {
+                below = middle;
+            }
+        }
+        return above;
     }
 
     /** P2 = 1 − [G(s) − G(s + Q)] / Q. */
