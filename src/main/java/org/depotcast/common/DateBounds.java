@@ -71,8 +71,8 @@ public final class DateBounds {
     }
 
     /**
-     * Throws for a date a thing happened on: 400 before {@link #EARLIEST}, 422 ({@link BusinessRuleException}) more
-     * than a day ahead; for rows read outside Bean Validation.
+     * Throws for a date a thing happened on: 400 before {@link #EARLIEST}, 422 more
+     * than a day ahead ({@link DatedInFutureException}); for rows read outside Bean Validation.
      */
     public static LocalDate requireEvent(String field, LocalDate date) {
         if (date == null) {
@@ -82,7 +82,7 @@ public final class DateBounds {
             throw new InvalidInputException(field, earliestMessage());
         }
         if (eventInFuture(date)) {
-            throw new BusinessRuleException(field, futureMessage());
+            throw new DatedInFutureException(field);
         }
         return date;
     }

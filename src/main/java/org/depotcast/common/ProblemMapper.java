@@ -94,6 +94,12 @@ public class ProblemMapper {
     }
 
     @ServerExceptionMapper
+    public Response datedInFuture(DatedInFutureException e, UriInfo uri) {
+        return respond(422, "dated-in-future", "Dated in the future", e.getMessage(), uri,
+                fieldList(e.field(), e.getMessage()));
+    }
+
+    @ServerExceptionMapper
     public Response conflict(ConflictException e, UriInfo uri) {
         return respond(409, "conflict", "Conflict with current state", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
     }

@@ -86,6 +86,10 @@ public class StatelessForecastService {
     public String batch(String csv, String method, Double alpha, Double beta, Integer horizon) {
         Settings settings = Settings.of(method, alpha, beta, horizon);
         CsvTable table = CsvTable.parse(csv, List.of("series_id", "period", "quantity"));
+        if (table.rows().size() > Bounds.BATCH_ROWS_MAX) {
+            throw new InvalidInputException("body", "a batch holds at most " + Bounds.BATCH_ROWS_MAX + " rows, this one "
+                    + table.rows().size());
+        }
         Map<String, TreeMap<Integer, Double>> series = new LinkedHashMap<>();
         for (CsvRow row : table.rows()) {
             String id = row.text("series_id");

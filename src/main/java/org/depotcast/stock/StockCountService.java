@@ -4,7 +4,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
-import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.DatedInFutureException;
 import org.depotcast.common.CsvOut;
 import org.depotcast.common.DateBounds;
 import org.depotcast.common.CsvRow;
@@ -84,7 +84,7 @@ public class StockCountService {
         table.problems().throwIfAny();
         if (futureRow != null) {
             // Well-formed but not yet possible: refused like a movement dated ahead, nothing written.
-            throw new BusinessRuleException("row " + futureRow + ", column counted_on", DateBounds.futureMessage());
+            throw new DatedInFutureException("row " + futureRow + ", column counted_on");
         }
         for (Count count : counts) {
             BigDecimal difference = count.quantity().subtract(queries.onHand(count.partNumber(), count.locationCode()));

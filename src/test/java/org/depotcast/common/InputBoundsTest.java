@@ -133,7 +133,7 @@ class InputBoundsTest {
         refused(as("officer").contentType("text/csv").body("location_code,part_number,quantity,counted_on\n"
                         + depot + "," + part + ",9," + today + "\n" + depot + "," + data.part(UnitOfIssue.EACH) + ",1,"
                         + LocalDate.now(ZoneOffset.UTC).plusDays(5) + "\n").post("/api/stock/counts/import").then(),
-                422, "/problems/rule-violated", "row 3, column counted_on");
+                422, "/problems/dated-in-future", "row 3, column counted_on");
         refused(as("officer").contentType("text/csv").body("location_code,part_number,quantity,counted_on\n"
                 + depot + "," + part + ",9,0000-01-01\n").post("/api/stock/counts/import").then(),
                 400, "/problems/invalid-input", "row 2, column counted_on");
