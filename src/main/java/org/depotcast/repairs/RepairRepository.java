@@ -57,6 +57,24 @@ class RepairRepository implements PanacheRepository<Repair> {
                 Object[].class).setParameter("since", since).getResultList();
     }
 
+    /** The latest preventive service fixed, per pump: rows pump id, fixed on. */
+    List<Object[]> lastServices() {
+        return getEntityManager().createQuery("""
+                select r.pump.id, max(r.fixedOn) from Repair r
+                where r.kind = org.depotcast.repairs.RepairKind.PREVENTIVE and r.fixedOn is not null
+                group by r.pump.id""", Object[].class).getResultList();
+    }
+
+    /** The day of the earliest repair on record, or null with none. */
+    LocalDate firstReportedOn() {
+        return getEntityManager().createQuery("select min(r.reportedOn) from Repair r", LocalDate.class).getSingleResult();
+    }
+
+    /** Repairs not fixed yet, newest report first. */
+    List<Repair> open() {
+        return find("fixedOn is null", Sort.descending("reportedOn").and("id", Sort.Direction.Descending)).list();
+    }
+
     /** Open breakdown repairs, earliest reported first: rows pump id, repair ref, reported on. All pumps when null. */
     List<Object[]> openBreakdownsOf(Long pumpId) {
         String query = """

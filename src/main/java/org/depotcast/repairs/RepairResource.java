@@ -16,6 +16,7 @@ import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
+import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.QueryParams;
 
 import java.util.List;
@@ -29,11 +30,23 @@ class RepairResource {
         this.service = service;
     }
 
+    /** Newest report first; {@code open=true} keeps the repairs not fixed yet. */
     @GET
     public List<RepairResponse> list(@QueryParam("asset") String asset, @QueryParam("since") String since,
-                                     @QueryParam("limit") String limit) {
+                                     @QueryParam("limit") String limit, @QueryParam("open") String open) {
         return service.search(asset, QueryParams.optionalDate("since", since),
-                        QueryParams.intInRange("limit", limit, 200, 1, 10_000)).stream().map(RepairResponse::from).toList();
+                        QueryParams.intInRange("limit", limit, 200, 1, 10_000), flag("open", open))
+                .stream().map(RepairResponse::from).toList();
+    }
+
+    private static boolean flag(String name, String value) {
+        if (value == null || value.isBlank() || value.strip().equalsIgnoreCase("false")) {
+            return false;
+        }
+        if (value.strip().equalsIgnoreCase("true")) {
+            return true;
+        }
+        throw new InvalidInputException(name, "must be true or false, was '" + value + "'");
     }
 
     @GET

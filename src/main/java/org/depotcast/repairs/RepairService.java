@@ -72,6 +72,17 @@ public class RepairService {
     }
 
     public List<Repair> search(String assetId, LocalDate since, int limit) {
+        return search(assetId, since, limit, false);
+    }
+
+    /** As {@link #search(String, LocalDate, int)}; {@code openOnly} keeps the repairs not fixed yet. */
+    public List<Repair> search(String assetId, LocalDate since, int limit, boolean openOnly) {
+        if (openOnly) {
+            var visible = pumps.visibleFilter();
+            Long pumpId = assetId == null ? null : pumps.requireVisible("asset", assetId).id;
+            return repairs.open().stream().filter(r -> pumpId == null ? visible.test(r.pump) : pumpId.equals(r.pump.id))
+                    .filter(r -> since == null || !r.reportedOn.isBefore(since)).limit(limit).toList();
+        }
         if (assetId != null) {
             return repairs.search(pumps.requireVisible("asset", assetId).id, since, limit);
         }

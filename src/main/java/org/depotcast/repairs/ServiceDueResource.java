@@ -1,0 +1,33 @@
+package org.depotcast.repairs;
+
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.MediaType;
+import org.eclipse.microprofile.openapi.annotations.Operation;
+
+import java.time.LocalDate;
+import java.util.List;
+
+@Path("/api/pumps/service-due")
+@Produces(MediaType.APPLICATION_JSON)
+class ServiceDueResource {
+    private final ServiceDueService service;
+
+    ServiceDueResource(ServiceDueService service) {
+        this.service = service;
+    }
+
+    /**
+     * Preventive services due on the caller's pumps (a mechanic: the pumps assigned to them), soonest first: hours
+     * since the last service at each pump's daily load against its model's interval.
+     */
+    @GET
+    @Operation(summary = "Preventive services due", description = "Per pump in service that the caller may see: hours "
+            + "since the last preventive service (or installation) at its recorded daily loads, the model's interval, "
+            + "hours left and the day it falls due at today's load; overdue first. Optional depot filter.")
+    public List<ServiceDue> due(@QueryParam("depot") String depot) {
+        return service.dueAt(LocalDate.now(), depot);
+    }
+}
