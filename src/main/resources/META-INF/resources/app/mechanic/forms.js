@@ -1,0 +1,210 @@
+/*
+ * forms.js: the three things a mechanic does on the phone: ask for parts, record a repair, report a pump. A form
+ * checks what it can on the phone, then hands an outbox item to `queue` (see store.js); the item carries the
+ * reference made here, so it counts once however often it is sent.
+ */
+import * as api from '/app/js/api.js';
+import * as fmt from '/app/js/format.js';
+import {h, mount, showError, clearErrors} from '/app/js/ui.js';
+import {partLabel} from './views.js';
+
+let fieldIds = 0;
+
+function field(label, input, hint) {
+    const id = input.id || `f${++fieldIds}`;
+    input.id = id;
+    return h('div', {class: 'field'}, h('label', {for: id}, label, hint ? h('span', {class: 'hint'}, hint) : null), input);
+}
+
+function pumpSelect(snapshot, name, withKit) {
+    return h('select', {name, required: !withKit},
+        withKit ? h('option', {value: ''}, 'Kit top-up (no pump)') : h('option', {value: ''}, 'Choose a pump'),
+        snapshot.pumps.map(p => h('option', {value: p.assetId}, `${p.assetId} (${p.status === 'BROKEN' ? 'broken' : 'working'})`)));
+}
+
+/** Rows of part and quantity; `choices` lists the part numbers offered. */
+function partLines(snapshot, legend, choices, describe) {
+    const list = h('div', {class: 'part-lines'});
+    const box = h('fieldset', {}, h('legend', {}, legend), list);
+    const add = (partNumber = '', quantity = 1) => {
+        const i = list.children.length;
+        const select = h('select', {'data-field': `lines[${i}].partNumber`, 'aria-label': `Part, line ${i + 1}`},
+            h('option', {value: ''}, 'Choose a part'), choices.map(n => h('option', {value: n}, describe(n))));
+        select.value = partNumber;
+        const amount = h('input', {type: 'number', min: '0', step: 'any', inputmode: 'decimal', value: String(quantity),
+            'data-field': `lines[${i}].quantity`, 'aria-label': `Quantity, line ${i + 1}`});
+        const row = h('div', {class: 'part-line'}, select, amount, h('button', {type: 'button', 'aria-label': `Remove line ${i + 1}`,
+            onclick: () => row.remove()}, 'Remove'));
+        list.append(row);
+    };
+    box.append(h('button', {type: 'button', onclick: () => add()}, 'Add a part'));
+    return {box, add, clear: () => mount(list), read: () => [...list.children].map(row => {
+        const [select, amount] = row.querySelectorAll('select, input');
+        return {partNumber: select.value, quantity: amount.value === '' ? NaN : Number(amount.value), select, amount};
+    })};
+}
+
+function checkLines(lines, required) {
+    const errors = [];
+    const seen = new Set();
+    lines.forEach((l, i) => {
+        l.select.dataset.field = `lines[${i}].partNumber`;
+        l.amount.dataset.field = `lines[${i}].quantity`;
+        if (!l.partNumber) {
+            errors.push({field: `lines[${i}].partNumber`, message: 'choose a part or remove this line'});
+        } else if (seen.has(l.partNumber)) {
+            errors.push({field: `lines[${i}].partNumber`, message: 'this part is already on another line'});
+        }
+        seen.add(l.partNumber);
+        if (!(l.quantity > 0)) {
+            errors.push({field: `lines[${i}].quantity`, message: 'give a quantity above zero'});
+        }
+    });
+    if (required && !lines.length) {
+        errors.push({field: 'lines', message: 'add at least one part'});
+    }
+    return errors;
+}
+
+function refuse(form, errors) {
+    showError({errors, detail: 'Check the marked fields; nothing was saved.'}, form);
+    return false;
+}
+
+function describeKit(snapshot) {
+    const onHand = new Map(snapshot.balances.map(b => [b.partNumber, b.onHand]));
+    return n => `${partLabel(snapshot, n)} (${fmt.num(onHand.get(n) || 0, 2)} in kit)`;
+}
+
+export function askForm(snapshot, queue) {
+    const lines = partLines(snapshot, 'Parts', snapshot.parts.map(p => p.partNumber), n => partLabel(snapshot, n));
+    const form = h('form', {id: 'ask-form', novalidate: true},
+        field('For', pumpSelect(snapshot, 'assetId', true)),
+        field('Urgency', h('select', {name: 'urgency'}, h('option', {value: 'ROUTINE'}, 'Routine'),
+            h('option', {value: 'PUMP_DOWN'}, 'Pump down: people are without water'))),
+        field('Fault or note', h('textarea', {name: 'fault', maxlength: '300', rows: '2'}), 'optional, up to 300 characters'),
+        lines.box,
+        h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Ask for these parts')));
+    form.addEventListener('submit', async e => {
+        e.preventDefault();
+        clearErrors(form);
+        const read = lines.read();
+        const errors = checkLines(read, true);
+        if (errors.length) {
+            return refuse(form, errors);
+        }
+        const assetId = form.elements.assetId.value || null;
+        const ref = api.clientRef('req');
+        const body = {clientRef: ref, assetId, urgency: form.elements.urgency.value, fault: form.elements.fault.value.trim() || null,
+            lines: read.map(l => ({partNumber: l.partNumber, quantity: l.quantity}))};
+        await queue({kind: 'request', method: 'POST', path: '/api/requests', body, ref, assetId,
+            summary: `Parts request ${assetId ? `for pump ${assetId}` : 'to top up the kit'}: ${body.lines.map(l => `${fmt.num(l.quantity, 2)} × ${l.partNumber}`).join(', ')}`});
+        form.reset();
+        lines.clear();
+        lines.add();
+        return true;
+    });
+    lines.add();
+    return {form, open(assetId, wanted) {
+        form.elements.assetId.value = assetId || '';
+        if (wanted && wanted.length) {
+            lines.clear();
+            wanted.forEach(w => lines.add(w.partNumber, w.quantity));
+        }
+    }};
+}
+
+export function repairForm(snapshot, queue) {
+    const kitParts = snapshot.balances.map(b => b.partNumber);
+    const lines = partLines(snapshot, 'Parts used from your kit', kitParts, describeKit(snapshot));
+    const today = fmt.isoDay();
+    const date = (name, value) => h('input', {type: 'date', name, max: today, value: value || ''});
+    const form = h('form', {id: 'repair-form', novalidate: true},
+        field('Pump', pumpSelect(snapshot, 'assetId', false)),
+        field('Kind of work', h('select', {name: 'kind'}, h('option', {value: 'BREAKDOWN'}, 'Breakdown repair'),
+            h('option', {value: 'PREVENTIVE'}, 'Preventive service'))),
+        field('Fault found', h('textarea', {name: 'fault', maxlength: '300', rows: '2'}), 'what was wrong, up to 300 characters'),
+        h('div', {class: 'row'}, field('Reported on', date('reportedOn', today)), field('Diagnosed on', date('diagnosedOn'), 'optional'),
+            field('Fixed on', date('fixedOn', today), 'leave empty while the pump waits')),
+        lines.box,
+        h('p', {class: 'hint'}, 'A fixed repair takes its parts out of your kit when it reaches the server.'),
+        h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Record this repair')));
+    form.addEventListener('submit', async e => {
+        e.preventDefault();
+        clearErrors(form);
+        const v = name => form.elements[name].value || null;
+        const errors = checkLines(lines.read(), false);
+        if (!v('assetId')) {
+            errors.push({field: 'assetId', message: 'choose the pump'});
+        }
+        if (!v('reportedOn')) {
+            errors.push({field: 'reportedOn', message: 'give the day the breakdown was reported'});
+        }
+        const order = ['reportedOn', 'diagnosedOn', 'fixedOn'].filter(n => v(n));
+        for (let i = 0; i < order.length; i++) {
+            if (v(order[i]) > today) {
+                errors.push({field: order[i], message: 'cannot be after today'});
+            } else if (i > 0 && v(order[i]) < v(order[i - 1])) {
+                errors.push({field: order[i], message: 'dates run reported, diagnosed, fixed'});
+            }
+        }
+        if (errors.length) {
+            return refuse(form, errors);
+        }
+        const ref = api.clientRef('rep');
+        const body = {repairRef: ref, assetId: v('assetId'), kind: v('kind'), reportedOn: v('reportedOn'),
+            diagnosedOn: v('diagnosedOn'), fixedOn: v('fixedOn'), fault: (v('fault') || '').trim() || null,
+            lines: lines.read().map(l => ({partNumber: l.partNumber, quantity: l.quantity}))};
+        await queue({kind: 'repair', method: 'POST', path: '/api/repairs', body, ref, assetId: body.assetId,
+            summary: `${body.kind === 'PREVENTIVE' ? 'Service' : 'Repair'} of pump ${body.assetId}${body.fixedOn ? `, fixed ${fmt.date(body.fixedOn)}` : ', not fixed yet'}`
+                + (body.lines.length ? `, parts used: ${body.lines.map(l => `${fmt.num(l.quantity, 2)} × ${l.partNumber}`).join(', ')}` : '')});
+        form.reset();
+        form.elements.reportedOn.value = today;
+        form.elements.fixedOn.value = today;
+        lines.clear();
+        return true;
+    });
+    return {form, open(assetId) {
+        form.elements.assetId.value = assetId || '';
+    }};
+}
+
+export function statusForm(snapshot, queue) {
+    const form = h('form', {id: 'status-form', novalidate: true},
+        field('Pump', pumpSelect(snapshot, 'assetId', false)),
+        field('The pump is', h('select', {name: 'status'}, h('option', {value: 'BROKEN'}, 'Broken: no water'),
+            h('option', {value: 'WORKING'}, 'Working again'))),
+        field('Since', h('input', {type: 'date', name: 'since', max: fmt.isoDay(), value: fmt.isoDay()})),
+        field('Note', h('textarea', {name: 'note', maxlength: '300', rows: '2'}), 'optional'),
+        h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Send this report')));
+    form.addEventListener('submit', async e => {
+        e.preventDefault();
+        clearErrors(form);
+        const assetId = form.elements.assetId.value;
+        const since = form.elements.since.value;
+        const errors = [];
+        if (!assetId) {
+            errors.push({field: 'assetId', message: 'choose the pump'});
+        }
+        if (!since || since > fmt.isoDay()) {
+            errors.push({field: 'since', message: 'give a day up to today'});
+        }
+        if (errors.length) {
+            return refuse(form, errors);
+        }
+        const status = form.elements.status.value;
+        // A report needs no reference: the same report again changes nothing (the API keeps the earlier date).
+        await queue({kind: 'status', method: 'POST', path: `/api/pumps/${encodeURIComponent(assetId)}/status`, assetId,
+            body: {status, since, note: form.elements.note.value.trim() || null},
+            summary: `Pump ${assetId} reported ${status === 'BROKEN' ? 'broken' : 'working again'} since ${fmt.date(since)}`});
+        form.reset();
+        form.elements.since.value = fmt.isoDay();
+        return true;
+    });
+    return {form, open(assetId, status) {
+        form.elements.assetId.value = assetId || '';
+        if (status) {
+            form.elements.status.value = status;
+        }
+    }};
+}

@@ -1,0 +1,197 @@
+/*
+ * mechanic.js: the area mechanic's page, made for a phone whose connection comes and goes. It draws the last data
+ * kept on the phone at once, then refreshes it when there is a connection; actions go to the outbox (store.js) and
+ * are sent when the connection returns (send.js). The page says how fresh its data is and what is still waiting.
+ */
+import {startPage, topBar} from '/app/js/nav.js';
+import * as fmt from '/app/js/format.js';
+import {h, mount, say, showError, caution} from '/app/js/ui.js';
+import * as store from './store.js';
+import {sendWaiting} from './send.js';
+import {fetchSnapshot} from './data.js';
+import {kitView, pumpCard, needsAttention, requestsView, outboxView} from './views.js';
+import {askForm, repairForm, statusForm} from './forms.js';
+
+const main = document.getElementById('main');
+const el = id => document.getElementById(id);
+let me = null;
+let snapshot = null;
+let outbox = [];
+let forms = null;
+let formsKey = '';
+
+function section(id, title, ...body) {
+    return h('section', {id, 'aria-labelledby': `${id}-title`, class: 'mech-section'}, h('h2', {id: `${id}-title`}, title), ...body);
+}
+
+function layout() {
+    mount(main,
+        h('div', {class: 'page-head'}, h('h1', {}, 'My kit and pumps')),
+        h('div', {id: 'status', class: 'status-region', role: 'status', 'aria-live': 'polite'}),
+        h('div', {class: 'mech-sync card', id: 'sync'}),
+        h('nav', {class: 'mech-jump', 'aria-label': 'Parts of this page'}, [['outbox', 'Waiting'], ['kit', 'Kit'],
+            ['pumps', 'Pumps'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
+            ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label))),
+        section('outbox', 'Waiting to send', h('div', {id: 'outbox-body'})),
+        section('kit', 'My kit', h('p', {class: 'provenance', id: 'kit-provenance'}), h('div', {id: 'kit-body'})),
+        section('pumps', 'My pumps', h('div', {class: 'row mech-filter'},
+            h('label', {for: 'pump-search'}, 'Find a pump'), h('input', {id: 'pump-search', type: 'search', placeholder: 'Asset id',
+                oninput: drawPumps}),
+            h('label', {class: 'mech-check'}, h('input', {type: 'checkbox', id: 'pump-all', onchange: drawPumps}), ' Show all my pumps')),
+            h('p', {class: 'hint', id: 'pump-count'}), h('div', {id: 'pump-list', class: 'pump-list'})),
+        section('requests', 'My requests', h('div', {id: 'requests-body'})),
+        section('ask', 'Ask for parts', h('div', {id: 'ask-body'})),
+        section('repair', 'Record a repair', h('div', {id: 'repair-body'})),
+        section('report', 'Report a pump broken or working', h('div', {id: 'report-body'})),
+        caution());
+}
+
+function drawSync() {
+    const waiting = outbox.filter(i => i.state === 'waiting').length;
+    const refused = outbox.filter(i => i.state === 'refused').length;
+    document.body.dataset.outbox = String(waiting);
+    document.body.dataset.refused = String(refused);
+    mount(el('sync'),
+        h('p', {id: 'connection'}, navigator.onLine ? 'Connected.'
+            : h('strong', {}, 'No connection: what you do is kept on this phone and sent when the connection returns.')),
+        h('p', {id: 'freshness'}, snapshot ? `Data from the server as of ${fmt.dateTime(snapshot.savedAt)} (${fmt.relative(snapshot.savedAt)}).`
+            : 'No data on this phone yet.'),
+        h('p', {id: 'outbox-count'}, waiting ? `${waiting} ${waiting === 1 ? 'action is' : 'actions are'} waiting to send.` : 'Nothing waiting to send.',
+            refused ? h('strong', {}, ` ${refused} refused by the server: see "Waiting to send".`) : null),
+        h('p', {class: 'row'}, h('button', {type: 'button', id: 'send-now', disabled: !navigator.onLine || !me,
+            onclick: () => syncAndRefresh(true)}, waiting ? 'Send now and refresh' : 'Refresh now')));
+}
+
+function drawPumps() {
+    if (!snapshot) {
+        return;
+    }
+    const due = new Map(snapshot.due.map(d => [d.assetId, d]));
+    const repairs = asset => snapshot.openRepairs.filter(r => r.assetId === asset);
+    const all = el('pump-all').checked;
+    const search = el('pump-search').value.trim().toLowerCase();
+    const shown = snapshot.pumps.filter(p => search ? p.assetId.toLowerCase().includes(search)
+        : all || needsAttention(p, due.get(p.assetId), repairs(p.assetId), outbox));
+    const rank = p => p.status === 'BROKEN' ? 0 : repairs(p.assetId).length ? 1 : ({OVERDUE: 2, DUE_SOON: 3}[(due.get(p.assetId) || {}).state] ?? 4);
+    shown.sort((a, b) => rank(a) - rank(b) || a.assetId.localeCompare(b.assetId));
+    mount(el('pump-count'), `Showing ${shown.length} of your ${snapshot.pumps.length} pumps`
+        + (search || all ? '.' : ': broken, with open repairs, or with a service due within 30 days.'));
+    mount(el('pump-list'), shown.length ? shown.map(p => pumpCard(snapshot, p, due.get(p.assetId), repairs(p.assetId), outbox, act))
+        : h('p', {class: 'empty'}, search ? 'No pump of yours matches.' : 'No pump needs you now. Tick "Show all my pumps" to see them all.'));
+}
+
+function drawData() {
+    mount(el('kit-provenance'), snapshot.run ? `Min and max from forecast run ${snapshot.run.id}, finished ${fmt.dateTime(snapshot.run.finishedAt)}.`
+        : 'No forecast run yet.');
+    mount(el('kit-body'), kitView(snapshot, outbox, (asset, wanted) => act('ask', asset, wanted)));
+    mount(el('requests-body'), requestsView(snapshot, outbox));
+    drawPumps();
+    const key = JSON.stringify([snapshot.pumps.map(p => p.assetId + p.status), snapshot.balances.map(b => b.partNumber + b.onHand)]);
+    if (key !== formsKey) {
+        formsKey = key;
+        forms = {ask: askForm(snapshot, queue), repair: repairForm(snapshot, queue), report: statusForm(snapshot, queue)};
+        mount(el('ask-body'), forms.ask.form);
+        mount(el('repair-body'), forms.repair.form);
+        mount(el('report-body'), forms.report.form);
+    }
+}
+
+async function drawOutbox() {
+    outbox = me ? await store.items(me.username) : [];
+    mount(el('outbox-body'), outboxView(outbox, discard));
+    drawSync();
+}
+
+function act(kind, assetId, extra) {
+    const target = {ask: 'ask', repair: 'repair', status: 'report'}[kind];
+    forms[target].open(assetId, extra);
+    el(target).scrollIntoView({block: 'start'});
+    forms[target].form.querySelector('select, input, textarea').focus({preventScroll: true});
+}
+
+async function queue(item) {
+    await store.queue({...item, username: me.username});
+    await drawOutbox();
+    drawData();
+    say(navigator.onLine ? `Saved on this phone and sending: ${item.summary}.` : `Saved on this phone; it will be sent when the connection returns: ${item.summary}.`, 'ok');
+    if (navigator.onLine) {
+        await syncAndRefresh(false);
+    }
+}
+
+async function discard(item) {
+    await store.remove(item.id);
+    say(`Discarded: ${item.summary}.`, 'ok');
+    await drawOutbox();
+    drawData();
+}
+
+async function syncAndRefresh(announce) {
+    if (!me || !navigator.onLine) {
+        return;
+    }
+    const result = await sendWaiting(me.username, drawOutbox);
+    if (result.stopped && !result.stopped.offline) {
+        say(`Not sent yet: ${result.stopped.message}. It stays waiting and is tried again.`, 'error');
+    }
+    try {
+        snapshot = await fetchSnapshot(me);
+        await store.saveSnapshot(snapshot);
+    } catch (e) {
+        if (!e.offline) {
+            showError(e);
+        }
+    }
+    await drawOutbox();
+    drawData();
+    document.body.dataset.refreshed = snapshot.savedAt;
+    if (result.refused) {
+        say(`${result.refused} ${result.refused === 1 ? 'action was' : 'actions were'} refused by the server; the reason is shown under "Waiting to send".`, 'error');
+    } else if (result.sent || announce) {
+        say(result.sent ? `Sent ${result.sent} ${result.sent === 1 ? 'action' : 'actions'}; data refreshed.` : 'Data refreshed.', 'ok');
+    }
+}
+
+function ready() {
+    if (!document.body.dataset.ready) {
+        performance.mark('depotcast-ready');
+        document.body.dataset.ready = 'true';
+    }
+}
+
+async function start() {
+    if ('serviceWorker' in navigator) {
+        navigator.serviceWorker.register('/app/mechanic/sw.js', {scope: '/app/mechanic/'}).catch(() => {});
+    }
+    if (navigator.onLine) {
+        try {
+            me = await startPage({roles: ['mechanic']});
+        } catch (e) {
+            if (!e.offline) {
+                throw e;
+            }
+        }
+    }
+    snapshot = (await store.loadSnapshot(me ? me.username : store.lastUser())) || null;
+    if (!me) {
+        me = snapshot ? snapshot.me : null;
+        document.body.prepend(topBar(me));
+    }
+    layout();
+    await drawOutbox();
+    if (snapshot) {
+        drawData();
+        ready();
+    }
+    window.addEventListener('online', () => syncAndRefresh(false));
+    window.addEventListener('offline', drawSync);
+    setInterval(() => (outbox.some(i => i.state === 'waiting') ? syncAndRefresh(false) : drawSync()), 60000);
+    if (me && navigator.onLine) {
+        await syncAndRefresh(false);
+    } else if (!snapshot) {
+        say('This page needs one visit with a connection before it can work without one.', 'error');
+    }
+    ready();
+}
+
+start();

@@ -1,0 +1,129 @@
+/*
+ * views.js: the mechanic's page drawn from a snapshot and the outbox: kit, pumps, requests, waiting actions.
+ * Every state is said in words (the colour only repeats it).
+ */
+import * as fmt from '/app/js/format.js';
+import {h, state, table} from '/app/js/ui.js';
+import {kitRows} from './data.js';
+
+const KIT_STATES = {
+    out: ['Out: none left', 'urgent'], 'top-up': ['At or below min: top up', 'warn'],
+    'above-max': ['Above max', 'info'], enough: ['Enough', 'ok'], 'no-policy': ['No min or max yet', 'quiet']
+};
+const REQUEST_STATES = {
+    RAISED: ['Waiting for approval', 'info'], APPROVED: ['Approved, to be issued', 'ok'],
+    PARTLY_APPROVED: ['Partly approved, to be issued', 'warn'], REFUSED: ['Refused', 'urgent'],
+    ISSUED: ['Issued to your kit', 'ok'], CLOSED: ['Closed', 'quiet'], CANCELLED: ['Cancelled', 'quiet']
+};
+const SERVICE_STATES = {OVERDUE: 'urgent', DUE_SOON: 'warn', LATER: 'ok', NOT_IN_USE: 'quiet'};
+
+function unitOf(snapshot, partNumber) {
+    const part = snapshot.parts.find(p => p.partNumber === partNumber);
+    return part ? part.unitOfIssue : undefined;
+}
+
+export function partLabel(snapshot, partNumber) {
+    const part = snapshot.parts.find(p => p.partNumber === partNumber);
+    return part ? `${partNumber} · ${part.description}` : partNumber;
+}
+
+export function kitView(snapshot, waiting, onAsk) {
+    const rows = kitRows(snapshot, waiting);
+    const asks = rows.filter(r => r.ask > 0);
+    const q = (value, r) => fmt.qty(value, r.part && r.part.unitOfIssue);
+    return [
+        snapshot.policies ? null : h('p', {class: 'muted'}, 'Min and max come from the forecasts; none has been run yet, so only what you hold is shown.'),
+        table({caption: `Kit ${snapshot.me.kitCode || ''}: on hand against min and max`, id: 'kit-table', rows,
+            empty: 'Your kit holds nothing on record.', columns: [
+                {label: 'Part', value: r => h('span', {}, h('strong', {}, r.partNumber), h('span', {class: 'hint'}, r.part ? r.part.description : ''))},
+                {label: 'On hand', num: true, value: r => h('span', {}, q(r.onHand, r), r.waitingUse
+                    ? h('span', {class: 'hint'}, `${q(r.waitingUse, r)} in repairs waiting to send`) : null)},
+                {label: 'Min', num: true, value: r => r.min === null ? '–' : q(r.min, r)},
+                {label: 'Max', num: true, value: r => r.max === null ? '–' : q(r.max, r)},
+                {label: 'Coming', num: true, value: r => r.coming ? q(r.coming, r) : '–'},
+                {label: 'State', value: r => state(...KIT_STATES[r.state])},
+                {label: 'Ask for', num: true, value: r => r.ask ? h('strong', {}, q(r.ask, r)) : '–'}
+            ]}),
+        asks.length ? h('p', {class: 'row'}, h('button', {type: 'button', class: 'primary', id: 'ask-top-up',
+            onclick: () => onAsk(null, asks.map(r => ({partNumber: r.partNumber, quantity: r.ask})))},
+            `Ask for a top-up of ${asks.length === 1 ? 'this part' : `these ${asks.length} parts`}`))
+            : h('p', {class: 'muted'}, 'Nothing to ask for: every part is above its min, counting what is coming.')
+    ];
+}
+
+function serviceLine(due) {
+    if (!due) {
+        return null;
+    }
+    const hours = `${fmt.num(due.hoursSinceService)} of ${fmt.num(due.serviceIntervalHours)} operating hours since `
+        + (due.lastServiceOn ? `the service on ${fmt.date(due.lastServiceOn)}` : due.serviceOnRecord
+            ? `installation (${fmt.date(due.countedFrom)})` : `${fmt.date(due.countedFrom)}, no service on record since`);
+    const words = {
+        OVERDUE: `Service overdue since about ${fmt.date(due.dueOn)}`,
+        DUE_SOON: `Service due ${fmt.date(due.dueOn)}`,
+        LATER: `Next service about ${fmt.date(due.dueOn)}`,
+        NOT_IN_USE: 'Not in use: no service falls due'
+    }[due.state];
+    return h('p', {class: 'pump__service'}, state(words, SERVICE_STATES[due.state]),
+        h('span', {class: 'hint'}, `${hours}; at ${fmt.num(due.hoursPerDay, 1)} h a day.`));
+}
+
+export function needsAttention(pump, due, repairs, waiting) {
+    return pump.status === 'BROKEN' || repairs.length > 0 || (due && (due.state === 'OVERDUE' || due.state === 'DUE_SOON'))
+        || waiting.some(i => i.assetId === pump.assetId);
+}
+
+export function pumpCard(snapshot, pump, due, repairs, waiting, act) {
+    const statusWords = pump.status === 'BROKEN' ? [`Broken since ${fmt.date(pump.statusSince || pump.brokenSince)}`, 'urgent']
+        : [`Working${pump.statusSince ? ` since ${fmt.date(pump.statusSince)}` : ''}`, 'ok'];
+    const mine = waiting.filter(i => i.assetId === pump.assetId);
+    return h('article', {class: 'pump card', id: `pump-${pump.assetId}`, 'aria-labelledby': `pump-${pump.assetId}-name`},
+        h('h3', {id: `pump-${pump.assetId}-name`}, pump.assetId, ' ', h('span', {class: 'hint pump__model'},
+            `${pump.modelCode}, ${fmt.num(pump.depthM, 1)} m deep`)),
+        h('p', {}, state(...statusWords), pump.statusNote ? h('span', {class: 'hint'}, pump.statusNote) : null),
+        serviceLine(due),
+        repairs.length ? h('ul', {class: 'pump__repairs', 'aria-label': 'Open repairs'}, repairs.map(r => h('li', {},
+            `Open ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'} ${r.repairRef}, reported ${fmt.date(r.reportedOn)}`,
+            r.fault ? `: ${r.fault}` : '', r.lines.length ? `; needs ${r.lines.map(l => `${fmt.qty(l.quantity, unitOf(snapshot, l.partNumber))} ${l.partNumber}`).join(', ')}` : '')))
+            : null,
+        mine.length ? h('p', {class: 'hint'}, `${mine.length} of your actions for this pump ${mine.length === 1 ? 'is' : 'are'} waiting to send.`) : null,
+        h('div', {class: 'row pump__actions'},
+            pump.status === 'BROKEN'
+                ? h('button', {type: 'button', onclick: () => act('status', pump.assetId, 'WORKING')}, 'Report working again')
+                : h('button', {type: 'button', onclick: () => act('status', pump.assetId, 'BROKEN')}, 'Report broken'),
+            h('button', {type: 'button', onclick: () => act('repair', pump.assetId)}, 'Record a repair'),
+            h('button', {type: 'button', onclick: () => act('ask', pump.assetId)}, 'Ask for parts')));
+}
+
+export function requestsView(snapshot, waiting) {
+    const lines = r => r.lines.map(l => `${fmt.qty(l.requested, unitOf(snapshot, l.partNumber))} ${l.partNumber}`
+        + (l.substitute ? ` (approved as ${l.substitute})` : '')
+        + (l.approved !== null && l.approved !== undefined && Number(l.approved) !== Number(l.requested) ? `, ${fmt.num(l.approved, 2)} approved` : '')).join('; ');
+    const recent = snapshot.requests.slice(0, 30);
+    const refusal = r => (r.history || []).filter(e => e.reason).map(e => e.reason).pop();
+    return table({caption: 'My parts requests, newest first', id: 'requests-table', rows: recent,
+        empty: waiting.some(i => i.kind === 'request') ? 'None on the server yet; yours are waiting to send.' : 'No requests yet.',
+        columns: [
+            {label: 'Raised', value: r => fmt.date(r.raisedAt)},
+            {label: 'For', value: r => r.assetId ? `Pump ${r.assetId}` : 'Kit top-up'},
+            {label: 'Parts', value: r => lines(r)},
+            {label: 'State', value: r => h('span', {}, state(...(REQUEST_STATES[r.status] || [r.status, 'quiet'])),
+                refusal(r) ? h('span', {class: 'hint'}, refusal(r)) : null,
+                (r.cautions || []).map(c => h('span', {class: 'hint'}, c)))},
+            {label: 'Reference', value: r => h('span', {class: 'small'}, r.clientRef)}
+        ]});
+}
+
+export function outboxView(waiting, discard) {
+    if (!waiting.length) {
+        return h('p', {class: 'muted', id: 'outbox-empty'}, 'Nothing waiting: everything you did has reached the server.');
+    }
+    return h('ol', {class: 'outbox', id: 'outbox-list'}, waiting.map(item => h('li', {class: `outbox__item outbox__item--${item.state}`,
+        'data-ref': item.ref || ''},
+        h('p', {}, h('strong', {}, item.summary)),
+        item.state === 'refused'
+            ? h('p', {}, state('Refused by the server', 'urgent'), ' ', h('span', {class: 'outbox__message'}, item.message))
+            : h('p', {}, state('Waiting to send', 'info'), h('span', {class: 'hint'}, `Made ${fmt.dateTime(item.createdAt)}`)),
+        item.ref ? h('p', {class: 'hint'}, `Reference ${item.ref}`) : null,
+        item.state === 'refused' ? h('button', {type: 'button', onclick: () => discard(item)}, 'Discard this action') : null)));
+}
