@@ -28,7 +28,7 @@ class AuditResource {
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String export(@QueryParam("entityType") String entityType) {
-        return audit.exportCsv(entityType);
+    public jakarta.ws.rs.core.Response export(@QueryParam("entityType") String entityType) {
+        return audit.exportCsv(entityType).response();
     }
 }

@@ -6,7 +6,7 @@ import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import io.quarkus.panache.common.Sort;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
 
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
@@ -56,8 +56,8 @@ public class AuditService {
     }
 
     @Transactional
-    public String exportCsv(String entityType) {
-        return CsvOut.write(List.of("at", "actor", "action", "entity_type", "entity_key", "before", "after"),
+    public CsvExport exportCsv(String entityType) {
+        return CsvExport.of("audit-log.csv", List.of("at", "actor", "action", "entity_type", "entity_key", "before", "after"),
                 recent(entityType, Integer.MAX_VALUE), e -> java.util.Arrays.asList(e.at, e.actor, e.action,
                         e.entityType, e.entityKey, e.beforeJson == null ? "" : e.beforeJson,
                         e.afterJson == null ? "" : e.afterJson));

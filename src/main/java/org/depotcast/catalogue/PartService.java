@@ -5,12 +5,13 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 
-import java.math.BigDecimal;
+import java.io.InputStream;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Optional;
@@ -26,8 +27,10 @@ public class PartService {
     private final PartRepository parts;
     private final AuditService audit;
     private final AccessScope scope;
+    private final CsvImporter importer;
 
-    PartService(PartRepository parts, AuditService audit, AccessScope scope) {
+    PartService(PartRepository parts, AuditService audit, AccessScope scope, CsvImporter importer) {
+        this.importer = importer;
         this.parts = parts;
         this.audit = audit;
         this.scope = scope;
@@ -111,30 +114,26 @@ public class PartService {
         return part;
     }
 
-    /** Creates or updates every part in the file, or, if any row is wrong, changes nothing. */
+    /** Creates or updates every part in the file (as POST or PUT would), or, if any row is wrong, changes nothing. */
     @Transactional
-    public int importCsv(String csv) {
+    public int importCsv(InputStream csv) {
         scope.requireCatalogue();
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 11));
         Set<String> seen = new HashSet<>();
-        List<PartRequest> requests = table.rows().stream().map(row -> read(row, seen)).toList();
-        table.problems().throwIfAny();
-        for (PartRequest request : requests) {
-            Part part = parts.byPartNumber(request.partNumber()).orElseGet(Part::new);
-            audit.record(part.id == null ? "PART_CREATED" : "PART_UPDATED", "part", request.partNumber(),
-                    part.id == null ? null : PartResponse.from(part), request);
-            apply(part, request);
-            if (part.id == null) {
-                parts.persist(part);
-            }
-        }
-        return requests.size();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 11), row -> read(row, seen))
+                .identifiers("part_number")
+                .applyEach(request -> {
+                    if (parts.byPartNumber(request.partNumber()).isPresent()) {
+                        update(request.partNumber(), request);
+                    } else {
+                        create(request);
+                    }
+                }));
     }
 
-    public String exportCsv() {
-        return CsvOut.write(CSV_COLUMNS, all(), p -> List.of(p.partNumber, p.description, p.family, p.unitOfIssue,
-                p.packSize, p.minOrderQty, p.unitCost.toPlainString(), p.currency, p.supplier, p.leadTimeDays,
-                p.shelfLifeDays == null ? "" : p.shelfLifeDays, p.critical));
+    public CsvExport exportCsv() {
+        return CsvExport.of("parts.csv", CSV_COLUMNS, all(), p -> List.of(p.partNumber, p.description, p.family,
+                p.unitOfIssue, p.packSize, p.minOrderQty, p.unitCost.toPlainString(), p.currency, p.supplier,
+                p.leadTimeDays, p.shelfLifeDays == null ? "" : p.shelfLifeDays, p.critical));
     }
 
     private static PartRequest read(CsvRow row, Set<String> seen) {
@@ -142,18 +141,13 @@ public class PartService {
         if (number != null && !seen.add(number)) {
             row.reject("part_number", "appears twice in the file");
         }
-        String currency = row.text("currency");
-        if (currency != null && !currency.matches("[A-Z]{3}")) {
-            row.reject("currency", "must be a three-letter ISO 4217 code, was '" + currency + "'");
-        }
-        Integer pack = row.integer("pack_size", 1);
-        Integer moq = row.integer("min_order_qty", 1);
-        Integer lead = row.integer("lead_time_days", 0);
-        Boolean critical = row.optionalBoolean("critical");
+        Integer pack = row.optionalInteger("pack_size");
+        Integer moq = row.optionalInteger("min_order_qty");
+        Integer lead = row.optionalInteger("lead_time_days");
         return new PartRequest(number, row.text("description"), row.choice("family", ComponentFamily.class),
                 row.choice("unit_of_issue", UnitOfIssue.class), pack == null ? 1 : pack, moq == null ? 1 : moq,
-                row.decimal("unit_cost", BigDecimal.ZERO, false), currency, row.text("supplier"),
-                lead == null ? 0 : lead, row.optionalInt("shelf_life_days", 1), Boolean.TRUE.equals(critical), null);
+                row.decimal("unit_cost"), row.text("currency"), row.text("supplier"), lead == null ? 0 : lead,
+                row.optionalInteger("shelf_life_days"), Boolean.TRUE.equals(row.optionalBoolean("critical")), null);
     }
 
     private static void apply(Part part, PartRequest r) {

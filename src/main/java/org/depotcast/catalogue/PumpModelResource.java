@@ -17,6 +17,7 @@ import org.depotcast.access.Roles;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.ImportResult;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/pump-models")
@@ -61,14 +62,14 @@ class PumpModelResource {
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importCsv(String csv) {
+    public ImportResult importCsv(InputStream csv) {
         return new ImportResult(service.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String exportCsv() {
-        return service.exportCsv();
+    public Response exportCsv() {
+        return service.exportCsv().response();
     }
 }

@@ -3,17 +3,17 @@ package org.depotcast.catalogue;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.HashSet;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -27,9 +27,11 @@ public class PumpModelService {
     private final PartService parts;
     private final org.depotcast.access.AuditService audit;
     private final org.depotcast.access.AccessScope scope;
+    private final CsvImporter importer;
 
     PumpModelService(PumpModelRepository models, PartService parts, org.depotcast.access.AuditService audit,
-                     org.depotcast.access.AccessScope scope) {
+                     org.depotcast.access.AccessScope scope, CsvImporter importer) {
+        this.importer = importer;
         this.scope = scope;
         this.audit = audit;
         this.models = models;
@@ -69,54 +71,55 @@ public class PumpModelService {
         return model;
     }
 
-    /** One row per bill-of-materials line; rows sharing a model code make one model. All or nothing. */
+    /**
+     * One row per bill-of-materials line; rows sharing a model code make one model, created or replaced as POST or
+     * PUT would. All or nothing.
+     */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS);
-        Map<String, PumpModelRequest> byCode = new LinkedHashMap<>();
+    public int importCsv(InputStream csv) {
+        scope.requireCatalogue();
         Set<String> seenLines = new HashSet<>();
-        for (CsvRow row : table.rows()) {
-            String code = row.text("model_code");
-            String name = row.text("model_name");
-            Integer interval = row.integer("service_interval_hours", 1);
-            String partNumber = row.text("part_number");
-            if (partNumber != null && parts.find(partNumber).isEmpty()) {
-                row.reject("part_number", "part '" + partNumber + "' does not exist");
-            }
-            if (code != null && partNumber != null && !seenLines.add(code + "\u0000" + partNumber)) {
-                row.reject("part_number", "appears twice for model '" + code + "'");
-            }
-            PumpModelRequest.Line line = new PumpModelRequest.Line(partNumber, row.choice("basis", BomBasis.class),
-                    row.decimal("quantity", BigDecimal.ZERO, true),
-                    row.optionalDecimal("service_kit_quantity", BigDecimal.ZERO, false));
-            if (code != null) {
-                PumpModelRequest existing = byCode.get(code);
-                List<PumpModelRequest.Line> lines = existing == null ? new ArrayList<>() : new ArrayList<>(existing.bom());
-                lines.add(line);
-                byCode.put(code, new PumpModelRequest(code, name, interval == null ? 1 : interval, lines));
-            }
-        }
-        table.problems().throwIfAny();
-        for (PumpModelRequest request : byCode.values()) {
-            PumpModel model = models.byCode(request.code()).orElseGet(PumpModel::new);
-            apply(model, request);
-            if (model.id == null) {
-                models.persist(model);
-            }
-        }
-        return table.rows().size();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS, row -> read(row, seenLines))
+                .identifiers("model_code", "part_number")
+                .column("code", "model_code").column("name", "model_name").column("basis", "basis")
+                .applyGrouped(PumpModelRequest::code, PumpModelService::joined, "bom", PumpModelRequest::bom, request -> {
+                    if (models.byCode(request.code()).isPresent()) {
+                        update(request.code(), request);
+                    } else {
+                        create(request);
+                    }
+                }));
     }
 
-    public String exportCsv() {
-        List<Object[]> rows = new ArrayList<>();
+    private static PumpModelRequest read(CsvRow row, Set<String> seenLines) {
+        String code = row.text("model_code");
+        String partNumber = row.text("part_number");
+        if (code != null && partNumber != null && !seenLines.add(code + "\u0000" + partNumber)) {
+            row.reject("part_number", "appears twice for model '" + code + "'");
+        }
+        Integer interval = row.integer("service_interval_hours");
+        PumpModelRequest.Line line = new PumpModelRequest.Line(partNumber, row.choice("basis", BomBasis.class),
+                row.decimal("quantity"), row.optionalDecimal("service_kit_quantity"));
+        return new PumpModelRequest(code, row.text("model_name"), interval == null ? 1 : interval, List.of(line));
+    }
+
+    /** The model as its first row names it, with the bill of materials of every row. */
+    private static PumpModelRequest joined(PumpModelRequest first, PumpModelRequest next) {
+        List<PumpModelRequest.Line> lines = new ArrayList<>(first.bom());
+        lines.addAll(next.bom());
+        return new PumpModelRequest(first.code(), first.name(), first.serviceIntervalHours(), lines);
+    }
+
+    public CsvExport exportCsv() {
+        List<List<?>> rows = new ArrayList<>();
         for (PumpModel m : all()) {
             for (BomLine l : m.bom) {
-                rows.add(new Object[]{m.code, m.name, m.serviceIntervalHours, l.part.partNumber, l.basis,
+                rows.add(List.of(m.code, m.name, m.serviceIntervalHours, l.part.partNumber, l.basis,
                         l.quantity.stripTrailingZeros().toPlainString(),
-                        l.serviceKitQuantity.stripTrailingZeros().toPlainString()});
+                        l.serviceKitQuantity.stripTrailingZeros().toPlainString()));
             }
         }
-        return CsvOut.write(CSV_COLUMNS, rows, List::of);
+        return new CsvExport("pump-models.csv", CSV_COLUMNS, rows);
     }
 
     /** Every change of a model (JSON or an import row) passes here: only those who keep the catalogue may make it. */

@@ -9,10 +9,11 @@ public final class CsvProblems {
     private final List<FieldError> errors = new ArrayList<>();
     private int count;
 
+    /** A problem of one cell, or of the whole row when {@code column} is null. */
     public void add(int line, String column, String message) {
         count++;
         if (errors.size() < MOST_LISTED) {
-            errors.add(new FieldError("row " + line + ", column " + column, message));
+            errors.add(new FieldError(column == null ? "row " + line : "row " + line + ", column " + column, message));
         }
     }
 

@@ -22,6 +22,7 @@ import org.depotcast.stock.StockCountService;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 
 import java.io.IOException;
+import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -97,9 +98,9 @@ class DemoProgrammeLoader {
         createDemoAccounts();
     }
 
-    private void load(String file, ToIntFunction<String> importer) {
-        try {
-            int rows = importer.applyAsInt(Files.readString(seedDirectory.resolve(file)));
+    private void load(String file, ToIntFunction<InputStream> importer) {
+        try (InputStream in = Files.newInputStream(seedDirectory.resolve(file))) {
+            int rows = importer.applyAsInt(in);
             Log.infof("loaded %d rows from %s", rows, file);
         } catch (IOException e) {
             throw new UncheckedIOException("cannot read demo file " + file, e);

@@ -21,6 +21,7 @@ import org.depotcast.common.QueryParams;
 
 import java.math.BigDecimal;
 import java.time.LocalDate;
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/pumps")
@@ -106,29 +107,29 @@ class PumpResource {
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importCsv(String csv) {
+    public ImportResult importCsv(InputStream csv) {
         return new ImportResult(pumps.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String exportCsv() {
-        return pumps.exportCsv();
+    public Response exportCsv() {
+        return pumps.exportCsv().response();
     }
 
     @POST
     @Path("usage/import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importUsage(String csv) {
+    public ImportResult importUsage(InputStream csv) {
         return new ImportResult(usage.importCsv(csv));
     }
 
     @GET
     @Path("usage/export")
     @Produces("text/csv")
-    public String exportUsage() {
-        return usage.exportCsv();
+    public Response exportUsage() {
+        return usage.exportCsv().response();
     }
 }

@@ -7,14 +7,16 @@ import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.util.HashMap;
@@ -37,9 +39,11 @@ public class PumpService {
     private final AccessScope scope;
     private final org.depotcast.access.AuditService audit;
     private final RepairRecords repairs;
+    private final CsvImporter importer;
 
     PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope,
-                org.depotcast.access.AuditService audit, RepairRecords repairs) {
+                org.depotcast.access.AuditService audit, RepairRecords repairs, CsvImporter importer) {
+        this.importer = importer;
         this.audit = audit;
         this.repairs = repairs;
         this.scope = scope;
@@ -111,11 +115,16 @@ public class PumpService {
         if (pumps.byAssetId(request.assetId()).isPresent()) {
             throw new ConflictException("assetId", "pump '" + request.assetId() + "' is already registered");
         }
-        Pump pump = new Pump();
-        Location depot = depot("depotCode", request.depotCode());
-        scope.require(depot.id, depot.code);
-        apply(pump, request, models.require("modelCode", request.modelCode()), depot);
-        pumps.persist(pump);
+        return save(new Pump(), request, models.require("modelCode", request.modelCode()),
+                depot("depotCode", request.depotCode()));
+    }
+
+    /** Registers a new pump or replaces every field of a registered one; both of its depots must be the caller's. */
+    private Pump save(Pump pump, PumpRequest request, PumpModel model, Location depot) {
+        apply(pump, request, model, depot);
+        if (pump.id == null) {
+            pumps.persist(pump);
+        }
         return pump;
     }
 
@@ -175,70 +184,52 @@ public class PumpService {
         pump.setStatus(status, since == null ? LocalDate.now(java.time.ZoneOffset.UTC) : since, note);
     }
 
-    /** All or nothing; existing asset ids are updated. */
+    /**
+     * All or nothing. A new asset id is registered, a known one replaced, each as {@link #register} does (the same
+     * scope check on the depot the pump leaves and the one it goes to).
+     */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 4));
+    public int importCsv(InputStream csv) {
+        Map<String, Pump> registered = new HashMap<>();
         Map<String, PumpModel> modelCache = new HashMap<>();
         Map<String, Location> depotCache = new HashMap<>();
         Set<String> seen = new HashSet<>();
-        List<PumpRequest> requests = new java.util.ArrayList<>();
-        for (CsvRow row : table.rows()) {
-            String assetId = row.text("asset_id");
-            if (assetId != null && !seen.add(assetId)) {
-                row.reject("asset_id", "appears twice in the file");
-            }
-            String modelCode = row.text("model_code");
-            if (modelCode != null && modelCache.computeIfAbsent(modelCode, c -> models.find(c).orElse(null)) == null) {
-                row.reject("model_code", "pump model '" + modelCode + "' does not exist");
-            }
-            String depotCode = row.text("depot_code");
-            Location depot = depotCode == null ? null : depotCache.computeIfAbsent(depotCode, c -> locations.find(c)
-                    .filter(l -> l.kind == LocationKind.DEPOT).orElse(null));
-            if (depotCode != null && depot == null) {
-                row.reject("depot_code", "depot '" + depotCode + "' does not exist");
-            } else if (depot != null && !scope.current().sees(depot.id)) {
-                row.reject("depot_code", "depot '" + depotCode + "' is outside the locations assigned to you");
-            }
-            BigDecimal depth = row.decimal("depth_m", BigDecimal.ZERO, true);
-            LocalDate installed = row.date("installed_on");
-            if (installed != null && installed.isAfter(LocalDate.now())) {
-                row.reject("installed_on", "must not be in the future");
-            }
-            BigDecimal usage = row.optionalDecimal("usage_hours_per_day", BigDecimal.ZERO, false);
-            if (usage != null && usage.compareTo(BigDecimal.valueOf(24)) > 0) {
-                row.reject("usage_hours_per_day", "must be at most 24");
-            }
-            PumpStatus status = row.optionalText("status") == null ? PumpStatus.WORKING : row.choice("status", PumpStatus.class);
-            UsageSource source = row.optionalText("usage_source") == null ? null : row.choice("usage_source", UsageSource.class);
-            requests.add(new PumpRequest(assetId, modelCode, depth, installed,
-                    row.optionalDecimal("latitude", BigDecimal.valueOf(-90), false),
-                    row.optionalDecimal("longitude", BigDecimal.valueOf(-180), false), depotCode,
-                    row.optionalText("assigned_mechanic"), status, row.optionalDate("status_since"), usage, source));
-        }
-        table.problems().throwIfAny();
         List<Pump> updated = new java.util.ArrayList<>();
-        for (PumpRequest request : requests) {
-            Pump pump = pumps.byAssetId(request.assetId()).orElseGet(Pump::new);
-            if (pump.id != null) {
-                updated.add(pump);
-            }
-            apply(pump, request, modelCache.get(request.modelCode()), depotCache.get(request.depotCode()));
-            if (pump.id == null) {
-                pumps.persist(pump);
-            }
-        }
-        // A row cannot make a pump WORKING while one of its breakdown repairs is open: the repairs decide.
-        followRepairs(updated);
-        return requests.size();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 4), row -> read(row, seen))
+                .identifiers("asset_id", "model_code", "depot_code", "assigned_mechanic")
+                .scopeColumn("depot_code")
+                .applyEach(request -> {
+                    if (registered.isEmpty()) {
+                        all().forEach(p -> registered.put(p.assetId, p));
+                    }
+                    Pump pump = registered.getOrDefault(request.assetId(), new Pump());
+                    if (pump.id != null) {
+                        updated.add(pump);
+                    }
+                    save(pump, request, modelCache.computeIfAbsent(request.modelCode(), c -> models.require("modelCode", c)),
+                            depotCache.computeIfAbsent(request.depotCode(), c -> depot("depotCode", c)));
+                })
+                // A row cannot make a pump WORKING while one of its breakdown repairs is open: the repairs decide.
+                .afterAll(() -> followRepairs(updated)));
     }
 
-    public String exportCsv() {
-        return CsvOut.write(CSV_COLUMNS, search(null, null), p -> java.util.Arrays.asList(p.assetId, p.model.code,
-                p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude), p.depot.code,
-                p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
-                p.statusSince == null ? "" : p.statusSince,
-                p.usageHoursPerDay.toPlainString(), p.usageSource));
+    private static PumpRequest read(CsvRow row, Set<String> seen) {
+        String assetId = row.text("asset_id");
+        if (assetId != null && !seen.add(assetId)) {
+            row.reject("asset_id", "appears twice in the file");
+        }
+        return new PumpRequest(assetId, row.text("model_code"), row.decimal("depth_m"), row.date("installed_on"),
+                row.optionalDecimal("latitude"), row.optionalDecimal("longitude"), row.text("depot_code"),
+                row.optionalText("assigned_mechanic"), row.optionalChoice("status", PumpStatus.class),
+                row.optionalDate("status_since"), row.optionalDecimal("usage_hours_per_day"),
+                row.optionalChoice("usage_source", UsageSource.class));
+    }
+
+    public CsvExport exportCsv() {
+        return CsvExport.of("pumps.csv", CSV_COLUMNS, search(null, null), p -> java.util.Arrays.asList(p.assetId,
+                p.model.code, p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude),
+                p.depot.code, p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
+                p.statusSince == null ? "" : p.statusSince, p.usageHoursPerDay.toPlainString(), p.usageSource));
     }
 
     private Location depot(String field, String code) {

@@ -2,14 +2,17 @@ package org.depotcast.fleet;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import io.quarkus.security.ForbiddenException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.time.LocalDate;
-import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
@@ -24,8 +27,11 @@ public class UsageService {
     private final UsageReadingRepository readings;
     private final PumpService pumps;
     private final org.depotcast.access.AuditService audit;
+    private final CsvImporter importer;
 
-    UsageService(UsageReadingRepository readings, PumpService pumps, org.depotcast.access.AuditService audit) {
+    UsageService(UsageReadingRepository readings, PumpService pumps, org.depotcast.access.AuditService audit,
+                 CsvImporter importer) {
+        this.importer = importer;
         this.audit = audit;
         this.readings = readings;
         this.pumps = pumps;
@@ -43,77 +49,85 @@ public class UsageService {
     @Transactional
     public UsageReading record(String assetId, UsageReadingRequest request) {
         Pump pump = pumps.requireVisible(null, assetId);
-        if (readings.exists(pump.id, request.readOn())) {
-            throw new ConflictException("readOn", "pump '" + assetId + "' already has a reading on " + request.readOn());
-        }
-        UsageReading reading = add(pump, request.readOn(), request.hoursPerDay(), request.source());
+        UsageReading reading = add(pump, request, readings.exists(pump.id, request.readOn()));
         refreshCurrentUsage(pump);
         audit.record("USAGE_RECORDED", "pump", assetId, null, request);
         return reading;
     }
 
-    /** All or nothing. */
+    /**
+     * All or nothing. Each row passes the JSON endpoint's checks (the pump exists and is the caller's, one reading a
+     * day) and its write; the pumps' current load and the audit follow once for the whole history.
+     */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS);
+    public int importCsv(InputStream csv) {
         Map<String, Pump> pumpCache = new HashMap<>();
+        Map<String, Pump> touched = new HashMap<>();
         Set<String> seen = new HashSet<>();
-        Set<String> stored = readings.keys();
+        Set<String> stored = new HashSet<>();
         var visible = pumps.visibleFilter();
-        record Row(String assetId, LocalDate readOn, BigDecimal hours, UsageSource source) {
-        }
-        List<Row> rows = new ArrayList<>();
-        for (CsvRow row : table.rows()) {
-            String assetId = row.text("asset_id");
-            Pump pump = assetId == null ? null : pumpCache.computeIfAbsent(assetId, a -> pumps.find(a).orElse(null));
-            if (assetId != null && pump == null) {
-                row.reject("asset_id", "pump '" + assetId + "' does not exist");
-            } else if (pump != null && !visible.test(pump)) {
-                row.reject("asset_id", "pump '" + assetId + "' is outside your depots or assignments");
-            }
-            LocalDate readOn = row.date("read_on");
-            BigDecimal hours = row.decimal("hours_per_day", BigDecimal.ZERO, false);
-            if (hours != null && hours.compareTo(BigDecimal.valueOf(24)) > 0) {
-                row.reject("hours_per_day", "must be at most 24");
-            }
-            if (readOn != null && assetId != null && !seen.add(assetId + "@" + readOn)) {
-                row.reject("read_on", "pump '" + assetId + "' has two readings on " + readOn + " in the file");
-            } else if (pump != null && readOn != null && stored.contains(pump.id + "@" + readOn)) {
-                row.reject("read_on", "pump '" + assetId + "' already has a reading on " + readOn);
-            }
-            rows.add(new Row(assetId, readOn, hours, row.choice("source", UsageSource.class)));
-        }
-        table.problems().throwIfAny();
-        for (Row row : rows) {
-            add(pumpCache.get(row.assetId()), row.readOn(), row.hours(), row.source());
-        }
-        readings.flush();
-        Map<Long, Object[]> latest = readings.latestPerPump();
-        for (Pump pump : pumpCache.values()) {
-            Object[] newest = latest.get(pump.id);
-            pump.usageHoursPerDay = (BigDecimal) newest[0];
-            pump.usageSource = (UsageSource) newest[1];
-        }
-        // A history import is one change: one entry with its size, not one per reading.
-        audit.record("USAGE_IMPORTED", "usage_reading", rows.size() + " rows", null, java.util.Map.of("rows", rows.size(),
-                "pumps", pumpCache.size()));
-        return rows.size();
+        int[] count = {0};
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS, row -> read(row, seen))
+                .identifiers("asset_id")
+                .applyEach(row -> {
+                    if (pumpCache.isEmpty()) {
+                        pumps.all().forEach(p -> pumpCache.put(p.assetId, p));
+                        stored.addAll(readings.keys());
+                    }
+                    Pump pump = pumpCache.get(row.assetId());
+                    if (pump == null) {
+                        throw new EntityMissingException("assetId", "pump", row.assetId());
+                    }
+                    if (!visible.test(pump)) {
+                        throw new ForbiddenException("pump '" + row.assetId() + "' is outside your depots or assignments");
+                    }
+                    add(pump, row.reading(), stored.contains(pump.id + "@" + row.reading().readOn()));
+                    touched.put(pump.assetId, pump);
+                    count[0]++;
+                })
+                .afterAll(() -> {
+                    readings.flush();
+                    Map<Long, Object[]> latest = readings.latestPerPump();
+                    for (Pump pump : touched.values()) {
+                        Object[] newest = latest.get(pump.id);
+                        pump.usageHoursPerDay = (BigDecimal) newest[0];
+                        pump.usageSource = (UsageSource) newest[1];
+                    }
+                    // A history import is one change: one entry with its size, not one per reading.
+                    audit.record("USAGE_IMPORTED", "usage_reading", count[0] + " rows", null,
+                            Map.of("rows", count[0], "pumps", touched.size()));
+                }));
     }
 
-    public String exportCsv() {
+    private static UsageImportRow read(CsvRow row, Set<String> seen) {
+        String assetId = row.text("asset_id");
+        LocalDate readOn = row.date("read_on");
+        if (readOn != null && assetId != null && !seen.add(assetId + "@" + readOn)) {
+            row.reject("read_on", "pump '" + assetId + "' has two readings on " + readOn + " in the file");
+        }
+        return new UsageImportRow(assetId, new UsageReadingRequest(readOn, row.decimal("hours_per_day"),
+                row.choice("source", UsageSource.class)));
+    }
+
+    public CsvExport exportCsv() {
         var visible = pumps.visibleFilter();
         List<UsageReading> all = readings.listAll(io.quarkus.panache.common.Sort.by("pump.assetId").and("readOn"))
                 .stream().filter(r -> visible.test(r.pump)).toList();
-        return CsvOut.write(CSV_COLUMNS, all, r -> List.of(r.pump.assetId, r.readOn, r.hoursPerDay.toPlainString(),
-                r.source));
+        return CsvExport.of("usage-readings.csv", CSV_COLUMNS, all, r -> List.of(r.pump.assetId, r.readOn,
+                r.hoursPerDay.toPlainString(), r.source));
     }
 
-    private UsageReading add(Pump pump, LocalDate readOn, BigDecimal hours, UsageSource source) {
+    /** The one write of a reading, from the JSON endpoint or an import row: one reading per pump and day. */
+    private UsageReading add(Pump pump, UsageReadingRequest request, boolean dayAlreadyRead) {
+        if (dayAlreadyRead) {
+            throw new ConflictException("readOn", "pump '" + pump.assetId + "' already has a reading on "
+                    + request.readOn());
+        }
         UsageReading reading = new UsageReading();
         reading.pump = pump;
-        reading.readOn = readOn;
-        reading.hoursPerDay = hours;
-        reading.source = source;
+        reading.readOn = request.readOn();
+        reading.hoursPerDay = request.hoursPerDay();
+        reading.source = request.source();
         readings.persist(reading);
         return reading;
     }

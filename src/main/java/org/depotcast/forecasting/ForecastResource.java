@@ -16,6 +16,7 @@ import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
 import org.depotcast.common.QueryParams;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/forecast")
@@ -42,10 +43,10 @@ class ForecastResource {
     @Path("batch")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @Produces("text/csv")
-    public String batch(String csv, @QueryParam("method") String method, @QueryParam("alpha") String alpha,
-                        @QueryParam("beta") String beta, @QueryParam("horizon") String horizon) {
+    public Response batch(InputStream csv, @QueryParam("method") String method, @QueryParam("alpha") String alpha,
+                          @QueryParam("beta") String beta, @QueryParam("horizon") String horizon) {
         return stateless.batch(csv, method, QueryParams.optionalDouble("alpha", alpha),
-                QueryParams.optionalDouble("beta", beta), QueryParams.optionalInt("horizon", horizon));
+                QueryParams.optionalDouble("beta", beta), QueryParams.optionalInt("horizon", horizon)).response();
     }
 
     @POST

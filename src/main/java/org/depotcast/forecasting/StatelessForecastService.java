@@ -2,9 +2,9 @@ package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.common.Bounds;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
+import org.depotcast.common.CsvUpload;
 import org.depotcast.common.FieldError;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.forecast.ErrorScores;
@@ -15,12 +15,14 @@ import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
 import org.depotcast.core.policy.DemandDistribution;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import java.util.TreeMap;
 
 /** The what-if forecasts that touch no stored data: one series, a CSV batch, and a Poisson rate fit. */
@@ -83,42 +85,22 @@ public class StatelessForecastService {
      * Long-format CSV in (series_id, period, quantity), one row per series and horizon step out. Periods are whole
      * numbers; a missing period within a series counts as zero demand.
      */
-    public String batch(String csv, String method, Double alpha, Double beta, Integer horizon) {
+    public CsvExport batch(InputStream csv, String method, Double alpha, Double beta, Integer horizon) {
         Settings settings = Settings.of(method, alpha, beta, horizon);
-        CsvTable table = CsvTable.parse(csv, List.of("series_id", "period", "quantity"));
-        if (table.rows().size() > Bounds.BATCH_ROWS_MAX) {
-            throw new InvalidInputException("body", "a batch holds at most " + Bounds.BATCH_ROWS_MAX + " rows, this one "
-                    + table.rows().size());
-        }
         Map<String, TreeMap<Integer, Double>> series = new LinkedHashMap<>();
-        for (CsvRow row : table.rows()) {
-            String id = row.text("series_id");
-            Integer period = row.integer("period", 0);
-            if (period != null && period > PERIOD_MAX) {
-                row.reject("period", "must be at most " + PERIOD_MAX + " (a period number such as 202401), was " + period);
-                period = null;
-            }
-            BigDecimal quantity = row.decimal("quantity", BigDecimal.ZERO, false);
-            if (quantity != null && quantity.compareTo(SERIES_VALUE_MAX) > 0) {
-                row.reject("quantity", "must be at most " + Bounds.SERIES_VALUE_MAX);
-                quantity = null;
-            }
-            if (id != null && !series.containsKey(id) && series.size() == Bounds.BATCH_SERIES_MAX) {
-                row.reject("series_id", "a batch holds at most " + Bounds.BATCH_SERIES_MAX + " series");
-                id = null;
-            }
-            if (id != null && period != null && quantity != null) {
-                TreeMap<Integer, Double> periods = series.computeIfAbsent(id, k -> new TreeMap<>());
-                if (periods.put(period, quantity.doubleValue()) != null) {
-                    row.reject("period", "period " + period + " appears twice for series '" + id + "'");
-                } else if (periods.lastKey() - periods.firstKey() >= Bounds.SERIES_PERIODS_MAX) {
-                    // The history array spans first to last period: its length is bounded, never a client's number.
-                    row.reject("period", "series '" + id + "' spans more than " + Bounds.SERIES_PERIODS_MAX + " periods");
-                    periods.remove(period);
+        try (CsvUpload upload = CsvUpload.open(csv, List.of("series_id", "period", "quantity"), Set.of())) {
+            int rows = 0;
+            for (CsvRow row : upload) {
+                if (++rows > Bounds.BATCH_ROWS_MAX) {
+                    throw new InvalidInputException("body", "a batch holds at most " + Bounds.BATCH_ROWS_MAX + " rows");
                 }
+                readBatchRow(row, series);
+            }
+            upload.problems().throwIfAny();
+            if (rows == 0) {
+                throw new InvalidInputException("body", "CSV has a header but no rows");
             }
         }
-        table.problems().throwIfAny();
         List<List<?>> out = new ArrayList<>();
         for (Map.Entry<String, TreeMap<Integer, Double>> entry : series.entrySet()) {
             TreeMap<Integer, Double> byPeriod = entry.getValue();
@@ -133,7 +115,36 @@ public class StatelessForecastService {
                         f.profile().demandClass().name().toLowerCase(Locale.ROOT)));
             }
         }
-        return CsvOut.write(List.of("series_id", "step", "forecast", "method", "alpha", "beta", "demand_class"), out, r -> r);
+        return new CsvExport("forecasts.csv", List.of("series_id", "step", "forecast", "method", "alpha", "beta",
+                "demand_class"), out);
+    }
+
+    private static void readBatchRow(CsvRow row, Map<String, TreeMap<Integer, Double>> series) {
+        String id = row.text("series_id");
+        Integer period = row.integer("period");
+        if (period != null && (period < 0 || period > PERIOD_MAX)) {
+            row.reject("period", "must be from 0 to " + PERIOD_MAX + " (a period number such as 202401), was " + period);
+            period = null;
+        }
+        BigDecimal quantity = row.decimal("quantity");
+        if (quantity != null && (quantity.signum() < 0 || quantity.compareTo(SERIES_VALUE_MAX) > 0)) {
+            row.reject("quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was " + quantity.toPlainString());
+            quantity = null;
+        }
+        if (id != null && !series.containsKey(id) && series.size() == Bounds.BATCH_SERIES_MAX) {
+            row.reject("series_id", "a batch holds at most " + Bounds.BATCH_SERIES_MAX + " series");
+            id = null;
+        }
+        if (id != null && period != null && quantity != null) {
+            TreeMap<Integer, Double> periods = series.computeIfAbsent(id, k -> new TreeMap<>());
+            if (periods.put(period, quantity.doubleValue()) != null) {
+                row.reject("period", "period " + period + " appears twice for series '" + id + "'");
+            } else if (periods.lastKey() - periods.firstKey() >= Bounds.SERIES_PERIODS_MAX) {
+                // The history array spans first to last period: its length is bounded, never a client's number.
+                row.reject("period", "series '" + id + "' spans more than " + Bounds.SERIES_PERIODS_MAX + " periods");
+                periods.remove(period);
+            }
+        }
     }
 
     public RateFitResponse rateFit(RateFitRequest request) {

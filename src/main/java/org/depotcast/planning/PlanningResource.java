@@ -93,8 +93,8 @@ class PlanningResource {
     @GET
     @Path("purchase-plans/{id}/export")
     @Produces("text/csv")
-    public String export(@PathParam("id") long id) {
-        return purchasePlans.exportCsv(id);
+    public Response export(@PathParam("id") long id) {
+        return purchasePlans.exportCsv(id).response();
     }
 
     @GET

@@ -7,7 +7,7 @@ import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.core.policy.MarginalAllocation;
 import org.depotcast.core.policy.OrderQuantity;
@@ -174,7 +174,7 @@ public class PurchasePlanService {
 
     /** The lines bought, then the objective and the caution as two labelled rows, so a spreadsheet shows them. */
     @Transactional
-    public String exportCsv(long id) {
+    public CsvExport exportCsv(long id) {
         scope.requireProgramme();
         PurchasePlan plan = require(id);
         PurchasePlanResponse response = PurchasePlanResponse.from(plan);
@@ -186,7 +186,7 @@ public class PurchasePlanService {
                 l.cost.toPlainString(), plan.currency)));
         rows.add(List.of("objective", response.objective().statement(), "", "", "", "", "", ""));
         rows.add(List.of("caution", response.caution(), "", "", "", "", "", ""));
-        return CsvOut.write(columns, rows, r -> r);
+        return new CsvExport("purchase-plan-" + id + ".csv", columns, rows);
     }
 
     private PurchasePlan require(long id) {

@@ -19,6 +19,7 @@ import org.depotcast.common.ImportResult;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.QueryParams;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/repairs")
@@ -79,14 +80,14 @@ class RepairResource {
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importCsv(String csv) {
+    public ImportResult importCsv(InputStream csv) {
         return new ImportResult(service.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String exportCsv() {
-        return service.exportCsv();
+    public Response exportCsv() {
+        return service.exportCsv().response();
     }
 }

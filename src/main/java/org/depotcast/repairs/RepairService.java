@@ -9,9 +9,10 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
@@ -24,12 +25,12 @@ import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -48,10 +49,12 @@ public class RepairService {
     private final CurrentUser currentUser;
     private final org.depotcast.access.AuditService audit;
     private final PumpStatusService pumpStatus;
+    private final CsvImporter importer;
 
     RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
                   StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit,
-                  PumpStatusService pumpStatus) {
+                  PumpStatusService pumpStatus, CsvImporter importer) {
+        this.importer = importer;
         this.audit = audit;
         this.pumpStatus = pumpStatus;
         this.repairs = repairs;
@@ -248,97 +251,108 @@ public class RepairService {
     }
 
     /**
-     * Imports repair history (one row per replaced part; rows sharing a reference make one repair). History is
-     * kept for forecasting and reporting and is not posted to the ledger: opening stock is counted after it.
+     * Imports repair history (one row per replaced part; rows sharing a reference make one repair), each repair
+     * checked as {@link #record} checks it (the pump is the caller's, the reference new, dates in order, parts known).
+     * History is kept for forecasting and reporting and is not posted to the ledger: opening stock is counted after it.
      */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 5));
-        Map<String, Pump> pumpsById = new HashMap<>();
-        pumps.all().forEach(p -> pumpsById.put(p.assetId, p));
-        Map<String, Part> partsByNumber = new HashMap<>();
-        parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
-        Map<String, Repair> byRef = new LinkedHashMap<>();
-        java.util.Set<String> storedRefs = repairs.allRefs();
-        var visible = pumps.visibleFilter();
-        for (CsvRow row : table.rows()) {
-            readRow(row, pumpsById, partsByNumber, storedRefs, visible, byRef);
+    public int importCsv(InputStream csv) {
+        HistoryImport history = new HistoryImport();
+        Map<String, String> pumpOfRef = new HashMap<>();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 5), row -> read(row, pumpOfRef))
+                .identifiers("repair_ref", "asset_id", "mechanic", "part_number")
+                .scopeColumn("asset_id")
+                .applyGrouped(RepairRequest::repairRef, RepairService::joined, "lines",
+                        r -> r.lines() == null ? List.of() : r.lines(), history::add)
+                .afterAll(history::finish));
+    }
+
+    private static RepairRequest read(CsvRow row, Map<String, String> pumpOfRef) {
+        String ref = row.text("repair_ref");
+        String assetId = row.text("asset_id");
+        if (ref != null && assetId != null && !assetId.equals(pumpOfRef.computeIfAbsent(ref, r -> assetId))) {
+            row.reject("asset_id", "repair '" + ref + "' names another pump on an earlier row");
         }
-        table.problems().throwIfAny();
-        audit.record("REPAIRS_IMPORTED", "repair", byRef.size() + " repairs", null,
-                java.util.Map.of("repairs", byRef.size(), "rows", table.rows().size()));
-        int written = 0;
-        java.util.Set<String> touched = new java.util.HashSet<>();
-        for (Repair repair : byRef.values()) {
-            touched.add(repair.pump.assetId);
+        String partNumber = row.optionalText("part_number");
+        List<RepairRequest.Line> lines = partNumber == null ? List.of()
+                : List.of(new RepairRequest.Line(partNumber, row.decimal("quantity")));
+        return new RepairRequest(ref, assetId, row.text("mechanic"), row.choice("kind", RepairKind.class),
+                row.date("reported_on"), row.optionalDate("diagnosed_on"), row.optionalDate("parts_available_on"),
+                row.optionalDate("fixed_on"), row.optionalText("fault"), lines);
+    }
+
+    /** The repair as its first row gives it, with every row's part. */
+    private static RepairRequest joined(RepairRequest first, RepairRequest next) {
+        List<RepairRequest.Line> lines = new ArrayList<>(first.lines());
+        lines.addAll(next.lines());
+        return new RepairRequest(first.repairRef(), first.assetId(), first.mechanic(), first.kind(), first.reportedOn(),
+                first.diagnosedOn(), first.partsAvailableOn(), first.fixedOn(), first.fault(), lines);
+    }
+
+    /** One history import: pumps, parts and stored references read once, so thousands of repairs cost no lookups. */
+    private final class HistoryImport {
+        private final Map<String, Pump> pumpsById = new HashMap<>();
+        private final Map<String, Part> partsByNumber = new HashMap<>();
+        private final java.util.Set<String> touched = new java.util.HashSet<>();
+        private java.util.Set<String> storedRefs;
+        private java.util.function.Predicate<Pump> visible;
+        private int written;
+
+        void add(RepairRequest request) {
+            if (storedRefs == null) {
+                pumps.all().forEach(p -> pumpsById.put(p.assetId, p));
+                parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
+                storedRefs = repairs.allRefs();
+                visible = pumps.visibleFilter();
+            }
+            Pump pump = pumpsById.get(request.assetId());
+            if (pump == null) {
+                throw new EntityMissingException("assetId", "pump", request.assetId());
+            }
+            if (!visible.test(pump)) {
+                throw new io.quarkus.security.ForbiddenException("pump '" + request.assetId()
+                        + "' is outside your depots or assignments");
+            }
+            if (storedRefs.contains(request.repairRef())) {
+                throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' is already recorded");
+            }
+            String dateProblem = dateOrderProblem(request.reportedOn(), request.diagnosedOn(),
+                    request.partsAvailableOn(), request.fixedOn());
+            if (dateProblem != null) {
+                throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
+            }
+            Repair repair = newRepair(request, pump, request.mechanic());
+            repair.ledgerPosted = false;
+            for (int i = 0; i < request.lines().size(); i++) {
+                RepairRequest.Line l = request.lines().get(i);
+                Part part = partsByNumber.get(l.partNumber());
+                if (part == null) {
+                    throw new EntityMissingException("lines[" + i + "].partNumber", "part", l.partNumber());
+                }
+                BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
+                if (repair.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
+                    throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber
+                            + "' appears twice in repair '" + request.repairRef() + "'");
+                }
+                repair.addLine(line(part, quantity));
+            }
+            touched.add(pump.assetId);
             repairs.persist(repair);
             if (++written % 500 == 0) {
                 repairs.flush();
                 repairs.getEntityManager().clear();
             }
         }
-        repairs.flush();
-        // Each pump takes the status its repairs imply (an open breakdown: broken; else working since the last fix).
-        pumpStatus.followRepairs(pumps.all().stream().filter(p -> touched.contains(p.assetId)).toList());
-        return table.rows().size();
-    }
 
-    private void readRow(CsvRow row, Map<String, Pump> pumpsById, Map<String, Part> partsByNumber,
-                         java.util.Set<String> storedRefs, java.util.function.Predicate<Pump> visible,
-                         Map<String, Repair> byRef) {
-        String ref = row.text("repair_ref");
-        String assetId = row.text("asset_id");
-        Pump pump = assetId == null ? null : pumpsById.get(assetId);
-        if (assetId != null && pump == null) {
-            row.reject("asset_id", "pump '" + assetId + "' does not exist");
-        } else if (pump != null && !visible.test(pump)) {
-            row.reject("asset_id", "pump '" + assetId + "' is outside your depots or assignments");
-        }
-        String mechanic = row.text("mechanic");
-        RepairKind kind = row.choice("kind", RepairKind.class);
-        LocalDate reported = row.date("reported_on");
-        LocalDate diagnosed = row.optionalDate("diagnosed_on");
-        LocalDate available = row.optionalDate("parts_available_on");
-        LocalDate fixed = row.optionalDate("fixed_on");
-        String problem = reported == null ? null : dateOrderProblem(reported, diagnosed, available, fixed);
-        if (problem != null) {
-            row.reject(problem.replaceAll("([A-Z])", "_$1").toLowerCase(), "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
-        }
-        String partNumber = row.optionalText("part_number");
-        Part part = partNumber == null ? null : partsByNumber.get(partNumber);
-        if (partNumber != null && part == null) {
-            row.reject("part_number", "part '" + partNumber + "' does not exist");
-        }
-        BigDecimal quantity = partNumber == null ? null : row.decimal("quantity", BigDecimal.ZERO, true);
-        if (quantity != null && part != null && part.wholeUnits() && !Quantities.isWhole(quantity)) {
-            row.reject("quantity", "must be a whole number for part '" + partNumber + "'");
-        }
-        if (ref == null || pump == null) {
-            return;
-        }
-        Repair repair = byRef.get(ref);
-        if (repair == null) {
-            if (storedRefs.contains(ref)) {
-                row.reject("repair_ref", "repair '" + ref + "' is already recorded");
-                return;
-            }
-            repair = newRepair(new RepairRequest(ref, assetId, mechanic, kind, reported, diagnosed, available, fixed,
-                    row.optionalText("fault"), null), pump, mechanic);
-            repair.ledgerPosted = false;
-            byRef.put(ref, repair);
-        } else if (!repair.pump.assetId.equals(assetId)) {
-            row.reject("asset_id", "repair '" + ref + "' names another pump on an earlier row");
-        }
-        if (part != null && quantity != null) {
-            Part p = part;
-            if (repair.lines.stream().anyMatch(l -> l.part.id.equals(p.id))) {
-                row.reject("part_number", "part '" + partNumber + "' appears twice in repair '" + ref + "'");
-            }
-            repair.addLine(line(part, Quantities.normalise(quantity.setScale(Quantities.SCALE, java.math.RoundingMode.HALF_UP))));
+        void finish() {
+            repairs.flush();
+            audit.record("REPAIRS_IMPORTED", "repair", written + " repairs", null, Map.of("repairs", written));
+            // Each pump takes the status its repairs imply (an open breakdown: broken; else working since the last fix).
+            pumpStatus.followRepairs(pumps.all().stream().filter(p -> touched.contains(p.assetId)).toList());
         }
     }
 
-    public String exportCsv() {
+    public CsvExport exportCsv() {
         List<List<?>> rows = new ArrayList<>();
         var visible = pumps.visibleFilter();
         for (Repair r : repairs.allInOrder().stream().filter(r -> visible.test(r.pump)).toList()) {
@@ -349,7 +363,7 @@ public class RepairService {
                         l == null ? "" : l.part.partNumber, l == null ? "" : l.quantity.stripTrailingZeros().toPlainString()));
             }
         }
-        return CsvOut.write(CSV_COLUMNS, rows, r -> r);
+        return new CsvExport("repairs.csv", CSV_COLUMNS, rows);
     }
 
     private static Repair newRepair(RepairRequest r, Pump pump, String mechanic) {

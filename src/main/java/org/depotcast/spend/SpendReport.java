@@ -1,6 +1,6 @@
 package org.depotcast.spend;
 
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
 import org.depotcast.core.spend.SpendSimulation;
 
 import java.util.ArrayList;
@@ -13,7 +13,7 @@ final class SpendReport {
     private SpendReport() {
     }
 
-    static String csv(SpendResults r) {
+    static CsvExport csv(long runId, SpendResults r) {
         List<List<?>> rows = new ArrayList<>();
         for (SpendResults.Year y : r.years()) {
             rows.add(row(y, "total", "all", y.total(), r.currency()));
@@ -21,8 +21,8 @@ final class SpendReport {
             y.parts().forEach((k, s) -> rows.add(row(y, "part", k, s, r.currency())));
             y.depots().forEach((k, s) -> rows.add(row(y, "depot", k, s, r.currency())));
         }
-        return CsvOut.write(List.of("financial_year", "months", "level", "key", "mean", "p2_5", "p10", "p50", "p90",
-                "p97_5", "currency"), rows, x -> x);
+        return new CsvExport("spend-run-" + runId + ".csv", List.of("financial_year", "months", "level", "key", "mean",
+                "p2_5", "p10", "p50", "p90", "p97_5", "currency"), rows);
     }
 
     private static List<?> row(SpendResults.Year y, String level, String key, SpendSimulation.Summary s, String currency) {

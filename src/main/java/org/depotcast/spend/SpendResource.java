@@ -124,8 +124,8 @@ class SpendResource {
     @GET
     @Path("runs/{id}/results.csv")
     @Produces("text/csv")
-    public String csv(@PathParam("id") long id) {
-        return SpendReport.csv(service.results(id));
+    public Response csv(@PathParam("id") long id) {
+        return SpendReport.csv(id, service.results(id)).response();
     }
 
     @GET

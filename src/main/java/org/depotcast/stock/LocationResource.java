@@ -18,6 +18,7 @@ import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/locations")
@@ -55,14 +56,14 @@ class LocationResource {
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed(Roles.ADMIN)
-    public ImportResult importCsv(String csv) {
+    public ImportResult importCsv(InputStream csv) {
         return new ImportResult(service.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String exportCsv() {
-        return service.exportCsv();
+    public Response exportCsv() {
+        return service.exportCsv().response();
     }
 }

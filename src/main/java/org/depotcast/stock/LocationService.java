@@ -4,18 +4,19 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
-import java.util.ArrayList;
-import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /** Stock locations: the central store, district depots and mechanics' kits. */
 @ApplicationScoped
@@ -25,8 +26,10 @@ public class LocationService {
 
     private final LocationRepository locations;
     private final org.depotcast.access.AuditService audit;
+    private final CsvImporter importer;
 
-    LocationService(LocationRepository locations, org.depotcast.access.AuditService audit) {
+    LocationService(LocationRepository locations, org.depotcast.access.AuditService audit, CsvImporter importer) {
+        this.importer = importer;
         this.locations = locations;
         this.audit = audit;
     }
@@ -60,61 +63,46 @@ public class LocationService {
         if (locations.byCode(request.code()).isPresent()) {
             throw new ConflictException("code", "location '" + request.code() + "' already exists");
         }
+        return save(request);
+    }
+
+    /** Creates a location or replaces a stored one's fields; the hierarchy rules hold either way. */
+    private Location save(LocationRequest request) {
         Location parent = request.parentCode() == null ? null : require("parentCode", request.parentCode());
         String problem = hierarchyProblem(request.kind(), parent == null ? null : parent.kind, request.mechanicUsername());
         if (problem != null) {
             throw new BusinessRuleException("parentCode", problem);
         }
-        Location location = new Location();
+        Location location = locations.byCode(request.code()).orElseGet(Location::new);
         apply(location, request, parent);
-        locations.persist(location);
+        if (location.id == null) {
+            locations.persist(location);
+            locations.flush();
+        }
         return location;
     }
 
     /** Rows may name a parent defined earlier in the same file. All or nothing; existing codes are updated. */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 4));
-        Map<String, LocationKind> kindsInFile = new HashMap<>();
-        List<LocationRequest> requests = new ArrayList<>();
-        for (CsvRow row : table.rows()) {
-            String code = row.text("code");
-            LocationKind kind = row.choice("kind", LocationKind.class);
-            String parentCode = row.optionalText("parent_code");
-            LocationKind parentKind = parentCode == null ? null : kindsInFile.getOrDefault(parentCode,
-                    locations.byCode(parentCode).map(l -> l.kind).orElse(null));
-            if (parentCode != null && parentKind == null) {
-                row.reject("parent_code", "location '" + parentCode + "' is neither in the file above this row nor stored");
-            }
-            String mechanic = row.optionalText("mechanic_username");
-            if (kind != null && (parentCode == null || parentKind != null)) {
-                String problem = hierarchyProblem(kind, parentKind, mechanic);
-                if (problem != null) {
-                    row.reject("kind", problem);
-                }
-            }
-            if (code != null && kindsInFile.put(code, kind) != null) {
-                row.reject("code", "appears twice in the file");
-            }
-            requests.add(new LocationRequest(code, row.text("name"), kind, parentCode,
-                    row.optionalDecimal("latitude", BigDecimal.valueOf(-90), false),
-                    row.optionalDecimal("longitude", BigDecimal.valueOf(-180), false), mechanic));
-        }
-        table.problems().throwIfAny();
-        for (LocationRequest request : requests) {
-            Location location = locations.byCode(request.code()).orElseGet(Location::new);
-            Location parent = request.parentCode() == null ? null : locations.byCode(request.parentCode()).orElseThrow();
-            apply(location, request, parent);
-            if (location.id == null) {
-                locations.persist(location);
-                locations.flush();
-            }
-        }
-        return requests.size();
+    public int importCsv(InputStream csv) {
+        Set<String> seen = new HashSet<>();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 4), row -> read(row, seen))
+                .identifiers("code", "parent_code", "mechanic_username")
+                .applyEach(this::save));
     }
 
-    public String exportCsv() {
-        return CsvOut.write(CSV_COLUMNS, all(), l -> java.util.Arrays.asList(l.code, l.name, l.kind,
+    private static LocationRequest read(CsvRow row, Set<String> seen) {
+        String code = row.text("code");
+        if (code != null && !seen.add(code)) {
+            row.reject("code", "appears twice in the file");
+        }
+        return new LocationRequest(code, row.text("name"), row.choice("kind", LocationKind.class),
+                row.optionalText("parent_code"), row.optionalDecimal("latitude"), row.optionalDecimal("longitude"),
+                row.optionalText("mechanic_username"));
+    }
+
+    public CsvExport exportCsv() {
+        return CsvExport.of("locations.csv", CSV_COLUMNS, all(), l -> java.util.Arrays.asList(l.code, l.name, l.kind,
                 l.parent == null ? "" : l.parent.code, plain(l.latitude), plain(l.longitude),
                 l.mechanicUsername == null ? "" : l.mechanicUsername));
     }

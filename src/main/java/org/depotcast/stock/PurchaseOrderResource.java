@@ -17,6 +17,7 @@ import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/purchase-orders")
@@ -68,14 +69,14 @@ class PurchaseOrderResource {
     @Path("import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importCsv(String csv) {
+    public ImportResult importCsv(InputStream csv) {
         return new ImportResult(service.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
-    public String exportCsv() {
-        return service.exportCsv();
+    public Response exportCsv() {
+        return service.exportCsv().response();
     }
 }

@@ -7,26 +7,29 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvOut;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.HashMap;
-import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.Optional;
 
 /** Purchase orders: placing them, receiving goods into the ledger, and the on-order quantities they imply. */
 @ApplicationScoped
 public class PurchaseOrderService {
     static final List<String> CSV_COLUMNS = List.of("order_number", "supplier", "destination_code", "ordered_on",
             "expected_on", "part_number", "quantity");
+    /** The export says which quantity is which; its quantity_ordered reads back as an import's quantity. */
+    private static final List<String> EXPORT_COLUMNS = List.of("order_number", "supplier", "destination_code",
+            "ordered_on", "expected_on", "part_number", "quantity_ordered", "quantity_received", "quantity_outstanding");
 
     private final PurchaseOrderRepository orders;
     private final PartService parts;
@@ -34,10 +37,12 @@ public class PurchaseOrderService {
     private final StockLedgerService ledger;
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
+    private final CsvImporter importer;
 
     PurchaseOrderService(PurchaseOrderRepository orders, PartService parts, LocationService locations,
                          StockLedgerService ledger, org.depotcast.access.AccessScope scope,
-                         org.depotcast.access.AuditService audit) {
+                         org.depotcast.access.AuditService audit, CsvImporter importer) {
+        this.importer = importer;
         this.audit = audit;
         this.scope = scope;
         this.orders = orders;
@@ -142,53 +147,49 @@ public class PurchaseOrderService {
         return PurchaseOrderResponse.from(order);
     }
 
-    /** One row per order line; rows sharing an order number make one order. All or nothing; orders must be new. */
+    /**
+     * One row per order line; rows sharing an order number make one order, placed as POST would place it. All or
+     * nothing; orders must be new.
+     */
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS);
-        Map<String, PurchaseOrderRequest> byNumber = new LinkedHashMap<>();
-        for (CsvRow row : table.rows()) {
-            String number = row.text("order_number");
-            if (number != null && orders.byNumber(number).isPresent()) {
-                row.reject("order_number", "purchase order '" + number + "' already exists");
-            }
-            String destination = row.text("destination_code");
-            Optional<Location> where = destination == null ? Optional.empty() : locations.find(destination);
-            if (destination != null && (where.isEmpty() || where.get().kind == LocationKind.KIT)) {
-                row.reject("destination_code", "must name the central store or a depot, was '" + destination + "'");
-            }
-            String partNumber = row.text("part_number");
-            Optional<Part> part = partNumber == null ? Optional.empty() : parts.find(partNumber);
-            if (partNumber != null && part.isEmpty()) {
-                row.reject("part_number", "part '" + partNumber + "' does not exist");
-            }
-            BigDecimal quantity = row.decimal("quantity", BigDecimal.ZERO, true);
-            if (quantity != null && part.isPresent() && part.get().wholeUnits() && !Quantities.isWhole(quantity)) {
-                row.reject("quantity", "must be a whole number for part '" + partNumber + "'");
-            }
-            PurchaseOrderRequest.Line line = new PurchaseOrderRequest.Line(partNumber, quantity);
-            if (number != null) {
-                PurchaseOrderRequest earlier = byNumber.get(number);
-                List<PurchaseOrderRequest.Line> lines = earlier == null ? new ArrayList<>() : new ArrayList<>(earlier.lines());
-                lines.add(line);
-                byNumber.put(number, new PurchaseOrderRequest(number, row.text("supplier"), destination,
-                        row.date("ordered_on"), row.optionalDate("expected_on"), lines));
-            }
-        }
-        table.problems().throwIfAny();
-        byNumber.values().forEach(this::place);
-        return table.rows().size();
+    public int importCsv(InputStream csv) {
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 6), PurchaseOrderService::read)
+                .identifiers("order_number", "destination_code", "part_number")
+                .column("destination", "destination_code").scopeColumn("destination_code")
+                .applyGrouped(PurchaseOrderRequest::orderNumber, PurchaseOrderService::joined, "lines",
+                        PurchaseOrderRequest::lines, this::place));
     }
 
-    public String exportCsv() {
+    private static PurchaseOrderRequest read(CsvRow row) {
+        String quantityColumn = row.has("quantity") || !row.has("quantity_ordered") ? "quantity" : "quantity_ordered";
+        return new PurchaseOrderRequest(row.text("order_number"), row.text("supplier"), row.text("destination_code"),
+                row.date("ordered_on"), row.optionalDate("expected_on"),
+                List.of(new PurchaseOrderRequest.Line(row.text("part_number"), row.decimal(quantityColumn))));
+    }
+
+    /** The order as its first row gives it, with every row's line. */
+    private static PurchaseOrderRequest joined(PurchaseOrderRequest first, PurchaseOrderRequest next) {
+        List<PurchaseOrderRequest.Line> lines = new ArrayList<>(first.lines());
+        lines.addAll(next.lines());
+        return new PurchaseOrderRequest(first.orderNumber(), first.supplier(), first.destination(), first.orderedOn(),
+                first.expectedOn(), lines);
+    }
+
+    /** Open orders, one row per line, with what was ordered, what has come and what is still to come. */
+    @Transactional
+    public CsvExport exportCsv() {
         List<List<?>> rows = new ArrayList<>();
         for (PurchaseOrder o : list(PurchaseOrderStatus.OPEN)) {
             for (PurchaseOrderLine l : o.lines) {
                 rows.add(List.of(o.orderNumber, o.supplier, o.destination.code, o.orderedOn,
-                        o.expectedOn == null ? "" : o.expectedOn, l.part.partNumber,
-                        l.outstanding().stripTrailingZeros().toPlainString()));
+                        o.expectedOn == null ? "" : o.expectedOn, l.part.partNumber, plain(l.quantityOrdered),
+                        plain(l.quantityReceived), plain(l.outstanding())));
             }
         }
-        return CsvOut.write(CSV_COLUMNS, rows, r -> r);
+        return new CsvExport("purchase-orders.csv", EXPORT_COLUMNS, rows);
+    }
+
+    private static String plain(BigDecimal quantity) {
+        return quantity.stripTrailingZeros().toPlainString();
     }
 }

@@ -2,23 +2,26 @@ package org.depotcast.stock;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
-import org.depotcast.common.DatedInFutureException;
-import org.depotcast.common.CsvOut;
-import org.depotcast.common.DateBounds;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvImport;
+import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvTable;
+import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
 
+import java.io.InputStream;
 import java.math.BigDecimal;
-import java.time.OffsetDateTime;
+import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
-import java.util.Optional;
+import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 
 /**
  * Opening stock and stock counts from a CSV of counted quantities. Each counted line posts a count adjustment for the
@@ -27,81 +30,93 @@ import java.util.Set;
 @ApplicationScoped
 public class StockCountService {
     static final List<String> CSV_COLUMNS = List.of("location_code", "part_number", "quantity", "counted_on");
+    private static final List<String> SHEET_COLUMNS = List.of("location_code", "part_number", "quantity", "counted_on",
+            "description");
 
     private final PartService parts;
     private final LocationService locations;
     private final StockLedgerService ledger;
     private final StockQueryService queries;
-    private final org.depotcast.access.AccessScope scope;
+    private final AccessScope scope;
+    private final StockedParts stocked;
+    private final CsvImporter importer;
 
     StockCountService(PartService parts, LocationService locations, StockLedgerService ledger, StockQueryService queries,
-                      org.depotcast.access.AccessScope scope) {
+                      AccessScope scope, StockedParts stocked, CsvImporter importer) {
         this.scope = scope;
         this.parts = parts;
         this.locations = locations;
         this.ledger = ledger;
         this.queries = queries;
+        this.stocked = stocked;
+        this.importer = importer;
     }
 
-    private record Count(String locationCode, String partNumber, BigDecimal quantity, OffsetDateTime countedAt) {
+    /** Books one counted line: a count adjustment for the difference from the books, none when they agree. */
+    @Transactional
+    public void count(StockCountLine line) {
+        Location location = locations.require("locationCode", line.locationCode());
+        scope.require(location.id, location.code);
+        Part part = parts.require("partNumber", line.partNumber());
+        if (part.wholeUnits() && !Quantities.isWhole(line.quantity())) {
+            throw new InvalidInputException("quantity", "must be a whole number for part '" + part.partNumber + "'");
+        }
+        BigDecimal difference = line.quantity().subtract(queries.onHand(part.partNumber, location.code));
+        if (difference.signum() == 0) {
+            return;
+        }
+        boolean found = difference.signum() > 0;
+        ledger.postWithin(new MovementCommand(MovementKind.COUNT_ADJUSTMENT, part.partNumber,
+                found ? null : location.code, found ? location.code : null, difference.abs(),
+                line.countedOn() == null ? null : line.countedOn().atStartOfDay().atOffset(ZoneOffset.UTC),
+                "stock count", "count import", null, null, null));
     }
 
     @Transactional
-    public int importCsv(String csv) {
-        CsvTable table = CsvTable.parse(csv, CSV_COLUMNS.subList(0, 3));
-        List<Count> counts = new ArrayList<>();
+    public int importCsv(InputStream csv) {
         Set<String> seen = new HashSet<>();
-        Integer futureRow = null;
-        for (CsvRow row : table.rows()) {
-            String locationCode = row.text("location_code");
-            Optional<Location> location = locationCode == null ? Optional.empty() : locations.find(locationCode);
-            if (locationCode != null && location.isEmpty()) {
-                row.reject("location_code", "location '" + locationCode + "' does not exist");
-            } else if (location.isPresent() && !scope.current().sees(location.get().id)) {
-                row.reject("location_code", "location '" + locationCode + "' is outside the locations assigned to you");
-            }
-            String partNumber = row.text("part_number");
-            Optional<Part> part = partNumber == null ? Optional.empty() : parts.find(partNumber);
-            if (partNumber != null && part.isEmpty()) {
-                row.reject("part_number", "part '" + partNumber + "' does not exist");
-            }
-            BigDecimal quantity = row.decimal("quantity", BigDecimal.ZERO, false);
-            if (quantity != null && part.isPresent() && part.get().wholeUnits() && !Quantities.isWhole(quantity)) {
-                row.reject("quantity", "must be a whole number for part '" + partNumber + "'");
-            }
-            if (locationCode != null && partNumber != null && !seen.add(locationCode + "\u0000" + partNumber)) {
-                row.reject("part_number", "counted twice at '" + locationCode + "'");
-            }
-            var countedOn = row.optionalDate("counted_on");
-            if (countedOn != null && DateBounds.tooEarly(countedOn)) {
-                row.reject("counted_on", DateBounds.earliestMessage());
-            } else if (countedOn != null && DateBounds.eventInFuture(countedOn) && futureRow == null) {
-                futureRow = row.line();
-            }
-            counts.add(new Count(locationCode, partNumber, quantity,
-                    countedOn == null ? null : countedOn.atStartOfDay().atOffset(ZoneOffset.UTC)));
-        }
-        table.problems().throwIfAny();
-        if (futureRow != null) {
-            // Well-formed but not yet possible: refused like a movement dated ahead, nothing written.
-            throw new DatedInFutureException("row " + futureRow + ", column counted_on");
-        }
-        for (Count count : counts) {
-            BigDecimal difference = count.quantity().subtract(queries.onHand(count.partNumber(), count.locationCode()));
-            if (difference.signum() == 0) {
-                continue;
-            }
-            boolean found = difference.signum() > 0;
-            ledger.postWithin(new MovementCommand(MovementKind.COUNT_ADJUSTMENT, count.partNumber(),
-                    found ? null : count.locationCode(), found ? count.locationCode() : null, difference.abs(),
-                    count.countedAt(), "stock count", "count import", null, null, null));
-        }
-        return counts.size();
+        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 3), row -> read(row, seen))
+                .identifiers("location_code", "part_number")
+                .applyEach(this::count));
     }
 
-    public String exportCsv(String locationCode) {
-        String today = java.time.LocalDate.now(ZoneOffset.UTC).toString();
-        return CsvOut.write(CSV_COLUMNS, queries.balances(locationCode), b -> List.of(b.locationCode(), b.partNumber(),
-                b.onHand().stripTrailingZeros().toPlainString(), today));
+    private static StockCountLine read(CsvRow row, Set<String> seen) {
+        String locationCode = row.text("location_code");
+        String partNumber = row.text("part_number");
+        if (locationCode != null && partNumber != null && !seen.add(locationCode + "\u0000" + partNumber)) {
+            row.reject("part_number", "counted twice at '" + locationCode + "'");
+        }
+        return new StockCountLine(locationCode, partNumber, row.decimal("quantity"), row.optionalDate("counted_on"));
+    }
+
+    /**
+     * A count sheet: every part held at the location (or every location in scope), zero balances included, and every
+     * part it stocks by policy though none is held, with the books' quantity to be corrected by the counter.
+     */
+    @Transactional
+    public CsvExport exportCsv(String locationCode) {
+        String today = LocalDate.now(ZoneOffset.UTC).toString();
+        Map<String, List<?>> rows = new TreeMap<>();
+        Map<String, String> descriptions = new java.util.HashMap<>();
+        parts.all().forEach(p -> descriptions.put(p.partNumber, p.description));
+        for (BalanceView b : queries.balances(locationCode)) {
+            rows.put(b.locationCode() + "\u0000" + b.partNumber(), List.of(b.locationCode(), b.partNumber(),
+                    b.onHand().stripTrailingZeros().toPlainString(), today, b.description()));
+        }
+        List<Location> sheetLocations = new ArrayList<>();
+        if (locationCode != null) {
+            sheetLocations.add(locations.require("location", locationCode));
+        } else {
+            AccessScope.Scope visible = scope.current();
+            locations.all().stream().filter(l -> visible.sees(l.id)).forEach(sheetLocations::add);
+        }
+        for (Location location : sheetLocations) {
+            for (String partNumber : stocked.stockedAt(location)) {
+                rows.putIfAbsent(location.code + "\u0000" + partNumber, List.of(location.code, partNumber, "0", today,
+                        descriptions.getOrDefault(partNumber, "")));
+            }
+        }
+        String name = locationCode == null ? "stock-count.csv" : "stock-count-" + locationCode + ".csv";
+        return new CsvExport(name, SHEET_COLUMNS, new ArrayList<>(rows.values()));
     }
 }

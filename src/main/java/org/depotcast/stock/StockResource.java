@@ -16,6 +16,7 @@ import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
 import org.depotcast.common.QueryParams;
 
+import java.io.InputStream;
 import java.util.List;
 
 @Path("/api/stock")
@@ -68,14 +69,14 @@ class StockResource {
     @Path("counts/import")
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public ImportResult importCounts(String csv) {
+    public ImportResult importCounts(InputStream csv) {
         return new ImportResult(counts.importCsv(csv));
     }
 
     @GET
     @Path("counts/export")
     @Produces("text/csv")
-    public String exportCounts(@QueryParam("location") String location) {
-        return counts.exportCsv(location);
+    public Response exportCounts(@QueryParam("location") String location) {
+        return counts.exportCsv(location).response();
     }
 }
