@@ -2,6 +2,9 @@ package org.depotcast.common;
 
 import io.quarkus.security.ForbiddenException;
 import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Status;
+import jakarta.transaction.SystemException;
+import jakarta.transaction.TransactionManager;
 import jakarta.transaction.Transactional;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.Validator;
@@ -20,16 +23,18 @@ import java.util.regex.Pattern;
  * The one way a CSV file is imported. Rows stream from the upload; each becomes the feature's request record, is
  * checked with the same Bean Validation as the JSON endpoint and applied through the same service call, all in one
  * transaction. Any problem (a cell that is no number, a broken constraint, a row the service refuses) is listed by
- * row and column, and the whole file is refused: 400, nothing written.
+ * row and column, and the whole file is refused: 400, nothing written (the transaction rolls back).
  */
 @ApplicationScoped
 public class CsvImporter {
     private static final Pattern INDEXED = Pattern.compile("(\\w+)\\[(\\d+)]");
 
     private final Validator validator;
+    private final TransactionManager transactions;
 
-    CsvImporter(Validator validator) {
+    CsvImporter(Validator validator, TransactionManager transactions) {
         this.validator = validator;
+        this.transactions = transactions;
     }
 
     /** Imports the upload; answers how many data rows it had. */
@@ -56,12 +61,13 @@ public class CsvImporter {
             rows++;
             R request = spec.rowReader.apply(row);
             boolean ahead = request != null && validate(row, request, spec, datedAhead);
-            // After the first problem the file will be refused: read on to list every problem, but write no more.
-            if (request == null || !problems.isEmpty()) {
+            // A row with a problem is not applied; later rows still are, so the service's own refusals (an unknown
+            // part, a depot outside one's scope) are listed too. All is rolled back at the end if anything was wrong.
+            if (request == null || row.hasProblems() || ahead || !writable()) {
                 continue;
             }
             if (spec.groupKey == null) {
-                apply(spec, request, new Group<>(request, row.line(), spec), problems);
+                apply(spec, request, new Group<>(request, row.line(), spec), problems, datedAhead);
             } else {
                 groups.merge(spec.groupKey.apply(request), new Group<>(request, row.line(), spec), (a, b) -> a.join(b, spec));
             }
@@ -70,9 +76,10 @@ public class CsvImporter {
             throw new InvalidInputException("body", "CSV has a header but no rows");
         }
         for (Group<R> group : groups.values()) {
-            if (!problems.isEmpty() || !apply(spec, group.request, group, problems)) {
+            if (!writable()) {
                 break;
             }
+            apply(spec, group.request, group, problems, datedAhead);
         }
         if (problems.isEmpty() && datedAhead.field == null && spec.afterAll != null) {
             spec.afterAll.run();
@@ -117,6 +124,15 @@ public class CsvImporter {
             if (field == null) {
                 field = where;
             }
+        }
+    }
+
+    /** False once a refusal inside a nested transactional call has marked the transaction for rollback. */
+    private boolean writable() {
+        try {
+            return transactions.getStatus() == Status.STATUS_ACTIVE;
+        } catch (SystemException e) {
+            return false;
         }
     }
 
