@@ -6,6 +6,7 @@ import jakarta.ws.rs.core.HttpHeaders;
 import jakarta.ws.rs.ext.Provider;
 import jakarta.ws.rs.ext.ReaderInterceptor;
 import jakarta.ws.rs.ext.ReaderInterceptorContext;
+import org.eclipse.microprofile.config.ConfigProvider;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 import org.jboss.resteasy.reactive.server.ServerRequestFilter;
 
@@ -46,6 +47,15 @@ public class BodySizeLimit implements ReaderInterceptor {
     public Object aroundReadFrom(ReaderInterceptorContext context) throws IOException {
         context.setInputStream(new Counting(context.getInputStream(), limitBytes));
         return context.proceed();
+    }
+
+    /**
+     * The body a resource reads as a stream itself (CSV uploads), counted against the limit: such a parameter is not
+     * read through a message body reader, so {@link #aroundReadFrom} does not see it.
+     */
+    public static InputStream counted(InputStream body) {
+        MemorySize limit = ConfigProvider.getConfig().getValue("depotcast.http.max-body-size", MemorySize.class);
+        return new Counting(body, limit.asLongValue());
     }
 
     private static final class Counting extends FilterInputStream {

@@ -46,7 +46,8 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
         if (body == null) {
             throw new InvalidInputException("body", "CSV body is empty");
         }
-        return open(new InputStreamReader(body, StandardCharsets.UTF_8), requiredColumns, identifierColumns);
+        return open(new InputStreamReader(BodySizeLimit.counted(body), StandardCharsets.UTF_8), requiredColumns,
+                identifierColumns);
     }
 
     public static CsvUpload open(Reader body, List<String> requiredColumns, Set<String> identifierColumns) {
@@ -72,6 +73,7 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
             }
             return new CsvUpload(parser, header, identifierColumns);
         } catch (IOException | UncheckedIOException | IllegalStateException | IllegalArgumentException e) {
+            rethrowIfTooLarge(e);
             throw new InvalidInputException("row 1", UNREADABLE);
         }
     }
@@ -113,6 +115,7 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
                     checkIdentifiers(next);
                     return true;
                 } catch (UncheckedIOException | IllegalStateException e) {
+                    rethrowIfTooLarge(e);
                     ended = true;
                     problems.add(lastLine + 1, null, UNREADABLE);
                     return false;
@@ -138,6 +141,15 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
             if (raw != null && startsAsFormula(raw)) {
                 row.reject(column, "must not start with =, +, -, @, tab or carriage return: a spreadsheet would run it "
                         + "as a formula (OWASP CSV Injection)");
+            }
+        }
+    }
+
+    /** A body over the size limit is a 413, whatever the CSV reader wrapped it in. */
+    private static void rethrowIfTooLarge(Throwable e) {
+        for (Throwable cause = e; cause != null; cause = cause.getCause() == cause ? null : cause.getCause()) {
+            if (cause instanceof BodyTooLargeException tooLarge) {
+                throw tooLarge;
             }
         }
     }

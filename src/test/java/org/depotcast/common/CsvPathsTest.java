@@ -99,6 +99,18 @@ class CsvPathsTest {
         upload("officer", "/api/pumps/import", pumpsCsv).statusCode(400).contentType(PROBLEM)
                 .body("errors.field", hasItems("row 3, column asset_id", "row 4, column depth_m"));
         assertTrue(pumps.find(goodPump).isEmpty());
+
+        String part = data.part(UnitOfIssue.EACH);
+        String order = TestData.unique("HPO").toUpperCase();
+        upload("officer", "/api/purchase-orders/import", "order_number,supplier,destination_code,ordered_on,expected_on,"
+                + "part_number,quantity\n" + order + ",Test Supplier,CENTRAL,2026-11-01,," + part + ",1e15\n")
+                .statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("row 2, column quantity"));
+        as("officer").get("/api/purchase-orders/" + order).then().statusCode(404);
+        upload("officer", "/api/stock/counts/import", "location_code,part_number,quantity\nCENTRAL," + part + ",3\n"
+                + "CENTRAL," + data.part(UnitOfIssue.EACH) + ",1e15\n")
+                .statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("row 3, column quantity"));
+        as("officer").get("/api/stock/balances?location=CENTRAL").then().statusCode(200)
+                .body("findAll { it.partNumber == '" + part + "' }.size()", equalTo(0));
     }
 
     @Test
