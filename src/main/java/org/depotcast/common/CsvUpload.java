@@ -34,9 +34,12 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
     private final Map<String, Integer> header;
     private final Set<String> identifierColumns;
     private final CsvProblems problems = new CsvProblems();
+    private final InputStream countedBody;
     private boolean iterated;
 
-    private CsvUpload(CSVParser parser, Map<String, Integer> header, Set<String> identifierColumns) {
+    private CsvUpload(CSVParser parser, Map<String, Integer> header, Set<String> identifierColumns,
+                      InputStream countedBody) {
+        this.countedBody = countedBody;
         this.parser = parser;
         this.header = header;
         this.identifierColumns = identifierColumns;
@@ -46,11 +49,16 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
         if (body == null) {
             throw new InvalidInputException("body", "CSV body is empty");
         }
-        return open(new InputStreamReader(BodySizeLimit.counted(body), StandardCharsets.UTF_8), requiredColumns,
-                identifierColumns);
+        InputStream counted = BodySizeLimit.counted(body);
+        return open(new InputStreamReader(counted, StandardCharsets.UTF_8), requiredColumns, identifierColumns, counted);
     }
 
     public static CsvUpload open(Reader body, List<String> requiredColumns, Set<String> identifierColumns) {
+        return open(body, requiredColumns, identifierColumns, null);
+    }
+
+    private static CsvUpload open(Reader body, List<String> requiredColumns, Set<String> identifierColumns,
+                                  InputStream countedBody) {
         try {
             BufferedReader in = body instanceof BufferedReader b ? b : new BufferedReader(body, 16 * 1024);
             skipByteOrderMark(in);
@@ -71,9 +79,9 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
             if (!missing.isEmpty()) {
                 throw new InvalidInputException(missing);
             }
-            return new CsvUpload(parser, header, identifierColumns);
+            return new CsvUpload(parser, header, identifierColumns, countedBody);
         } catch (IOException | UncheckedIOException | IllegalStateException | IllegalArgumentException e) {
-            rethrowIfTooLarge(e);
+            rethrowIfTooLarge(e, countedBody);
             throw new InvalidInputException("row 1", UNREADABLE);
         }
     }
@@ -115,7 +123,7 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
                     checkIdentifiers(next);
                     return true;
                 } catch (UncheckedIOException | IllegalStateException e) {
-                    rethrowIfTooLarge(e);
+                    rethrowIfTooLarge(e, countedBody);
                     ended = true;
                     problems.add(lastLine + 1, null, UNREADABLE);
                     return false;
@@ -145,11 +153,24 @@ public final class CsvUpload implements Iterable<CsvRow>, AutoCloseable {
         }
     }
 
-    /** A body over the size limit is a 413, whatever the CSV reader wrapped it in. */
-    private static void rethrowIfTooLarge(Throwable e) {
+    /**
+     * A body over the size limit is a 413 even where it breaks the CSV first: the rest of the body is read through
+     * the counter (at most up to the limit) before the file is refused as unreadable.
+     */
+    private static void rethrowIfTooLarge(Throwable e, InputStream countedBody) {
         for (Throwable cause = e; cause != null; cause = cause.getCause() == cause ? null : cause.getCause()) {
             if (cause instanceof BodyTooLargeException tooLarge) {
                 throw tooLarge;
+            }
+        }
+        if (countedBody != null) {
+            try {
+                byte[] rest = new byte[16 * 1024];
+                while (countedBody.read(rest) >= 0) {
+                    // counted; the counter throws once the limit is passed
+                }
+            } catch (IOException unreadable) {
+                // the body ends here; it was not too large
             }
         }
     }
