@@ -22,7 +22,8 @@ import java.math.BigDecimal;
  * as the thirteenth constant. A number written with more than {@link #MAX_NUMBER_CHARS} characters is refused before
  * it is converted, inside the deserializer of its field, so the 400 names the field and no time goes into expanding
  * it (a number's size is then checked by the field's bounds, by comparison). No bound of ours needs more than 40
- * characters. The parser's own limit is raised so that it does not refuse such a number first with no field to name.
+ * characters. The parser's own limit is raised from 1,000 to 10,000 characters so that it does not refuse such a
+ * number first with no field to name; a longer one is refused by the parser as an unreadable body.
  */
 @Singleton
 public class JsonInputGuard implements ObjectMapperCustomizer {
@@ -31,7 +32,7 @@ public class JsonInputGuard implements ObjectMapperCustomizer {
     @Override
     public void customize(ObjectMapper mapper) {
         mapper.enable(DeserializationFeature.FAIL_ON_NUMBERS_FOR_ENUMS);
-        mapper.getFactory().setStreamReadConstraints(StreamReadConstraints.builder().maxNumberLength(1_000_000).build());
+        mapper.getFactory().setStreamReadConstraints(StreamReadConstraints.builder().maxNumberLength(10_000).build());
         SimpleModule module = new SimpleModule("number-length-guard");
         add(module, BigDecimal.class, NumberDeserializers.BigDecimalDeserializer.instance);
         add(module, Double.class, NumberDeserializers.find(Double.class, Double.class.getName()));

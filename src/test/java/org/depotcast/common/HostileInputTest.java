@@ -87,14 +87,17 @@ class HostileInputTest {
                     if (!"query".equals(parameter.path("in").asText())) {
                         continue;
                     }
-                    for (String bad : BAD_QUERY_VALUES) {
+                    // A free-text filter (a location, a part) gets the long string only: other values would just
+                    // filter to nothing, at the cost of a whole computation each.
+                    String name = parameter.get("name").asText();
+                    for (String bad : TYPED_PARAMETERS.contains(name) ? BAD_QUERY_VALUES : BAD_QUERY_VALUES.subList(3, 4)) {
                         parameters++;
-                        checkQuery(method, url, parameter.get("name").asText(), bad, failures);
+                        checkQuery(method, url, name, bad, failures);
                     }
                 }
             }
         }
-        assertTrue(bodies > 200 && parameters > 60, "walked " + bodies + " bodies and " + parameters + " parameters");
+        assertTrue(bodies > 200 && parameters > 30, "walked " + bodies + " bodies and " + parameters + " parameters");
         assertTrue(failures.isEmpty(), failures.size() + " mishandled:\n" + String.join("\n", failures));
         assertEquals(before, ledgerState(), "nothing written");
     }
