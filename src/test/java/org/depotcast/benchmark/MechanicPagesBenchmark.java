@@ -1,0 +1,89 @@
+package org.depotcast.benchmark;
+
+import io.quarkus.test.junit.QuarkusTest;
+import org.depotcast.pages.BrowserSession;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+
+import java.time.Duration;
+import java.util.Locale;
+import java.util.Map;
+
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The mechanic's phone page in headless Chromium on the demo (mechanic3: 125 pumps): bytes moved by the first load
+ * with an empty browser cache, and how fast the page opens again from the phone (service worker and IndexedDB),
+ * with the connection and without it.
+ */
+@QuarkusTest
+class MechanicPagesBenchmark extends BrowserSession {
+    private static final int ROUNDS = 15;
+
+    private long firstLoadBytes() {
+        return ((Number) driver.executeScript("""
+                const nav = performance.getEntriesByType('navigation').map(e => e.transferSize);
+                const rest = performance.getEntriesByType('resource').map(e => e.transferSize);
+                return [...nav, ...rest].reduce((a, b) => a + b, 0);""")).longValue();
+    }
+
+    /** What the service worker fetched for itself to keep the page (not seen by the page's own timings). */
+    private long keptBytes() {
+        return ((Number) driver.executeAsyncScript("""
+                const done = arguments[arguments.length - 1];
+                navigator.serviceWorker.ready.then(async () => {
+                    let total = 0;
+                    for (const name of await caches.keys()) {
+                        const cache = await caches.open(name);
+                        for (const request of await cache.keys()) {
+                            total += (await (await cache.match(request)).arrayBuffer()).byteLength;
+                        }
+                    }
+                    done(total);
+                });""")).longValue();
+    }
+
+    private double openAgain(boolean online) {
+        open("/app/mechanic/");
+        waitReady();
+        double ms = readyMillis();
+        if (online) {
+            // Let the background refresh finish, so the next round starts from the same state.
+            wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.tagName("body")).getDomAttribute("data-refreshed") != null);
+        }
+        return ms;
+    }
+
+    @Test
+    void firstLoadWeightAndOpeningFromThePhonesCache() {
+        phone();
+        signIn("mechanic3", "mechanic3-demo");
+        driver.executeCdpCommand("Network.enable", Map.of());
+        driver.executeCdpCommand("Network.clearBrowserCache", Map.of());
+        open("/app/mechanic/");
+        waitReady();
+        waitFor(By.id("kit-table"));
+        double firstMs = readyMillis();
+        long pageBytes = firstLoadBytes();
+        long kept = keptBytes();
+        long total = pageBytes + kept;
+        Figures.report(String.format(Locale.ROOT, "mechanic page first load (empty cache, mechanic3 with 125 pumps): %.1f KB "
+                + "page, modules and data + %.1f KB kept by the service worker = %.1f KB (budget 300 KB); ready in %.0f ms",
+                pageBytes / 1024.0, kept / 1024.0, total / 1024.0, firstMs));
+        assertTrue(total <= 300 * 1024, "first load moved " + total + " bytes");
+
+        double[] online = new double[ROUNDS];
+        for (int i = 0; i < ROUNDS; i++) {
+            online[i] = openAgain(true);
+        }
+        offline(true);
+        double[] offline = new double[ROUNDS];
+        for (int i = 0; i < ROUNDS; i++) {
+            offline[i] = openAgain(false);
+        }
+        offline(false);
+        Figures.report(String.format(Locale.ROOT, "mechanic page opened again from the phone's cache: median %.0f ms with "
+                + "the connection, %.0f ms without it (%d rounds each; target < 300 ms)",
+                Figures.median(online), Figures.median(offline), ROUNDS));
+    }
+}
