@@ -29,6 +29,7 @@ final class DemandAssembler {
     static final String FLEET = "FLEET";
     private static final int HOLDOUT_MONTHS = 12;
     private static final double DAYS_PER_MONTH = 365.25 / 12;
+    private static final ErrorScores UNSCORED = new ErrorScores(Double.NaN, Double.NaN, Double.NaN, 0);
 
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, ForecastModelDefinition> definitions;
@@ -40,6 +41,10 @@ final class DemandAssembler {
     private final Map<String, double[]> fleetFuture = new LinkedHashMap<>();
     private final Map<String, double[]> fleetHoldout = new LinkedHashMap<>();
     private final Map<String, double[]> preventive = new LinkedHashMap<>();
+    /** First history month index of each series: its real start, see {@link #seriesStart}. */
+    private final Map<String, Integer> firstMonth = new java.util.HashMap<>();
+    private final FleetCredibility credibility;
+    private Map<String, FleetCredibility.Weight> weights = Map.of();
 
     DemandAssembler(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
                     Map<ComponentFamily, FleetModel> models, Map<ComponentFamily, FleetModel> holdoutModels, int horizon) {
@@ -49,6 +54,7 @@ final class DemandAssembler {
         this.holdoutModels = holdoutModels;
         this.horizon = horizon;
         this.months = snapshot.months();
+        this.credibility = new FleetCredibility(snapshot, models);
         collect();
     }
 
@@ -80,14 +86,20 @@ final class DemandAssembler {
             }
             for (String location : locationsOf(c.depotId(), c.mechanic())) {
                 history.computeIfAbsent(key(c.partId(), location), k -> new double[months])[m] += c.quantity();
+                firstMonth.merge(key(c.partId(), location), m, Math::min);
             }
         }
         long origin = snapshot.historyEnd().toEpochDay();
         for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
             List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
             boolean activeNow = pump.endDay() > origin;
+            int installedMonth = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(pump.installedDay())));
+            credibility.addPump(pump, locations, part -> Long.toString(part.partId()));
             for (FleetSnapshot.BomPart part : pump.bom()) {
                 addFleet(pump, part, locations, activeNow, origin);
+                for (String location : locations) {
+                    firstMonth.merge(key(part.partId(), location), installedMonth, Math::min);
+                }
             }
             if (activeNow) {
                 addPreventive(pump, locations, origin);
@@ -106,16 +118,22 @@ final class DemandAssembler {
             return;
         }
         if (activeNow) {
+            // Cells: expected units in each horizon month, then the first month's variance.
             double hoursPerDay = pump.usage().hoursPerDayOn(origin);
-            double age = (origin - pump.installedDay()) / 365.25;
-            double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), Math.max(0, age), hoursPerDay);
-            double eventsPerMonth = model.ratePerHour(x) * hoursPerDay * DAYS_PER_MONTH * model.depotRatio(pump.depotId());
-            double variance = eventsPerMonth * model.unitsPerEvent() * model.unitsPerEvent()
-                    * (model.fit() == null ? 1 : model.fit().varianceFactor());
+            double[] units = new double[horizon + 1];
+            for (int m = 0; m < horizon; m++) {
+                // The pump ages over the horizon: its age at the middle of each forecast month.
+                double age = (origin - pump.installedDay()) / 365.25 + (m + 0.5) / 12;
+                double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), Math.max(0, age), hoursPerDay);
+                units[m] = model.ratePerHour(x) * hoursPerDay * DAYS_PER_MONTH * model.depotRatio(pump.depotId())
+                        * model.unitsPerEvent();
+            }
+            units[horizon] = units[0] * model.unitsPerEvent() * (model.fit() == null ? 1 : model.fit().varianceFactor());
             for (String location : locations) {
-                double[] cell = fleetFuture.computeIfAbsent(key(part.partId(), location), k -> new double[2]);
-                cell[0] += eventsPerMonth * model.unitsPerEvent();
-                cell[1] += variance;
+                double[] cell = fleetFuture.computeIfAbsent(key(part.partId(), location), k -> new double[horizon + 1]);
+                for (int m = 0; m <= horizon; m++) {
+                    cell[m] += units[m];
+                }
             }
         }
         if (holdout != null) {
@@ -162,8 +180,27 @@ final class DemandAssembler {
         }
     }
 
+    /**
+     * The month a series really starts: the first month a pump using the part was in service there, or its first
+     * demand, but never before the first repair on record (months before it are unrecorded, not zero).
+     */
+    int seriesStart(String key) {
+        int recordsStart = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(snapshot.recordsStartDay())));
+        int start = Math.max(recordsStart, firstMonth.getOrDefault(key, recordsStart));
+        return Math.max(0, Math.min(start, months - 1));
+    }
+
     /** Forecasts every series; {@code progress} is told after each one. */
     List<PartForecastResult> assemble(IntConsumer progress) {
+        List<String> weighed = fleetFuture.keySet().stream().filter(k -> policyOf(partOf(k)).equals("auto")).toList();
+        java.util.Set<String> kits = new java.util.HashSet<>(snapshot.kitByMechanic().values());
+        weights = credibility.weigh(weighed, history, this::seriesStart, k -> {
+            String location = k.substring(k.indexOf('|') + 1);
+            return location.equals(PROGRAMME) ? PROGRAMME : kits.contains(location) ? "kit" : "depot";
+        }, k -> {
+            FleetModel model = models.get(snapshot.partFamilies().get(partOf(k)));
+            return model.unitsPerEvent() * (model.fit() == null ? 1 : model.fit().varianceFactor());
+        });
         // Series are independent and the maps are read-only from here on: use every core.
         java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
         return history.entrySet().parallelStream().map(entry -> {
@@ -173,37 +210,58 @@ final class DemandAssembler {
         }).toList();
     }
 
-    private PartForecastResult forecastOne(String key, double[] series) {
+    private static long partOf(String key) {
+        return Long.parseLong(key.substring(0, key.indexOf('|')));
+    }
+
+    private String policyOf(long partId) {
+        ForecastModelDefinition definition = definitions.get(snapshot.partFamilies().get(partId));
+        return definition == null ? "auto" : definition.methodPolicy();
+    }
+
+    private PartForecastResult forecastOne(String key, double[] window) {
+        int start = seriesStart(key);
+        double[] series = Arrays.copyOfRange(window, start, months);
         int bar = key.indexOf('|');
         long partId = Long.parseLong(key.substring(0, bar));
         String location = key.substring(bar + 1);
-        ForecastModelDefinition definition = definitions.get(snapshot.partFamilies().get(partId));
-        String policy = definition == null ? "auto" : definition.methodPolicy();
+        String policy = policyOf(partId);
         ForecastMethod fixed = policy.equals("auto") || policy.equals("fleet") ? null
                 : ForecastMethod.valueOf(policy.toUpperCase(Locale.ROOT));
         SeriesForecast fromHistory = SeriesForecaster.forecast(series, fixed, Double.NaN, Double.NaN, horizon);
-        double[] training = Arrays.copyOf(series, months - HOLDOUT_MONTHS);
-        double[] actual = Arrays.copyOfRange(series, months - HOLDOUT_MONTHS, months);
-        double historyFlat = SeriesFitter.fitOptimised(training, fromHistory.method(), Double.NaN, Double.NaN).perPeriod();
-        double[] historyHoldout = new double[HOLDOUT_MONTHS];
-        Arrays.fill(historyHoldout, historyFlat);
-        ErrorScores historyScores = ErrorScores.of(training, historyHoldout, actual);
+        int n = series.length;
+        ErrorScores historyScores = UNSCORED, fleetScores = null;
         double[] fleetHold = fleetHoldout.get(key);
-        ErrorScores fleetScores = fleetHold == null ? null : ErrorScores.of(training, fleetHold, actual);
+        if (n >= HOLDOUT_MONTHS + 2) {
+            double[] training = Arrays.copyOf(series, n - HOLDOUT_MONTHS);
+            double[] actual = Arrays.copyOfRange(series, n - HOLDOUT_MONTHS, n);
+            double historyFlat = SeriesFitter.fitOptimised(training, fromHistory.method(), Double.NaN, Double.NaN).perPeriod();
+            double[] historyHoldout = new double[HOLDOUT_MONTHS];
+            Arrays.fill(historyHoldout, historyFlat);
+            historyScores = ErrorScores.of(training, historyHoldout, actual);
+            fleetScores = fleetHold == null ? null : ErrorScores.of(training, fleetHold, actual);
+        }
         double[] fleet = fleetFuture.get(key);
-        boolean useFleet = fleet != null && (policy.equals("fleet") || (policy.equals("auto")
-                && (fleetScores == null ? false : !(fleetScores.rmsse() >= historyScores.rmsse()))));
+        // Under "auto" a series with a fleet expectation takes the fleet rate updated by its own history
+        // (credibility), never a choice on one window; the holdout scores stay as diagnostics.
+        boolean useFleet = fleet != null && (policy.equals("fleet") || policy.equals("auto"));
+        FleetCredibility.Weight weight = policy.equals("auto")
+                ? weights.getOrDefault(key, FleetCredibility.Weight.FLEET_ONLY) : FleetCredibility.Weight.FLEET_ONLY;
         double[] pm = preventive.getOrDefault(key, new double[horizon]);
-        double breakdown = useFleet ? fleet[0] : fromHistory.forecast()[0];
-        double variance = useFleet ? Math.max(fleet[1], 0) : fromHistory.perPeriodVariance();
+        double breakdown = useFleet ? fleet[0] * weight.ratio() : fromHistory.forecast()[0];
+        // The rate's own uncertainty adds Var(ratio) × mean² to the demand's variance.
+        double variance = useFleet ? Math.max(fleet[horizon], 0) * weight.ratio() + weight.ratioVariance() * fleet[0] * fleet[0]
+                : fromHistory.perPeriodVariance();
         double[] monthly = new double[horizon];
         for (int m = 0; m < horizon; m++) {
-            monthly[m] = breakdown + pm[m];
+            monthly[m] = (useFleet ? fleet[m] * weight.ratio() : breakdown) + pm[m];
         }
         return new PartForecastResult(partId, location, useFleet ? FLEET : fromHistory.method().name(),
                 useFleet ? Double.NaN : fromHistory.alpha(), useFleet ? Double.NaN : fromHistory.beta(),
-                DemandProfile.of(series), breakdown, variance, pm, monthly, series,
-                useFleet ? fleetScores : historyScores, fleetScores == null ? Double.NaN : fleetScores.rmsse(),
-                historyScores.rmsse());
+                DemandProfile.of(series), breakdown, variance, pm, monthly, series, snapshot.historyStart().plusMonths(start),
+                useFleet && fleetScores != null ? fleetScores : historyScores,
+                fleetScores == null ? Double.NaN : fleetScores.rmsse(), historyScores.rmsse(),
+                useFleet ? weight.describe(snapshot.historyStart().plusMonths(start)) : fromHistory.method().name().toLowerCase(Locale.ROOT)
+                        + " on the part's own history");
     }
 }

@@ -24,7 +24,10 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-/** Reads the fleet, usage and repair history into a {@link FleetSnapshot}, in one read-only transaction. */
+/**
+ * Reads the fleet, usage and repair history into a {@link FleetSnapshot}, in one read-only transaction, as it stood
+ * at the forecast origin (see {@link #asOf}), so a forecast as of a past date can be checked against what followed.
+ */
 @ApplicationScoped
 public class FleetSnapshotLoader {
     private final PumpService pumps;
@@ -44,59 +47,49 @@ public class FleetSnapshotLoader {
         this.parts = parts;
     }
 
+    /** The register and records in plain values, before any cut at an origin. */
+    record Rows(List<Reading> readings, List<FleetSnapshot.Consumption> consumption, List<Pump> pumps,
+                Map<String, String> kitByMechanic, Map<Long, String> locationCodes, Map<Long, String> partNumbers,
+                Map<Long, ComponentFamily> partFamilies) {
+    }
+
+    record Reading(long pumpId, LocalDate readOn, double hoursPerDay) {
+    }
+
+    /** A pump as registered today; {@code decommissionedOn} null while in service. */
+    record Pump(long id, long depotId, String mechanic, double depthM, LocalDate installedOn,
+                LocalDate decommissionedOn, int serviceIntervalHours, double currentHoursPerDay,
+                List<FleetSnapshot.BomPart> bom) {
+    }
+
     @Transactional
     public FleetSnapshot load(LocalDate origin, int historyMonths) {
-        LocalDate historyEnd = origin.withDayOfMonth(1);
-        LocalDate historyStart = historyEnd.minusMonths(historyMonths);
-        Map<Long, List<long[]>> readingDays = new HashMap<>();
-        Map<Long, List<Double>> readingHours = new HashMap<>();
+        return asOf(origin, historyMonths, rows());
+    }
+
+    private Rows rows() {
+        List<Reading> readings = new ArrayList<>();
         for (Object[] row : usage.allReadings()) {
-            long pumpId = (Long) row[0];
-            readingDays.computeIfAbsent(pumpId, k -> new ArrayList<>()).add(new long[]{((LocalDate) row[1]).toEpochDay()});
-            readingHours.computeIfAbsent(pumpId, k -> new ArrayList<>()).add(((BigDecimal) row[2]).doubleValue());
+            readings.add(new Reading((Long) row[0], (LocalDate) row[1], ((BigDecimal) row[2]).doubleValue()));
         }
         List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
-        Map<Long, Long> lastService = new HashMap<>();
-        long firstRecord = Long.MAX_VALUE;
         for (Object[] row : repairs.consumptionRows()) {
-            LocalDate day = (LocalDate) row[5];
-            firstRecord = Math.min(firstRecord, day.toEpochDay());
-            boolean breakdown = row[4] == RepairKind.BREAKDOWN;
-            long pumpId = (Long) row[1];
-            consumption.add(new FleetSnapshot.Consumption((Long) row[0], pumpId, (Long) row[2], (String) row[3],
-                    breakdown, day, ((BigDecimal) row[6]).doubleValue()));
-            // Only services before the origin count: a back-check as of a past date must not see later ones.
-            if (!breakdown && day.isBefore(historyEnd)) {
-                lastService.merge(pumpId, day.toEpochDay(), Math::max);
-            }
+            consumption.add(new FleetSnapshot.Consumption((Long) row[0], (Long) row[1], (Long) row[2], (String) row[3],
+                    row[4] == RepairKind.BREAKDOWN, (LocalDate) row[5], ((BigDecimal) row[6]).doubleValue()));
         }
         Map<Long, PumpModel> modelsById = new HashMap<>();
         models.all().forEach(m -> modelsById.put(m.id, m));
-        List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
-        long recordsStart = firstRecord;
+        List<Pump> register = new ArrayList<>();
         for (Object[] row : pumps.planningRows()) {
-            long pumpId = (Long) row[0];
-            LocalDate installed = (LocalDate) row[4];
-            long end = row[5] == PumpStatus.DECOMMISSIONED && row[6] != null
-                    ? ((LocalDate) row[6]).toEpochDay() : Long.MAX_VALUE / 4;
-            if (end <= historyStart.toEpochDay()) {
-                continue;
-            }
-            List<long[]> days = readingDays.getOrDefault(pumpId, List.of());
-            List<Double> hours = readingHours.getOrDefault(pumpId, List.of());
-            UsageTimeline timeline = new UsageTimeline(days.stream().mapToLong(d -> d[0]).toArray(),
-                    hours.stream().mapToDouble(Double::doubleValue).toArray(), ((BigDecimal) row[8]).doubleValue());
             double depth = ((BigDecimal) row[3]).doubleValue();
             PumpModel model = modelsById.get((Long) row[7]);
             List<FleetSnapshot.BomPart> bom = new ArrayList<>(model.bom.size());
             for (BomLine line : model.bom) {
                 bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(depth)));
             }
-            records.add(new FleetSnapshot.PumpRecord(pumpId, (Long) row[1], (String) row[2], depth,
-                    installed.toEpochDay(), end, model.serviceIntervalHours, timeline, List.copyOf(bom),
-                    lastService.getOrDefault(pumpId, Math.max(installed.toEpochDay(), recordsStart == Long.MAX_VALUE
-                            ? installed.toEpochDay() : recordsStart)),
-                    lastService.containsKey(pumpId) || installed.toEpochDay() >= recordsStart));
+            register.add(new Pump((Long) row[0], (Long) row[1], (String) row[2], depth, (LocalDate) row[4],
+                    row[5] == PumpStatus.DECOMMISSIONED ? (LocalDate) row[6] : null, model.serviceIntervalHours,
+                    ((BigDecimal) row[8]).doubleValue(), List.copyOf(bom)));
         }
         Map<String, String> kits = new HashMap<>();
         Map<Long, String> codes = new HashMap<>();
@@ -112,7 +105,57 @@ public class FleetSnapshotLoader {
             partNumbers.put(p.id, p.partNumber);
             families.put(p.id, p.family);
         });
-        return new FleetSnapshot(historyStart, historyEnd, records, consumption, kits, codes, partNumbers, families,
+        return new Rows(readings, consumption, register, kits, codes, partNumbers, families);
+    }
+
+    /**
+     * Cuts the records at the origin (the first day of {@code origin}'s month): repairs and usage readings dated on or
+     * after it are left out, pumps installed on or after it do not exist yet, and a decommissioning after it is not
+     * yet known. A pump with no reading before the origin falls back to its registered daily load.
+     */
+    static FleetSnapshot asOf(LocalDate origin, int historyMonths, Rows rows) {
+        LocalDate historyEnd = origin.withDayOfMonth(1);
+        LocalDate historyStart = historyEnd.minusMonths(historyMonths);
+        Map<Long, List<Reading>> readingsByPump = new HashMap<>();
+        for (Reading r : rows.readings()) {
+            if (r.readOn().isBefore(historyEnd)) {
+                readingsByPump.computeIfAbsent(r.pumpId(), k -> new ArrayList<>()).add(r);
+            }
+        }
+        List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
+        Map<Long, Long> lastService = new HashMap<>();
+        long firstRecord = Long.MAX_VALUE;
+        for (FleetSnapshot.Consumption c : rows.consumption()) {
+            if (!c.day().isBefore(historyEnd)) {
+                continue;
+            }
+            consumption.add(c);
+            firstRecord = Math.min(firstRecord, c.day().toEpochDay());
+            if (!c.breakdown()) {
+                lastService.merge(c.pumpId(), c.day().toEpochDay(), Math::max);
+            }
+        }
+        long recordsStart = firstRecord;
+        List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
+        for (Pump pump : rows.pumps()) {
+            boolean endKnown = pump.decommissionedOn() != null && pump.decommissionedOn().isBefore(historyEnd);
+            long end = endKnown ? pump.decommissionedOn().toEpochDay() : Long.MAX_VALUE / 4;
+            long installed = pump.installedOn().toEpochDay();
+            if (end <= historyStart.toEpochDay() || !pump.installedOn().isBefore(historyEnd)) {
+                continue;
+            }
+            List<Reading> readings = readingsByPump.getOrDefault(pump.id(), List.of());
+            readings.sort(java.util.Comparator.comparing(Reading::readOn));
+            UsageTimeline timeline = new UsageTimeline(readings.stream().mapToLong(r -> r.readOn().toEpochDay()).toArray(),
+                    readings.stream().mapToDouble(Reading::hoursPerDay).toArray(), pump.currentHoursPerDay());
+            records.add(new FleetSnapshot.PumpRecord(pump.id(), pump.depotId(), pump.mechanic(), pump.depthM(),
+                    installed, end, pump.serviceIntervalHours(), timeline, pump.bom(),
+                    lastService.getOrDefault(pump.id(), Math.max(installed, recordsStart == Long.MAX_VALUE
+                            ? installed : recordsStart)),
+                    lastService.containsKey(pump.id()) || installed >= recordsStart));
+        }
+        return new FleetSnapshot(historyStart, historyEnd, records, consumption, rows.kitByMechanic(),
+                rows.locationCodes(), rows.partNumbers(), rows.partFamilies(),
                 recordsStart == Long.MAX_VALUE ? historyStart.toEpochDay() : recordsStart);
     }
 }

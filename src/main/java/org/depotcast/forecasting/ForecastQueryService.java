@@ -167,14 +167,16 @@ public class ForecastQueryService {
         LocalDate origin = run.historyTo.plusDays(1);
         List<StoredForecastResponse.Month> months = new ArrayList<>();
         for (int m = 0; m < monthly.length; m++) {
-            months.add(new StoredForecastResponse.Month(origin.plusMonths(m), monthly[m], f.breakdownPerMonth, preventive[m]));
+            months.add(new StoredForecastResponse.Month(origin.plusMonths(m), monthly[m], monthly[m] - preventive[m], preventive[m]));
         }
         List<StoredForecastResponse.HistoryMonth> past = new ArrayList<>();
+        LocalDate historyFrom = f.historyFrom != null ? f.historyFrom : run.historyFrom;
         for (int m = 0; m < history.length; m++) {
-            past.add(new StoredForecastResponse.HistoryMonth(run.historyFrom.plusMonths(m), history[m]));
+            past.add(new StoredForecastResponse.HistoryMonth(historyFrom.plusMonths(m), history[m]));
         }
         return new StoredForecastResponse(partNumber, f.locationCode, run.id, run.finishedAt, f.method, f.alpha, f.beta,
                 f.adi, f.cv2, f.demandClass, f.mase, f.rmsse, f.scaledBias, f.fleetRmsse, f.historyRmsse,
+                historyFrom, history.length, f.methodDetail,
                 f.breakdownPerMonth, f.variancePerMonth, months, past);
     }
 }

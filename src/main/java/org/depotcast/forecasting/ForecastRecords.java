@@ -76,6 +76,8 @@ final class ForecastRecords {
         f.monthlyForecast = join(r.monthly());
         f.preventiveMonthly = join(r.preventive());
         f.monthlyHistory = join(r.history());
+        f.historyFrom = r.historyFrom();
+        f.methodDetail = r.methodDetail();
         return f;
     }
 }

@@ -8,10 +8,12 @@ import java.util.Optional;
 
 @ApplicationScoped
 class ForecastRepository implements PanacheRepository<PartForecast> {
+    /** The run planning uses: the newest finished one, leaving out runs as of a past date (checks of accuracy). */
     Optional<ForecastRun> latestFinishedRun() {
         return getEntityManager().createQuery(
-                        "select r from ForecastRun r where r.status = :done order by r.id desc", ForecastRun.class)
-                .setParameter("done", ForecastRun.Status.DONE).setMaxResults(1).getResultStream().findFirst();
+                        "select r from ForecastRun r where r.status = :done and r.triggerKind <> :asOf order by r.id desc",
+                        ForecastRun.class)
+                .setParameter("done", ForecastRun.Status.DONE).setParameter("asOf", ForecastRunService.AS_OF_TRIGGER).setMaxResults(1).getResultStream().findFirst();
     }
 
     List<ForecastRun> recentRuns(ForecastRun.Status status, int limit) {

@@ -56,12 +56,15 @@ class ForecastResource {
         return stateless.rateFit(request);
     }
 
-    /** Starts a recomputation of every stored forecast; 202 with the run to poll for progress. */
+    /**
+     * Starts a recomputation of every stored forecast; 202 with the run to poll for progress. {@code origin}
+     * (yyyy-mm-dd, default the first of this month) forecasts as of a past date from the records before it only.
+     */
     @POST
     @Path("runs")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
-    public Response startRun(UriInfo uri) {
-        long id = runs.start("request");
+    public Response startRun(UriInfo uri, @QueryParam("origin") String origin) {
+        long id = runs.start("request", QueryParams.optionalDate("origin", origin));
         return Response.accepted(RunResponse.from(runs.run(id)))
                 .location(uri.getAbsolutePathBuilder().path(Long.toString(id)).build()).build();
     }

@@ -28,6 +28,8 @@ public class ForecastRun {
     public OffsetDateTime startedAt;
     @Column(name = "finished_at")
     public OffsetDateTime finishedAt;
+    /** First day of the forecast's first month: nothing dated on or after it was used. */
+    public LocalDate origin;
     @Column(name = "history_from")
     public LocalDate historyFrom;
     @Column(name = "history_to")

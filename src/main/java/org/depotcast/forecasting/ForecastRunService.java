@@ -26,6 +26,8 @@ import java.util.stream.Collectors;
  */
 @ApplicationScoped
 public class ForecastRunService {
+    /** Trigger of a run as of a past origin: kept for checking accuracy, never the run planning uses. */
+    public static final String AS_OF_TRIGGER = "as-of";
     private static final int PROGRESS_EVERY = 500;
 
     private final ForecastModelFiles modelFiles;
@@ -61,22 +63,37 @@ public class ForecastRunService {
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
         if (running.compareAndSet(false, true)) {
-            system.run("forecast-schedule", () -> execute(createRun("schedule"), LocalDate.now(ZoneOffset.UTC)));
+            LocalDate origin = currentOrigin();
+            system.run("forecast-schedule", () -> execute(createRun("schedule", origin), origin));
         }
     }
 
     /**
      * Starts a run in the background and returns its id at once; 409 while another run is going. A run recomputes
      * the whole programme, so it is for the lead, admins and officers of the central store (403 otherwise).
+     *
+     * @param origin the forecast origin (its month's first day is used); null for the first day of the current month.
+     *               A past origin makes an {@link #AS_OF_TRIGGER} run that uses nothing dated on or after it and that
+     *               planning never reads; a future one is refused (400, field {@code origin}).
      */
-    public long start(String trigger) {
+    public long start(String trigger, LocalDate origin) {
         scope.requireProgramme();
+        LocalDate current = currentOrigin();
+        LocalDate from = origin == null ? current : origin.withDayOfMonth(1);
+        if (from.isAfter(current)) {
+            throw new org.depotcast.common.InvalidInputException("origin",
+                    "must not be after the current month's first day " + current + ", was " + origin);
+        }
         if (!running.compareAndSet(false, true)) {
             throw new ConflictException(null, "a forecast run is already in progress");
         }
-        long runId = createRun(trigger);
-        executor.runAsync(() -> system.run("forecast-run", () -> execute(runId, LocalDate.now(ZoneOffset.UTC))));
+        long runId = createRun(from.isBefore(current) ? AS_OF_TRIGGER : trigger, from);
+        executor.runAsync(() -> system.run("forecast-run", () -> execute(runId, from)));
         return runId;
+    }
+
+    private static LocalDate currentOrigin() {
+        return LocalDate.now(ZoneOffset.UTC).withDayOfMonth(1);
     }
 
     /** Runs to the end in the caller's thread, with the forecast origin at the start of {@code today}'s month. */
@@ -84,7 +101,7 @@ public class ForecastRunService {
         if (!running.compareAndSet(false, true)) {
             throw new ConflictException(null, "a forecast run is already in progress");
         }
-        long runId = createRun(trigger);
+        long runId = createRun(trigger, today.withDayOfMonth(1));
         system.run("forecast-run", () -> execute(runId, today));
         return QuarkusTransaction.requiringNew().call(() -> repository.run(runId).orElseThrow());
     }
@@ -103,10 +120,11 @@ public class ForecastRunService {
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "forecast run", id)));
     }
 
-    private long createRun(String trigger) {
+    private long createRun(String trigger, LocalDate origin) {
         return QuarkusTransaction.requiringNew().call(() -> {
             ForecastRun run = new ForecastRun();
             run.triggerKind = trigger;
+            run.origin = origin;
             run.status = ForecastRun.Status.RUNNING;
             run.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
             run.horizonMonths = horizonMonths;

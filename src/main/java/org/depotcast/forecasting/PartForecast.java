@@ -46,6 +46,12 @@ public class PartForecast {
     public String monthlyForecast;
     @Column(name = "preventive_monthly", nullable = false)
     public String preventiveMonthly;
+    /** First month of {@link #monthlyHistory}: the series' real start within the run's window. */
+    @Column(name = "history_from")
+    public java.time.LocalDate historyFrom;
+    /** How the breakdown rate was reached, in words (e.g. the credibility weight given to the part's own history). */
+    @Column(name = "method_detail")
+    public String methodDetail;
     @Column(name = "monthly_history", nullable = false)
     public String monthlyHistory;
 }

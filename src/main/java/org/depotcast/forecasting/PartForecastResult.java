@@ -7,17 +7,20 @@ import org.depotcast.core.forecast.ErrorScores;
  * The forecast of one part at one location (a depot, a kit, or the whole programme).
  *
  * @param method            FLEET (fleet model) or the series method used on the history
- * @param breakdownPerMonth expected breakdown demand per month, units
+ * @param breakdownPerMonth expected breakdown demand in the first month, units (later months in {@code monthly}, as
+ *                          pumps age)
  * @param variancePerMonth  variance of one month's breakdown demand, units²
  * @param preventive        scheduled-service demand for each horizon month
  * @param monthly           breakdown + preventive for each horizon month
- * @param history           breakdown consumption per history month
+ * @param history           breakdown consumption per history month, from the series' real start
+ * @param historyFrom       first month of {@code history}
  * @param chosenScores      holdout scores (last 12 months) of the method used
  * @param fleetRmsse        holdout RMSSE of the fleet model (NaN where not available)
  * @param historyRmsse      holdout RMSSE of the best history method
+ * @param methodDetail      how the breakdown rate was reached, in words
  */
 record PartForecastResult(long partId, String locationCode, String method, double alpha, double beta,
                           DemandProfile profile, double breakdownPerMonth, double variancePerMonth, double[] preventive,
-                          double[] monthly, double[] history, ErrorScores chosenScores, double fleetRmsse,
-                          double historyRmsse) {
+                          double[] monthly, double[] history, java.time.LocalDate historyFrom, ErrorScores chosenScores, double fleetRmsse,
+                          double historyRmsse, String methodDetail) {
 }

@@ -114,4 +114,13 @@ class ForecastResourceTest {
         as("mechanic1").post("/api/forecast/runs").then().statusCode(403).contentType(PROBLEM);
         as("officer").get("/api/forecast/runs/999999").then().statusCode(404).contentType(PROBLEM);
     }
+
+    @Test
+    void aRunOriginMustBeADateNotInTheFuture() {
+        as("lead").queryParam("origin", java.time.LocalDate.now(java.time.ZoneOffset.UTC).plusMonths(1).toString())
+                .post("/api/forecast/runs").then().statusCode(400).contentType(PROBLEM)
+                .body("type", org.hamcrest.Matchers.endsWith("/invalid-input")).body("errors[0].field", equalTo("origin"));
+        as("lead").queryParam("origin", "last-year").post("/api/forecast/runs").then().statusCode(400)
+                .contentType(PROBLEM).body("errors[0].field", equalTo("origin"));
+    }
 }

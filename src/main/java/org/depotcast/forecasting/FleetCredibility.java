@@ -1,0 +1,135 @@
+package org.depotcast.forecasting;
+
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.CredibilityRate;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.function.Function;
+
+/**
+ * What the fleet model expected of each series over its own history, month by month, and the credibility its
+ * observed history earns against that ({@link CredibilityRate}): the fleet rate is the prior, the part's history at
+ * the location updates it. Series are weighed in groups of one level (the programme, depots, kits), which share the
+ * estimate of how far true rates stray from the fleet model's.
+ */
+final class FleetCredibility {
+    private static final double DAYS_PER_YEAR = 365.25;
+
+    /**
+     * @param ratio         posterior mean of true rate / fleet rate
+     * @param credibility   weight Z given to the series' own history
+     * @param ratioVariance posterior variance of the ratio (the rate's own uncertainty)
+     */
+    record Weight(double ratio, double credibility, double ratioVariance, double observed, double expected) {
+        static final Weight FLEET_ONLY = new Weight(1, 0, 0, Double.NaN, Double.NaN);
+
+        String describe(LocalDate from) {
+            if (Double.isNaN(expected)) {
+                return "fleet model";
+            }
+            return String.format(Locale.ROOT, "fleet model x %.3f: credibility %.3f for %.1f units seen against %.1f "
+                    + "expected since %s", ratio, credibility, observed, expected, from);
+        }
+    }
+
+    private final FleetSnapshot snapshot;
+    private final Map<ComponentFamily, FleetModel> models;
+    private final long[] monthStart;
+    private final Map<String, double[]> expected = new HashMap<>();
+
+    FleetCredibility(FleetSnapshot snapshot, Map<ComponentFamily, FleetModel> models) {
+        this.snapshot = snapshot;
+        this.models = models;
+        int months = snapshot.months();
+        monthStart = new long[months + 1];
+        for (int m = 0; m <= months; m++) {
+            monthStart[m] = snapshot.historyStart().plusMonths(m).toEpochDay();
+        }
+    }
+
+    /** Adds one pump's fleet-expected breakdown units per history month to each of its series. */
+    void addPump(FleetSnapshot.PumpRecord pump, List<String> locations, Function<FleetSnapshot.BomPart, String> keyPart) {
+        Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
+        int months = monthStart.length - 1;
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            FleetModel model = models.get(part.family());
+            if (model == null) {
+                continue;
+            }
+            double[] perMonth = byFamily.computeIfAbsent(part.family(), f -> {
+                double[] units = new double[months];
+                for (int m = 0; m < months; m++) {
+                    // As the fit: no exposure before the first repair on record.
+                    long from = Math.max(Math.max(monthStart[m], pump.installedDay()), snapshot.recordsStartDay());
+                    long to = Math.min(monthStart[m + 1], pump.endDay());
+                    if (to <= from) {
+                        continue;
+                    }
+                    double hours = pump.usage().hoursBetween(from, to);
+                    double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
+                    double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), age, hours / (to - from));
+                    units[m] = model.ratePerHour(x) * hours * model.unitsPerEvent() * model.depotRatio(pump.depotId());
+                }
+                return units;
+            });
+            for (String location : locations) {
+                double[] cell = expected.computeIfAbsent(keyPart.apply(part) + "|" + location, k -> new double[months]);
+                for (int m = 0; m < months; m++) {
+                    cell[m] += perMonth[m];
+                }
+            }
+        }
+    }
+
+    /**
+     * Weighs the given series: observed units from each series' start against the fleet's expectation over the same
+     * months, grouped by {@code level}; {@code dispersion} gives φ of a series (units per event × the fit's variance
+     * factor).
+     */
+    Map<String, Weight> weigh(List<String> keys, Map<String, double[]> history, Function<String, Integer> start,
+                              Function<String, String> level, Function<String, Double> dispersion) {
+        Map<String, List<String>> groups = new HashMap<>();
+        Map<String, double[]> sums = new HashMap<>();
+        for (String key : keys) {
+            double[] e = expected.get(key), o = history.get(key);
+            if (e == null || o == null) {
+                continue;
+            }
+            double sumE = 0, sumO = 0;
+            for (int m = start.apply(key); m < e.length; m++) {
+                sumE += e[m];
+                sumO += o[m];
+            }
+            if (sumE > 0) {
+                sums.put(key, new double[]{sumO, sumE, dispersion.apply(key)});
+                groups.computeIfAbsent(level.apply(key), g -> new ArrayList<>()).add(key);
+            }
+        }
+        Map<String, Weight> weights = new HashMap<>();
+        for (List<String> group : groups.values()) {
+            int n = group.size();
+            double[] o = new double[n], e = new double[n], phi = new double[n];
+            for (int i = 0; i < n; i++) {
+                double[] s = sums.get(group.get(i));
+                o[i] = s[0];
+                e[i] = s[1];
+                phi[i] = s[2];
+            }
+            CredibilityRate.Result r = CredibilityRate.combine(o, e, phi);
+            double inverse = r.priorVariance() == 0 ? Double.POSITIVE_INFINITY : 1 / r.priorVariance();
+            for (int i = 0; i < n; i++) {
+                // Gamma posterior of the ratio: shape 1/τ² + O/φ, rate 1/τ² + E/φ.
+                double shape = inverse + o[i] / phi[i], rate = inverse + e[i] / phi[i];
+                double variance = Double.isInfinite(inverse) ? 0 : shape / (rate * rate);
+                weights.put(group.get(i), new Weight(r.ratio()[i], r.credibility()[i], variance, o[i], e[i]));
+            }
+        }
+        return weights;
+    }
+}
