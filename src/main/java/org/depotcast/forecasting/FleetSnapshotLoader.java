@@ -144,7 +144,7 @@ public class FleetSnapshotLoader {
             if (end <= historyStart.toEpochDay() || !pump.installedOn().isBefore(historyEnd)) {
                 continue;
             }
-            List<Reading> readings = readingsByPump.getOrDefault(pump.id(), List.of());
+            List<Reading> readings = new ArrayList<>(readingsByPump.getOrDefault(pump.id(), List.of()));
             readings.sort(java.util.Comparator.comparing(Reading::readOn));
             UsageTimeline timeline = new UsageTimeline(readings.stream().mapToLong(r -> r.readOn().toEpochDay()).toArray(),
                     readings.stream().mapToDouble(Reading::hoursPerDay).toArray(), pump.currentHoursPerDay());

@@ -45,7 +45,8 @@ class ForecastOriginTest {
     private static List<FleetSnapshotLoader.Pump> basePumps() {
         return List.of(pump(1, TESHVALE, "m1", LocalDate.of(2010, 3, 1), null),
                 pump(2, TESHVALE, "m1", LocalDate.of(2012, 5, 1), null),
-                pump(3, MARROWFORD, "m2", LocalDate.of(2024, 7, 10), null));
+                pump(3, MARROWFORD, "m2", LocalDate.of(2024, 7, 10), null),
+                pump(5, TESHVALE, "m1", LocalDate.of(2018, 2, 1), null));
     }
 
     private static List<FleetSnapshotLoader.Reading> baseReadings() {
@@ -108,7 +109,9 @@ class ForecastOriginTest {
         FleetSnapshot leaky = FleetSnapshotLoader.asOf(ORIGIN, 72, rows(pumps, readings, consumption));
 
         assertEquals(ORIGIN, leaky.historyEnd());
-        assertEquals(3, leaky.pumps().size(), "a pump installed on the origin does not exist yet");
+        assertEquals(4, leaky.pumps().size(), "a pump installed on the origin does not exist yet");
+        FleetSnapshot.PumpRecord unread = leaky.pumps().stream().filter(p -> p.id() == 5).findFirst().orElseThrow();
+        assertEquals(5.0, unread.usage().hoursPerDayOn(ORIGIN.toEpochDay()), 1e-12, "no reading: the registered load");
         assertTrue(leaky.consumption().stream().allMatch(c -> c.day().isBefore(ORIGIN)));
         FleetSnapshot.PumpRecord second = leaky.pumps().stream().filter(p -> p.id() == 2).findFirst().orElseThrow();
         assertTrue(second.endDay() > ORIGIN.plusYears(50).toEpochDay(), "a later decommissioning is not yet known");
