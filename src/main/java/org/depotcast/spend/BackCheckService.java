@@ -67,6 +67,8 @@ public class BackCheckService {
         Map<Long, String> codes = new HashMap<>();
         locations.all().forEach(l -> codes.put(l.id, l.code));
         List<YearCheck> checks = new ArrayList<>();
+        // A snapshot as of a year's start holds nothing dated after it: what was used comes from today's records.
+        List<FleetSnapshot.Consumption> used = fleet.load(LocalDate.now(ZoneOffset.UTC), 36).consumption();
         for (FinancialYears.Period period : financialYears.current().completedBefore(LocalDate.now(ZoneOffset.UTC), years)) {
             LocalDate origin = period.startsOn();
             int year = origin.getYear();
@@ -86,7 +88,7 @@ public class BackCheckService {
                     Math.max(1, builder.depotCodes.size()), builder.groupLogSd, builder.groupDispersion, DRAWS, year);
             SpendSimulation.Summary s = SpendSimulation.Summary.of(draws.total(0));
             double actualBreakdowns = 0, actualServices = 0;
-            for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+            for (FleetSnapshot.Consumption c : used) {
                 if (!c.day().isBefore(period.startsOn()) && !c.day().isAfter(period.endsOn())) {
                     double spent = c.quantity() * partsById.get(c.partId()).unitCost.doubleValue();
                     if (c.breakdown()) {
