@@ -31,15 +31,20 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         return given().auth().preemptive().basic(account, account + "-demo").accept("application/json");
     }
 
-    /** The board's numbers come from a finished forecast run; start one through the API when there is none. */
     @BeforeEach
     void forecastRun() throws InterruptedException {
-        if (!as("lead").get(url("/api/forecast/runs?status=DONE&limit=1")).jsonPath().getList("$").isEmpty()) {
+        forecastRunThroughTheApi(url(""));
+    }
+
+    /** The board's numbers come from a finished forecast run; starts one through the API when there is none. */
+    static void forecastRunThroughTheApi(String server) throws InterruptedException {
+        RequestSpecification lead = given().auth().preemptive().basic("lead", "lead-demo").accept("application/json");
+        if (!lead.get(server + "/api/forecast/runs?status=DONE&limit=1").jsonPath().getList("$").isEmpty()) {
             return;
         }
-        long id = as("lead").post(url("/api/forecast/runs")).then().statusCode(202).extract().jsonPath().getLong("id");
+        long id = lead.post(server + "/api/forecast/runs").then().statusCode(202).extract().jsonPath().getLong("id");
         for (int i = 0; i < 240; i++) {
-            String status = as("lead").get(url("/api/forecast/runs/" + id)).jsonPath().getString("status");
+            String status = lead.get(server + "/api/forecast/runs/" + id).jsonPath().getString("status");
             if (!"RUNNING".equals(status)) {
                 assertEquals("DONE", status);
                 return;

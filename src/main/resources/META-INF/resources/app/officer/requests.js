@@ -41,7 +41,9 @@ async function load() {
                 empty: 'None yet.', columns: [
                     {label: 'Request', value: r => String(r.id)}, {label: 'Mechanic', value: r => r.mechanic},
                     {label: 'Raised', value: r => fmt.dateTime(r.raisedAt)}, {label: 'State', value: r => statusOf(r.status)},
-                    {label: 'Parts', value: r => r.lines.map(l => `${l.substitute || l.partNumber} × ${fmt.qty(l.issued ?? l.approved ?? l.requested, unit(l.partNumber))}`).join('; ')}]})),
+                    {label: 'Parts', value: r => r.lines.map(l => Number(l.issued) > 0
+                        ? `${l.substitute || l.partNumber}: ${fmt.qty(l.issued, unit(l.partNumber))} issued`
+                        : `${l.partNumber}: ${fmt.qty(l.requested, unit(l.partNumber))} asked`).join('; ')}]})),
         caution());
     ready();
 }

@@ -18,8 +18,10 @@ async function load() {
         ready();
         return;
     }
+    // Suggestions need forecasts: before the first run there are none to ask for.
+    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', limit: 1});
     const [suggestions, inbound, outbound] = await Promise.all([
-        api.get('/api/planning/transfers/suggestions').catch(e => e.status === 409 ? null : Promise.reject(e)),
+        run ? api.get('/api/planning/transfers/suggestions') : null,
         api.get('/api/planning/transfers', {to: store.code, state: 'IN_TRANSIT'}),
         api.get('/api/planning/transfers', {from: store.code})]);
     const mine = (suggestions || []).filter(s => s.from === store.code || s.to === store.code);
