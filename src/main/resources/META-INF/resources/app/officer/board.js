@@ -7,7 +7,7 @@ import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
 import {provenance} from '/app/js/provenance.js';
 import {h, mount, table, state, say, busy, figures, caution} from '/app/js/ui.js';
-import {startOfficer, kindWords, describe, ready, purchasePlan, orderQuantity, storeName} from './officer.js';
+import {startOfficer, kindWords, describe, ready, orderQuantity, storeName} from './officer.js';
 
 const {me, store, stores, parts} = await startOfficer({page: 'board', title: 'Morning board'});
 const main = document.getElementById('content');
@@ -148,7 +148,7 @@ function detailsOf(alert, policy, suggestions) {
         suggestions.length ? h('h4', {}, 'Suggested transfers') : null,
         suggestions.map(s => transferOffer(s, u)),
         snoozeForm(alert),
-        planForm(alert, policy)
+        planForm(alert)
     ];
 }
 
@@ -185,20 +185,22 @@ function snoozeForm(alert) {
     return h('div', {}, h('h4', {}, 'Snooze'), form);
 }
 
-function planForm(alert, policy) {
+function planForm(alert) {
     const part = parts.get(alert.partNumber);
     const id = `plan-${alert.partNumber}`;
     const suggested = orderQuantity(part, alert.position, alert.orderUpTo);
-    const input = h('input', {type: 'number', id, name: 'quantity', min: 1, value: suggested});
+    const input = h('input', {type: 'number', id, name: 'quantity', min: 0, step: fmt.wholeUnits(part && part.unitOfIssue) ? 1 : 'any', value: suggested});
     const go = h('button', {type: 'submit'}, 'Put into the purchase plan');
     const form = h('form', {class: 'row'}, h('div', {class: 'inline-field'},
         h('label', {for: id}, 'Quantity to buy', h('span', {class: 'hint'}, `up to the order-up-to level in packs of ${part ? part.packSize : 1}`)), input), go);
     form.addEventListener('submit', e => {
         e.preventDefault();
-        purchasePlan.add({partNumber: alert.partNumber, destination: alert.locationCode, quantity: Number(input.value),
-            supplier: policy ? policy.supplier : part && part.supplier, addedAt: new Date().toISOString()});
-        say(`${alert.partNumber} is in the purchase plan for ${alert.locationCode}.`, 'ok',
-            h('a', {href: `/app/officer/purchases.html?location=${encodeURIComponent(alert.locationCode)}`}, ' Open the purchase plan'));
+        busy(go, async () => {
+            await api.put(`/api/planning/planned-purchases/${encodeURIComponent(alert.locationCode)}/${encodeURIComponent(alert.partNumber)}`,
+                {quantity: Number(input.value), note: `${kindWords(alert.kind)[0]}: ${alert.detail}`.slice(0, 300)});
+            say(`${alert.partNumber} is in the purchase plan of ${alert.locationCode}.`, 'ok',
+                h('a', {href: `/app/officer/purchases.html?location=${encodeURIComponent(alert.locationCode)}`}, ' Open the purchase plan'));
+        }, form);
     });
     return h('div', {}, h('h4', {}, 'Buy'), form);
 }

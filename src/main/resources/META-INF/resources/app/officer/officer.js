@@ -7,14 +7,12 @@
  *   ready()        marks the page as showing its data (body[data-ready], performance mark)
  *   kindWords(k)   an alert reason in words, with the tone that only repeats it
  *   parseCsv(text) rows of cells, for the CSV the API exports
- *   purchasePlan   the parts this browser has put aside to order: list(), add(line), remove(partNumber), clear()
  */
 import * as api from '/app/js/api.js';
 import {startPage} from '/app/js/nav.js';
 import {h, mount} from '/app/js/ui.js';
 
 const STORE_KEY = 'depotcast.officer.store';
-const PLAN_KEY = 'depotcast.officer.purchase-plan';
 
 export const TASKS = [
     {page: 'board', href: '/app/officer/', label: 'Morning board'},
@@ -142,34 +140,6 @@ export function csvCell(value) {
     const text = value === null || value === undefined ? '' : String(value);
     return /[",\r\n]/.test(text) ? `"${text.replaceAll('"', '""')}"` : text;
 }
-
-function readPlan() {
-    try {
-        const lines = JSON.parse(localStorage.getItem(PLAN_KEY) || '[]');
-        return Array.isArray(lines) ? lines : [];
-    } catch (e) {
-        return [];
-    }
-}
-
-/** Parts put aside in this browser to order; the Purchases page turns them into a purchase order. */
-export const purchasePlan = {
-    list: readPlan,
-    add(line) {
-        const lines = readPlan().filter(l => !(l.partNumber === line.partNumber && l.destination === line.destination));
-        lines.push(line);
-        localStorage.setItem(PLAN_KEY, JSON.stringify(lines));
-        return lines;
-    },
-    remove(partNumber, destination) {
-        const lines = readPlan().filter(l => !(l.partNumber === partNumber && l.destination === destination));
-        localStorage.setItem(PLAN_KEY, JSON.stringify(lines));
-        return lines;
-    },
-    clear(destination) {
-        localStorage.setItem(PLAN_KEY, JSON.stringify(readPlan().filter(l => l.destination !== destination)));
-    }
-};
 
 /** Whole packs of at least the minimum order that lift the position to the order-up-to level. */
 export function orderQuantity(part, position, orderUpTo) {

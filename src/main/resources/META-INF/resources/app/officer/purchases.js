@@ -1,12 +1,12 @@
 /*
- * Purchases: the purchase plan (parts put aside from the board in this browser) turned into purchase orders, one
- * per supplier; and the open purchase orders for this store, received in full or line by line in part. Each
+ * Purchases: the store's purchase plan (parts put into it from the board, shared by the store's officers) turned
+ * into purchase orders, one per supplier; and the open purchase orders for this store, received in full or line by line in part. Each
  * receipt carries a key made here, so a second press never books the goods twice.
  */
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
-import {h, mount, table, state, say, busy, caution} from '/app/js/ui.js';
-import {startOfficer, describe, ready, purchasePlan} from './officer.js';
+import {h, mount, table, state, say, busy, caution, showError} from '/app/js/ui.js';
+import {startOfficer, describe, ready} from './officer.js';
 
 const {store, parts} = await startOfficer({page: 'purchases', title: 'Purchases'});
 const main = document.getElementById('content');
@@ -17,13 +17,14 @@ async function load() {
         ready();
         return;
     }
-    const orders = (await api.get('/api/purchase-orders', {status: 'OPEN'})).filter(o => o.destination === store.code);
-    const plan = purchasePlan.list().filter(l => l.destination === store.code);
+    const [allOrders, plan] = await Promise.all([api.get('/api/purchase-orders', {status: 'OPEN'}),
+        api.get('/api/planning/planned-purchases', {location: store.code})]);
+    const orders = allOrders.filter(o => o.destination === store.code);
     const bySupplier = new Map();
-    plan.forEach(l => bySupplier.set(l.supplier || 'Supplier not set', [...(bySupplier.get(l.supplier || 'Supplier not set') || []), l]));
+    plan.forEach(l => bySupplier.set(l.supplier, [...(bySupplier.get(l.supplier) || []), l]));
     mount(main,
         h('section', {'aria-labelledby': 'plan-title'}, h('h2', {id: 'plan-title'}, `Purchase plan for ${store.code} (${plan.length} parts)`),
-            h('p', {class: 'hint'}, 'Parts put into the plan from the morning board, kept in this browser until they are ordered.'),
+            h('p', {class: 'hint'}, 'Parts put into the plan from the morning board, by anyone who looks after this store, until they are ordered.'),
             plan.length ? h('div', {class: 'task-list'}, [...bySupplier].map(([supplier, lines]) => orderForm(supplier, lines)))
                 : h('p', {class: 'empty'}, 'The plan is empty. Use "Put into the purchase plan" on an alert of the morning board.')),
         h('section', {'aria-labelledby': 'receive-title'}, h('h2', {id: 'receive-title'}, `Purchase orders to receive (${orders.length})`),
@@ -35,37 +36,51 @@ async function load() {
 
 function orderForm(supplier, lines) {
     const slug = supplier.replace(/[^A-Za-z0-9]+/g, '-');
-    const leadDays = Math.max(0, ...lines.map(l => (parts.get(l.partNumber) || {}).leadTimeDays || 0));
+    const leadDays = Math.max(0, ...lines.map(l => l.leadTimeDays));
+    const plannedAt = `/api/planning/planned-purchases/${encodeURIComponent(store.code)}`;
     const number = h('input', {type: 'text', id: `po-${slug}`, name: 'orderNumber', maxlength: 40, required: true,
         value: `PO-${store.code}-${fmt.isoDay().replaceAll('-', '')}-${slug.slice(0, 6).toUpperCase()}`});
     const expected = h('input', {type: 'date', id: `due-${slug}`, name: 'expectedOn', value: fmt.isoDay(leadDays)});
-    const quantities = lines.map((l, i) => h('input', {type: 'number', id: `pq-${slug}-${i}`, name: `lines[${i}].quantity`, min: 1,
-        step: 'any', value: l.quantity, class: 'count-input'}));
+    const total = h('strong', {});
+    const quantities = lines.map((l, i) => h('input', {type: 'number', id: `pq-${slug}-${i}`, name: 'quantity', min: 0,
+        step: fmt.wholeUnits(unit(l.partNumber)) ? 1 : 'any', value: Number(l.quantity), class: 'count-input'}));
+    const sum = () => mount(total, fmt.money(lines.reduce((t, l, i) => t + Number(quantities[i].value || 0) * Number(l.unitCost), 0), lines[0].currency));
+    const form = h('form', {class: 'task', 'data-supplier': supplier});
+    const saving = [];
+    quantities.forEach((input, i) => input.addEventListener('change', () => {
+        sum();
+        // Each change is saved at once, so the plan others see is the one on this screen.
+        saving.push(api.put(`${plannedAt}/${encodeURIComponent(lines[i].partNumber)}`, {quantity: Number(input.value), note: lines[i].note})
+            .then(() => say(`${lines[i].partNumber}: ${fmt.qty(input.value, unit(lines[i].partNumber))} in the plan.`))
+            .catch(e => showError(e, form)));
+    }));
     const go = h('button', {type: 'submit', class: 'primary'}, 'Place the purchase order');
-    const form = h('form', {class: 'task', 'data-supplier': supplier}, h('h3', {}, supplier),
+    mount(form, h('h3', {}, supplier),
         table({caption: `Parts to order from ${supplier}`, captionHidden: true, rows: lines, columns: [
-            {label: 'Part', value: l => describe(parts, l.partNumber)},
+            {label: 'Part', value: l => [describe(parts, l.partNumber), l.note ? h('span', {class: 'hint'}, l.note) : null]},
             {label: 'Quantity', value: (l, i) => [h('label', {for: quantities[i].id, class: 'visually-hidden'}, `Quantity of ${l.partNumber}`), quantities[i]]},
-            {label: 'Pack', value: l => fmt.qty((parts.get(l.partNumber) || {}).packSize, unit(l.partNumber)), num: true},
-            {label: 'Unit cost', value: l => fmt.money((parts.get(l.partNumber) || {}).unitCost, (parts.get(l.partNumber) || {}).currency), num: true},
-            {label: '', value: l => {
+            {label: 'Pack, minimum order', value: l => `${fmt.qty(l.packSize, unit(l.partNumber))}, ${fmt.qty(l.minOrderQty, unit(l.partNumber))}`, num: true},
+            {label: 'Unit cost', value: l => fmt.money(l.unitCost, l.currency), num: true},
+            {label: 'Put in by', value: l => `${l.addedBy}, ${fmt.date(l.addedAt)}`},
+            {label: 'Take out', value: l => {
                 const drop = h('button', {type: 'button'}, `Take ${l.partNumber} out`);
-                drop.addEventListener('click', () => {
-                    purchasePlan.remove(l.partNumber, store.code);
-                    load();
-                });
+                drop.addEventListener('click', () => busy(drop, async () => {
+                    await api.del(`${plannedAt}/${encodeURIComponent(l.partNumber)}`);
+                    say(`${l.partNumber} taken out of the plan.`);
+                    await load();
+                }));
                 return drop;
             }}]}),
+        h('p', {}, 'Order value: ', total),
         h('div', {class: 'line-grid'}, h('div', {}, h('label', {for: number.id}, 'Order number'), number),
             h('div', {}, h('label', {for: expected.id}, 'Expected on', h('span', {class: 'hint'}, `longest lead time ${leadDays} days`)), expected)),
         go);
+    sum();
     form.addEventListener('submit', e => {
         e.preventDefault();
         busy(go, async () => {
-            const order = await api.post('/api/purchase-orders', {orderNumber: number.value, supplier, destination: store.code,
-                orderedOn: fmt.isoDay(), expectedOn: expected.value || null,
-                lines: lines.map((l, i) => ({partNumber: l.partNumber, quantity: Number(quantities[i].value)}))});
-            lines.forEach(l => purchasePlan.remove(l.partNumber, store.code));
+            await Promise.all(saving);
+            const order = await api.post(`${plannedAt}/orders`, {orderNumber: number.value, supplier, expectedOn: expected.value || null});
             say(`Purchase order ${order.orderNumber} placed with ${supplier}; it counts as on order from now.`);
             await load();
         }, form);

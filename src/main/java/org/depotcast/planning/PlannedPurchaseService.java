@@ -1,0 +1,132 @@
+package org.depotcast.planning;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AccessScope;
+import org.depotcast.access.AuditService;
+import org.depotcast.access.CurrentUser;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.EntityMissingException;
+import org.depotcast.common.Quantities;
+import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+import org.depotcast.stock.PurchaseOrderRequest;
+import org.depotcast.stock.PurchaseOrderService;
+
+import java.time.LocalDate;
+import java.time.OffsetDateTime;
+import java.time.ZoneOffset;
+import java.util.List;
+
+/**
+ * The purchase plan of each store: parts an officer put aside to buy (from an alert, say), shared by everyone who
+ * looks after the store, until a purchase order to one supplier takes them. Ordering places the order and empties
+ * its lines from the plan in one transaction, so a line is never both planned and ordered.
+ */
+@ApplicationScoped
+public class PlannedPurchaseService {
+    private final PlannedPurchaseRepository plans;
+    private final PartService parts;
+    private final LocationService locations;
+    private final PurchaseOrderService orders;
+    private final AccessScope scope;
+    private final CurrentUser currentUser;
+    private final AuditService audit;
+
+    PlannedPurchaseService(PlannedPurchaseRepository plans, PartService parts, LocationService locations,
+                           PurchaseOrderService orders, AccessScope scope, CurrentUser currentUser, AuditService audit) {
+        this.plans = plans;
+        this.parts = parts;
+        this.locations = locations;
+        this.orders = orders;
+        this.scope = scope;
+        this.currentUser = currentUser;
+        this.audit = audit;
+    }
+
+    /** Created is true when the part was not in the plan before. */
+    public record Saved(PlannedPurchases.Line line, boolean created) {
+    }
+
+    /** The plan of one store, or of every store in the caller's scope. */
+    @Transactional
+    public List<PlannedPurchases.Line> list(String locationCode) {
+        if (locationCode != null) {
+            return plans.at(store(locationCode).id).stream().map(PlannedPurchases.Line::from).toList();
+        }
+        AccessScope.Scope mine = scope.current();
+        return plans.everywhere().stream().filter(p -> mine.sees(p.location.id)).map(PlannedPurchases.Line::from).toList();
+    }
+
+    @Transactional
+    public Saved put(String locationCode, String partNumber, PlannedPurchases.Put request) {
+        Location location = store(locationCode);
+        Part part = parts.require(null, partNumber);
+        PlannedPurchase line = plans.of(part.id, location.id).orElse(null);
+        PlannedPurchases.Line before = line == null ? null : PlannedPurchases.Line.from(line);
+        boolean created = line == null;
+        if (created) {
+            line = new PlannedPurchase();
+            line.part = part;
+            line.location = location;
+        }
+        line.quantity = Quantities.requirePositive("quantity", request.quantity(), part.wholeUnits());
+        line.note = request.note();
+        line.addedBy = currentUser.name();
+        line.addedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        if (created) {
+            plans.persist(line);
+        }
+        PlannedPurchases.Line after = PlannedPurchases.Line.from(line);
+        audit.record("PURCHASE_PLANNED", "planned_purchase", location.code + "/" + part.partNumber, before, after);
+        return new Saved(after, created);
+    }
+
+    @Transactional
+    public void remove(String locationCode, String partNumber) {
+        Location location = store(locationCode);
+        Part part = parts.require(null, partNumber);
+        PlannedPurchase line = plans.of(part.id, location.id).orElseThrow(() ->
+                new EntityMissingException(null, "planned purchase", part.partNumber + " at " + location.code));
+        audit.record("PURCHASE_UNPLANNED", "planned_purchase", location.code + "/" + part.partNumber,
+                PlannedPurchases.Line.from(line), null);
+        plans.delete(line);
+    }
+
+    /** Places a purchase order for the plan's lines of one supplier at the store and takes them out of the plan. */
+    @Transactional
+    public PlannedPurchases.Ordered order(String locationCode, PlannedPurchases.Order request) {
+        Location location = store(locationCode);
+        List<PlannedPurchase> lines = plans.at(location.id).stream()
+                .filter(p -> p.part.supplier.equals(request.supplier())).toList();
+        if (lines.isEmpty()) {
+            throw new BusinessRuleException("supplier", "no part from '" + request.supplier() + "' is in the purchase plan of "
+                    + location.code);
+        }
+        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        orders.place(new PurchaseOrderRequest(request.orderNumber(), request.supplier(), location.code, today,
+                request.expectedOn(), lines.stream().map(p -> new PurchaseOrderRequest.Line(p.part.partNumber, p.quantity)).toList()));
+        List<PlannedPurchases.Line> taken = lines.stream().map(PlannedPurchases.Line::from).toList();
+        lines.forEach(plans::delete);
+        audit.record("PURCHASE_PLAN_ORDERED", "planned_purchase", location.code + "/" + request.orderNumber(), taken, null);
+        return new PlannedPurchases.Ordered(request.orderNumber(), request.supplier(), location.code, today,
+                request.expectedOn(), taken);
+    }
+
+    /**
+     * A store in the caller's scope: suppliers deliver to the central store and depots, never to a kit. The store and
+     * the part are named in the path, so a missing one is a 404 (the mapper's rule for path names).
+     */
+    private Location store(String code) {
+        Location location = locations.require(null, code);
+        scope.require(location.id, location.code);
+        if (location.kind != LocationKind.CENTRAL_STORE && location.kind != LocationKind.DEPOT) {
+            throw new BusinessRuleException("location", "a purchase plan belongs to the central store or a depot, not '"
+                    + location.code + "'");
+        }
+        return location;
+    }
+}
