@@ -17,14 +17,12 @@ import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
 import org.eclipse.microprofile.openapi.annotations.Operation;
-import org.eclipse.microprofile.openapi.annotations.tags.Tag;
 
 import java.util.List;
 
 @Path("/api/planning/planned-purchases")
 @Produces(MediaType.APPLICATION_JSON)
 @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
-@Tag(name = "planning")
 class PlannedPurchaseResource {
     private final PlannedPurchaseService service;
 

@@ -1,6 +1,9 @@
 package org.depotcast.planning;
 
 import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.Digits;
+import org.depotcast.common.Bounds;
+import org.depotcast.common.PlanDate;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
@@ -16,12 +19,14 @@ public final class PlannedPurchases {
     }
 
     /** How many of the part to buy for the store (units of issue, at most one million); replaces an earlier quantity. */
-    public record Put(@NotNull @DecimalMax("1000000") BigDecimal quantity, @Size(max = 300) String note) {
+    public record Put(@NotNull @DecimalMax(Bounds.QUANTITY_MAX)
+                      @Digits(integer = Bounds.QUANTITY_DIGITS, fraction = Bounds.QUANTITY_DECIMALS) BigDecimal quantity,
+                      @Size(max = 300) String note) {
     }
 
     /** Turns the plan's lines of one supplier at the store into a purchase order with this number. */
     public record Order(@NotBlank @Size(max = 40) String orderNumber, @NotBlank @Size(max = 120) String supplier,
-                        LocalDate expectedOn) {
+                        @PlanDate LocalDate expectedOn) {
     }
 
     /** A line of the plan with what the catalogue says about buying the part. */
