@@ -112,8 +112,8 @@ function actions(alert, policy, suggestions) {
     const ack = h('button', {type: 'button', class: 'ack'}, 'Acknowledge');
     ack.addEventListener('click', () => busy(ack, async () => {
         await api.post('/api/planning/alerts/actions', {partNumber: alert.partNumber, location: alert.locationCode, action: 'ACKNOWLEDGE'});
-        say(`Alert for ${alert.partNumber} acknowledged until the next review.`);
         await load();
+        say(`Alert for ${alert.partNumber} acknowledged until the next review.`);
     }));
     const more = h('button', {type: 'button', class: 'more', 'aria-expanded': 'false'}, 'Details, snooze, transfer, buy');
     more.addEventListener('click', () => {
@@ -157,8 +157,8 @@ function transferOffer(s, u) {
     send.addEventListener('click', () => busy(send, async () => {
         const order = await api.post('/api/planning/transfers', {partNumber: s.partNumber, from: s.from, to: s.to,
             quantity: s.quantity, idempotencyKey: api.clientRef('dispatch')});
-        say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, u)} of ${s.partNumber} from ${s.from} to ${s.to}, now in transit.`);
         await load();
+        say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, u)} of ${s.partNumber} from ${s.from} to ${s.to}, now in transit.`);
     }));
     return h('div', {class: 'transfer'}, h('p', {}, `Send ${fmt.qty(s.quantity, u)} from ${names.get(s.from) || s.from} to `
         + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.num(s.pumpDaysAvoided, 1)} pump-days without water.`),
@@ -178,8 +178,8 @@ function snoozeForm(alert) {
         busy(go, async () => {
             await api.post('/api/planning/alerts/actions', {partNumber: alert.partNumber, location: alert.locationCode,
                 action: 'SNOOZE', snoozeUntil: input.value, note: note.value || null});
-            say(`Alert for ${alert.partNumber} snoozed until ${fmt.date(input.value)}.`);
             await load();
+            say(`Alert for ${alert.partNumber} snoozed until ${fmt.date(input.value)}.`);
         }, form);
     });
     return h('div', {}, h('h4', {}, 'Snooze'), form);

@@ -66,8 +66,8 @@ function orderForm(supplier, lines) {
                 const drop = h('button', {type: 'button'}, `Take ${l.partNumber} out`);
                 drop.addEventListener('click', () => busy(drop, async () => {
                     await api.del(`${plannedAt}/${encodeURIComponent(l.partNumber)}`);
-                    say(`${l.partNumber} taken out of the plan.`);
                     await load();
+                    say(`${l.partNumber} taken out of the plan.`);
                 }));
                 return drop;
             }}]}),
@@ -81,8 +81,8 @@ function orderForm(supplier, lines) {
         busy(go, async () => {
             await Promise.all(saving);
             const order = await api.post(`${plannedAt}/orders`, {orderNumber: number.value, supplier, expectedOn: expected.value || null});
-            say(`Purchase order ${order.orderNumber} placed with ${supplier}; it counts as on order from now.`);
             await load();
+            say(`Purchase order ${order.orderNumber} placed with ${supplier}; it counts as on order from now.`);
         }, form);
     });
     return form;
@@ -100,8 +100,8 @@ function receiveCard(o) {
                     {partNumber: open[i].partNumber, quantity: quantities[i], idempotencyKey: keys[i]});
             }
         }
-        say(`Goods booked in against ${o.orderNumber}.`);
         await load();
+        say(`Goods booked in against ${o.orderNumber}.`);
     };
     const all = h('button', {type: 'button', class: 'primary receive-all'}, 'Everything outstanding arrived');
     const some = h('button', {type: 'submit', class: 'receive-part'}, 'Book the quantities entered');

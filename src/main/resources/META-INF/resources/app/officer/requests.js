@@ -78,10 +78,10 @@ function approvalCard(r, substitutes) {
     const full = h('button', {type: 'button', class: 'primary approve-full'}, 'Approve in full');
     const asEntered = h('button', {type: 'submit', class: 'approve-entered'}, 'Approve as entered');
     const refuse = h('button', {type: 'button', class: 'danger refuse'}, 'Refuse');
-    const approve = body => api.post(`/api/requests/${r.id}/approve`, body).then(view => {
+    const approve = body => api.post(`/api/requests/${r.id}/approve`, body).then(async view => {
+        await load();
         say(`Request ${r.id} ${view.status === 'APPROVED' ? 'approved in full' : 'partly approved'}; the parts are set aside until issued.`,
             'ok', view.cautions.length ? h('ul', {}, view.cautions.map(c => h('li', {}, c))) : null);
-        return load();
     });
     full.addEventListener('click', () => busy(full, () => approve({lines: r.lines.map(l => ({partNumber: l.partNumber,
         quantity: l.requested})), note: note.value || null}), form));
@@ -92,8 +92,8 @@ function approvalCard(r, substitutes) {
     });
     refuse.addEventListener('click', () => busy(refuse, async () => {
         await api.post(`/api/requests/${r.id}/refuse`, {reason: reason.value});
-        say(`Request ${r.id} refused; ${r.mechanic} sees the reason.`);
         await load();
+        say(`Request ${r.id} refused; ${r.mechanic} sees the reason.`);
     }, form));
     mount(form, heading(r), h('div', {class: 'line-grid'}, lines.map(x => x.cell)), caution,
         h('div', {class: 'inline-field'}, h('label', {for: note.id}, 'Note to the mechanic (optional)'), note),
@@ -106,8 +106,8 @@ function issueCard(r) {
     const go = h('button', {type: 'button', class: 'primary issue'}, `Issue to ${r.kit}`);
     go.addEventListener('click', () => busy(go, async () => {
         await api.post(`/api/requests/${r.id}/issue`);
-        say(`Request ${r.id} issued: the parts moved from ${r.depot} to ${r.kit}.`);
         await load();
+        say(`Request ${r.id} issued: the parts moved from ${r.depot} to ${r.kit}.`);
     }));
     return h('div', {class: 'task', 'data-request-id': r.id}, heading(r),
         table({caption: `Parts approved for request ${r.id}`, captionHidden: true, rows: r.lines, columns: [

@@ -85,8 +85,8 @@ function countSection(rows) {
         busy(go, async () => {
             try {
                 const result = await api.upload('/api/stock/counts/import', csv);
-                say(`Count booked: ${fmt.num(result.rowsImported)} lines; balances now match what was counted.`);
                 await load();
+                say(`Count booked: ${fmt.num(result.rowsImported)} lines; balances now match what was counted.`);
             } catch (e) {
                 showError(e, form);
                 showFileErrors(form, e, counted.map(x => x.partNumber));
@@ -127,8 +127,8 @@ function importSection() {
             const text = await file.files[0].text();
             try {
                 const result = await api.upload(kind.value, text);
-                say(`Imported ${fmt.num(result.rowsImported)} rows from ${file.files[0].name}.`);
                 await load();
+                say(`Imported ${fmt.num(result.rowsImported)} rows from ${file.files[0].name}.`);
             } catch (e) {
                 showError(e, form);
                 showFileErrors(form, e, null);

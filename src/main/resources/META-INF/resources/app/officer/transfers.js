@@ -41,9 +41,9 @@ async function load() {
 function dispatch(button, body, form) {
     return busy(button, async () => {
         const order = await api.post('/api/planning/transfers', {...body, idempotencyKey: button.dataset.key});
+        await load();
         say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, unit(order.partNumber))} of ${order.partNumber} `
             + `from ${order.from} to ${order.to}, now in transit.`);
-        await load();
     }, form);
 }
 
@@ -103,9 +103,9 @@ function receiveCard(t) {
             h('div', {class: 'line-grid'}, h('div', {}, h('label', {for: received.id}, 'Arrived'), received),
                 h('div', {}, h('label', {for: lost.id}, 'Lost or damaged'), lost),
                 h('div', {}, h('label', {for: reason.id}, 'What happened (needed when something was lost)'), reason)), part));
-    const receive = body => api.post(`/api/planning/transfers/${t.id}/receive`, {...body, idempotencyKey: key}).then(order => {
+    const receive = body => api.post(`/api/planning/transfers/${t.id}/receive`, {...body, idempotencyKey: key}).then(async order => {
+        await load();
         say(`Transfer ${t.id}: ${order.status === 'RECEIVED' ? 'received' : `${fmt.qty(order.outstanding, u)} still on the way`}.`);
-        return load();
     });
     all.addEventListener('click', () => busy(all, () => receive({receivedQuantity: Number(t.outstanding)}), form));
     form.addEventListener('submit', e => {
