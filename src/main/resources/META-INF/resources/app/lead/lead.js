@@ -9,10 +9,7 @@ import {startPage} from '/app/js/nav.js';
 import {provenance} from '/app/js/provenance.js';
 
 const TABS = [
-    ['/app/lead/', 'Forecasts'],
-    ['/app/lead/budget.html', 'Budget plan'],
-    ['/app/lead/spend.html', 'Spend'],
-    ['/app/lead/settings.html', 'Service levels and lanes']
+    ['/app/lead/', 'Forecasts']
 ];
 
 export const METHOD_WORDS = {
