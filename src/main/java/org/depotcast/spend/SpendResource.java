@@ -72,9 +72,11 @@ class SpendResource {
     record ScenarioView(long id, String name, ScenarioDefinition definition) {
     }
 
-    record RunView(long id, long scenarioId, String status, String phase, int draws, long seed, String message) {
+    record RunView(long id, long scenarioId, String status, String phase, int draws, long seed, String message,
+                   java.time.OffsetDateTime startedAt, java.time.OffsetDateTime finishedAt) {
         static RunView from(SpendRun r) {
-            return new RunView(r.id, r.scenarioId, r.status.name(), r.phase, r.draws, r.seed, r.message);
+            return new RunView(r.id, r.scenarioId, r.status.name(), r.phase, r.draws, r.seed, r.message, r.startedAt,
+                    r.finishedAt);
         }
     }
 
@@ -85,6 +87,14 @@ class SpendResource {
         SpendScenario s = service.save(definition);
         return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(s.id)).build())
                 .entity(new ScenarioView(s.id, s.name, definition)).build();
+    }
+
+    @PUT
+    @Path("scenarios/{id}")
+    @Consumes(MediaType.APPLICATION_JSON)
+    public ScenarioView update(@PathParam("id") long id, @Valid @NotNull ScenarioDefinition definition) {
+        SpendScenario s = service.update(id, definition);
+        return new ScenarioView(s.id, s.name, definition);
     }
 
     @GET
@@ -107,6 +117,15 @@ class SpendResource {
         SpendRun run = service.start(id);
         return Response.accepted(RunView.from(run))
                 .location(uri.getBaseUriBuilder().path("api/spend/runs").path(Long.toString(run.id)).build()).build();
+    }
+
+    /** The newest runs first, of one scenario ({@code scenario=ID}) or of all; {@code limit} 1–100, default 20. */
+    @GET
+    @Path("runs")
+    public List<RunView> runs(@QueryParam("scenario") String scenario, @QueryParam("limit") String limit) {
+        Integer id = org.depotcast.common.QueryParams.optionalInt("scenario", scenario);
+        return service.runs(id == null ? null : id.longValue(), org.depotcast.common.QueryParams.intInRange("limit", limit, 20, 1, 100))
+                .stream().map(RunView::from).toList();
     }
 
     @GET

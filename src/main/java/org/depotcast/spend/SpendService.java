@@ -107,6 +107,43 @@ public class SpendService {
         if (scenarios.count("name", definition.name()) > 0) {
             throw new ConflictException("name", "a scenario named '" + definition.name() + "' exists");
         }
+        checkInstallations(definition);
+        SpendScenario scenario = new SpendScenario();
+        scenario.name = definition.name();
+        scenario.definition = toJson(definition);
+        scenario.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+        scenario.createdBy = currentUser.name();
+        scenarios.persist(scenario);
+        audit.record("SPEND_SCENARIO_SAVED", "spend_scenario", scenario.name, null, definition);
+        return scenario;
+    }
+
+    /** Changes a saved scenario; runs made before keep the results they computed. */
+    @Transactional
+    public SpendScenario update(long id, ScenarioDefinition definition) {
+        scope.requireProgramme();
+        SpendScenario scenario = scenarios.findByIdOptional(id, jakarta.persistence.LockModeType.PESSIMISTIC_WRITE)
+                .orElseThrow(() -> new EntityMissingException(null, "spend scenario", id));
+        if (scenarios.count("name = ?1 and id <> ?2", definition.name(), id) > 0) {
+            throw new ConflictException("name", "a scenario named '" + definition.name() + "' exists");
+        }
+        checkInstallations(definition);
+        ScenarioDefinition before = fromJson(scenario.definition);
+        scenario.name = definition.name();
+        scenario.definition = toJson(definition);
+        audit.record("SPEND_SCENARIO_CHANGED", "spend_scenario", scenario.name, before, definition);
+        return scenario;
+    }
+
+    /** The newest runs first (at most {@code limit}), of one scenario or of all. */
+    public List<SpendRun> runs(Long scenarioId, int limit) {
+        scope.requireProgramme();
+        return QuarkusTransaction.requiringNew().call(() -> (scenarioId == null
+                ? runs.findAll(io.quarkus.panache.common.Sort.descending("id"))
+                : runs.find("scenarioId", io.quarkus.panache.common.Sort.descending("id"), scenarioId)).page(0, limit).list());
+    }
+
+    private void checkInstallations(ScenarioDefinition definition) {
         List<ScenarioDefinition.Installation> installs = definition.installations() == null ? List.of() : definition.installations();
         for (int i = 0; i < installs.size(); i++) {
             ScenarioDefinition.Installation inst = installs.get(i);
@@ -120,14 +157,6 @@ public class SpendService {
                         + definition.horizonYears() + " years");
             }
         }
-        SpendScenario scenario = new SpendScenario();
-        scenario.name = definition.name();
-        scenario.definition = toJson(definition);
-        scenario.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
-        scenario.createdBy = currentUser.name();
-        scenarios.persist(scenario);
-        audit.record("SPEND_SCENARIO_SAVED", "spend_scenario", scenario.name, null, definition);
-        return scenario;
     }
 
     @Transactional

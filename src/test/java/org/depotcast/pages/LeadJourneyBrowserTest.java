@@ -82,6 +82,89 @@ class LeadJourneyBrowserTest extends BrowserSession {
         }
     }
 
+    private void makeAndAcceptABudgetPlan() {
+        driver.findElement(By.linkText("Budget plan")).click();
+        waitReady();
+        WebElement budget = driver.findElement(By.id("budget"));
+        budget.sendKeys("3000");
+        driver.findElement(By.cssSelector("#budget-form button[type=submit]")).click();
+        waitFor(By.id("plan-lines"));
+        String url = driver.getCurrentUrl();
+        assertTrue(url.contains("?plan="), url);
+        long planId = Long.parseLong(url.replaceAll(".*\\?plan=", ""));
+        JsonPath plan = as("lead").get("/api/planning/purchase-plans/" + planId).then().statusCode(200).extract().jsonPath();
+        assertEquals("PROPOSED", plan.getString("status"));
+        assertEquals(3000.0, plan.getDouble("budget"), 0);
+        int lines = plan.getList("lines").size();
+        assertTrue(lines > 0, "the demo's stock leaves parts below their reorder points");
+        assertEquals(lines, driver.findElements(By.cssSelector("#plan-lines tbody tr")).size());
+        assertEquals(plan.getList("leftOut").size(), driver.findElements(By.cssSelector("#plan-left-out tbody tr")).size());
+        assertEquals(String.format(java.util.Locale.US, "%,.1f pump-days", plan.getDouble("pumpDaysBefore")).replace(".0 ", " "),
+                driver.findElement(By.id("pump-days-before")).getText());
+        assertTrue(driver.findElement(By.id("plan")).getText().contains(plan.getString("caution")), "the plan's caution is shown");
+        assertEquals("/api/planning/purchase-plans/" + planId + "/export",
+                driver.findElement(By.linkText("Download as CSV")).getDomAttribute("href"));
+        driver.findElement(By.id("accept")).click();
+        waitFor(By.id("accepted"));
+        assertEquals("ACCEPTED", as("lead").get("/api/planning/purchase-plans/" + planId).then().statusCode(200)
+                .extract().jsonPath().getString("status"));
+        List<String> orders = as("lead").get("/api/purchase-orders").then().statusCode(200).extract().jsonPath()
+                .getList("orderNumber", String.class).stream().filter(n -> n.startsWith("PP" + planId + "-")).toList();
+        assertTrue(!orders.isEmpty(), "accepting places purchase orders");
+        assertEquals(orders.size(), driver.findElements(By.cssSelector("#accepted tbody tr")).size());
+        assertTrue(driver.findElement(By.id("accept")).getDomAttribute("disabled") != null, "a plan is accepted once");
+    }
+
+    private void runAScenarioAndReadItsChart() {
+        driver.findElement(By.linkText("Spend")).click();
+        waitReady();
+        driver.findElement(By.id("new-scenario")).click();
+        String name = "more use " + System.nanoTime();
+        driver.findElement(By.id("sc-name")).sendKeys(name);
+        WebElement horizon = driver.findElement(By.id("sc-horizon"));
+        horizon.clear();
+        horizon.sendKeys("3");
+        driver.findElement(By.id("sc-usage")).sendKeys("10");
+        WebElement draws = driver.findElement(By.id("sc-draws"));
+        draws.clear();
+        draws.sendKeys("2000");
+        driver.findElement(By.id("add-installation")).click();
+        WebElement count = driver.findElement(By.cssSelector("#installations [data-name=count]"));
+        count.clear();
+        count.sendKeys("25");
+        driver.findElement(By.id("save-scenario")).click();
+        wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("scenarios")).getText().contains(name));
+        JsonPath saved = as("lead").get("/api/spend/scenarios").then().statusCode(200).extract().jsonPath();
+        Map<String, Object> scenario = saved.<Map<String, Object>>getList("$").stream().filter(s -> name.equals(s.get("name"))).findFirst().orElseThrow();
+        long scenarioId = ((Number) scenario.get("id")).longValue();
+        @SuppressWarnings("unchecked")
+        Map<String, Object> definition = (Map<String, Object>) scenario.get("definition");
+        assertEquals(10.0, ((Number) definition.get("usageChangePercent")).doubleValue(), 0);
+        assertEquals(25, ((Number) ((List<Map<String, Object>>) definition.get("installations")).get(0).get("count")).intValue());
+
+        driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']")).click();
+        waitFor(By.id("spend-progress")).findElement(By.tagName("progress"));
+        String total = wait(Duration.ofSeconds(300)).until(d -> {
+            List<WebElement> shown = d.findElements(By.id("spend-total"));
+            return shown.isEmpty() ? null : shown.get(0).getText();
+        });
+        JsonPath runs = as("lead").queryParam("scenario", scenarioId).get("/api/spend/runs").then().statusCode(200).extract().jsonPath();
+        long runId = runs.getLong("[0].id");
+        assertEquals("DONE", runs.getString("[0].status"));
+        JsonPath results = as("lead").get("/api/spend/runs/" + runId + "/results").then().statusCode(200).extract().jsonPath();
+        List<Map<String, Object>> years = results.getList("years");
+        WebElement fan = driver.findElement(By.cssSelector("#results figure.chart"));
+        assertTrue(fan.findElement(By.tagName("svg")).getText().contains("Spend a year (" + results.getString("currency") + ")"));
+        List<WebElement> rows = fan.findElements(By.cssSelector("tbody tr"));
+        assertEquals(years.size(), rows.size());
+        @SuppressWarnings("unchecked")
+        double firstMean = ((Number) ((Map<String, Object>) years.get(0).get("total")).get("mean")).doubleValue();
+        assertEquals(String.format(java.util.Locale.US, "%,d", Math.round(firstMean)), text(rows.get(0), "Expected (mean)"));
+        assertTrue(total.startsWith(results.getString("currency")), total);
+        assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
+        assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
+    }
+
     @Test
     void theLeadRunsTheForecastsReadsAChartPlansABudgetAndProjectsSpend() {
         signIn("lead", "lead-demo");
@@ -90,6 +173,10 @@ class LeadJourneyBrowserTest extends BrowserSession {
         runTheForecasts();
         readAPartsChart();
         screens("lead-forecasts");
+        makeAndAcceptABudgetPlan();
+        screens("lead-budget");
+        runAScenarioAndReadItsChart();
+        screens("lead-spend");
         assertNoPageErrors();
     }
 }

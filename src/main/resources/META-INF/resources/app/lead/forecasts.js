@@ -15,15 +15,27 @@ const partSelect = document.getElementById('part');
 const locationSelect = document.getElementById('location');
 const explorer = document.getElementById('explorer');
 
-mount(partSelect, parts.map(p => h('option', {value: p.partNumber}, `${p.partNumber} · ${p.description}`)));
+
+/**
+ * Offers only the parts the latest run forecast at the chosen place (others are listed, disabled, as having none
+ * there), and keeps the chosen part when it has one, else picks the part with the most demand expected there.
+ */
+async function partsForPlace() {
+    const forecasts = await api.get(`/api/forecast/locations/${encodeURIComponent(locationSelect.value || 'PROGRAMME')}`);
+    const expected = new Map(forecasts.map(f => [f.partNumber, f.forecast.length ? f.forecast[0].total : 0]));
+    const wanted = partSelect.value || params.get('part');
+    mount(partSelect, parts.map(p => h('option', {value: p.partNumber, disabled: !expected.has(p.partNumber)},
+        `${p.partNumber} · ${p.description}${expected.has(p.partNumber) ? '' : ' (no forecast here)'}`)));
+    const busiest = [...expected.entries()].sort((a, b) => b[1] - a[1])[0];
+    partSelect.value = expected.has(wanted) ? wanted : busiest ? busiest[0] : '';
+    return expected.size > 0;
+}
 const groups = [['CENTRAL_STORE', 'Central store'], ['DEPOT', 'District depots'], ['KIT', 'Mechanics\' kits']];
 mount(locationSelect, h('option', {value: ''}, 'Whole programme'),
     groups.map(([kind, label]) => h('optgroup', {label}, locations.filter(l => l.kind === kind)
         .map(l => h('option', {value: l.code}, `${l.name} (${l.code})`)))));
-if (params.get('part')) {
-    partSelect.value = params.get('part');
-}
 locationSelect.value = params.get('location') || '';
+locationSelect.addEventListener('change', () => partsForPlace().catch(e => showError(e)));
 
 function num1(v) {
     return fmt.num(v, 1);
@@ -77,6 +89,10 @@ function howChosen(view) {
 async function showPart(push = true) {
     const part = partSelect.value;
     const where = locationSelect.value;
+    if (!part) {
+        mount(explorer, h('p', {}, 'The latest run has no forecast of any part at this place.'));
+        return;
+    }
     if (push) {
         const q = new URLSearchParams({part});
         if (where) {
@@ -145,7 +161,7 @@ async function startRun() {
     if (done.status === 'DONE') {
         await provenance(document.getElementById('provenance'), me);
         say(`Forecast run ${done.id} finished. The numbers on these pages now come from it.`, 'ok');
-        await loadFamilies();
+        await Promise.all([loadFamilies(), partsForPlace()]);
         await Promise.all([showPart(false), showFleet()]);
     } else {
         say(`Forecast run ${done.id} stopped without finishing: ${done.message || 'no reason given'}.`, 'error');
@@ -216,7 +232,7 @@ async function loadFamilies() {
 
 const runs = await showRuns();
 if (runs.some(r => r.status === 'DONE')) {
-    await loadFamilies();
+    await Promise.all([loadFamilies(), partsForPlace()]);
     await Promise.all([showPart(false).catch(e => showError(e)), showFleet().catch(e => showError(e))]);
 } else {
     mount(explorer, h('p', {}, 'No forecast yet: run the forecasts first.'));

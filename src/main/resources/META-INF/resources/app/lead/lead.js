@@ -9,7 +9,9 @@ import {startPage} from '/app/js/nav.js';
 import {provenance} from '/app/js/provenance.js';
 
 const TABS = [
-    ['/app/lead/', 'Forecasts']
+    ['/app/lead/', 'Forecasts'],
+    ['/app/lead/budget.html', 'Budget plan'],
+    ['/app/lead/spend.html', 'Spend']
 ];
 
 export const METHOD_WORDS = {
