@@ -35,7 +35,15 @@ class AccountResource {
         this.locations = locations;
     }
 
-    record AccountView(String username, Set<String> roles, boolean enabled) {
+    record AccountView(String username, Set<String> roles, boolean enabled, List<String> locationCodes, String kitCode) {
+    }
+
+    record RoleSet(@NotNull Set<@NotBlank String> roles) {
+    }
+
+    private AccountView view(UserAccount account) {
+        AccountService.Profile profile = accounts.profile(account.username);
+        return new AccountView(account.username, profile.roles(), account.enabled, profile.locationCodes(), profile.kitCode());
     }
 
     record CreateAccount(@NotBlank @Size(max = 60)
@@ -51,29 +59,38 @@ class AccountResource {
 
     @GET
     public List<AccountView> list() {
-        return accounts.all().stream().map(a -> new AccountView(a.username, a.roleSet(), a.enabled)).toList();
+        return accounts.all().stream().map(this::view).toList();
     }
 
     @POST
     @Consumes(MediaType.APPLICATION_JSON)
     public Response create(@Valid @NotNull CreateAccount body) {
-        Long kitId = body.kitCode() == null ? null : locations.require("kitCode", body.kitCode()).id;
+        Long kitId = body.kitCode() == null || body.kitCode().isBlank() ? null : locations.require("kitCode", body.kitCode()).id;
+        // Every named location is checked before the account is made, so a refused one leaves no account behind.
+        List<Long> locationIds = body.locationCodes() == null ? List.of() : ids("locationCodes", body.locationCodes());
         UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId);
-        if (body.locationCodes() != null) {
-            accounts.assignLocations(account.username, ids(body.locationCodes()));
+        if (!locationIds.isEmpty()) {
+            accounts.assignLocations(account.username, locationIds);
         }
-        return Response.status(201).entity(new AccountView(account.username, account.roleSet(), account.enabled)).build();
+        return Response.status(201).entity(view(account)).build();
     }
 
     @PUT
     @Path("{username}/locations")
     @Consumes(MediaType.APPLICATION_JSON)
     public Response assign(@PathParam("username") String username, @Valid @NotNull LocationCodes body) {
-        accounts.assignLocations(username, ids(body.codes()));
+        accounts.assignLocations(username, ids("codes", body.codes()));
         return Response.noContent().build();
     }
 
-    private List<Long> ids(List<String> codes) {
-        return codes.stream().map(c -> locations.require("codes", c)).map((Location l) -> l.id).toList();
+    @PUT
+    @Path("{username}/roles")
+    @Consumes(MediaType.APPLICATION_JSON)
+    public AccountView setRoles(@PathParam("username") String username, @Valid @NotNull RoleSet body) {
+        return view(accounts.setRoles(username, body.roles()));
+    }
+
+    private List<Long> ids(String field, List<String> codes) {
+        return codes.stream().map(c -> locations.require(field, c)).map((Location l) -> l.id).toList();
     }
 }

@@ -26,8 +26,10 @@ public class AccountService {
     private final UserAccountRepository accounts;
     private final Event<AccountsChanged> changed;
     private final AuditService audit;
+    private final CurrentUser currentUser;
 
-    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed, AuditService audit) {
+    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed, AuditService audit, CurrentUser currentUser) {
+        this.currentUser = currentUser;
         this.audit = audit;
         this.accounts = accounts;
         this.changed = changed;
@@ -84,6 +86,35 @@ public class AccountService {
         changed.fire(new AccountsChanged());
     }
 
+    /** Replaces an account's roles; an administrator cannot take the role away from their own account. */
+    @Transactional
+    public UserAccount setRoles(String username, Set<String> roles) {
+        UserAccount account = accounts.byUsername(username)
+                .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
+        requireKnown(roles);
+        if (username.equals(currentUser.name()) && account.roleSet().contains(Roles.ADMIN) && !roles.contains(Roles.ADMIN)) {
+            throw new org.depotcast.common.BusinessRuleException("roles", "you cannot remove the administrator role from "
+                    + "your own account; another administrator can");
+        }
+        String before = account.roles;
+        account.roles = String.join(",", roles.stream().sorted().toList());
+        audit.record("ACCOUNT_ROLES_SET", "account", username, java.util.Map.of("roles", before),
+                java.util.Map.of("roles", account.roles));
+        changed.fire(new AccountsChanged());
+        return account;
+    }
+
+    private static void requireKnown(Set<String> roles) {
+        if (roles == null || roles.isEmpty()) {
+            throw new InvalidInputException("roles", "name at least one role");
+        }
+        for (String role : roles) {
+            if (!KNOWN_ROLES.contains(role)) {
+                throw new InvalidInputException("roles", "unknown role '" + role + "'");
+            }
+        }
+    }
+
     @Transactional
     public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId) {
         if (username == null || !NAME.matcher(username).matches()) {
@@ -98,11 +129,7 @@ public class AccountService {
         if (password == null || password.length() < 8) {
             throw new InvalidInputException("password", "must be at least 8 characters");
         }
-        for (String role : roles) {
-            if (!KNOWN_ROLES.contains(role)) {
-                throw new InvalidInputException("roles", "unknown role '" + role + "'");
-            }
-        }
+        requireKnown(roles);
         UserAccount account = new UserAccount();
         account.username = username;
         account.passwordHash = PasswordHasher.hash(password);

@@ -104,6 +104,19 @@ class PlanningResource {
         return transfers.suggest(part);
     }
 
+    @GET
+    @Path("service-levels")
+    public PlanningService.ServiceLevelsInForce serviceLevels() {
+        return planning.serviceLevelsInForce();
+    }
+
+    @GET
+    @Path("transfer-costs")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public List<TransferResponses.Lane> laneCosts() {
+        return transfers.lanes();
+    }
+
     @PUT
     @Path("service-levels")
     @Consumes(MediaType.APPLICATION_JSON)

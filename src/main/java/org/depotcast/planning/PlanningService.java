@@ -161,6 +161,17 @@ public class PlanningService {
                 set.getOrDefault("STANDARD", settings.serviceLevelStandard()));
     }
 
+    /** The cycle service levels in force per part class, beside the configured defaults they replace. */
+    public record ServiceLevelsInForce(double critical, double standard, double defaultCritical, double defaultStandard) {
+    }
+
+    @Transactional
+    public ServiceLevelsInForce serviceLevelsInForce() {
+        PolicyCalculator.ServiceLevels levels = serviceLevels(null);
+        return new ServiceLevelsInForce(levels.critical(), levels.standard(), settings.serviceLevelCritical(),
+                settings.serviceLevelStandard());
+    }
+
     /** The programme lead sets the target cycle service level of critical or standard parts. */
     @Transactional
     public void setServiceLevel(String partClass, double level) {

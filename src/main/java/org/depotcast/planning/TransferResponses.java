@@ -35,4 +35,8 @@ public final class TransferResponses {
             return new Receipt(r.receivedQuantity, r.writtenOffQuantity, r.writeOffReason, r.recordedAt, r.actor);
         }
     }
+
+    /** A lane between two depots: {@code setCost} replaces {@code distanceCost} (per unit) when the lead set one. */
+    public record Lane(String from, String to, double distanceKm, double distanceCost, Double setCost) {
+    }
 }

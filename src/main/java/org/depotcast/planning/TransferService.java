@@ -132,6 +132,25 @@ public class TransferService {
         return lanes;
     }
 
+    /** Every lane between two depots: its distance, the distance-based cost per unit, and the cost set for it, if any. */
+    @Transactional
+    public List<TransferResponses.Lane> lanes() {
+        List<Location> depots = locations.ofKind(LocationKind.DEPOT);
+        Map<String, Double> set = laneCosts();
+        List<TransferResponses.Lane> out = new ArrayList<>();
+        for (Location from : depots) {
+            for (Location to : depots) {
+                if (!from.id.equals(to.id)) {
+                    double km = distanceKm(from, to);
+                    out.add(new TransferResponses.Lane(from.code, to.code, km, km * settings.transferCostPerUnitKm(),
+                            set.get(from.id + ">" + to.id)));
+                }
+            }
+        }
+        out.sort(Comparator.comparing(TransferResponses.Lane::from).thenComparing(TransferResponses.Lane::to));
+        return out;
+    }
+
     /** Sets the per-unit transport cost of one lane (programme lead or admin). */
     @Transactional
     public void setLaneCost(String fromCode, String toCode, BigDecimal unitCost) {

@@ -55,7 +55,7 @@ public abstract class BrowserSession {
     private final Map<String, String> requests = new HashMap<>();
 
     @BeforeEach
-    void openBrowser() throws IOException {
+    protected void openBrowser() throws IOException {
         Assumptions.assumeTrue(Files.isExecutable(CHROMIUM) && Files.isExecutable(CHROMEDRIVER),
                 "Browser tests skipped: Chromium is not installed here (apt-get install -y chromium chromium-driver, as .ci/run does)");
         System.setProperty("webdriver.chrome.driver", CHROMEDRIVER.toString());
@@ -76,7 +76,7 @@ public abstract class BrowserSession {
     }
 
     @AfterEach
-    void closeBrowser(TestInfo test) throws IOException {
+    protected void closeBrowser(TestInfo test) throws IOException {
         if (driver == null) {
             return;
         }

@@ -11,7 +11,8 @@ import {provenance} from '/app/js/provenance.js';
 const TABS = [
     ['/app/lead/', 'Forecasts'],
     ['/app/lead/budget.html', 'Budget plan'],
-    ['/app/lead/spend.html', 'Spend']
+    ['/app/lead/spend.html', 'Spend'],
+    ['/app/lead/settings.html', 'Service levels and lanes']
 ];
 
 export const METHOD_WORDS = {

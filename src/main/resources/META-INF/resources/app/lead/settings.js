@@ -1,0 +1,84 @@
+/* The lead's settings: service level per part class, the financial year's first month, transport cost per lane. */
+import {startLeadPage, ready, api, fmt} from './lead.js';
+import {h, mount, table, busy, say, state} from '/app/js/ui.js';
+
+await startLeadPage();
+const counts = {};
+(await api.get('/api/parts')).forEach(p => counts[p.currency] = (counts[p.currency] || 0) + 1);
+const currency = Object.entries(counts).sort((a, b) => b[1] - a[1])[0]?.[0] || 'USD';
+
+function levelForm(partClass, words, level, defaultLevel) {
+    const id = `level-${partClass.toLowerCase()}`;
+    const form = h('form', {class: 'card', id: `${id}-form`, novalidate: true},
+        h('h3', {}, words),
+        h('label', {for: id}, 'Cycle service level', h('span', {class: 'hint'}, `per cent; configured default ${fmt.num(defaultLevel * 100, 1)} %`)),
+        h('input', {id, name: 'level', type: 'number', min: 50, max: 99.9, step: 0.1, value: Number((level * 100).toFixed(2))}),
+        h('p', {}, 'In force now: ', h('strong', {class: 'in-force'}, `${fmt.num(level * 100, 1)} %`)),
+        h('button', {type: 'submit', class: 'primary'}, `Save for ${words.toLowerCase()}`));
+    form.addEventListener('submit', e => {
+        e.preventDefault();
+        busy(e.submitter || form.querySelector('button'), async () => {
+            const percent = form.level.value === '' ? NaN : Number(form.level.value);
+            await api.put('/api/planning/service-levels', {partClass, level: percent / 100});
+            say(`${words}: ${fmt.num(percent, 1)} % from now on.`, 'ok');
+            await showLevels();
+        }, form);
+    });
+    return form;
+}
+
+async function showLevels() {
+    const l = await api.get('/api/planning/service-levels');
+    mount(document.getElementById('levels'), levelForm('CRITICAL', 'Critical parts', l.critical, l.defaultCritical),
+        levelForm('STANDARD', 'Standard parts', l.standard, l.defaultStandard));
+}
+
+const MONTHS = [...Array(12).keys()].map(m => new Intl.DateTimeFormat(undefined, {month: 'long'}).format(new Date(2026, m, 15)));
+const yearForm = document.getElementById('year-form');
+mount(yearForm.startMonth, MONTHS.map((m, i) => h('option', {value: i + 1}, m)));
+
+async function showYear(view) {
+    const fy = view || await api.get('/api/spend/financial-year');
+    yearForm.startMonth.value = String(fy.startMonth);
+    document.getElementById('year-now').textContent = `The financial year in progress is ${fy.currentYear} (${fy.currentYearMonths}).`;
+}
+
+yearForm.addEventListener('submit', e => {
+    e.preventDefault();
+    busy(e.submitter || yearForm.querySelector('button'), async () => {
+        await showYear(await api.put('/api/spend/financial-year', {startMonth: Number(yearForm.startMonth.value)}));
+        say('Financial year saved; spend runs from now on use it.', 'ok');
+    }, yearForm);
+});
+
+function laneCost(lane) {
+    const id = `lane-${lane.from}-${lane.to}`;
+    const form = h('form', {class: 'row', novalidate: true},
+        h('label', {for: id, class: 'visually-hidden'}, `Cost per unit from ${lane.from} to ${lane.to} (${currency})`),
+        h('input', {id, name: 'unitCost', type: 'number', min: 0, step: 0.01, value: lane.setCost ?? '', placeholder: fmt.num(lane.distanceCost, 2)}),
+        h('button', {type: 'submit'}, h('span', {class: 'visually-hidden'}, `${lane.from} to ${lane.to}: `), 'Save'));
+    form.addEventListener('submit', e => {
+        e.preventDefault();
+        busy(e.submitter || form.querySelector('button'), async () => {
+            await api.put('/api/planning/transfer-costs', {from: lane.from, to: lane.to,
+                unitCost: form.unitCost.value === '' ? null : Number(form.unitCost.value)});
+            say(`Lane ${lane.from} to ${lane.to}: ${fmt.money(form.unitCost.value, currency)} a unit.`, 'ok');
+            await showLanes();
+        }, form);
+    });
+    return form;
+}
+
+async function showLanes() {
+    const lanes = await api.get('/api/planning/transfer-costs');
+    mount(document.getElementById('lanes'), table({caption: `Lanes between depots (${currency} per unit)`, id: 'lane-table', rows: lanes,
+        columns: [{label: 'From', value: l => l.from}, {label: 'To', value: l => l.to},
+            {label: 'Distance', num: true, value: l => `${fmt.num(l.distanceKm)} km`},
+            {label: 'By distance', num: true, value: l => fmt.money(l.distanceCost, currency)},
+            {label: 'In use', value: l => l.setCost === null || l.setCost === undefined ? state('by distance', 'quiet')
+                : state(`set: ${fmt.money(l.setCost, currency)}`, 'info')},
+            {label: 'Set a cost', value: laneCost}]}));
+}
+
+await Promise.all([showLevels(), showYear(), showLanes()]);
+ready();
