@@ -4,6 +4,7 @@ import io.quarkus.test.junit.QuarkusTest;
 import io.restassured.path.json.JsonPath;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
+import org.openqa.selenium.StaleElementReferenceException;
 import org.openqa.selenium.WebElement;
 import org.openqa.selenium.support.ui.Select;
 
@@ -28,7 +29,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
 
     private void runTheForecasts() {
         driver.findElement(By.id("start-run")).click();
-        String finished = wait(Duration.ofSeconds(180)).until(d -> {
+        String finished = steady(Duration.ofSeconds(180)).until(d -> {
             String words = d.findElement(By.id("run-progress")).getText();
             return words.contains("finished.") ? words : null;
         });
@@ -36,7 +37,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         int runId = latest.getInt("[0].id");
         assertTrue(finished.contains("Forecast run " + runId), finished);
         assertEquals("request", latest.getString("[0].trigger"));
-        wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("provenance")).getText()
+        steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("provenance")).getText()
                 .contains("forecast run " + runId + ", which finished"));
         assertEquals("finished", driver.findElement(By.cssSelector("#runs tbody tr:first-child td[data-label=State]")).getText());
     }
@@ -45,7 +46,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         new Select(driver.findElement(By.id("part"))).selectByValue("OB-CS-50");
         new Select(driver.findElement(By.id("location"))).selectByValue("DEP-PELLOWDENE");
         driver.findElement(By.cssSelector("#explore-form button[type=submit]")).click();
-        wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#explorer h3")).getText().contains("at DEP-PELLOWDENE"));
+        steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#explorer h3")).getText().contains("at DEP-PELLOWDENE"));
         JsonPath api = as("lead").queryParam("location", "DEP-PELLOWDENE").get("/api/forecast/explorer/parts/OB-CS-50")
                 .then().statusCode(200).extract().jsonPath();
         WebElement figure = driver.findElement(By.cssSelector("#explorer figure.chart"));
@@ -64,6 +65,11 @@ class LeadJourneyBrowserTest extends BrowserSession {
             assertTrue(driver.findElements(By.xpath("//div[@class='method-box']//td[@data-label='In use'][normalize-space()='used']")).size() == 1);
         }
         assertTrue(driver.getCurrentUrl().contains("part=OB-CS-50") && driver.getCurrentUrl().contains("location=DEP-PELLOWDENE"));
+    }
+
+    /** A wait that reads elements afresh when the page has redrawn them meanwhile. */
+    private org.openqa.selenium.support.ui.FluentWait<org.openqa.selenium.WebDriver> steady(Duration timeout) {
+        return wait(timeout).ignoring(StaleElementReferenceException.class);
     }
 
     /** Opens another of the lead's pages by its tab, from the top of the page where the tabs are. */
@@ -119,6 +125,8 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertTrue(!orders.isEmpty(), "accepting places purchase orders");
         assertEquals(orders.size(), driver.findElements(By.cssSelector("#accepted tbody tr")).size());
         assertTrue(driver.findElement(By.id("accept")).getDomAttribute("disabled") != null, "a plan is accepted once");
+        // Leaves the programme's stock on order as it found it, for the tests that plan after this one.
+        orders.forEach(n -> as("lead").post("/api/purchase-orders/" + n + "/cancel").then().statusCode(200));
     }
 
     private void runAScenarioAndReadItsChart() {
@@ -139,7 +147,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         count.clear();
         count.sendKeys("25");
         driver.findElement(By.id("save-scenario")).click();
-        wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("scenarios")).getText().contains(name));
+        steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("scenarios")).getText().contains(name));
         JsonPath saved = as("lead").get("/api/spend/scenarios").then().statusCode(200).extract().jsonPath();
         Map<String, Object> scenario = saved.<Map<String, Object>>getList("$").stream().filter(s -> name.equals(s.get("name"))).findFirst().orElseThrow();
         long scenarioId = ((Number) scenario.get("id")).longValue();
@@ -150,7 +158,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
 
         driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']")).click();
         waitFor(By.id("spend-progress")).findElement(By.tagName("progress"));
-        String total = wait(Duration.ofSeconds(300)).until(d -> {
+        String total = steady(Duration.ofSeconds(300)).until(d -> {
             List<WebElement> shown = d.findElements(By.id("spend-total"));
             return shown.isEmpty() ? null : shown.get(0).getText();
         });
