@@ -26,6 +26,14 @@ public interface PlanningSettings {
     /** Cost of placing one order, programme currency (for EOQ). */
     double orderingCost();
 
+    /** Cost of one transfer trip's worth of a part from the central store to a depot (a depot's EOQ). */
+    @io.smallrye.config.WithDefault("5")
+    double transferTripCost();
+
+    /** Below the central store, hold at most this many days of demand (unless one pack needs more). */
+    @io.smallrye.config.WithDefault("180")
+    int maxCoverDaysBelowCentral();
+
     /** Holding cost per year as a share of unit cost (for EOQ). */
     double holdingRatePerYear();
 

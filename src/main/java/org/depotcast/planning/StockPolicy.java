@@ -11,7 +11,8 @@ package org.depotcast.planning;
  * @param distribution     poisson, negative-binomial or normal
  * @param reorderPoint     s (a kit's min)
  * @param orderQuantity    Q in whole packs, at least the MOQ
- * @param orderUpTo        S = s + Q, capped by shelf life (a kit's max)
+ * @param orderUpTo        S = s + Q, capped by days of cover below the central store and by shelf life (a kit's max)
+ * @param orderUpToRule    which rule set {@code orderUpTo}, in words
  * @param committed        approved for mechanics and not yet issued
  * @param position         on hand + on order − committed
  * @param expectedShortUnits G(position): units expected short before replenishment arrives
@@ -23,5 +24,5 @@ public record StockPolicy(String partNumber, String locationCode, String level, 
                           String distribution, double reorderPoint, double orderQuantity, double orderUpTo,
                           double onHand, double onOrder, double committed, double position, double expectedShortUnits,
                           double pumpDaysAtRisk, String forecastMethod, Integer shelfLifeDays, double unitCost,
-                          String currency, int packSize, int minOrderQty, String supplier) {
+                          String currency, int packSize, int minOrderQty, String supplier, String orderUpToRule) {
 }

@@ -9,7 +9,10 @@ public final class TransferResponses {
     private TransferResponses() {
     }
 
-    /** A suggested move: {@code unitCost} is transport per unit; {@code pumpDaysAvoided} the shortage it removes. */
+    /**
+     * A suggested move: {@code unitCost} is transport per unit; {@code pumpDaysAvoided} the receiver's reduction in
+     * expected pump-days without water over its protection period.
+     */
     public record Suggestion(String partNumber, String from, String to, long quantity, double distanceKm,
                              double unitCost, double pumpDaysAvoided) {
     }

@@ -6,6 +6,8 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
+import org.depotcast.core.policy.DemandDistribution;
+import org.depotcast.core.policy.ShortageReduction;
 import org.depotcast.core.policy.TransferPlanner;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
@@ -21,8 +23,10 @@ import java.util.Map;
 /**
  * Transfers between depots before buying: suggestions from the transportation LP of {@link TransferPlanner}
  * (donors give only what they hold above their own reorder point; receivers at or below their reorder point ask up
- * to their order-up-to level; cost per unit = distance × cost per unit-km; a unit short is worth the pump-days it
- * would cost). Dispatching and receiving are {@link TransferOrderService}'s.
+ * to their order-up-to level, but only the units whose pump-days removed are worth the cheapest trip to them; cost per
+ * unit = distance × cost per unit-km; a unit short is worth the pump-days it would cost). A suggestion's benefit is
+ * the receiver's reduction in expected pump-days without water over its protection period
+ * ({@link ShortageReduction}), counted after the units earlier suggestions already bring it. Dispatching and receiving are {@link TransferOrderService}'s.
  */
 @ApplicationScoped
 public class TransferService {
@@ -99,6 +103,7 @@ public class TransferService {
         if (donors.isEmpty() || receivers.isEmpty()) {
             return List.of();
         }
+        Map<Location, Double> cheapestIn = new HashMap<>();
         double[][] cost = new double[donors.size()][receivers.size()];
         double[][] km = new double[donors.size()][receivers.size()];
         Map<String, Double> lanes = laneCosts();
@@ -107,15 +112,30 @@ public class TransferService {
                 km[i][j] = distanceKm(donors.get(i), receivers.get(j));
                 Double set = lanes.get(donors.get(i).id + ">" + receivers.get(j).id);
                 cost[i][j] = set != null ? set : km[i][j] * settings.transferCostPerUnitKm();
+                cheapestIn.merge(receivers.get(j), cost[i][j], Math::min);
             }
         }
-        double pumpDaysPerUnit = (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
-        double penalty = settings.pumpDayValue() * pumpDaysPerUnit;
+        // A receiver asks only for the units whose pump-days removed are worth at least the cheapest trip to it.
+        Map<String, DemandDistribution> demand = new HashMap<>();
+        for (int j = 0; j < receivers.size(); j++) {
+            StockPolicy p = policies.get(receivers.get(j).code);
+            DemandDistribution d = PolicyCalculator.distribution(p.demandMean(), p.demandVariance());
+            demand.put(p.locationCode(), d);
+            deficit.set(j, ShortageReduction.worthwhileUnits(d, p.position(), deficit.get(j), p.protectionDays(),
+                    cheapestIn.get(receivers.get(j)) / settings.pumpDayValue()));
+        }
+        // The LP's value of a unit short removed: its pump-days if it meets a breakdown (half the protection period).
+        double penalty = settings.pumpDayValue() * (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
         List<TransferResponses.Suggestion> out = new ArrayList<>();
+        Map<String, Double> received = new HashMap<>();
         for (TransferPlanner.Move move : TransferPlanner.plan(surplus.stream().mapToLong(Long::longValue).toArray(),
                 deficit.stream().mapToLong(Long::longValue).toArray(), cost, penalty)) {
-            out.add(new TransferResponses.Suggestion(part, donors.get(move.from()).code, receivers.get(move.to()).code,
-                    move.units(), km[move.from()][move.to()], move.unitCost(), move.units() * pumpDaysPerUnit));
+            StockPolicy to = policies.get(receivers.get(move.to()).code);
+            double before = to.position() + received.getOrDefault(to.locationCode(), 0.0);
+            received.merge(to.locationCode(), (double) move.units(), Double::sum);
+            out.add(new TransferResponses.Suggestion(part, donors.get(move.from()).code, to.locationCode(),
+                    move.units(), km[move.from()][move.to()], move.unitCost(),
+                    ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays())));
         }
         out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
         return out;

@@ -18,7 +18,7 @@ class AlertRulesTest {
                                       String method) {
         return new StockPolicy("P-1", "DEP-A", level, true, 0.95, 21, daily, daily * 21, daily * 21, "poisson",
                 reorderPoint, 10, reorderPoint + 10, onHand, 0, 0, onHand, 0.5, pumpDays, method, null, 2.5, "USD", 10,
-                10, "Supplier");
+                10, "Supplier", "reorder point + economic order quantity");
     }
 
     private static final List<ReorderAlert.WaitingPump> TWO_WAITING = List.of(

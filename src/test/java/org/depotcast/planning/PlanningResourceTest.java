@@ -127,6 +127,31 @@ class PlanningResourceTest {
     }
 
     @Test
+    void depotsAndKitsHoldAtMost180DaysOfCoverUnlessAPackNeedsMore() {
+        int checked = 0;
+        for (String location : List.of("DEP-TESHVALE", "DEP-PELLOWDENE", "KIT-M01")) {
+            List<Map<String, Object>> policies = as("lead").queryParam("location", location).get("/api/planning/policies")
+                    .then().statusCode(200).extract().jsonPath().getList("$");
+            for (Map<String, Object> p : policies) {
+                double daily = ((Number) p.get("dailyDemand")).doubleValue();
+                double upTo = ((Number) p.get("orderUpTo")).doubleValue();
+                double s = ((Number) p.get("reorderPoint")).doubleValue();
+                int pack = location.startsWith("KIT") ? 1 : ((Number) p.get("packSize")).intValue();
+                String rule = (String) p.get("orderUpToRule");
+                assertFalse(rule == null || rule.isBlank(), p.toString());
+                if (daily > 0) {
+                    checked++;
+                    assertTrue(upTo <= Math.max(Math.floor(daily * 180), s + pack) + 1e-9, p.toString());
+                    if (upTo > Math.floor(daily * 180)) {
+                        assertTrue(rule.contains("one pack") || rule.contains("one unit") || rule.contains("shelf"), p.toString());
+                    }
+                }
+            }
+        }
+        assertTrue(checked > 20, "policies with demand checked: " + checked);
+    }
+
+    @Test
     void transferSuggestionsNeverTakeADonorBelowItsReorderPoint() {
         List<Map<String, Object>> suggestions = as("officer").get("/api/planning/transfers/suggestions")
                 .then().statusCode(200).extract().jsonPath().getList("$");
