@@ -43,7 +43,7 @@ public class StatelessForecastService {
                 try {
                     parsed = ForecastMethod.valueOf(method.strip().toUpperCase(Locale.ROOT));
                 } catch (IllegalArgumentException e) {
-                    errors.add(new FieldError("method", "must be one of croston, sba, sbj, tsb, ses, poisson, auto; was '" + method + "'"));
+                    errors.add(new FieldError("method", "must be one of croston, sba, sbj, tsb, ses, poisson, mean12, combined, auto; was '" + method + "'"));
                 }
             }
             if (alpha != null && !(alpha > 0 && alpha <= 1)) {

@@ -13,10 +13,21 @@ public enum ForecastMethod {
     /** Simple exponential smoothing. */
     SES,
     /** Constant Poisson rate: the mean of the history. */
-    POISSON;
+    POISSON,
+    /** Mean of the last 12 periods (all of them when fewer): the plain benchmark a method has to beat. */
+    MEAN12,
+    /**
+     * Equal-weight mean of SBA, TSB, SES, the Poisson mean and the 12-period mean, each with its own tuned constants:
+     * combining forecasts is more robust than choosing one on a short backtest (Clemen 1989, IJF 5(4):559–583; for
+     * intermittent demand Petropoulos &amp; Kourentzes 2015, JORS 66(6):914–924).
+     */
+    COMBINED;
+
+    /** The methods {@link #COMBINED} averages. */
+    public static final java.util.List<ForecastMethod> COMBINED_PARTS = java.util.List.of(SBA, TSB, SES, POISSON, MEAN12);
 
     public boolean usesAlpha() {
-        return this != POISSON;
+        return this != POISSON && this != MEAN12 && this != COMBINED;
     }
 
     public boolean usesBeta() {

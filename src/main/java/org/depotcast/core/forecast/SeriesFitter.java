@@ -21,6 +21,9 @@ public final class SeriesFitter {
     /** Chooses α (and β for TSB) where not given (NaN) by the in-sample grid search, then fits. */
     public static FittedSeries fitOptimised(double[] y, ForecastMethod method, double alpha, double beta) {
         Series.requireValid(y);
+        if (method == ForecastMethod.COMBINED) {
+            return combined(y);
+        }
         if (!method.usesAlpha() || (!Double.isNaN(alpha) && (!method.usesBeta() || !Double.isNaN(beta)))) {
             return fit(y, method, alpha, beta);
         }
@@ -49,12 +52,37 @@ public final class SeriesFitter {
         return fit(y, method, bestAlpha, bestBeta);
     }
 
+    /** {@link ForecastMethod#COMBINED}: each part tuned on its own, forecasts and fitted values averaged. */
+    private static FittedSeries combined(double[] y) {
+        double[] fitted = new double[y.length];
+        double forecast = 0;
+        int parts = ForecastMethod.COMBINED_PARTS.size();
+        for (ForecastMethod part : ForecastMethod.COMBINED_PARTS) {
+            FittedSeries f = fitOptimised(y, part, Double.NaN, Double.NaN);
+            forecast += f.perPeriod() / parts;
+            for (int t = 0; t < y.length; t++) {
+                fitted[t] += f.fitted()[t] / parts;
+            }
+        }
+        return new FittedSeries(ForecastMethod.COMBINED, Double.NaN, Double.NaN, forecast,
+                Smoothing.meanSquaredError(y, fitted), fitted);
+    }
+
     static double run(double[] y, ForecastMethod method, double alpha, double beta, double[] fitted) {
+        if (method == ForecastMethod.COMBINED) {
+            FittedSeries f = combined(y);
+            if (fitted != null) {
+                System.arraycopy(f.fitted(), 0, fitted, 0, y.length);
+            }
+            return f.perPeriod();
+        }
         return switch (method) {
             case CROSTON, SBA, SBJ -> Smoothing.croston(y, alpha, method, fitted);
             case TSB -> Smoothing.tsb(y, alpha, beta, Smoothing.TsbStart.MEAN, fitted);
             case SES -> Smoothing.ses(y, alpha, fitted);
             case POISSON -> Smoothing.poissonMean(y, fitted);
+            case MEAN12 -> Smoothing.movingMean(y, 12, fitted);
+            case COMBINED -> throw new IllegalStateException("handled above");
         };
     }
 

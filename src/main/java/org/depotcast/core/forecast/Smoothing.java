@@ -118,6 +118,24 @@ public final class Smoothing {
         return sum / y.length;
     }
 
+    /**
+     * Mean of the last {@code window} periods (all when fewer); fitted[t] is the mean of the {@code window} periods
+     * before t (NaN at t = 0).
+     */
+    public static double movingMean(double[] y, int window, double[] fitted) {
+        double sum = 0;
+        for (int t = 0; t < y.length; t++) {
+            if (fitted != null) {
+                fitted[t] = t == 0 ? Double.NaN : sum / Math.min(t, window);
+            }
+            sum += y[t];
+            if (t >= window) {
+                sum -= y[t - window];
+            }
+        }
+        return sum / Math.min(y.length, window);
+    }
+
     /** Mean squared one-step error over the periods that have a fitted value; NaN if none. */
     static double meanSquaredError(double[] y, double[] fitted) {
         double sse = 0;

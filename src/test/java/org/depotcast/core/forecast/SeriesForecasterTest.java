@@ -26,12 +26,23 @@ class SeriesForecasterTest {
     @Test
     void autoBacktestsEveryCandidateAndReportsScores() {
         SeriesForecast f = SeriesForecaster.forecast(poissonSeries(0.4, 72, 3), null, Double.NaN, Double.NaN, 6);
-        assertEquals(5, f.backtest().size());
+        double[] y = poissonSeries(0.4, 72, 3);
+        assertEquals(7, f.backtest().size());
         assertEquals(6, f.forecast().length);
-        ErrorScores chosen = f.backtest().get(f.method());
-        for (ErrorScores other : f.backtest().values()) {
-            assertTrue(chosen.rmsse() <= other.rmsse() + 1e-12);
+        assertEquals(ForecastMethod.COMBINED, f.method());
+        // The combination is the plain mean of its parts' forecasts.
+        double sum = 0;
+        for (ForecastMethod part : ForecastMethod.COMBINED_PARTS) {
+            sum += SeriesFitter.fitOptimised(y, part, Double.NaN, Double.NaN).perPeriod();
         }
+        assertEquals(sum / 5, f.forecast()[0], 1e-12);
+        // The 12-period mean: the last 12 values' mean.
+        double last12 = 0;
+        for (int t = 60; t < 72; t++) {
+            last12 += y[t];
+        }
+        assertEquals(last12 / 12, Smoothing.movingMean(y, 12, null), 1e-12);
+        assertEquals(2.0, Smoothing.movingMean(new double[]{1, 3}, 12, null), 1e-12);
         // Forecast of a stationary Poisson(0.4) series stays near its rate.
         assertEquals(0.4, f.forecast()[0], 0.2);
     }
