@@ -29,7 +29,8 @@ public class ForecastExplorerService {
     static final String BACKTEST_BASIS = "Rolling origin over the last 12 months, 3 months ahead, on the same monthly "
             + "history; lowest RMSSE wins, ties to the smaller bias.";
     static final String HOLDOUT_BASIS = "Last 12 months held out: the fleet model and the best history method each "
-            + "fitted without them, scored by RMSSE on them; the lower is used.";
+            + "fitted without them and scored by RMSSE on them, shown for comparison. Where a fleet model covers the part, "
+            + "the forecast takes the fleet rate updated by the part's own history (credibility weighting), not the lower score.";
     private static final double HOURS_PER_YEAR_FACTOR = 365.25;
     private static final double[] DEPTHS_M = {10, 20, 30, 40, 50, 60, 70, 80, 90, 100};
     private static final double[] HOURS_PER_DAY = {1, 2, 3, 4, 5, 6, 7, 8, 9, 10, 11, 12};
