@@ -64,6 +64,18 @@ public final class QueryParams {
         return parsed;
     }
 
+    /** {@code true} or {@code false} (any case); absent or blank is false. */
+    public static boolean optionalBoolean(String name, String value) {
+        if (value == null || value.isBlank()) {
+            return false;
+        }
+        return switch (value.strip().toLowerCase(java.util.Locale.ROOT)) {
+            case "true" -> true;
+            case "false" -> false;
+            default -> throw new InvalidInputException(name, "must be true or false, was '" + shown(value) + "'");
+        };
+    }
+
     public static Integer optionalInt(String name, String value) {
         if (value == null || value.isBlank()) {
             return null;

@@ -16,13 +16,18 @@ class ForecastRepository implements PanacheRepository<PartForecast> {
                 .setParameter("done", ForecastRun.Status.DONE).setParameter("asOf", ForecastRunService.AS_OF_TRIGGER).setMaxResults(1).getResultStream().findFirst();
     }
 
-    List<ForecastRun> recentRuns(ForecastRun.Status status, int limit) {
-        if (status == null) {
-            return getEntityManager().createQuery("select r from ForecastRun r order by r.id desc", ForecastRun.class)
-                    .setMaxResults(limit).getResultList();
+    /** Newest first; {@code status} null for every state; {@code planningOnly} leaves out runs as of a past date. */
+    List<ForecastRun> recentRuns(ForecastRun.Status status, boolean planningOnly, int limit) {
+        String where = (status == null ? "1 = 1" : "r.status = :status") + (planningOnly ? " and r.triggerKind <> :asOf" : "");
+        var query = getEntityManager().createQuery("select r from ForecastRun r where " + where + " order by r.id desc",
+                ForecastRun.class);
+        if (status != null) {
+            query.setParameter("status", status);
         }
-        return getEntityManager().createQuery("select r from ForecastRun r where r.status = :status order by r.id desc",
-                ForecastRun.class).setParameter("status", status).setMaxResults(limit).getResultList();
+        if (planningOnly) {
+            query.setParameter("asOf", ForecastRunService.AS_OF_TRIGGER);
+        }
+        return query.setMaxResults(limit).getResultList();
     }
 
     Optional<ForecastRun> run(long id) {

@@ -69,11 +69,16 @@ class ForecastResource {
                 .location(uri.getAbsolutePathBuilder().path(Long.toString(id)).build()).build();
     }
 
-    /** Recent runs, newest first: {@code status=DONE&limit=1} is the run whose forecasts planning uses now. */
+    /**
+     * Recent runs, newest first: {@code status=DONE&planning=true&limit=1} is the run whose forecasts planning uses
+     * now ({@code planning=true} leaves out runs as of a past origin, which are kept for checking accuracy).
+     */
     @GET
     @Path("runs")
-    public List<RunResponse> runs(@QueryParam("status") String status, @QueryParam("limit") String limit) {
+    public List<RunResponse> runs(@QueryParam("status") String status, @QueryParam("planning") String planning,
+                                  @QueryParam("limit") String limit) {
         return runs.recent(QueryParams.optionalEnum("status", status, ForecastRun.Status.class),
+                QueryParams.optionalBoolean("planning", planning),
                 QueryParams.intInRange("limit", limit, 10, 1, 100)).stream().map(RunResponse::from).toList();
     }
 

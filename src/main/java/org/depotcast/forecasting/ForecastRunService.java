@@ -110,9 +110,9 @@ public class ForecastRunService {
         return QuarkusTransaction.requiringNew().call(repository::latestFinishedRun);
     }
 
-    /** Newest first; {@code status} null for every state. */
-    public java.util.List<ForecastRun> recent(ForecastRun.Status status, int limit) {
-        return QuarkusTransaction.requiringNew().call(() -> repository.recentRuns(status, limit));
+    /** Newest first; {@code status} null for every state; {@code planningOnly} leaves out as-of runs. */
+    public java.util.List<ForecastRun> recent(ForecastRun.Status status, boolean planningOnly, int limit) {
+        return QuarkusTransaction.requiringNew().call(() -> repository.recentRuns(status, planningOnly, limit));
     }
 
     public ForecastRun run(long id) {

@@ -3,11 +3,12 @@ package org.depotcast.forecasting;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 
-public record RunResponse(long id, String trigger, String status, LocalDate origin, OffsetDateTime startedAt, OffsetDateTime finishedAt,
+/** One forecast run; {@code forPlanning} is false for a run as of a past origin, which planning never reads. */
+public record RunResponse(long id, String trigger, boolean forPlanning, String status, LocalDate origin, OffsetDateTime startedAt, OffsetDateTime finishedAt,
                           LocalDate historyFrom, LocalDate historyTo, int horizonMonths, int seriesDone,
                           int seriesTotal, String message) {
     static RunResponse from(ForecastRun r) {
-        return new RunResponse(r.id, r.triggerKind, r.status.name(), r.origin, r.startedAt, r.finishedAt, r.historyFrom,
+        return new RunResponse(r.id, r.triggerKind, !ForecastRunService.AS_OF_TRIGGER.equals(r.triggerKind), r.status.name(), r.origin, r.startedAt, r.finishedAt, r.historyFrom,
                 r.historyTo, r.horizonMonths, r.seriesDone, r.seriesTotal, r.message);
     }
 }

@@ -54,7 +54,7 @@ class PlanningResource {
     public List<ReorderAlert> alerts(@QueryParam("location") String location, @QueryParam("kind") String kind,
                                      @QueryParam("includeSnoozed") String includeSnoozed) {
         return alerts.alerts(location, QueryParams.optionalEnum("kind", kind, AlertKind.class),
-                "true".equalsIgnoreCase(includeSnoozed));
+                QueryParams.optionalBoolean("includeSnoozed", includeSnoozed));
     }
 
     @POST

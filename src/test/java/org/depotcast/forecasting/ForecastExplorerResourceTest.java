@@ -97,6 +97,22 @@ class ForecastExplorerResourceTest {
     }
 
     @Test
+    void theRunPlanningUsesIsNeverAnAsOfRunEvenWhenThatIsNewer() {
+        int planningRun = runs.latestFinished().orElseThrow().id.intValue();
+        ForecastRun check = runs.runNow(ForecastRunService.AS_OF_TRIGGER, LocalDate.of(2025, 12, 2));
+        assertEquals(ForecastRun.Status.DONE, check.status);
+        assertTrue(check.id > planningRun, "the as-of run is the newest finished run");
+
+        as("officer").get("/api/forecast/runs?status=DONE&limit=1").then().statusCode(200)
+                .body("[0].id", equalTo(check.id.intValue())).body("[0].forPlanning", equalTo(false))
+                .body("[0].origin", equalTo("2025-12-01"));
+        as("officer").get("/api/forecast/runs?status=DONE&planning=true&limit=1").then().statusCode(200)
+                .body("[0].id", equalTo(planningRun)).body("[0].forPlanning", equalTo(true));
+        as("officer").get("/api/forecast/runs?planning=maybe").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("planning"));
+    }
+
+    @Test
     void badReferenceValuesAndUnknownFamiliesAreNamed() {
         as("lead").queryParam("depthM", -3).get("/api/forecast/explorer/fleet-models/PUMP_ROD").then().statusCode(400)
                 .contentType(PROBLEM).body("errors.field", hasItem("depthM"));

@@ -14,7 +14,7 @@ function month(iso) {
 }
 
 export async function provenance(el, me) {
-    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', limit: 1});
+    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1});
     if (run) {
         mount(el, `Planning numbers from forecast run ${run.id}, which finished ${fmt.dateTime(run.finishedAt)} `
             + `(${fmt.relative(run.finishedAt)})`, run.historyFrom ? `, using the repair history ${month(run.historyFrom)} – ${month(run.historyTo)}.` : '.');

@@ -7,7 +7,7 @@ import * as api from '/app/js/api.js';
 export async function fetchSnapshot(me) {
     const kit = me.kitCode;
     const [runs, balances, pumps, due, openRepairs, requests, parts] = await Promise.all([
-        api.get('/api/forecast/runs', {status: 'DONE', limit: 1}),
+        api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1}),
         kit ? api.get('/api/stock/balances', {location: kit}) : [],
         api.get('/api/pumps'),
         api.get('/api/pumps/service-due'),

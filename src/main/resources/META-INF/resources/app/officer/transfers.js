@@ -19,7 +19,7 @@ async function load() {
         return;
     }
     // Suggestions need forecasts: before the first run there are none to ask for.
-    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', limit: 1});
+    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1});
     const [suggestions, inbound, outbound] = await Promise.all([
         run ? api.get('/api/planning/transfers/suggestions') : null,
         api.get('/api/planning/transfers', {to: store.code, state: 'IN_TRANSIT'}),
