@@ -3,7 +3,8 @@
  * API's cross-site protection asks of cookie-signed writes (DEVELOPERS.md, "Sign-in"), on reads too, so the API
  * answers 401 instead of a password box.
  *   get(path, query?)              JSON (or text for CSV answers)
- *   post(path, body?) put(path, body) del(path)
+ *   post(path, body?) put(path, body) patch(path, body) del(path)
+ *   send(method, path, body?)      any of them by name (the mechanic's outbox keeps the method with the item)
  *   upload(path, text, type?)      a CSV or other text body
  *   query(path, {name: value})     path with the non-empty values as query parameters
  *   clientRef(prefix?)             a random reference made on this device, for resends that must count once
@@ -77,6 +78,8 @@ async function call(method, path, body, contentType) {
 export const get = (path, params) => call('GET', params ? query(path, params) : path);
 export const post = (path, body) => call('POST', path, body);
 export const put = (path, body) => call('PUT', path, body);
+export const patch = (path, body) => call('PATCH', path, body);
+export const send = (method, path, body) => call(method, path, body);
 export const del = path => call('DELETE', path);
 export const upload = (path, text, type = 'text/csv') => call('POST', path, text, type);
 

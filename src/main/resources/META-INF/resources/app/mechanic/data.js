@@ -50,10 +50,10 @@ export function coming(snapshot, waiting) {
     return byPart;
 }
 
-/** Parts that waiting (unsent) fixed repairs will take out of the kit. */
+/** Parts that waiting (unsent) fixed repairs and closings will take out of the kit. */
 export function waitingUse(waiting) {
     const byPart = new Map();
-    for (const item of waiting.filter(i => i.kind === 'repair' && i.body.fixedOn)) {
+    for (const item of waiting.filter(i => (i.kind === 'repair' || i.kind === 'close') && i.body.fixedOn)) {
         (item.body.lines || []).forEach(l => byPart.set(l.partNumber, (byPart.get(l.partNumber) || 0) + Number(l.quantity)));
     }
     return byPart;

@@ -10,7 +10,7 @@ import {partLabel} from './views.js';
 
 let fieldIds = 0;
 
-function field(label, input, hint) {
+export function field(label, input, hint) {
     const id = input.id || `f${++fieldIds}`;
     input.id = id;
     return h('div', {class: 'field'}, h('label', {for: id}, label, hint ? h('span', {class: 'hint'}, hint) : null), input);
@@ -23,7 +23,7 @@ function pumpSelect(snapshot, name, withKit) {
 }
 
 /** Rows of part and quantity; `choices` lists the part numbers offered. */
-function partLines(snapshot, legend, choices, describe) {
+export function partLines(snapshot, legend, choices, describe) {
     const list = h('div', {class: 'part-lines'});
     const box = h('fieldset', {}, h('legend', {}, legend), list);
     const add = (partNumber = '', quantity = 1) => {
@@ -44,7 +44,7 @@ function partLines(snapshot, legend, choices, describe) {
     })};
 }
 
-function checkLines(lines, required) {
+export function checkLines(lines, required) {
     const errors = [];
     const seen = new Set();
     lines.forEach((l, i) => {
@@ -66,12 +66,12 @@ function checkLines(lines, required) {
     return errors;
 }
 
-function refuse(form, errors) {
+export function refuse(form, errors) {
     showError({errors, detail: 'Check the marked fields; nothing was saved.'}, form);
     return false;
 }
 
-function describeKit(snapshot) {
+export function describeKit(snapshot) {
     const onHand = new Map(snapshot.balances.map(b => [b.partNumber, b.onHand]));
     return n => `${partLabel(snapshot, n)} (${fmt.num(onHand.get(n) || 0, 2)} in kit)`;
 }

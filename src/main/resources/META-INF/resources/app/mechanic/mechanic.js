@@ -11,6 +11,7 @@ import {sendWaiting} from './send.js';
 import {fetchSnapshot} from './data.js';
 import {kitView, pumpCard, needsAttention, requestsView, outboxView} from './views.js';
 import {askForm, repairForm, statusForm} from './forms.js';
+import {closeForm} from './close.js';
 
 const main = document.getElementById('main');
 const el = id => document.getElementById(id);
@@ -31,7 +32,7 @@ function layout() {
         h('div', {class: 'mech-sync card', id: 'sync'}),
         h('nav', {class: 'mech-jump', 'aria-label': 'Parts of this page'}, [['outbox', 'Waiting'], ['kit', 'Kit'],
             ['pumps', 'Pumps'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
-            ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label))),
+            ['close', 'Close a repair'], ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label))),
         section('outbox', 'Waiting to send', h('div', {id: 'outbox-body'})),
         section('kit', 'My kit', h('p', {class: 'provenance', id: 'kit-provenance'}), h('div', {id: 'kit-body'})),
         section('pumps', 'My pumps', h('div', {class: 'row mech-filter'},
@@ -42,6 +43,7 @@ function layout() {
         section('requests', 'My requests', h('div', {id: 'requests-body'})),
         section('ask', 'Ask for parts', h('div', {id: 'ask-body'})),
         section('repair', 'Record a repair', h('div', {id: 'repair-body'})),
+        section('close', 'Close a repair as fixed', h('div', {id: 'close-body'})),
         section('report', 'Report a pump broken or working', h('div', {id: 'report-body'})),
         caution());
 }
@@ -86,13 +88,16 @@ function drawData() {
     mount(el('kit-body'), kitView(snapshot, outbox, (asset, wanted) => act('ask', asset, wanted)));
     mount(el('requests-body'), requestsView(snapshot, outbox));
     drawPumps();
-    const key = JSON.stringify([snapshot.pumps.map(p => p.assetId + p.status), snapshot.balances.map(b => b.partNumber + b.onHand)]);
+    const key = JSON.stringify([snapshot.pumps.map(p => p.assetId + p.status), snapshot.balances.map(b => b.partNumber + b.onHand),
+        snapshot.openRepairs.map(r => r.repairRef)]);
     if (key !== formsKey) {
         formsKey = key;
-        forms = {ask: askForm(snapshot, queue), repair: repairForm(snapshot, queue), report: statusForm(snapshot, queue)};
+        forms = {ask: askForm(snapshot, queue), repair: repairForm(snapshot, queue), report: statusForm(snapshot, queue),
+            close: closeForm(snapshot, queue)};
         mount(el('ask-body'), forms.ask.form);
         mount(el('repair-body'), forms.repair.form);
         mount(el('report-body'), forms.report.form);
+        mount(el('close-body'), forms.close.form);
     }
 }
 
@@ -103,7 +108,7 @@ async function drawOutbox() {
 }
 
 function act(kind, assetId, extra) {
-    const target = {ask: 'ask', repair: 'repair', status: 'report'}[kind];
+    const target = {ask: 'ask', repair: 'repair', status: 'report', close: 'close'}[kind];
     forms[target].open(assetId, extra);
     el(target).scrollIntoView({block: 'start'});
     forms[target].form.querySelector('select, input, textarea').focus({preventScroll: true});

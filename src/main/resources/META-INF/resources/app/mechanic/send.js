@@ -7,6 +7,7 @@
  */
 import * as api from '/app/js/api.js';
 import * as store from './store.js';
+import * as fmt from '/app/js/format.js';
 
 const REFUSALS = new Set([400, 403, 404, 409, 422]);
 
@@ -26,9 +27,21 @@ function withLock(work) {
 }
 
 export function refusalText(error) {
-    const lead = error.detail || error.title || `The server answered ${error.status}.`;
+    const detail = error.detail || error.title || `The server answered ${error.status}.`;
+    const own = (error.errors || []).find(e => e.field && e.message === detail);
+    // "is already recorded as …" alone does not say what is: name the field in the form's words.
+    const lead = own ? `${capital(fieldWords(own.field))}: ${detail}` : detail;
     const fields = (error.errors || []).filter(e => !lead.includes(e.message)).map(e => `${fieldWords(e.field)}: ${e.message}`);
-    return fields.length ? `${lead} (${fields.join('; ')})` : lead;
+    return localDates(fields.length ? `${lead} (${fields.join('; ')})` : lead);
+}
+
+function capital(text) {
+    return text.charAt(0).toUpperCase() + text.slice(1);
+}
+
+/** The server's ISO days (2026-12-01) as the phone's own dates. */
+function localDates(text) {
+    return text.replace(/\b(\d{4}-\d{2}-\d{2})\b/g, (day) => fmt.date(day));
 }
 
 /** lines[0].partNumber → "part line 1, part number": the form's words, not the JSON path. */
@@ -47,7 +60,7 @@ async function sendAll(username, onEach) {
             continue;
         }
         try {
-            await api.post(item.path, item.body);
+            await api.send(item.method || 'POST', item.path, item.body);
             await store.remove(item.id);
             result.sent++;
         } catch (e) {

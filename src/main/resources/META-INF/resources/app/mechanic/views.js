@@ -73,6 +73,18 @@ export function needsAttention(pump, due, repairs, waiting) {
         || waiting.some(i => i.assetId === pump.assetId);
 }
 
+/** An open repair on a pump's card, with the button that closes it, or the words that its closing waits to send. */
+function openRepair(snapshot, r, waiting, act) {
+    const closing = waiting.find(i => i.kind === 'close' && i.ref === r.repairRef);
+    return h('li', {'data-repair': r.repairRef},
+        `Open ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'}, reported ${fmt.date(r.reportedOn)}`,
+        r.fault ? `: ${r.fault}` : '', r.lines.length ? `; needs ${r.lines.map(l => `${fmt.qty(l.quantity, unitOf(snapshot, l.partNumber))} ${l.partNumber}`).join(', ')}` : '',
+        h('span', {class: 'hint'}, `Reference ${r.repairRef}`),
+        closing ? h('p', {}, state(closing.state === 'refused' ? 'Closing refused: see "Waiting to send"' : 'Closed on this phone: waiting to send',
+            closing.state === 'refused' ? 'urgent' : 'info'))
+            : h('button', {type: 'button', class: 'close-repair', onclick: () => act('close', r.assetId, r.repairRef)}, 'Close as fixed'));
+}
+
 export function pumpCard(snapshot, pump, due, repairs, waiting, act) {
     const statusWords = pump.status === 'BROKEN' ? [`Broken since ${fmt.date(pump.statusSince || pump.brokenSince)}`, 'urgent']
         : [`Working${pump.statusSince ? ` since ${fmt.date(pump.statusSince)}` : ''}`, 'ok'];
@@ -82,9 +94,7 @@ export function pumpCard(snapshot, pump, due, repairs, waiting, act) {
             `${pump.modelCode}, ${fmt.num(pump.depthM, 1)} m deep`)),
         h('p', {}, state(...statusWords), pump.statusNote ? h('span', {class: 'hint'}, pump.statusNote) : null),
         serviceLine(due),
-        repairs.length ? h('ul', {class: 'pump__repairs', 'aria-label': 'Open repairs'}, repairs.map(r => h('li', {},
-            `Open ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'} ${r.repairRef}, reported ${fmt.date(r.reportedOn)}`,
-            r.fault ? `: ${r.fault}` : '', r.lines.length ? `; needs ${r.lines.map(l => `${fmt.qty(l.quantity, unitOf(snapshot, l.partNumber))} ${l.partNumber}`).join(', ')}` : '')))
+        repairs.length ? h('ul', {class: 'pump__repairs', 'aria-label': 'Open repairs'}, repairs.map(r => openRepair(snapshot, r, waiting, act)))
             : null,
         mine.length ? h('p', {class: 'hint'}, `${mine.length} of your actions for this pump ${mine.length === 1 ? 'is' : 'are'} waiting to send.`) : null,
         h('div', {class: 'row pump__actions'},
