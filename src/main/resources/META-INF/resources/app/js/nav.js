@@ -7,7 +7,8 @@
  * LINKS lists each role's pages; a page whose path starts with a link's path marks that link current.
  */
 import * as api from './api.js';
-import {h} from './ui.js';
+import {h, ask, say} from './ui.js';
+import * as device from './device.js';
 
 export const ROLE_WORDS = {
     'stores-officer': 'stores officer', mechanic: 'area mechanic', 'programme-lead': 'programme lead',
@@ -25,14 +26,54 @@ export function roleWords(roles) {
     return roles.map(r => ROLE_WORDS[r] || r).join(', ');
 }
 
+const NEEDS_CONNECTION = 'Signing out needs a connection to the server, which ends your session there. You are still '
+    + 'signed in and nothing was deleted from this phone; sign out again when the connection is back.';
+
+/**
+ * Signs out and clears what this browser kept for the person (device.js). Actions made on the phone that have not
+ * reached the server are never dropped without asking: the person is told what they are and chooses. Signing out
+ * needs the server (it ends the session), so with no connection nothing is cleared and the page says why.
+ */
 export async function signOut() {
-    try {
-        await fetch('/sign-out', {method: 'POST', credentials: 'same-origin',
-            headers: {Accept: 'application/json', [api.PAGE_HEADER]: api.PAGE_HEADER_VALUE}});
-    } finally {
-        localStorage.removeItem(api.SIGNED_IN_MARK);
-        location.assign('/sign-in.html?signed-out');
+    if (!navigator.onLine) {
+        say(NEEDS_CONNECTION, 'error');
+        return;
     }
+    const unsent = await device.unsent().catch(() => []);
+    if (unsent.length && !(await ask(dropQuestion(unsent)))) {
+        say('You are still signed in; nothing was deleted.', 'ok');
+        return;
+    }
+    let answer;
+    try {
+        answer = await fetch('/sign-out', {method: 'POST', credentials: 'same-origin',
+            headers: {Accept: 'application/json', [api.PAGE_HEADER]: api.PAGE_HEADER_VALUE}});
+    } catch (e) {
+        say(NEEDS_CONNECTION, 'error');
+        return;
+    }
+    if (!answer.ok) {
+        say(`The server could not sign you out (it answered ${answer.status}); you are still signed in. Try again in a moment.`, 'error');
+        return;
+    }
+    await device.forget();
+    location.assign('/sign-in.html?signed-out');
+}
+
+function dropQuestion(unsent) {
+    const refused = unsent.filter(i => i.state === 'refused').length;
+    const waiting = unsent.length - refused;
+    const parts = [waiting ? `${waiting} waiting to send` : null, refused ? `${refused} refused by the server` : null].filter(Boolean);
+    const shown = unsent.slice(0, 5);
+    return {
+        title: `${unsent.length} ${unsent.length === 1 ? 'action has' : 'actions have'} not reached the server`,
+        lines: [`Made on this phone and not on the server yet (${parts.join(', ')}):`,
+            h('ul', {}, shown.map(i => h('li', {}, i.summary)), unsent.length > shown.length
+                ? h('li', {}, `and ${unsent.length - shown.length} more`) : null),
+            'Signing out deletes everything kept on this phone, these actions too: they would never be sent. To keep '
+            + 'them, stay signed in until the connection is back and they are sent (or, if refused, until you have dealt with them).'],
+        yes: 'Delete them and sign out', no: 'Stay signed in'
+    };
 }
 
 export function topBar(me) {

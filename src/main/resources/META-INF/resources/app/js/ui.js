@@ -11,6 +11,8 @@
  *                                errors are put beside the form's inputs (name="field" or data-field="field")
  *   busy(button, asyncFn)        disables the button while the work runs, shows errors, returns the result
  *   caution()                    the safety caution: one line, the full text a click away
+ *   ask({title, lines, yes, no}) a modal question in words; resolves true only for the `yes` button (Escape and
+ *                                `no` answer false, and `no` has the focus, so a stray tap changes nothing)
  */
 export function h(tag, attrs, ...children) {
     const el = document.createElement(tag);
@@ -149,4 +151,25 @@ export function caution() {
         h('p', {}, 'Parts in contact with drinking water (seals, pipes, grease) and any substitute part must be approved '
             + 'for that use where the pump is installed; catalogue descriptions certify nothing. After any repair that '
             + 'opens the rising main, the water supply authority\'s disinfection and testing rules apply.')));
+}
+
+export function ask({title, lines, yes, no}) {
+    return new Promise(resolve => {
+        const answer = value => () => {
+            dialog.close();
+            dialog.remove();
+            resolve(value);
+        };
+        const stay = h('button', {type: 'button', class: 'primary', id: 'ask-no', onclick: answer(false)}, no);
+        const dialog = h('dialog', {class: 'ask', 'aria-labelledby': 'ask-title'},
+            h('h2', {id: 'ask-title'}, title), lines.map(l => (l instanceof Node ? l : h('p', {}, l))),
+            h('p', {class: 'row'}, stay, h('button', {type: 'button', id: 'ask-yes', class: 'danger', onclick: answer(true)}, yes)));
+        dialog.addEventListener('cancel', e => {
+            e.preventDefault();
+            answer(false)();
+        });
+        document.body.append(dialog);
+        dialog.showModal();
+        stay.focus();
+    });
 }

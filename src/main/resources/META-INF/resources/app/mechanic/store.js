@@ -20,7 +20,11 @@ function database() {
                 request.result.createObjectStore('snapshot', {keyPath: 'username'});
                 request.result.createObjectStore('outbox', {keyPath: 'id', autoIncrement: true});
             };
-            request.onsuccess = () => resolve(request.result);
+            request.onsuccess = () => {
+                // Sign-out deletes this database (device.js): let it, rather than block it while the page is open.
+                request.result.onversionchange = () => request.result.close();
+                resolve(request.result);
+            };
             request.onerror = () => reject(request.error);
         });
     }
