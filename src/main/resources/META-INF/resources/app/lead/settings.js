@@ -60,8 +60,12 @@ function laneCost(lane) {
     form.addEventListener('submit', e => {
         e.preventDefault();
         busy(e.submitter || form.querySelector('button'), async () => {
-            await api.put('/api/planning/transfer-costs', {from: lane.from, to: lane.to,
-                unitCost: form.unitCost.value === '' ? null : Number(form.unitCost.value)});
+            if (form.unitCost.value === '') {
+                // The API keeps a set cost until another replaces it; the by-distance figure is the placeholder.
+                throw {errors: [{field: 'unitCost', message: `give a cost per unit, 0 or more (by distance: ${fmt.num(lane.distanceCost, 2)})`}],
+                    detail: `Lane ${lane.from} to ${lane.to}: nothing was saved.`};
+            }
+            await api.put('/api/planning/transfer-costs', {from: lane.from, to: lane.to, unitCost: Number(form.unitCost.value)});
             say(`Lane ${lane.from} to ${lane.to}: ${fmt.money(form.unitCost.value, currency)} a unit.`, 'ok');
             await showLanes();
         }, form);

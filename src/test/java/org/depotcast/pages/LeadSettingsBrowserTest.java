@@ -1,0 +1,89 @@
+package org.depotcast.pages;
+
+import io.quarkus.test.junit.QuarkusTest;
+import jakarta.inject.Inject;
+import org.depotcast.TestData;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.StaleElementReferenceException;
+import org.openqa.selenium.WebElement;
+
+import java.time.Duration;
+import java.util.Map;
+
+import static org.depotcast.TestData.as;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The programme lead changes a part class's service level and a lane's transport cost on the settings page, and the
+ * API reads the change back; a level out of range is refused beside its input and changes nothing. The lane joins
+ * two depots of this test's own, and the service level is put back afterwards, so no other test sees a change.
+ */
+@QuarkusTest
+class LeadSettingsBrowserTest extends BrowserSession {
+    @Inject
+    TestData data;
+
+    private double level(String partClass) {
+        return as("lead").get("/api/planning/service-levels").then().statusCode(200).extract().jsonPath().getDouble(partClass);
+    }
+
+    private void enter(WebElement input, String value) {
+        input.clear();
+        input.sendKeys(value);
+    }
+
+    private void save(String formCss) {
+        WebElement button = driver.findElement(By.cssSelector(formCss + " button[type=submit]"));
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", button);
+        button.click();
+    }
+
+    private void waitSaid(String words) {
+        wait(Duration.ofSeconds(20)).ignoring(StaleElementReferenceException.class)
+                .until(d -> d.findElement(By.id("status")).getText().contains(words));
+    }
+
+    @Test
+    void theLeadSetsAServiceLevelAndALaneCostThroughThePage() {
+        String from = data.depot();
+        String to = data.depot();
+        double before = level("standard");
+        try {
+            signIn("lead", "lead-demo");
+            open("/app/lead/settings.html");
+            waitReady();
+            assertTrue(driver.findElement(By.id("provenance")).getText().matches("(?s).*(forecast run \\d+|No forecast has been run).*"));
+
+            enter(driver.findElement(By.id("level-standard")), "120");
+            save("#level-standard-form");
+            String refused = waitFor(By.cssSelector("#level-standard-form .field-error")).getText();
+            assertTrue(!refused.isBlank(), "the refusal is said beside the input");
+            assertEquals(before, level("standard"), 1e-9, "a refused level changes nothing");
+
+            enter(driver.findElement(By.id("level-standard")), "91.5");
+            save("#level-standard-form");
+            waitSaid("Standard parts: 91.5 % from now on.");
+            assertEquals(0.915, level("standard"), 1e-9);
+            assertEquals("91.5 %", waitFor(By.cssSelector("#level-standard-form .in-force")).getText());
+
+            String lane = "#lane-" + from + "-" + to;
+            WebElement cost = driver.findElement(By.cssSelector(lane));
+            driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", cost);
+            enter(cost, "3.25");
+            save("form:has(" + lane + ")");
+            waitSaid("Lane " + from + " to " + to);
+            Map<String, Object> set = as("lead").get("/api/planning/transfer-costs").then().statusCode(200).extract().jsonPath()
+                    .param("f", from).param("t", to).get("find { it.from == f && it.to == t }");
+            assertEquals(3.25, ((Number) set.get("setCost")).doubleValue(), 1e-9);
+            wait(Duration.ofSeconds(20)).ignoring(StaleElementReferenceException.class).until(d -> d.findElement(By.xpath(
+                    "//input[@id='lane-" + from + "-" + to + "']/ancestor::tr/td[@data-label='In use']")).getText().startsWith("set:"));
+            assertNoPageErrors("HTTP 400 PUT " + url("/api/planning/service-levels"),
+                    "/api/planning/service-levels - Failed to load resource: the server responded with a status of 400");
+        } finally {
+            as("lead").contentType("application/json").body(Map.of("partClass", "STANDARD", "level", before))
+                    .put("/api/planning/service-levels").then().statusCode(204);
+        }
+    }
+}
