@@ -65,6 +65,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
             assertTrue(driver.findElements(By.xpath("//div[@class='method-box']//td[@data-label='In use'][normalize-space()='used']")).size() == 1);
         }
         assertTrue(driver.getCurrentUrl().contains("part=OB-CS-50") && driver.getCurrentUrl().contains("location=DEP-PELLOWDENE"));
+        PrintedPage.assertPrintsChartAndTable(driver, "#explorer figure.chart", "lead-forecast-printed");
     }
 
     /** A wait that reads elements afresh when the page has redrawn them meanwhile. */
@@ -177,6 +178,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertTrue(total.startsWith(results.getString("currency")), total);
         assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
         assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
+        PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");
     }
 
     @Test
