@@ -237,7 +237,12 @@ public class GenerateDemoProgramme {
             double baseHours = Math.min(12, Math.max(0.5, 5 * Math.exp(0.45 * gaussian())));
             double lat = depot.lat() + 0.35 * gaussian(), lon = depot.lon() + 0.35 * gaussian();
             double currentHours = baseHours;
-            double hoursSinceService = random.nextDouble() * SERVICE_INTERVAL_HOURS;
+            // A pump installed within the records starts its service clock at zero, as the service assumes. One
+            // installed before them has run an unknown time: its clock is at a random phase, which is what the
+            // service assumes of a pump with no service on record (uniform place in the cycle). The draw is made
+            // either way so that the rest of the programme stays the same stream.
+            double phase = random.nextDouble() * SERVICE_INTERVAL_HOURS;
+            double hoursSinceService = installed.isBefore(HISTORY_START) ? phase : 0;
             LocalDate month = HISTORY_START.isAfter(installed) ? HISTORY_START : installed.withDayOfMonth(1);
             double quarterHours = baseHours;
             boolean firstMonth = true;
