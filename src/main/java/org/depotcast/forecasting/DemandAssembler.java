@@ -21,8 +21,9 @@ import java.util.function.IntConsumer;
  * Turns a fleet snapshot and the fitted fleet models into a forecast for every part at every depot, kit and the
  * whole programme. Breakdown demand comes either from the fleet model (rate per operating hour × each pump's hours ×
  * units per breakdown × its depot's shrunk ratio) or from the part's own history by a series method; which one is
- * decided per series by the declared policy, and under "auto" by the lower RMSSE over the last 12 months with the
- * fleet model refitted without them. Scheduled-service demand is added on top, pump by pump.
+ * decided per series by the declared policy; under "auto" a series the fleet model covers takes the fleet rate
+ * updated by its own history by credibility ({@link FleetCredibility}). Scheduled-service demand is added on top, pump by pump ({@link HorizonDemand}),
+ * and each forecast carries the variance of every month and of its first 12 months together ({@link DemandSpread}).
  */
 final class DemandAssembler {
     static final String PROGRAMME = "PROGRAMME";
@@ -38,12 +39,11 @@ final class DemandAssembler {
     private final int horizon;
     private final int months;
     private final Map<String, double[]> history = new LinkedHashMap<>();
-    private final Map<String, double[]> fleetFuture = new LinkedHashMap<>();
     private final Map<String, double[]> fleetHoldout = new LinkedHashMap<>();
-    private final Map<String, double[]> preventive = new LinkedHashMap<>();
     /** First history month index of each series: its real start, see {@link #seriesStart}. */
     private final Map<String, Integer> firstMonth = new java.util.HashMap<>();
     private final FleetCredibility credibility;
+    private final HorizonDemand horizonDemand;
     private Map<String, FleetCredibility.Weight> weights = Map.of();
 
     DemandAssembler(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
@@ -55,12 +55,21 @@ final class DemandAssembler {
         this.horizon = horizon;
         this.months = snapshot.months();
         this.credibility = new FleetCredibility(snapshot, models);
+        this.horizonDemand = new HorizonDemand(snapshot, definitions, horizon);
         collect();
     }
 
     /** Series keys are "partId|locationCode". */
     private static String key(long partId, String location) {
         return partId + "|" + location;
+    }
+
+    private static List<String> keysOf(long partId, List<String> locations) {
+        List<String> keys = new ArrayList<>(locations.size());
+        for (String location : locations) {
+            keys.add(key(partId, location));
+        }
+        return keys;
     }
 
     private List<String> locationsOf(long depotId, String mechanic) {
@@ -102,12 +111,11 @@ final class DemandAssembler {
                 }
             }
             if (activeNow) {
-                addPreventive(pump, locations, origin);
+                horizonDemand.addServices(pump, part -> keysOf(part.partId(), locations));
             }
         }
         // Every series with a fleet expectation or a history gets a forecast.
-        fleetFuture.keySet().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
-        preventive.keySet().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
+        horizonDemand.keys().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
     }
 
     private void addFleet(FleetSnapshot.PumpRecord pump, FleetSnapshot.BomPart part, List<String> locations,
@@ -118,23 +126,7 @@ final class DemandAssembler {
             return;
         }
         if (activeNow) {
-            // Cells: expected units in each horizon month, then the first month's variance.
-            double hoursPerDay = pump.usage().hoursPerDayOn(origin);
-            double[] units = new double[horizon + 1];
-            for (int m = 0; m < horizon; m++) {
-                // The pump ages over the horizon: its age at the middle of each forecast month.
-                double age = (origin - pump.installedDay()) / 365.25 + (m + 0.5) / 12;
-                double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), Math.max(0, age), hoursPerDay);
-                units[m] = model.ratePerHour(x) * hoursPerDay * DAYS_PER_MONTH * model.depotRatio(pump.depotId())
-                        * model.unitsPerEvent();
-            }
-            units[horizon] = units[0] * model.unitsPerEvent() * (model.fit() == null ? 1 : model.fit().varianceFactor());
-            for (String location : locations) {
-                double[] cell = fleetFuture.computeIfAbsent(key(part.partId(), location), k -> new double[horizon + 1]);
-                for (int m = 0; m <= horizon; m++) {
-                    cell[m] += units[m];
-                }
-            }
+            horizonDemand.addBreakdowns(pump, part, model, keysOf(part.partId(), locations));
         }
         if (holdout != null) {
             double[] expected = new double[HOLDOUT_MONTHS];
@@ -158,28 +150,6 @@ final class DemandAssembler {
         }
     }
 
-    private void addPreventive(FleetSnapshot.PumpRecord pump, List<String> locations, long origin) {
-        double hoursPerDay = pump.usage().hoursPerDayOn(origin);
-        double[] hoursPerMonth = new double[horizon];
-        Arrays.fill(hoursPerMonth, hoursPerDay * DAYS_PER_MONTH);
-        double[] due = pump.servicesPerMonth(origin, hoursPerMonth);
-        if (Arrays.stream(due).sum() == 0) {
-            return;
-        }
-        for (FleetSnapshot.BomPart part : pump.bom()) {
-            ForecastModelDefinition definition = definitions.get(part.family());
-            if (part.serviceKitQuantity() <= 0 || definition == null || !definition.preventive()) {
-                continue;
-            }
-            for (String location : locations) {
-                double[] cell = preventive.computeIfAbsent(key(part.partId(), location), k -> new double[horizon]);
-                for (int m = 0; m < horizon; m++) {
-                    cell[m] += due[m] * part.serviceKitQuantity();
-                }
-            }
-        }
-    }
-
     /**
      * The month a series really starts: the first month a pump using the part was in service there, or its first
      * demand, but never before the first repair on record (months before it are unrecorded, not zero).
@@ -192,7 +162,7 @@ final class DemandAssembler {
 
     /** Forecasts every series; {@code progress} is told after each one. */
     List<PartForecastResult> assemble(IntConsumer progress) {
-        List<String> weighed = fleetFuture.keySet().stream().filter(k -> policyOf(partOf(k)).equals("auto")).toList();
+        List<String> weighed = horizonDemand.fleetKeys().stream().filter(k -> policyOf(partOf(k)).equals("auto")).toList();
         java.util.Set<String> kits = new java.util.HashSet<>(snapshot.kitByMechanic().values());
         weights = credibility.weigh(weighed, history, this::seriesStart, k -> {
             String location = k.substring(k.indexOf('|') + 1);
@@ -241,27 +211,36 @@ final class DemandAssembler {
             historyScores = ErrorScores.of(training, historyHoldout, actual);
             fleetScores = fleetHold == null ? null : ErrorScores.of(training, fleetHold, actual);
         }
-        double[] fleet = fleetFuture.get(key);
+        double[] fleet = horizonDemand.fleet(key);
         // Under "auto" a series with a fleet expectation takes the fleet rate updated by its own history
         // (credibility), never a choice on one window; the holdout scores stay as diagnostics.
         boolean useFleet = fleet != null && (policy.equals("fleet") || policy.equals("auto"));
         FleetCredibility.Weight weight = policy.equals("auto")
                 ? weights.getOrDefault(key, FleetCredibility.Weight.FLEET_ONLY) : FleetCredibility.Weight.FLEET_ONLY;
-        double[] pm = preventive.getOrDefault(key, new double[horizon]);
+        double[] pm = horizonDemand.preventive(key);
         double breakdown = useFleet ? fleet[0] * weight.ratio() : fromHistory.forecast()[0];
-        // The rate's own uncertainty adds Var(ratio) × mean² to the demand's variance.
-        double variance = useFleet ? Math.max(fleet[horizon], 0) * weight.ratio() + weight.ratioVariance() * fleet[0] * fleet[0]
-                : fromHistory.perPeriodVariance();
         double[] monthly = new double[horizon];
         for (int m = 0; m < horizon; m++) {
             monthly[m] = (useFleet ? fleet[m] * weight.ratio() : breakdown) + pm[m];
         }
+        // Breakdowns' spread (process, the fitted rate's and the credibility ratio's) plus the services' timing.
+        FleetModel model = models.get(snapshot.partFamilies().get(partId));
+        DemandSpread spread = horizonDemand.spread();
+        double[] fleetVariance = useFleet ? spread.fleetVariance(key, fleet, weight, model == null ? null : model.fit()) : null;
+        double[] serviceVariance = spread.serviceVariance(key);
+        double[] monthlyVariance = new double[horizon];
+        for (int m = 0; m < horizon; m++) {
+            monthlyVariance[m] = (useFleet ? fleetVariance[m] : fromHistory.perPeriodVariance()) + serviceVariance[m];
+        }
+        double yearVariance = (useFleet ? fleetVariance[horizon] : fromHistory.perPeriodVariance() * spread.yearMonths())
+                + serviceVariance[horizon];
+        double variance = useFleet ? fleetVariance[0] : fromHistory.perPeriodVariance();
         return new PartForecastResult(partId, location, useFleet ? FLEET : fromHistory.method().name(),
                 useFleet ? Double.NaN : fromHistory.alpha(), useFleet ? Double.NaN : fromHistory.beta(),
                 DemandProfile.of(series), breakdown, variance, pm, monthly, series, snapshot.historyStart().plusMonths(start),
                 useFleet && fleetScores != null ? fleetScores : historyScores,
                 fleetScores == null ? Double.NaN : fleetScores.rmsse(), historyScores.rmsse(),
                 useFleet ? weight.describe(snapshot.historyStart().plusMonths(start)) : fromHistory.method().name().toLowerCase(Locale.ROOT)
-                        + " on the part's own history");
+                        + " on the part's own history", monthlyVariance, yearVariance);
     }
 }

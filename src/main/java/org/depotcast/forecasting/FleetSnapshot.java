@@ -43,6 +43,17 @@ public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<P
     public record PumpRecord(long id, long depotId, String mechanic, double depthM, long installedDay, long endDay,
                       int serviceIntervalHours, UsageTimeline usage, List<BomPart> bom, long lastServiceDay,
                       boolean serviceKnown) {
+        /** Operating hours since the last service (or installation), or on record with none, up to {@code day}. */
+        public double hoursSinceService(long day) {
+            return usage.hoursBetween(Math.max(lastServiceDay, installedDay), day);
+        }
+
+        /** Share of the days from {@code from} to {@code to} (exclusive) that the pump is in service. */
+        public double inServiceShare(long from, long to) {
+            long days = Math.min(to, endDay) - Math.max(from, installedDay);
+            return to <= from ? 0 : Math.max(0, Math.min(1, days / (double) (to - from)));
+        }
+
         /** Services due (or expected, when the last one is unknown) in each coming month. */
         public double[] servicesPerMonth(long origin, double[] hoursPerMonth) {
             double since = usage.hoursBetween(Math.max(lastServiceDay, installedDay), origin);

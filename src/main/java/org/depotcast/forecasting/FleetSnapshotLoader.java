@@ -64,7 +64,7 @@ public class FleetSnapshotLoader {
 
     @Transactional
     public FleetSnapshot load(LocalDate origin, int historyMonths) {
-        return asOf(origin, historyMonths, rows());
+        return asOf(origin, historyMonths, rows(), LocalDate.now(java.time.ZoneOffset.UTC));
     }
 
     private Rows rows() {
@@ -114,7 +114,19 @@ public class FleetSnapshotLoader {
      * yet known. A pump with no reading before the origin falls back to its registered daily load.
      */
     static FleetSnapshot asOf(LocalDate origin, int historyMonths, Rows rows) {
+        return asOf(origin, historyMonths, rows, LocalDate.MAX);
+    }
+
+    /**
+     * As {@link #asOf(LocalDate, int, Rows)}, and the register's plans enter too: an installation or a
+     * decommissioning dated from {@code today}'s month on (or from the origin, when that is later) is a plan known
+     * when the forecast is made, so the pump adds exposure from its installation and stops at its decommissioning
+     * over the horizon. Dates between a past origin and today's month are history that was not known at the origin.
+     */
+    static FleetSnapshot asOf(LocalDate origin, int historyMonths, Rows rows, LocalDate today) {
         LocalDate historyEnd = origin.withDayOfMonth(1);
+        LocalDate plansFrom = today.equals(LocalDate.MAX) ? today : today.withDayOfMonth(1);
+        LocalDate knownFrom = plansFrom.isAfter(historyEnd) ? plansFrom : historyEnd;
         LocalDate historyStart = historyEnd.minusMonths(historyMonths);
         Map<Long, List<Reading>> readingsByPump = new HashMap<>();
         for (Reading r : rows.readings()) {
@@ -138,10 +150,13 @@ public class FleetSnapshotLoader {
         long recordsStart = firstRecord;
         List<FleetSnapshot.PumpRecord> records = new ArrayList<>();
         for (Pump pump : rows.pumps()) {
-            boolean endKnown = pump.decommissionedOn() != null && pump.decommissionedOn().isBefore(historyEnd);
-            long end = endKnown ? pump.decommissionedOn().toEpochDay() : Long.MAX_VALUE / 4;
+            LocalDate decommissioned = pump.decommissionedOn();
+            boolean endKnown = decommissioned != null
+                    && (decommissioned.isBefore(historyEnd) || !decommissioned.isBefore(knownFrom));
+            long end = endKnown ? decommissioned.toEpochDay() : Long.MAX_VALUE / 4;
             long installed = pump.installedOn().toEpochDay();
-            if (end <= historyStart.toEpochDay() || !pump.installedOn().isBefore(historyEnd)) {
+            boolean planned = !pump.installedOn().isBefore(knownFrom);
+            if (end <= historyStart.toEpochDay() || !pump.installedOn().isBefore(historyEnd) && !planned) {
                 continue;
             }
             List<Reading> readings = new ArrayList<>(readingsByPump.getOrDefault(pump.id(), List.of()));

@@ -9,7 +9,6 @@ import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.forecast.ErrorScores;
 import org.depotcast.core.forecast.ForecastMethod;
 import org.depotcast.core.forecast.SeriesForecaster;
-import org.depotcast.core.policy.DemandDistribution;
 
 import java.util.ArrayList;
 import java.util.List;
@@ -22,9 +21,11 @@ import java.util.Map;
  */
 @ApplicationScoped
 public class ForecastExplorerService {
-    static final String INTERVAL_MODEL = "Each month's demand: mean = the forecast; variance = the breakdown "
-            + "variance of the method (the larger of the mean and the in-sample one-step error for history methods; "
-            + "the fitted rate's, with overdispersion, for the fleet model) plus the scheduled services' count; Poisson "
+    static final String INTERVAL_MODEL = "Each month's demand: mean = the forecast; variance = the breakdowns' "
+            + "(the in-sample one-step error for history methods; for the fleet model the fitted rate's with "
+            + "overdispersion, plus the uncertainty of the fitted coefficients and of the credibility ratio) plus the "
+            + "scheduled services' (which pumps reach their service interval depends on their future daily load, "
+            + "uncertain by as much as a year's load strayed from its forecast on the fleet's own records); Poisson "
             + "when the variance does not exceed the mean, else negative binomial with the same two moments.";
     static final String BACKTEST_BASIS = "Rolling origin over the last 12 months, 3 months ahead, on the same monthly "
             + "history; lowest RMSSE wins, ties to the smaller bias.";
@@ -48,10 +49,9 @@ public class ForecastExplorerService {
         Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
         List<ForecastExplorerResponse.MonthRange> ranges = new ArrayList<>();
         for (StoredForecastResponse.Month m : f.forecast()) {
-            double variance = f.variancePerMonth() + m.preventive();
-            DemandDistribution d = DemandDistribution.fromMoments(m.total(), Math.max(m.total(), variance));
-            ranges.add(new ForecastExplorerResponse.MonthRange(m.month(), m.total(), d.name(), quantile(d, 0.10),
-                    quantile(d, 0.90), quantile(d, 0.025), quantile(d, 0.975)));
+            ForecastRange r = m.range();
+            ranges.add(new ForecastExplorerResponse.MonthRange(m.month(), m.total(), r.distribution(), r.low80(),
+                    r.high80(), r.low95(), r.high95()));
         }
         double[] history = f.history().stream().mapToDouble(StoredForecastResponse.HistoryMonth::quantity).toArray();
         List<ForecastExplorerResponse.MethodScore> methods = new ArrayList<>();
@@ -150,9 +150,5 @@ public class ForecastExplorerService {
             throw new InvalidInputException(errors);
         }
         return new FleetModelView.ReferencePump(d, h, a);
-    }
-
-    private static double quantile(DemandDistribution d, double p) {
-        return d.mean() == 0 ? 0 : d.quantile(p);
     }
 }

@@ -164,11 +164,21 @@ public class ForecastQueryService {
         double[] monthly = ForecastRecords.split(f.monthlyForecast);
         double[] preventive = ForecastRecords.split(f.preventiveMonthly);
         double[] history = ForecastRecords.split(f.monthlyHistory);
+        double[] variance = ForecastRecords.split(f.monthlyVariance);
         LocalDate origin = run.historyTo.plusDays(1);
         List<StoredForecastResponse.Month> months = new ArrayList<>();
+        double yearMean = 0, yearVariance = 0;
         for (int m = 0; m < monthly.length; m++) {
-            months.add(new StoredForecastResponse.Month(origin.plusMonths(m), monthly[m], monthly[m] - preventive[m], preventive[m]));
+            // Runs made before monthly variances were kept: the breakdowns' variance plus the services as Poisson.
+            double v = m < variance.length ? variance[m] : f.variancePerMonth + preventive[m];
+            months.add(new StoredForecastResponse.Month(origin.plusMonths(m), monthly[m], monthly[m] - preventive[m],
+                    preventive[m], ForecastRange.of(monthly[m], v)));
+            if (m < 12) {
+                yearMean += monthly[m];
+                yearVariance += v;
+            }
         }
+        ForecastRange year = ForecastRange.of(yearMean, f.yearVariance != null ? f.yearVariance : yearVariance);
         List<StoredForecastResponse.HistoryMonth> past = new ArrayList<>();
         LocalDate historyFrom = f.historyFrom != null ? f.historyFrom : run.historyFrom;
         for (int m = 0; m < history.length; m++) {
@@ -177,6 +187,6 @@ public class ForecastQueryService {
         return new StoredForecastResponse(partNumber, f.locationCode, run.id, run.finishedAt, f.method, f.alpha, f.beta,
                 f.adi, f.cv2, f.demandClass, f.mase, f.rmsse, f.scaledBias, f.fleetRmsse, f.historyRmsse,
                 historyFrom, history.length, f.methodDetail,
-                f.breakdownPerMonth, f.variancePerMonth, months, past);
+                f.breakdownPerMonth, f.variancePerMonth, months, past, year);
     }
 }

@@ -78,6 +78,8 @@ final class ForecastRecords {
         f.monthlyHistory = join(r.history());
         f.historyFrom = r.historyFrom();
         f.methodDetail = r.methodDetail();
+        f.monthlyVariance = join(r.monthlyVariance());
+        f.yearVariance = finite(r.yearVariance());
         return f;
     }
 }

@@ -52,6 +52,12 @@ public class PartForecast {
     /** How the breakdown rate was reached, in words (e.g. the credibility weight given to the part's own history). */
     @Column(name = "method_detail")
     public String methodDetail;
+    /** Variance of each month's total demand (null in runs made before it was kept). */
+    @Column(name = "monthly_variance")
+    public String monthlyVariance;
+    /** Variance of the first 12 months' total demand. */
+    @Column(name = "year_variance")
+    public Double yearVariance;
     @Column(name = "monthly_history", nullable = false)
     public String monthlyHistory;
 }

@@ -18,9 +18,12 @@ import org.depotcast.core.forecast.ErrorScores;
  * @param fleetRmsse        holdout RMSSE of the fleet model (NaN where not available)
  * @param historyRmsse      holdout RMSSE of the best history method
  * @param methodDetail      how the breakdown rate was reached, in words
+ * @param monthlyVariance   variance of each horizon month's total demand (breakdowns with the rate's uncertainty,
+ *                          plus the scheduled services' timing), units²; see {@link DemandSpread}
+ * @param yearVariance      variance of the first 12 months' total demand, with the months' correlation, units²
  */
 record PartForecastResult(long partId, String locationCode, String method, double alpha, double beta,
                           DemandProfile profile, double breakdownPerMonth, double variancePerMonth, double[] preventive,
                           double[] monthly, double[] history, java.time.LocalDate historyFrom, ErrorScores chosenScores, double fleetRmsse,
-                          double historyRmsse, String methodDetail) {
+                          double historyRmsse, String methodDetail, double[] monthlyVariance, double yearVariance) {
 }

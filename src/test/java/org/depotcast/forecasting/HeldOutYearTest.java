@@ -3,7 +3,6 @@ package org.depotcast.forecasting;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.core.policy.DemandDistribution;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -29,14 +28,16 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * demo's, the records are cut a year before their end, the service forecasts as of the cut, and its 12-month
  * breakdown totals per depot × part are compared with what the generator then drew, beside the forecast from the
  * generator's planted rates (each pump's planted rate × its daily load at the cut × 365.25 days, age at mid-year).
- * Scheduled-service demand is left out of the comparison: the generator starts service clocks at a random phase.
+ * Scheduled-service demand is left out of the MAE comparison (the planted rates are breakdown rates); it is in the
+ * ranges' check ({@link RangeCoverage}): every month's and the 12-month total's demand at each depot and for the
+ * programme against the stored 80 % and 95 % ranges.
  * {@code -Dheldout.seeds=7,8,9} measures other seeds (printed; the default seed is the one asserted in CI).
  */
 class HeldOutYearTest {
     private static final LocalDate ORIGIN = LocalDate.of(2025, 12, 1);
 
     record Score(double maeDepot, double maePlanted, double maeProgramme, double maePlantedProgramme, double bias,
-                 double biasPlanted, double cover80, double cover95, int series) {
+                 double biasPlanted, int series, RangeCoverage.Table ranges) {
     }
 
     @Test
@@ -46,10 +47,10 @@ class HeldOutYearTest {
         for (String seed : seeds.split(",")) {
             Score s = heldOut(dir.resolve("seed-" + seed.strip()), Long.parseLong(seed.strip()));
             System.out.printf(Locale.ROOT, "held-out year, seed %s: %d depot x part series; MAE %.2f (planted %.2f); "
-                            + "programme MAE %.2f (planted %.2f); total bias %+.1f%% (planted %+.1f%%); "
-                            + "80%% range held %.0f%%, 95%% range held %.0f%%%n", seed, s.series(), s.maeDepot(),
-                    s.maePlanted(), s.maeProgramme(), s.maePlantedProgramme(), 100 * s.bias(), 100 * s.biasPlanted(),
-                    100 * s.cover80(), 100 * s.cover95());
+                            + "programme MAE %.2f (planted %.2f); total bias %+.1f%% (planted %+.1f%%)%n", seed, s.series(),
+                    s.maeDepot(), s.maePlanted(), s.maeProgramme(), s.maePlantedProgramme(), 100 * s.bias(),
+                    100 * s.biasPlanted());
+            System.out.print(s.ranges().describe("seed " + seed));
             scores.add(s);
         }
         for (Score s : scores) {
@@ -58,9 +59,7 @@ class HeldOutYearTest {
             assertTrue(s.maeProgramme() <= 1.05 * s.maePlantedProgramme(),
                     "programme MAE " + s.maeProgramme() + " vs planted " + s.maePlantedProgramme());
             assertTrue(Math.abs(s.bias()) <= Math.abs(s.biasPlanted()) + 0.01, "bias " + s.bias());
-            // Ranges: the issue asks for nominal ± 5 points; what is asserted is what this model achieves on seed 7.
-            assertTrue(s.cover80() >= 0.75 && s.cover80() <= 0.85, "80% range held " + s.cover80());
-            assertTrue(s.cover95() >= 0.90, "95% range held " + s.cover95());
+            s.ranges().assertCalibrated();
         }
     }
 
@@ -116,7 +115,6 @@ class HeldOutYearTest {
             }
         }
         double errService = 0, errPlanted = 0, sumService = 0, sumPlanted = 0, sumActual = 0;
-        int in80 = 0, in95 = 0;
         Map<Long, double[]> programme = new HashMap<>();
         for (Map.Entry<String, Double> e : planted.entrySet()) {
             PartForecastResult f = forecasts.get(e.getKey());
@@ -130,17 +128,13 @@ class HeldOutYearTest {
             sumService += service;
             sumPlanted += e.getValue();
             sumActual += happened;
-            if (f != null && f.breakdownPerMonth() > 0) {
-                DemandDistribution year = DemandDistribution.fromMoments(service, 12 * Math.max(f.variancePerMonth(), f.breakdownPerMonth()));
-                in80 += year.quantile(0.10) <= happened && happened <= year.quantile(0.90) ? 1 : 0;
-                in95 += year.quantile(0.025) <= happened && happened <= year.quantile(0.975) ? 1 : 0;
-            }
             double[] total = programme.computeIfAbsent(Long.parseLong(e.getKey().substring(0, e.getKey().indexOf('|'))),
                     k -> new double[3]);
             total[0] += service;
             total[1] += e.getValue();
             total[2] += happened;
         }
+        RangeCoverage.Table ranges = RangeCoverage.score(forecasts, p.rows, ORIGIN);
         double progService = 0, progPlanted = 0;
         for (double[] t : programme.values()) {
             progService += Math.abs(t[0] - t[2]);
@@ -148,7 +142,7 @@ class HeldOutYearTest {
         }
         int n = planted.size();
         return new Score(errService / n, errPlanted / n, progService / programme.size(), progPlanted / programme.size(),
-                sumService / sumActual - 1, sumPlanted / sumActual - 1, in80 / (double) n, in95 / (double) n, n);
+                sumService / sumActual - 1, sumPlanted / sumActual - 1, n, ranges);
     }
 
     /** The generated CSV files as the loader's plain rows, and the planted rates per family. */
@@ -207,6 +201,7 @@ class HeldOutYearTest {
             List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
             for (CSVRecord r : csv(dir.resolve("repairs.csv"))) {
                 FleetSnapshotLoader.Pump pump = pumps.get(r.get("asset_id"));
+                // As the service's own consumption rows: the day fixed, or reported while the repair is open.
                 String fixed = r.get("fixed_on");
                 consumption.add(new FleetSnapshot.Consumption(partIds.get(r.get("part_number")), pump.id(), pump.depotId(),
                         r.get("mechanic"), r.get("kind").equals("BREAKDOWN"),

@@ -116,7 +116,7 @@ public final class PoissonRegression {
         }
         int dfResidual = n - k;
         double dispersion = dfResidual > 0 ? pearson / dfResidual : Double.NaN;
-        return new PoissonFit(beta, se, deviance, dfResidual, dispersion, iteration, converged);
+        return new PoissonFit(beta, se, deviance, dfResidual, dispersion, iteration, converged, inverse.getData());
     }
 
     private static DecompositionSolver cholesky(double[][] matrix) {
