@@ -40,6 +40,7 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
 
         offline(false);
         waitOutbox(0);
+        openSection("outbox");
         wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("outbox-body")).getText().contains("Nothing waiting"));
         screenshot("mechanic-back-online");
 
@@ -55,6 +56,7 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         assertEquals(0, new BigDecimal("3").compareTo(stock.onHand(sealPart, kit)), "5 in the kit, 2 used");
         assertEquals(0, BigDecimal.ZERO.compareTo(stock.onHand(valvePart, kit)), "requested, not yet issued");
         // The refreshed page shows the same: 3 seals on hand and the request waiting for approval.
+        openSection("requests");
         assertTrue(driver.findElement(By.id("requests-table")).getText().contains("Waiting for approval"));
         assertNoPageErrors();
     }

@@ -5,13 +5,17 @@ import jakarta.inject.Inject;
 import org.depotcast.TestData;
 import org.depotcast.access.AccountService;
 import org.depotcast.catalogue.UnitOfIssue;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationRequest;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.StockQueryService;
 import org.junit.jupiter.api.BeforeEach;
 import org.openqa.selenium.By;
 import org.openqa.selenium.WebElement;
+import org.openqa.selenium.support.ui.ExpectedConditions;
 import org.openqa.selenium.support.ui.Select;
 
+import java.math.BigDecimal;
 import java.time.Duration;
 import java.util.HashMap;
 import java.util.Map;
@@ -44,9 +48,21 @@ abstract class MechanicPhoneSession extends BrowserSession {
     String sealPart;
     String valvePart;
 
+    /** Where the test's depot stands ({latitude, longitude}); null for none on record, as most test depots. */
+    BigDecimal[] depotPosition() {
+        return null;
+    }
+
+    private String depotAt(BigDecimal[] position) {
+        String code = TestData.unique("TDEP").toUpperCase();
+        data.asSystem(() -> accounts.addLocation("officer", locations.create(new LocationRequest(code, "test depot",
+                LocationKind.DEPOT, "CENTRAL", position[0], position[1], null)).id));
+        return code;
+    }
+
     @BeforeEach
     void mechanicWithKitAndPump() {
-        depot = data.depot();
+        depot = depotPosition() == null ? data.depot() : depotAt(depotPosition());
         mechanic = TestData.unique("mech").toLowerCase();
         kit = data.kit(depot, mechanic);
         data.asSystem(() -> accounts.create(mechanic, PASSWORD, Set.of("mechanic"), locations.require(null, kit).id));
@@ -73,7 +89,7 @@ abstract class MechanicPhoneSession extends BrowserSession {
         signIn(mechanic, PASSWORD);
         wait(Duration.ofSeconds(20)).until(d -> d.getCurrentUrl().contains("/app/mechanic/"));
         waitReady();
-        waitFor(By.id("kit-table"));
+        wait(Duration.ofSeconds(30)).until(ExpectedConditions.presenceOfElementLocated(By.id("kit-table")));
         // The page's own files are on the phone once its service worker has taken charge of it.
         driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
                 + "navigator.serviceWorker.ready.then(() => { const check = () => navigator.serviceWorker.controller"
@@ -100,6 +116,13 @@ abstract class MechanicPhoneSession extends BrowserSession {
         control.click();
     }
 
+    /** Opens a folded part of the page by tapping its heading, as the mechanic would (a no-op when it is open). */
+    void openSection(String id) {
+        if (driver.findElement(By.id(id)).getDomAttribute("open") == null) {
+            press("#" + id + " > summary");
+        }
+    }
+
     void choose(String css, String value) {
         new Select(driver.findElement(By.cssSelector(css))).selectByValue(value);
     }
@@ -111,6 +134,7 @@ abstract class MechanicPhoneSession extends BrowserSession {
     }
 
     void askForTopUp(String part, int quantity) {
+        openSection("ask");
         choose("#ask-form select[name=assetId]", "");
         choose("#ask-form select[data-field='lines[0].partNumber']", part);
         type("#ask-form input[data-field='lines[0].quantity']", String.valueOf(quantity));
@@ -118,6 +142,7 @@ abstract class MechanicPhoneSession extends BrowserSession {
     }
 
     void recordFixedRepair(String part, int quantity) {
+        openSection("repair");
         choose("#repair-form select[name=assetId]", pump);
         type("#repair-form textarea[name=fault]", "cup seals worn, no water after 40 strokes");
         press("#repair-form div.part-lines + button");

@@ -75,9 +75,12 @@ class MechanicSignOutBrowserTest extends MechanicPhoneSession {
         String secondKit = data.kit(depot, second);
         data.asSystem(() -> accounts.create(second, PASSWORD, Set.of("mechanic"), locations.require(null, secondKit).id));
         signIn(second, PASSWORD);
+        wait(Duration.ofSeconds(20)).until(d -> d.getCurrentUrl().contains("/app/mechanic/"));
         waitReady();
+        wait(Duration.ofSeconds(20)).until(d -> d.findElement(By.id("kit-title")).getText().startsWith("My kit " + secondKit));
+        openSection("kit");
         String page = driver.findElement(By.id("main")).getText();
-        assertTrue(page.contains("Kit " + secondKit) && !page.contains(kit) && !page.contains(pump), page);
+        assertTrue(!page.contains(kit) && !page.contains(pump), page);
         assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-refused"));
         String repairs = url("/api/repairs");
         assertNoPageErrors("HTTP 422 POST " + repairs, repairs + " - Failed to load resource: the server responded with a status of 422");

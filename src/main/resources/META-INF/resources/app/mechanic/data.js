@@ -6,20 +6,25 @@ import * as api from '/app/js/api.js';
 
 export async function fetchSnapshot(me) {
     const kit = me.kitCode;
-    const [runs, balances, pumps, due, openRepairs, requests, parts] = await Promise.all([
+    const [runs, balances, pumps, due, openRepairs, requests, parts, kitPlace, depots] = await Promise.all([
         api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1}),
         kit ? api.get('/api/stock/balances', {location: kit}) : [],
         api.get('/api/pumps'),
         api.get('/api/pumps/service-due'),
         api.get('/api/repairs', {open: 'true'}),
         api.get('/api/requests'),
-        api.get('/api/parts')
+        api.get('/api/parts'),
+        kit ? api.get(`/api/locations/${encodeURIComponent(kit)}`) : null,
+        api.get('/api/locations', {kind: 'DEPOT'})
     ]);
+    // The round to the pumps starts at the depot the kit belongs to (pumplist.js).
+    const home = kitPlace && depots.find(d => d.code === kitPlace.parentCode);
+    const depot = home ? {code: home.code, name: home.name, latitude: home.latitude, longitude: home.longitude} : null;
     const run = runs[0] || null;
     // Min and max come from the forecasts: before the first run there are none, and the API would say 409.
     const policies = run && kit ? await api.get('/api/planning/policies', {location: kit}) : null;
     return {
-        username: me.username, me, savedAt: new Date().toISOString(), run, balances, policies,
+        username: me.username, me, savedAt: new Date().toISOString(), run, balances, policies, depot,
         pumps: pumps.filter(p => p.status !== 'DECOMMISSIONED'), due, openRepairs,
         requests: requests.sort((a, b) => String(b.raisedAt).localeCompare(String(a.raisedAt))),
         parts: parts.map(p => ({partNumber: p.partNumber, description: p.description, unitOfIssue: p.unitOfIssue}))

@@ -8,10 +8,12 @@ import * as fmt from '/app/js/format.js';
 import {h, mount, say, showError, caution} from '/app/js/ui.js';
 import * as store from './store.js';
 import {sendWaiting} from './send.js';
-import {fetchSnapshot} from './data.js';
-import {kitView, pumpCard, needsAttention, requestsView, outboxView} from './views.js';
+import {fetchSnapshot, kitRows} from './data.js';
+import {kitView, pumpCard, requestsView, outboxView} from './views.js';
 import {askForm, repairForm, statusForm} from './forms.js';
 import {closeForm} from './close.js';
+import {section, heading, openSection, followJumps} from './sections.js';
+import {pumpRows} from './pumplist.js';
 
 const main = document.getElementById('main');
 const el = id => document.getElementById(id);
@@ -21,18 +23,16 @@ let outbox = [];
 let forms = null;
 let formsKey = '';
 
-function section(id, title, ...body) {
-    return h('section', {id, 'aria-labelledby': `${id}-title`, class: 'mech-section'}, h('h2', {id: `${id}-title`}, title), ...body);
-}
-
 function layout() {
+    const jumps = h('nav', {class: 'mech-jump', 'aria-label': 'Parts of this page'}, [['outbox', 'Waiting'], ['kit', 'Kit'],
+        ['pumps', 'Pumps'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
+        ['close', 'Close a repair'], ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label)));
+    followJumps(jumps);
     mount(main,
         h('div', {class: 'page-head'}, h('h1', {}, 'My kit and pumps')),
         h('div', {id: 'status', class: 'status-region', role: 'status', 'aria-live': 'polite'}),
         h('div', {class: 'mech-sync card', id: 'sync'}),
-        h('nav', {class: 'mech-jump', 'aria-label': 'Parts of this page'}, [['outbox', 'Waiting'], ['kit', 'Kit'],
-            ['pumps', 'Pumps'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
-            ['close', 'Close a repair'], ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label))),
+        jumps,
         section('outbox', 'Waiting to send', h('div', {id: 'outbox-body'})),
         section('kit', 'My kit', h('p', {class: 'provenance', id: 'kit-provenance'}), h('div', {id: 'kit-body'})),
         section('pumps', 'My pumps', h('div', {class: 'row mech-filter'},
@@ -46,6 +46,7 @@ function layout() {
         section('close', 'Close a repair as fixed', h('div', {id: 'close-body'})),
         section('report', 'Report a pump broken or working', h('div', {id: 'report-body'})),
         caution());
+    openSection('pumps');
 }
 
 function drawSync() {
@@ -68,21 +69,29 @@ function drawPumps() {
     if (!snapshot) {
         return;
     }
-    const due = new Map(snapshot.due.map(d => [d.assetId, d]));
-    const repairs = asset => snapshot.openRepairs.filter(r => r.assetId === asset);
-    const all = el('pump-all').checked;
     const search = el('pump-search').value.trim().toLowerCase();
-    const shown = snapshot.pumps.filter(p => search ? p.assetId.toLowerCase().includes(search)
-        : all || needsAttention(p, due.get(p.assetId), repairs(p.assetId), outbox));
-    const rank = p => p.status === 'BROKEN' ? 0 : repairs(p.assetId).length ? 1 : ({OVERDUE: 2, DUE_SOON: 3}[(due.get(p.assetId) || {}).state] ?? 4);
-    shown.sort((a, b) => rank(a) - rank(b) || a.assetId.localeCompare(b.assetId));
-    mount(el('pump-count'), `Showing ${shown.length} of your ${snapshot.pumps.length} pumps`
-        + (search || all ? '.' : ': broken, with open repairs, or with a service due within 30 days.'));
-    mount(el('pump-list'), shown.length ? shown.map(p => pumpCard(snapshot, p, due.get(p.assetId), repairs(p.assetId), outbox, act))
+    const list = pumpRows(snapshot, outbox, {all: el('pump-all').checked, search});
+    heading('pumps', `My pumps: ${list.toVisit} to visit, of ${snapshot.pumps.length}`);
+    mount(el('pump-count'), list.words);
+    mount(el('pump-list'), list.rows.length ? list.rows.map(r => pumpCard(snapshot, r.pump, r.due, r.repairs, outbox, act, r.stop))
         : h('p', {class: 'empty'}, search ? 'No pump of yours matches.' : 'No pump needs you now. Tick "Show all my pumps" to see them all.'));
 }
 
+/** The headings say how much each folded part holds; the kit opens by itself when something needs topping up. */
+function drawHeadings(firstTime) {
+    const short = kitRows(snapshot, outbox).filter(r => r.state === 'out' || r.state === 'top-up').length;
+    heading('kit', `My kit ${snapshot.me.kitCode || ''}: ${short ? `${short} to top up` : 'nothing to top up'}`);
+    const open = snapshot.requests.filter(r => ['RAISED', 'APPROVED', 'PARTLY_APPROVED'].includes(r.status)).length
+        + outbox.filter(i => i.kind === 'request').length;
+    heading('requests', `My requests: ${open} open`);
+    heading('close', `Close a repair as fixed: ${snapshot.openRepairs.length} open`);
+    if (firstTime && short) {
+        openSection('kit');
+    }
+}
+
 function drawData() {
+    drawHeadings(!el('kit-body').hasChildNodes());
     mount(el('kit-provenance'), snapshot.run ? `Min and max from forecast run ${snapshot.run.id}, finished ${fmt.dateTime(snapshot.run.finishedAt)}.`
         : 'No forecast run yet.');
     mount(el('kit-body'), kitView(snapshot, outbox, (asset, wanted) => act('ask', asset, wanted)));
@@ -104,13 +113,19 @@ function drawData() {
 async function drawOutbox() {
     outbox = me ? await store.items(me.username) : [];
     mount(el('outbox-body'), outboxView(outbox, discard));
+    const waiting = outbox.filter(i => i.state === 'waiting').length;
+    const refused = outbox.length - waiting;
+    heading('outbox', `Waiting to send: ${outbox.length ? `${waiting}${refused ? `, and ${refused} refused` : ''}` : 'nothing'}`);
+    if (refused) {
+        openSection('outbox');
+    }
     drawSync();
 }
 
 function act(kind, assetId, extra) {
     const target = {ask: 'ask', repair: 'repair', status: 'report', close: 'close'}[kind];
     forms[target].open(assetId, extra);
-    el(target).scrollIntoView({block: 'start'});
+    openSection(target, true);
     forms[target].form.querySelector('select, input, textarea').focus({preventScroll: true});
 }
 

@@ -5,6 +5,7 @@
 import * as fmt from '/app/js/format.js';
 import {h, state, table} from '/app/js/ui.js';
 import {kitRows} from './data.js';
+import {stopWords} from './pumplist.js';
 
 const KIT_STATES = {
     out: ['Out: none left', 'urgent'], 'top-up': ['At or below min: top up', 'warn'],
@@ -68,11 +69,6 @@ function serviceLine(due) {
         h('span', {class: 'hint'}, `${hours}; at ${fmt.num(due.hoursPerDay, 1)} h a day.`));
 }
 
-export function needsAttention(pump, due, repairs, waiting) {
-    return pump.status === 'BROKEN' || repairs.length > 0 || (due && (due.state === 'OVERDUE' || due.state === 'DUE_SOON'))
-        || waiting.some(i => i.assetId === pump.assetId);
-}
-
 /** An open repair on a pump's card, with the button that closes it, or the words that its closing waits to send. */
 function openRepair(snapshot, r, waiting, act) {
     const closing = waiting.find(i => i.kind === 'close' && i.ref === r.repairRef);
@@ -85,13 +81,14 @@ function openRepair(snapshot, r, waiting, act) {
             : h('button', {type: 'button', class: 'close-repair', onclick: () => act('close', r.assetId, r.repairRef)}, 'Close as fixed'));
 }
 
-export function pumpCard(snapshot, pump, due, repairs, waiting, act) {
+export function pumpCard(snapshot, pump, due, repairs, waiting, act, stop) {
     const statusWords = pump.status === 'BROKEN' ? [`Broken since ${fmt.date(pump.statusSince || pump.brokenSince)}`, 'urgent']
         : [`Working${pump.statusSince ? ` since ${fmt.date(pump.statusSince)}` : ''}`, 'ok'];
     const mine = waiting.filter(i => i.assetId === pump.assetId);
     return h('article', {class: 'pump card', id: `pump-${pump.assetId}`, 'aria-labelledby': `pump-${pump.assetId}-name`},
         h('h3', {id: `pump-${pump.assetId}-name`}, pump.assetId, ' ', h('span', {class: 'hint pump__model'},
             `${pump.modelCode}, ${fmt.num(pump.depthM, 1)} m deep`)),
+        stop ? h('p', {class: 'pump__stop'}, stopWords(stop)) : null,
         h('p', {}, state(...statusWords), pump.statusNote ? h('span', {class: 'hint'}, pump.statusNote) : null),
         serviceLine(due),
         repairs.length ? h('ul', {class: 'pump__repairs', 'aria-label': 'Open repairs'}, repairs.map(r => openRepair(snapshot, r, waiting, act)))

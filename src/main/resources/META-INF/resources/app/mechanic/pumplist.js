@@ -1,0 +1,43 @@
+/*
+ * pumplist.js: which of the mechanic's pumps the page lists, and in what order. By default the pumps that need a
+ * visit (broken, with an open repair, a service due within 30 days, or an action of the mechanic's waiting), in
+ * the order of a round from the depot (route.js); with "show all" or a search, every match, most pressing first.
+ */
+import * as fmt from '/app/js/format.js';
+import {visitOrder} from './route.js';
+
+function needsAttention(pump, due, repairs, waiting) {
+    return pump.status === 'BROKEN' || repairs.length > 0 || (due && (due.state === 'OVERDUE' || due.state === 'DUE_SOON'))
+        || waiting.some(i => i.assetId === pump.assetId);
+}
+
+function rankOf(pump, due, repairs) {
+    return pump.status === 'BROKEN' ? 0 : repairs.length ? 1 : ({OVERDUE: 2, DUE_SOON: 3}[(due || {}).state] ?? 4);
+}
+
+/** {rows: [{pump, due, repairs, stop}], toVisit, words}; stop = {n, legKm} on the round, or null. */
+export function pumpRows(snapshot, waiting, {all, search}) {
+    const due = new Map(snapshot.due.map(d => [d.assetId, d]));
+    const repairs = new Map();
+    snapshot.openRepairs.forEach(r => repairs.set(r.assetId, [...(repairs.get(r.assetId) || []), r]));
+    const row = p => ({pump: p, due: due.get(p.assetId), repairs: repairs.get(p.assetId) || [], stop: null});
+    const rank = r => rankOf(r.pump, r.due, r.repairs);
+    const pressing = (a, b) => rank(a) - rank(b) || a.pump.assetId.localeCompare(b.pump.assetId);
+    const visit = snapshot.pumps.map(row).filter(r => needsAttention(r.pump, r.due, r.repairs, waiting)).sort(pressing);
+    const total = snapshot.pumps.length;
+    if (search || all) {
+        const rows = snapshot.pumps.map(row).filter(r => !search || r.pump.assetId.toLowerCase().includes(search)).sort(pressing);
+        return {rows, toVisit: visit.length, words: `Showing ${rows.length} of your ${total} pumps, most pressing first.`};
+    }
+    const round = visitOrder(snapshot.depot, visit.map(r => ({...r, latitude: r.pump.latitude, longitude: r.pump.longitude})));
+    const rows = round.map(({stop, legKm}, i) => ({...stop, stop: {n: i + 1, legKm}}));
+    const km = round.reduce((sum, s) => sum + (s.legKm || 0), 0);
+    const from = snapshot.depot ? snapshot.depot.name || snapshot.depot.code : 'the first pump';
+    return {rows, toVisit: visit.length, words: `${visit.length} of your ${total} pumps need a visit: broken, with an open repair, `
+        + `or with a service due within 30 days. In the order of a round from ${from}, nearest next pump first: about `
+        + `${fmt.num(km, 1)} km in straight lines (roads are longer).`};
+}
+
+export function stopWords(stop) {
+    return stop.legKm === null ? `Stop ${stop.n}: no position on record` : `Stop ${stop.n}: ${fmt.num(stop.legKm, 1)} km from the ${stop.n === 1 ? 'depot' : 'stop before'}`;
+}
