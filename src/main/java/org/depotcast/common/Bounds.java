@@ -34,9 +34,6 @@ public final class Bounds {
     public static final int LINES_MAX = 500;
     public static final int RATE_FIT_ROWS_MAX = 100_000;
     public static final int SERIES_PERIODS_MAX = 1_200;
-    /** Series and rows in one CSV batch forecast. */
-    public static final int BATCH_SERIES_MAX = 2_000;
-    public static final int BATCH_ROWS_MAX = 100_000;
     /** Demand in one period of a what-if series, and a rate fit's counts and exposure. */
     public static final String SERIES_VALUE_MAX = "1000000";
     public static final String EXPOSURE_MAX = "1000000000000";

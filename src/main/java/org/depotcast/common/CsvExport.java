@@ -31,6 +31,7 @@ public record CsvExport(String fileName, List<String> header, List<? extends Lis
     public static final String MEDIA_TYPE = "text/csv; charset=UTF-8";
     private static final Pattern PLAIN_NEGATIVE_NUMBER = Pattern.compile("-[0-9]+(\\.[0-9]+)?([eE][-+]?[0-9]+)?");
     private static final Pattern SAFE_FILE_NAME = Pattern.compile("[A-Za-z0-9._-]+");
+    private static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get();
 
     public CsvExport {
         if (!SAFE_FILE_NAME.matcher(fileName).matches()) {
@@ -62,7 +63,7 @@ public record CsvExport(String fileName, List<String> header, List<? extends Lis
     }
 
     public void writeTo(Appendable out) throws IOException {
-        CSVPrinter printer = new CSVPrinter(out, CSVFormat.DEFAULT.builder().setRecordSeparator('\n').get());
+        CSVPrinter printer = new CSVPrinter(out, FORMAT);
         printer.printRecord(header.stream().map(CsvExport::spreadsheetSafe).toList());
         List<Object> cells = new ArrayList<>(header.size());
         for (List<?> row : rows) {
@@ -73,6 +74,34 @@ public record CsvExport(String fileName, List<String> header, List<? extends Lis
             printer.printRecord(cells);
         }
         printer.flush();
+    }
+
+    /**
+     * One row of an export built as a stream (too large to hold as rows), in the same format and with the same
+     * spreadsheet-safe cells as {@link #writeTo(Appendable)}; the file is then sent by {@link #fileResponse}.
+     */
+    public static void writeRow(Appendable out, Object... cells) throws IOException {
+        Object[] safe = new Object[cells.length];
+        for (int i = 0; i < cells.length; i++) {
+            safe[i] = spreadsheetSafe(cells[i]);
+        }
+        FORMAT.printRecord(out, safe);
+    }
+
+    /** 200 with a finished temporary CSV file as an attachment; the file is deleted once sent (or not sendable). */
+    public static Response fileResponse(String fileName, java.nio.file.Path file) {
+        if (!SAFE_FILE_NAME.matcher(fileName).matches()) {
+            throw new IllegalArgumentException("fileName may hold letters, digits and . _ - only: " + fileName);
+        }
+        StreamingOutput body = out -> {
+            try {
+                java.nio.file.Files.copy(file, out);
+            } finally {
+                java.nio.file.Files.deleteIfExists(file);
+            }
+        };
+        return Response.ok(body, MEDIA_TYPE).header("Content-Disposition", "attachment; filename=\"" + fileName + "\"")
+                .build();
     }
 
     /** The cell as text a spreadsheet will not evaluate; see the class comment. */

@@ -46,7 +46,7 @@ class ForecastResource {
     public Response batch(InputStream csv, @QueryParam("method") String method, @QueryParam("alpha") String alpha,
                           @QueryParam("beta") String beta, @QueryParam("horizon") String horizon) {
         return stateless.batch(csv, method, QueryParams.optionalDouble("alpha", alpha),
-                QueryParams.optionalDouble("beta", beta), QueryParams.optionalInt("horizon", horizon)).response();
+                QueryParams.optionalDouble("beta", beta), QueryParams.optionalInt("horizon", horizon));
     }
 
     @POST

@@ -2,9 +2,6 @@ package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.common.Bounds;
-import org.depotcast.common.CsvExport;
-import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvUpload;
 import org.depotcast.common.FieldError;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.forecast.ErrorScores;
@@ -16,14 +13,11 @@ import org.depotcast.core.forecast.SeriesForecaster;
 import org.depotcast.core.policy.DemandDistribution;
 
 import java.io.InputStream;
-import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
-import java.util.Set;
-import java.util.TreeMap;
 
 /** The what-if forecasts that touch no stored data: one series, a CSV batch, and a Poisson rate fit. */
 @ApplicationScoped
@@ -31,7 +25,6 @@ public class StatelessForecastService {
     static final int DEFAULT_HORIZON = 12;
     /** Period numbers are whole numbers from 0 up to this (room for yyyymm numbering), so no span overflows. */
     static final int PERIOD_MAX = 10_000_000;
-    private static final BigDecimal SERIES_VALUE_MAX = new BigDecimal(Bounds.SERIES_VALUE_MAX);
     private static final double[] QUANTILES = {0.5, 0.8, 0.9, 0.95, 0.99};
 
     /** Settings shared by the single and batch forms; checked once with the field names the client used. */
@@ -82,69 +75,12 @@ public class StatelessForecastService {
     }
 
     /**
-     * Long-format CSV in (series_id, period, quantity), one row per series and horizon step out. Periods are whole
-     * numbers; a missing period within a series counts as zero demand.
+     * Long-format CSV in (series_id, period, quantity), one row per series and horizon step out, read and written as
+     * a stream (see {@link BatchForecast}). A series' rows come together; a missing period within a series counts
+     * as zero demand.
      */
-    public CsvExport batch(InputStream csv, String method, Double alpha, Double beta, Integer horizon) {
-        Settings settings = Settings.of(method, alpha, beta, horizon);
-        Map<String, TreeMap<Integer, Double>> series = new LinkedHashMap<>();
-        try (CsvUpload upload = CsvUpload.open(csv, List.of("series_id", "period", "quantity"), Set.of())) {
-            int rows = 0;
-            for (CsvRow row : upload) {
-                if (++rows > Bounds.BATCH_ROWS_MAX) {
-                    throw new InvalidInputException("body", "a batch holds at most " + Bounds.BATCH_ROWS_MAX + " rows");
-                }
-                readBatchRow(row, series);
-            }
-            upload.problems().throwIfAny();
-            if (rows == 0) {
-                throw new InvalidInputException("body", "CSV has a header but no rows");
-            }
-        }
-        List<List<?>> out = new ArrayList<>();
-        for (Map.Entry<String, TreeMap<Integer, Double>> entry : series.entrySet()) {
-            TreeMap<Integer, Double> byPeriod = entry.getValue();
-            int first = byPeriod.firstKey(), last = byPeriod.lastKey();
-            double[] history = new double[last - first + 1];
-            byPeriod.forEach((p, q) -> history[p - first] = q);
-            SeriesForecast f = SeriesForecaster.forecast(history, settings.method(), settings.alpha(), settings.beta(),
-                    settings.horizon());
-            for (int h = 0; h < settings.horizon(); h++) {
-                out.add(List.of(entry.getKey(), h + 1, String.format(Locale.ROOT, "%.6f", f.forecast()[h]),
-                        f.method().name().toLowerCase(Locale.ROOT), blank(f.alpha()), blank(f.beta()),
-                        f.profile().demandClass().name().toLowerCase(Locale.ROOT)));
-            }
-        }
-        return new CsvExport("forecasts.csv", List.of("series_id", "step", "forecast", "method", "alpha", "beta",
-                "demand_class"), out);
-    }
-
-    private static void readBatchRow(CsvRow row, Map<String, TreeMap<Integer, Double>> series) {
-        String id = row.text("series_id");
-        Integer period = row.integer("period");
-        if (period != null && (period < 0 || period > PERIOD_MAX)) {
-            row.reject("period", "must be from 0 to " + PERIOD_MAX + " (a period number such as 202401), was " + period);
-            period = null;
-        }
-        BigDecimal quantity = row.decimal("quantity");
-        if (quantity != null && (quantity.signum() < 0 || quantity.compareTo(SERIES_VALUE_MAX) > 0)) {
-            row.reject("quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was " + quantity.toPlainString());
-            quantity = null;
-        }
-        if (id != null && !series.containsKey(id) && series.size() == Bounds.BATCH_SERIES_MAX) {
-            row.reject("series_id", "a batch holds at most " + Bounds.BATCH_SERIES_MAX + " series");
-            id = null;
-        }
-        if (id != null && period != null && quantity != null) {
-            TreeMap<Integer, Double> periods = series.computeIfAbsent(id, k -> new TreeMap<>());
-            if (periods.put(period, quantity.doubleValue()) != null) {
-                row.reject("period", "period " + period + " appears twice for series '" + id + "'");
-            } else if (periods.lastKey() - periods.firstKey() >= Bounds.SERIES_PERIODS_MAX) {
-                // The history array spans first to last period: its length is bounded, never a client's number.
-                row.reject("period", "series '" + id + "' spans more than " + Bounds.SERIES_PERIODS_MAX + " periods");
-                periods.remove(period);
-            }
-        }
+    public jakarta.ws.rs.core.Response batch(InputStream csv, String method, Double alpha, Double beta, Integer horizon) {
+        return BatchForecast.run(csv, Settings.of(method, alpha, beta, horizon));
     }
 
     public RateFitResponse rateFit(RateFitRequest request) {

@@ -90,6 +90,42 @@ class ForecastResourceTest {
     }
 
     @Test
+    void aBatchOverTheOrdinaryBodyLimitStreamsThroughAndEachSeriesIsForecast() {
+        // 10,000 series × 120 months is about 14 MB, over the 10 MB limit of other requests.
+        StringBuilder csv = new StringBuilder("series_id,period,quantity\n");
+        for (int s = 0; s < 10_000; s++) {
+            for (int p = 1; p <= 120; p++) {
+                csv.append("S").append(s).append(',').append(p).append(',').append(p % 5 == s % 5 ? 2 : 0).append('\n');
+            }
+        }
+        org.junit.jupiter.api.Assertions.assertTrue(csv.length() > 12_000_000, "the body is over 10 MB");
+        String out = as("officer").contentType("text/csv").body(csv.toString())
+                .post("/api/forecast/batch?method=croston&alpha=0.1&horizon=3").then().statusCode(200)
+                .header("Content-Disposition", containsString("forecasts.csv")).extract().asString();
+        List<String> lines = List.of(out.strip().split("\n"));
+        org.junit.jupiter.api.Assertions.assertEquals(1 + 30_000, lines.size());
+        // Demand 2 every 5th month from month 5 (series 9995): Croston's size 2 over interval 5 → 0.4 a month.
+        org.junit.jupiter.api.Assertions.assertTrue(lines.contains("S9995,3,0.400000,croston,0.10,,intermittent"));
+        // From month 4 (series 9999): the first interval is 4, then 23 of 5 → 2 / (5 − 0.9^23) (Croston 1972).
+        org.junit.jupiter.api.Assertions.assertEquals(String.format(java.util.Locale.ROOT,
+                "S9999,3,%.6f,croston,0.10,,intermittent", 2 / (5 - Math.pow(0.9, 23))), lines.get(lines.size() - 1));
+    }
+
+    @Test
+    void aSeriesWhoseRowsAreNotTogetherOrRepeatAPeriodIsRefusedByRow() {
+        as("officer").contentType("text/csv").body("series_id,period,quantity\nA,1,1\nB,1,2\nA,2,0\n")
+                .post("/api/forecast/batch?method=croston").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("row 4, column series_id"))
+                .body("errors[0].message", containsString("must be together"));
+        as("officer").contentType("text/csv").body("series_id,period,quantity\nA,1,1\nA,2,2\nA,1,0\n")
+                .post("/api/forecast/batch?method=croston").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("row 4, column period"))
+                .body("errors[0].message", containsString("appears twice"));
+        as("officer").contentType("text/csv").body("series_id,period,quantity\n\"A,1,1\nA,2,2\n")
+                .post("/api/forecast/batch?method=croston").then().statusCode(400).contentType(PROBLEM);
+    }
+
+    @Test
     void rateFitMatchesTheClosedForm() {
         // Shallow 10 events in 10,000 h, deep 16 in 8,000 h → intercept log(0.001), deep log 2.
         Map<String, Object> shallow = Map.of("count", 10, "exposure", 10_000, "covariates", Map.of("deep", 0));

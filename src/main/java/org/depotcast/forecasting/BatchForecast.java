@@ -1,0 +1,338 @@
+package org.depotcast.forecasting;
+
+import de.siegmar.fastcsv.reader.CsvParseException;
+import de.siegmar.fastcsv.reader.CsvReader;
+import de.siegmar.fastcsv.reader.CsvRecord;
+import org.depotcast.common.BodySizeLimit;
+import org.depotcast.common.BodyTooLargeException;
+import org.depotcast.common.Bounds;
+import org.depotcast.common.CsvExport;
+import org.depotcast.common.CsvProblems;
+import org.depotcast.common.FieldError;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.core.forecast.SeriesForecast;
+import org.depotcast.core.forecast.SeriesForecaster;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.UncheckedIOException;
+import java.io.Writer;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Arrays;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Locale;
+
+/**
+ * The CSV batch forecast in bounded memory: long-format rows (series_id, period, quantity) are read as they arrive,
+ * each series is forecast as soon as its last row has been read, and its forecast rows are written to a temporary
+ * file. Only when the whole body has been read without a problem is that file sent (and then deleted); any problem
+ * is a 400 listing rows and columns, and nothing is sent. Memory holds one series (at most
+ * {@link Bounds#SERIES_PERIODS_MAX} periods) and 16 bytes per series read, to refuse a series whose rows are not
+ * together; the body is bounded by {@code depotcast.http.bulk-max-body-size}.
+ */
+final class BatchForecast {
+    static final List<String> OUTPUT_HEADER = List.of("series_id", "step", "forecast", "method", "alpha", "beta",
+            "demand_class");
+    private static final int SERIES_ID_MAX = 200;
+    private static final double VALUE_MAX = Double.parseDouble(Bounds.SERIES_VALUE_MAX);
+
+    private final StatelessForecastService.Settings settings;
+    private final CsvProblems problems = new CsvProblems();
+    private final SeriesIdSet seen = new SeriesIdSet();
+    private final Path output;
+    private final Writer out;
+    private String currentId;
+    private int[] lines = new int[64];
+    private int[] periods = new int[64];
+    private double[] quantities = new double[64];
+    private int size;
+    private int minPeriod;
+    private int maxPeriod;
+    private long rows;
+
+    private BatchForecast(StatelessForecastService.Settings settings) throws IOException {
+        this.settings = settings;
+        this.output = Files.createTempFile("depotcast-batch-", ".csv");
+        this.out = new BufferedWriter(Files.newBufferedWriter(output, StandardCharsets.UTF_8), 1 << 16);
+    }
+
+    /** Reads the whole body and answers with the forecasts, or throws a 400 naming every problem found. */
+    static jakarta.ws.rs.core.Response run(InputStream body, StatelessForecastService.Settings settings) {
+        if (body == null) {
+            throw new InvalidInputException("body", "CSV body is empty");
+        }
+        BatchForecast batch;
+        try {
+            batch = new BatchForecast(settings);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        try {
+            batch.read(BodySizeLimit.countedBulk(body));
+            return CsvExport.fileResponse("forecasts.csv", batch.output);
+        } catch (RuntimeException | IOException e) {
+            batch.discard();
+            if (e instanceof RuntimeException runtime) {
+                throw runtime;
+            }
+            throw new UncheckedIOException((IOException) e);
+        }
+    }
+
+    private void read(InputStream body) throws IOException {
+        CsvExport.writeRow(out, OUTPUT_HEADER.toArray());
+        try (CsvReader<CsvRecord> reader = CsvReader.builder().skipEmptyLines(true).detectBomHeader(true)
+                .allowMissingFields(true).allowExtraFields(true).ofCsvRecord(body)) {
+            Iterator<CsvRecord> records = reader.iterator();
+            if (!records.hasNext()) {
+                throw new InvalidInputException("body", "CSV body is empty");
+            }
+            int[] columns = columns(records.next());
+            while (records.hasNext()) {
+                CsvRecord record = records.next();
+                rows++;
+                readRow(record, columns);
+            }
+        } catch (CsvParseException | UncheckedIOException e) {
+            rethrowIfTooLarge(e);
+            problems.add((int) Math.min(Integer.MAX_VALUE, rows + 2), null, "this row could not be read as CSV: a "
+                    + "quoted value is not closed or text follows its closing quote");
+        }
+        if (rows == 0 && problems.isEmpty()) {
+            throw new InvalidInputException("body", "CSV has a header but no rows");
+        }
+        finishSeries();
+        problems.throwIfAny();
+        out.close();
+    }
+
+    private static int[] columns(CsvRecord header) {
+        List<String> names = header.getFields().stream().map(String::strip).toList();
+        List<String> wanted = List.of("series_id", "period", "quantity");
+        int[] index = new int[wanted.size()];
+        List<FieldError> missing = new java.util.ArrayList<>();
+        for (int i = 0; i < wanted.size(); i++) {
+            index[i] = names.indexOf(wanted.get(i));
+            if (index[i] < 0) {
+                missing.add(new FieldError("header", "missing column '" + wanted.get(i) + "'"));
+            }
+        }
+        if (!missing.isEmpty()) {
+            throw new InvalidInputException(missing);
+        }
+        return index;
+    }
+
+    private void readRow(CsvRecord record, int[] columns) throws IOException {
+        int line = (int) Math.min(Integer.MAX_VALUE, record.getStartingLineNumber());
+        String id = cell(record, columns[0]);
+        int period = period(line, cell(record, columns[1]));
+        double quantity = quantity(line, cell(record, columns[2]));
+        if (id.isEmpty()) {
+            problems.add(line, "series_id", "is required");
+            return;
+        }
+        if (id.length() > SERIES_ID_MAX || id.indexOf('\n') >= 0 || id.indexOf('\r') >= 0) {
+            problems.add(line, "series_id", "must be one line of at most " + SERIES_ID_MAX + " characters");
+            return;
+        }
+        if (!id.equals(currentId)) {
+            finishSeries();
+            if (!seen.add(id)) {
+                problems.add(line, "series_id", "the rows of series '" + shown(id) + "' must be together: it "
+                        + "appeared earlier in the file, before another series");
+                return;
+            }
+            currentId = id;
+            size = 0;
+        }
+        if (period >= 0 && !Double.isNaN(quantity)) {
+            add(line, period, quantity);
+        }
+    }
+
+    private void add(int line, int period, double quantity) {
+        int low = size == 0 ? period : Math.min(minPeriod, period);
+        int high = size == 0 ? period : Math.max(maxPeriod, period);
+        if (high - low >= Bounds.SERIES_PERIODS_MAX) {
+            problems.add(line, "period", "series '" + shown(currentId) + "' spans more than "
+                    + Bounds.SERIES_PERIODS_MAX + " periods");
+            return;
+        }
+        if (size == periods.length) {
+            lines = Arrays.copyOf(lines, size * 2);
+            periods = Arrays.copyOf(periods, size * 2);
+            quantities = Arrays.copyOf(quantities, size * 2);
+        }
+        lines[size] = line;
+        periods[size] = period;
+        quantities[size++] = quantity;
+        minPeriod = low;
+        maxPeriod = high;
+    }
+
+    /** Forecasts the series just read (unless the file already has problems: then only checking goes on). */
+    private void finishSeries() throws IOException {
+        if (currentId == null || size == 0) {
+            return;
+        }
+        double[] history = new double[maxPeriod - minPeriod + 1];
+        boolean[] filled = new boolean[history.length];
+        for (int i = 0; i < size; i++) {
+            int at = periods[i] - minPeriod;
+            if (filled[at]) {
+                problems.add(lines[i], "period", "period " + periods[i] + " appears twice for series '" + shown(currentId) + "'");
+            }
+            filled[at] = true;
+            history[at] = quantities[i];
+        }
+        String id = currentId;
+        size = 0;
+        if (!problems.isEmpty()) {
+            return;
+        }
+        SeriesForecast f = SeriesForecaster.forecast(history, settings.method(), settings.alpha(), settings.beta(),
+                settings.horizon());
+        String method = f.method().name().toLowerCase(Locale.ROOT);
+        String demandClass = f.profile().demandClass().name().toLowerCase(Locale.ROOT);
+        String alpha = blank(f.alpha()), beta = blank(f.beta());
+        double shownValue = Double.NaN;
+        String value = "";
+        for (int h = 0; h < settings.horizon(); h++) {
+            if (Double.compare(f.forecast()[h], shownValue) != 0) {
+                shownValue = f.forecast()[h];
+                value = String.format(Locale.ROOT, "%.6f", shownValue);
+            }
+            CsvExport.writeRow(out, id, Integer.toString(h + 1), value, method, alpha, beta, demandClass);
+        }
+    }
+
+    private int period(int line, String text) {
+        if (text.isEmpty()) {
+            problems.add(line, "period", "is required");
+            return -1;
+        }
+        try {
+            int period = Integer.parseInt(text);
+            if (period >= 0 && period <= StatelessForecastService.PERIOD_MAX) {
+                return period;
+            }
+            problems.add(line, "period", "must be from 0 to " + StatelessForecastService.PERIOD_MAX
+                    + " (a period number such as 202401), was " + period);
+        } catch (NumberFormatException e) {
+            problems.add(line, "period", "must be a whole number, was '" + shown(text) + "'");
+        }
+        return -1;
+    }
+
+    private double quantity(int line, String text) {
+        if (text.isEmpty()) {
+            problems.add(line, "quantity", "is required");
+            return Double.NaN;
+        }
+        try {
+            double quantity = text.length() > 40 ? Double.NaN : Double.parseDouble(text);
+            if (quantity >= 0 && quantity <= VALUE_MAX) {
+                return quantity;
+            }
+            problems.add(line, "quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was '" + shown(text) + "'");
+        } catch (NumberFormatException e) {
+            problems.add(line, "quantity", "must be a number, was '" + shown(text) + "'");
+        }
+        return Double.NaN;
+    }
+
+    private static String cell(CsvRecord record, int index) {
+        return index < record.getFieldCount() ? record.getField(index).strip() : "";
+    }
+
+    private static void rethrowIfTooLarge(Throwable e) {
+        for (Throwable cause = e; cause != null; cause = cause.getCause() == cause ? null : cause.getCause()) {
+            if (cause instanceof BodyTooLargeException tooLarge) {
+                throw tooLarge;
+            }
+        }
+    }
+
+    private void discard() {
+        try {
+            out.close();
+        } catch (IOException ignored) {
+            // the file is deleted next
+        }
+        try {
+            Files.deleteIfExists(output);
+        } catch (IOException ignored) {
+            // a temporary file left behind is removed with the temporary directory
+        }
+    }
+
+    private static String blank(double value) {
+        return Double.isFinite(value) ? String.format(Locale.ROOT, "%.2f", value) : "";
+    }
+
+    private static String shown(String value) {
+        return value.length() <= 40 ? value : value.substring(0, 40) + "…";
+    }
+
+    /**
+     * The series ids read so far, as 64-bit hashes in an open-addressing table: 16 bytes a series at most, where the
+     * ids themselves would take several times that. Two different ids share a hash with a probability of about
+     * n² / 2⁶⁵ (3 in 100 million for a million series); such a pair would be refused as "not together".
+     */
+    static final class SeriesIdSet {
+        private long[] slots = new long[1024];
+        private int count;
+
+        boolean add(String id) {
+            long hash = hash(id);
+            if (count * 2 >= slots.length) {
+                grow();
+            }
+            return insert(slots, hash);
+        }
+
+        private boolean insert(long[] table, long hash) {
+            int mask = table.length - 1;
+            for (int i = (int) (hash ^ (hash >>> 32)) & mask; ; i = (i + 1) & mask) {
+                if (table[i] == 0) {
+                    table[i] = hash;
+                    count++;
+                    return true;
+                }
+                if (table[i] == hash) {
+                    return false;
+                }
+            }
+        }
+
+        private void grow() {
+            long[] old = slots;
+            slots = new long[old.length * 2];
+            count = 0;
+            for (long hash : old) {
+                if (hash != 0) {
+                    insert(slots, hash);
+                }
+            }
+        }
+
+        /** FNV-1a over the UTF-16 units with MurmurHash3's 64-bit finaliser; 0 is kept for an empty slot. */
+        static long hash(String id) {
+            long h = 0xcbf29ce484222325L;
+            for (int i = 0; i < id.length(); i++) {
+                h = (h ^ id.charAt(i)) * 0x100000001b3L;
+            }
+            h ^= h >>> 33;
+            h *= 0xff51afd7ed558ccdL;
+            h ^= h >>> 33;
+            h *= 0xc4ceb93e53e3c2bdL;
+            h ^= h >>> 33;
+            return h == 0 ? 1 : h;
+        }
+    }
+}
