@@ -25,6 +25,7 @@ public class AccessScope {
 
     private final CurrentUser currentUser;
     private final EntityManager em;
+    private final LocationDirectory locations;
     private final java.util.Map<String, Remembered> remembered = new java.util.concurrent.ConcurrentHashMap<>();
 
     private record Remembered(Scope scope, long until) {
@@ -35,9 +36,10 @@ public class AccessScope {
         remembered.clear();
     }
 
-    AccessScope(CurrentUser currentUser, EntityManager em) {
+    AccessScope(CurrentUser currentUser, EntityManager em, LocationDirectory locations) {
         this.currentUser = currentUser;
         this.em = em;
+        this.locations = locations;
     }
 
     /** @param locationIds null when every location is in scope */
@@ -78,10 +80,7 @@ public class AccessScope {
             ids.addAll(longs(em.createNativeQuery("""
                     select ul.location_id from user_location ul join user_account ua on ua.id = ul.user_account_id
                     where ua.username = ?1""").setParameter(1, name).getResultList()));
-            if (!ids.isEmpty()) {
-                ids.addAll(longs(em.createNativeQuery("select id from location where kind = 'KIT' and parent_id in (?1)")
-                        .setParameter(1, ids).getResultList()));
-            }
+            ids.addAll(locations.kitsUnder(Set.copyOf(ids)));
         }
         String mechanic = null;
         if (currentUser.hasRole(Roles.MECHANIC)) {
@@ -89,8 +88,7 @@ public class AccessScope {
             ids.addAll(longs(em.createNativeQuery("select kit_location_id from user_account where username = ?1 and kit_location_id is not null")
                     .setParameter(1, name).getResultList()));
         }
-        boolean programme = !longs(em.createNativeQuery("select id from location where kind = 'CENTRAL_STORE'")
-                .getResultList()).stream().filter(ids::contains).toList().isEmpty();
+        boolean programme = locations.centralStores().stream().anyMatch(ids::contains);
         return new Scope(ids, programme, mechanic);
     }
 

@@ -16,8 +16,6 @@ import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
 import jakarta.ws.rs.core.MediaType;
 import jakarta.ws.rs.core.Response;
-import org.depotcast.stock.Location;
-import org.depotcast.stock.LocationService;
 
 import java.util.List;
 import java.util.Set;
@@ -28,9 +26,9 @@ import java.util.Set;
 @RolesAllowed(Roles.ADMIN)
 class AccountResource {
     private final AccountService accounts;
-    private final LocationService locations;
+    private final LocationDirectory locations;
 
-    AccountResource(AccountService accounts, LocationService locations) {
+    AccountResource(AccountService accounts, LocationDirectory locations) {
         this.accounts = accounts;
         this.locations = locations;
     }
@@ -65,13 +63,10 @@ class AccountResource {
     @POST
     @Consumes(MediaType.APPLICATION_JSON)
     public Response create(@Valid @NotNull CreateAccount body) {
-        Long kitId = body.kitCode() == null || body.kitCode().isBlank() ? null : locations.require("kitCode", body.kitCode()).id;
+        Long kitId = body.kitCode() == null || body.kitCode().isBlank() ? null : locations.requireId("kitCode", body.kitCode());
         // Every named location is checked before the account is made, so a refused one leaves no account behind.
         List<Long> locationIds = body.locationCodes() == null ? List.of() : ids("locationCodes", body.locationCodes());
-        UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId);
-        if (!locationIds.isEmpty()) {
-            accounts.assignLocations(account.username, locationIds);
-        }
+        UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId, locationIds);
         return Response.status(201).entity(view(account)).build();
     }
 
@@ -91,6 +86,6 @@ class AccountResource {
     }
 
     private List<Long> ids(String field, List<String> codes) {
-        return codes.stream().map(c -> locations.require(field, c)).map((Location l) -> l.id).toList();
+        return codes.stream().map(c -> locations.requireId(field, c)).toList();
     }
 }

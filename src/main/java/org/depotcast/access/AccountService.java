@@ -28,7 +28,11 @@ public class AccountService {
     private final AuditService audit;
     private final CurrentUser currentUser;
 
-    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed, AuditService audit, CurrentUser currentUser) {
+    private final LocationDirectory locations;
+
+    AccountService(UserAccountRepository accounts, Event<AccountsChanged> changed, AuditService audit, CurrentUser currentUser,
+                   LocationDirectory locations) {
+        this.locations = locations;
         this.currentUser = currentUser;
         this.audit = audit;
         this.accounts = accounts;
@@ -52,9 +56,9 @@ public class AccountService {
     public Profile profile(String username) {
         UserAccount account = accounts.byUsername(username)
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
-        String kit = account.kitLocationId == null ? null : accounts.locationCode(account.kitLocationId).orElse(null);
+        String kit = account.kitLocationId == null ? null : locations.codeOf(account.kitLocationId).orElse(null);
         return new Profile(account.username, new java.util.TreeSet<>(account.roleSet()),
-                accounts.assignedLocationCodes(account.id), kit);
+                locations.codesOf(accounts.assignedLocationIds(account.id)), kit);
     }
 
     public long count() {
@@ -117,6 +121,13 @@ public class AccountService {
 
     @Transactional
     public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId) {
+        return create(username, password, roles, kitLocationId, java.util.List.of());
+    }
+
+    /** Creates an account with the locations it acts on, in one transaction: a refusal leaves nothing behind. */
+    @Transactional
+    public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId,
+                              java.util.Collection<Long> locationIds) {
         if (username == null || !NAME.matcher(username).matches()) {
             throw new InvalidInputException("username", "may hold 1 to 60 lower-case letters, digits and . _ - only");
         }
@@ -138,6 +149,9 @@ public class AccountService {
         accounts.persist(account);
         audit.record("ACCOUNT_CREATED", "account", username, null,
                 java.util.Map.of("username", username, "roles", account.roles, "kitLocationId", String.valueOf(kitLocationId)));
+        if (!locationIds.isEmpty()) {
+            assignLocations(username, locationIds);
+        }
         changed.fire(new AccountsChanged());
         return account;
     }

@@ -17,17 +17,10 @@ class UserAccountRepository implements PanacheRepository<UserAccount> {
         return listAll(Sort.by("username"));
     }
 
-    /** Codes of the locations assigned to an account, in code order. */
     @SuppressWarnings("unchecked")
-    List<String> assignedLocationCodes(long accountId) {
-        return getEntityManager().createNativeQuery("""
-                select l.code from user_location ul join location l on l.id = ul.location_id
-                where ul.user_account_id = ?1 order by l.code""").setParameter(1, accountId).getResultList();
-    }
-
-    @SuppressWarnings("unchecked")
-    Optional<String> locationCode(long locationId) {
-        return getEntityManager().createNativeQuery("select code from location where id = ?1")
-                .setParameter(1, locationId).getResultList().stream().findFirst();
+    List<Long> assignedLocationIds(long accountId) {
+        return ((List<Number>) getEntityManager().createNativeQuery(
+                        "select location_id from user_location where user_account_id = ?1")
+                .setParameter(1, accountId).getResultList()).stream().map(Number::longValue).toList();
     }
 }
