@@ -2,7 +2,8 @@
  * officer.js: what the stores officer's pages share. startOfficer() signs the page in, works out the stores the
  * account looks after (its assigned depots and central store; every store for an admin), keeps the store chosen
  * in the address (?location=CODE) and in this browser, and draws the store picker and the task tabs.
- *   const {me, stores, store, parts} = await startOfficer({page: 'board', title: 'Morning board'})
+ *   const {me, stores, store, parts, run} = await startOfficer({page: 'board', title: 'Morning board'})
+ *   run: the forecast run planning uses (null before the first; undefined on the board, which reads its own)
  *   parts: part number → catalogue entry (description, unitOfIssue, packSize, minOrderQty, supplier, …)
  *   ready()        marks the page as showing its data (body[data-ready], performance mark)
  *   kindWords(k)   an alert reason in words, with the tone that only repeats it
@@ -10,6 +11,7 @@
  */
 import * as api from '/app/js/api.js';
 import {startPage} from '/app/js/nav.js';
+import {provenance} from '/app/js/provenance.js';
 import {h, mount} from '/app/js/ui.js';
 
 const STORE_KEY = 'depotcast.officer.store';
@@ -71,17 +73,19 @@ function tabs(page, store) {
 
 export async function startOfficer({page, title}) {
     const me = await startPage({roles: ['stores-officer', 'admin']});
-    const [stores, partList] = await Promise.all([storesOf(me), api.get('/api/parts')]);
+    // Every task page says which forecast run its planning numbers come from; the board draws its own line.
+    const line = document.getElementById('provenance') ? null : h('p', {id: 'provenance', class: 'provenance'});
+    const [stores, partList, run] = await Promise.all([storesOf(me), api.get('/api/parts'), line ? provenance(line, me) : undefined]);
     const store = chooseStore(stores);
     const head = document.getElementById('head');
     document.title = `${title}${store ? ` · ${store.code}` : ''} · depotcast`;
     mount(head, h('div', {class: 'page-head'}, h('h1', {}, title, store ? h('span', {class: 'muted h1-store'}, ` at ${storeName(store)}`) : null),
-        stores.length > 1 ? picker(stores, store) : null), tabs(page, store));
+        stores.length > 1 ? picker(stores, store) : null), tabs(page, store), line);
     if (!store) {
         head.append(h('p', {class: 'message'}, 'No store is assigned to your account yet. Ask an administrator to assign your depot.'));
     }
     const parts = new Map(partList.map(p => [p.partNumber, p]));
-    return {me, stores, store, parts};
+    return {me, stores, store, parts, run};
 }
 
 export function describe(parts, partNumber) {

@@ -5,7 +5,7 @@
  */
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
-import {h, mount, table, say, busy, showError} from '/app/js/ui.js';
+import {h, mount, table, say, busy, showError, caution} from '/app/js/ui.js';
 import {startOfficer, describe, ready, parseCsv, csvCell} from './officer.js';
 
 const {store, parts} = await startOfficer({page: 'stock', title: 'Stock, counts and files'});
@@ -35,7 +35,8 @@ async function load() {
     }
     const [balances, sheet] = await Promise.all([api.get('/api/stock/balances', {location: store.code}),
         api.get('/api/stock/counts/export', {location: store.code})]);
-    mount(main, balancesSection(balances), countSection(parseCsv(sheet)), importSection(), exportSection());
+    // Counting stock means handling rods and rising mains (heavy lengths) and parts that touch drinking water.
+    mount(main, balancesSection(balances), countSection(parseCsv(sheet)), importSection(), exportSection(), caution());
     ready();
 }
 

@@ -8,7 +8,7 @@ import * as fmt from '/app/js/format.js';
 import {h, mount, table, state, say, busy, caution} from '/app/js/ui.js';
 import {startOfficer, describe, ready} from './officer.js';
 
-const {me, store, parts} = await startOfficer({page: 'transfers', title: 'Transfers'});
+const {me, store, parts, run} = await startOfficer({page: 'transfers', title: 'Transfers'});
 const main = document.getElementById('content');
 const unit = p => (parts.get(p) || {}).unitOfIssue;
 const mayDispatchFrom = code => me.roles.includes('admin') || me.locationCodes.includes(code);
@@ -18,8 +18,7 @@ async function load() {
         ready();
         return;
     }
-    // Suggestions need forecasts: before the first run there are none to ask for.
-    const [run] = await api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1});
+    // Suggestions need forecasts: before the first run (startOfficer read which) there are none to ask for.
     const [suggestions, inbound, outbound] = await Promise.all([
         run ? api.get('/api/planning/transfers/suggestions') : null,
         api.get('/api/planning/transfers', {to: store.code, state: 'IN_TRANSIT'}),
