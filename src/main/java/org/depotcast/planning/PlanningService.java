@@ -35,7 +35,7 @@ public class PlanningService {
     private final LocationService locations;
     private final StockQueryService stock;
     private final ForecastQueryService forecasts;
-    private final AlertActionRepository actions;
+    private final ServiceLevelRepository serviceLevelsSet;
     private final CurrentUser currentUser;
     private final PolicyCalculator calculator;
     private final PlanningSettings settings;
@@ -44,9 +44,10 @@ public class PlanningService {
     private final org.depotcast.requests.RequestService requests;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
-                    AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings,
+                    CurrentUser currentUser, PlanningSettings settings,
                     org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
-                    org.depotcast.requests.RequestService requests) {
+                    org.depotcast.requests.RequestService requests, ServiceLevelRepository serviceLevelsSet) {
+        this.serviceLevelsSet = serviceLevelsSet;
         this.requests = requests;
         this.scope = scope;
         this.audit = audit;
@@ -54,7 +55,6 @@ public class PlanningService {
         this.locations = locations;
         this.stock = stock;
         this.forecasts = forecasts;
-        this.actions = actions;
         this.currentUser = currentUser;
         this.calculator = new PolicyCalculator(settings);
         this.settings = settings;
@@ -152,11 +152,7 @@ public class PlanningService {
         if (override != null) {
             return new PolicyCalculator.ServiceLevels(override, override);
         }
-        Map<String, Double> set = new HashMap<>();
-        for (Object row : actions.getEntityManager().createNativeQuery("select part_class, level from service_level").getResultList()) {
-            Object[] r = (Object[]) row;
-            set.put((String) r[0], ((Number) r[1]).doubleValue());
-        }
+        Map<String, Double> set = serviceLevelsSet.levelsSet();
         return new PolicyCalculator.ServiceLevels(set.getOrDefault("CRITICAL", settings.serviceLevelCritical()),
                 set.getOrDefault("STANDARD", settings.serviceLevelStandard()));
     }
@@ -182,11 +178,7 @@ public class PlanningService {
             throw new InvalidInputException("level", "must be in (0, 1), was " + level);
         }
         PolicyCalculator.ServiceLevels before = serviceLevels(null);
-        var em = actions.getEntityManager();
-        em.createNativeQuery("delete from service_level where part_class = ?1").setParameter(1, partClass).executeUpdate();
-        em.createNativeQuery("insert into service_level (part_class, level, set_by, set_at) values (?1, ?2, ?3, ?4)")
-                .setParameter(1, partClass).setParameter(2, level).setParameter(3, currentUser.name())
-                .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate();
+        serviceLevelsSet.set(partClass, level, currentUser.name(), OffsetDateTime.now(ZoneOffset.UTC));
         audit.record("SERVICE_LEVEL_SET", "service_level", partClass, before, Map.of("level", level));
     }
 }

@@ -1,6 +1,5 @@
 package org.depotcast.planning;
 
-import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.SystemWork;
@@ -34,17 +33,13 @@ public class TransferService {
     private final LocationService locations;
     private final PartService parts;
     private final PlanningSettings settings;
-    private final Orders orders;
+    private final LaneCostRepository laneCosts;
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
     private final SystemWork system;
 
-    @ApplicationScoped
-    static class Orders implements PanacheRepository<TransferOrder> {
-    }
-
     TransferService(PlanningService planning, LocationService locations, PartService parts,
-                    PlanningSettings settings, Orders orders, org.depotcast.access.AccessScope scope,
+                    PlanningSettings settings, LaneCostRepository laneCosts, org.depotcast.access.AccessScope scope,
                     org.depotcast.access.AuditService audit, SystemWork system) {
         this.system = system;
         this.scope = scope;
@@ -53,7 +48,7 @@ public class TransferService {
         this.locations = locations;
         this.parts = parts;
         this.settings = settings;
-        this.orders = orders;
+        this.laneCosts = laneCosts;
     }
 
     @Transactional
@@ -106,11 +101,11 @@ public class TransferService {
         Map<Location, Double> cheapestIn = new HashMap<>();
         double[][] cost = new double[donors.size()][receivers.size()];
         double[][] km = new double[donors.size()][receivers.size()];
-        Map<String, Double> lanes = laneCosts();
+        Map<String, Double> lanes = laneCosts.costsSet();
         for (int i = 0; i < donors.size(); i++) {
             for (int j = 0; j < receivers.size(); j++) {
                 km[i][j] = distanceKm(donors.get(i), receivers.get(j));
-                Double set = lanes.get(donors.get(i).id + ">" + receivers.get(j).id);
+                Double set = lanes.get(LaneCostRepository.lane(donors.get(i).id, receivers.get(j).id));
                 cost[i][j] = set != null ? set : km[i][j] * settings.transferCostPerUnitKm();
                 cheapestIn.merge(receivers.get(j), cost[i][j], Math::min);
             }
@@ -141,29 +136,18 @@ public class TransferService {
         return out;
     }
 
-    /** Per-unit costs set for particular lanes, keyed "fromId>toId"; other lanes use the distance-based default. */
-    private Map<String, Double> laneCosts() {
-        Map<String, Double> lanes = new HashMap<>();
-        for (Object row : orders.getEntityManager().createNativeQuery("select from_id, to_id, unit_cost from transfer_lane_cost")
-                .getResultList()) {
-            Object[] r = (Object[]) row;
-            lanes.put(((Number) r[0]).longValue() + ">" + ((Number) r[1]).longValue(), ((Number) r[2]).doubleValue());
-        }
-        return lanes;
-    }
-
     /** Every lane between two depots: its distance, the distance-based cost per unit, and the cost set for it, if any. */
     @Transactional
     public List<TransferResponses.Lane> lanes() {
         List<Location> depots = locations.ofKind(LocationKind.DEPOT);
-        Map<String, Double> set = laneCosts();
+        Map<String, Double> set = laneCosts.costsSet();
         List<TransferResponses.Lane> out = new ArrayList<>();
         for (Location from : depots) {
             for (Location to : depots) {
                 if (!from.id.equals(to.id)) {
                     double km = distanceKm(from, to);
                     out.add(new TransferResponses.Lane(from.code, to.code, km, km * settings.transferCostPerUnitKm(),
-                            set.get(from.id + ">" + to.id)));
+                            set.get(LaneCostRepository.lane(from.id, to.id))));
                 }
             }
         }
@@ -179,11 +163,7 @@ public class TransferService {
         if (from.id.equals(to.id)) {
             throw new BusinessRuleException("to", "a lane joins two different stores");
         }
-        var em = orders.getEntityManager();
-        em.createNativeQuery("delete from transfer_lane_cost where from_id = ?1 and to_id = ?2")
-                .setParameter(1, from.id).setParameter(2, to.id).executeUpdate();
-        em.createNativeQuery("insert into transfer_lane_cost (from_id, to_id, unit_cost) values (?1, ?2, ?3)")
-                .setParameter(1, from.id).setParameter(2, to.id).setParameter(3, unitCost).executeUpdate();
+        laneCosts.set(from.id, to.id, unitCost);
         audit.record("LANE_COST_SET", "transfer_lane", fromCode + ">" + toCode, null, java.util.Map.of("unitCost", unitCost));
     }
 
