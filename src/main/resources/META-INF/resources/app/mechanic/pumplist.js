@@ -1,7 +1,7 @@
 /*
  * pumplist.js: which of the mechanic's pumps the page lists, and in what order. By default the pumps that need a
  * visit (broken, with an open repair, a service due within 30 days, or an action of the mechanic's waiting), in
- * the order of a round from the depot (route.js); with "show all" or a search, every match, most pressing first.
+ * the order of a route from the depot (route.js); with "show all" or a search, every match, most pressing first.
  */
 import * as fmt from '/app/js/format.js';
 import {visitOrder} from './route.js';
@@ -34,8 +34,8 @@ export function pumpRows(snapshot, waiting, {all, search}) {
     const km = round.reduce((sum, s) => sum + (s.legKm || 0), 0);
     const from = snapshot.depot ? snapshot.depot.name || snapshot.depot.code : 'the first pump';
     return {rows, toVisit: visit.length, words: `${visit.length} of your ${total} pumps need a visit: broken, with an open repair, `
-        + `or with a service due within 30 days. In the order of a round from ${from}, nearest next pump first: about `
-        + `${fmt.num(km, 1)} km in straight lines (roads are longer).`};
+        + `or with a service due within 30 days. In the order of a route from ${from}, nearest next pump first: about `
+        + `${fmt.num(km, 1)} km from the depot to the last pump in straight lines (roads are longer).`};
 }
 
 export function stopWords(stop) {
