@@ -8,7 +8,6 @@ import org.depotcast.common.BodyTooLargeException;
 import org.depotcast.common.Bounds;
 import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvProblems;
-import org.depotcast.common.FieldError;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
@@ -38,7 +37,6 @@ final class BatchForecast {
     static final List<String> OUTPUT_HEADER = List.of("series_id", "step", "forecast", "method", "alpha", "beta",
             "demand_class");
     private static final int SERIES_ID_MAX = 200;
-    private static final double VALUE_MAX = Double.parseDouble(Bounds.SERIES_VALUE_MAX);
 
     private final StatelessForecastService.Settings settings;
     private final CsvProblems problems = new CsvProblems();
@@ -91,7 +89,7 @@ final class BatchForecast {
             if (!records.hasNext()) {
                 throw new InvalidInputException("body", "CSV body is empty");
             }
-            int[] columns = columns(records.next());
+            int[] columns = BatchCells.columns(records.next());
             while (records.hasNext()) {
                 CsvRecord record = records.next();
                 rows++;
@@ -110,28 +108,11 @@ final class BatchForecast {
         out.close();
     }
 
-    private static int[] columns(CsvRecord header) {
-        List<String> names = header.getFields().stream().map(String::strip).toList();
-        List<String> wanted = List.of("series_id", "period", "quantity");
-        int[] index = new int[wanted.size()];
-        List<FieldError> missing = new java.util.ArrayList<>();
-        for (int i = 0; i < wanted.size(); i++) {
-            index[i] = names.indexOf(wanted.get(i));
-            if (index[i] < 0) {
-                missing.add(new FieldError("header", "missing column '" + wanted.get(i) + "'"));
-            }
-        }
-        if (!missing.isEmpty()) {
-            throw new InvalidInputException(missing);
-        }
-        return index;
-    }
-
     private void readRow(CsvRecord record, int[] columns) throws IOException {
         int line = (int) Math.min(Integer.MAX_VALUE, record.getStartingLineNumber());
-        String id = cell(record, columns[0]);
-        int period = period(line, cell(record, columns[1]));
-        double quantity = quantity(line, cell(record, columns[2]));
+        String id = BatchCells.cell(record, columns[0]);
+        int period = BatchCells.period(problems, line, BatchCells.cell(record, columns[1]));
+        double quantity = BatchCells.quantity(problems, line, BatchCells.cell(record, columns[2]));
         if (id.isEmpty()) {
             problems.add(line, "series_id", "is required");
             return;
@@ -143,7 +124,7 @@ final class BatchForecast {
         if (!id.equals(currentId)) {
             finishSeries();
             if (!seen.add(id)) {
-                problems.add(line, "series_id", "the rows of series '" + shown(id) + "' must be together: it "
+                problems.add(line, "series_id", "the rows of series '" + BatchCells.shown(id) + "' must be together: it "
                         + "appeared earlier in the file, before another series");
                 return;
             }
@@ -159,7 +140,7 @@ final class BatchForecast {
         int low = size == 0 ? period : Math.min(minPeriod, period);
         int high = size == 0 ? period : Math.max(maxPeriod, period);
         if (high - low >= Bounds.SERIES_PERIODS_MAX) {
-            problems.add(line, "period", "series '" + shown(currentId) + "' spans more than "
+            problems.add(line, "period", "series '" + BatchCells.shown(currentId) + "' spans more than "
                     + Bounds.SERIES_PERIODS_MAX + " periods");
             return;
         }
@@ -185,7 +166,7 @@ final class BatchForecast {
         for (int i = 0; i < size; i++) {
             int at = periods[i] - minPeriod;
             if (filled[at]) {
-                problems.add(lines[i], "period", "period " + periods[i] + " appears twice for series '" + shown(currentId) + "'");
+                problems.add(lines[i], "period", "period " + periods[i] + " appears twice for series '" + BatchCells.shown(currentId) + "'");
             }
             filled[at] = true;
             history[at] = quantities[i];
@@ -211,45 +192,6 @@ final class BatchForecast {
         }
     }
 
-    private int period(int line, String text) {
-        if (text.isEmpty()) {
-            problems.add(line, "period", "is required");
-            return -1;
-        }
-        try {
-            int period = Integer.parseInt(text);
-            if (period >= 0 && period <= StatelessForecastService.PERIOD_MAX) {
-                return period;
-            }
-            problems.add(line, "period", "must be from 0 to " + StatelessForecastService.PERIOD_MAX
-                    + " (a period number such as 202401), was " + period);
-        } catch (NumberFormatException e) {
-            problems.add(line, "period", "must be a whole number, was '" + shown(text) + "'");
-        }
-        return -1;
-    }
-
-    private double quantity(int line, String text) {
-        if (text.isEmpty()) {
-            problems.add(line, "quantity", "is required");
-            return Double.NaN;
-        }
-        try {
-            double quantity = text.length() > 40 ? Double.NaN : Double.parseDouble(text);
-            if (quantity >= 0 && quantity <= VALUE_MAX) {
-                return quantity;
-            }
-            problems.add(line, "quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was '" + shown(text) + "'");
-        } catch (NumberFormatException e) {
-            problems.add(line, "quantity", "must be a number, was '" + shown(text) + "'");
-        }
-        return Double.NaN;
-    }
-
-    private static String cell(CsvRecord record, int index) {
-        return index < record.getFieldCount() ? record.getField(index).strip() : "";
-    }
-
     private static void rethrowIfTooLarge(Throwable e) {
         for (Throwable cause = e; cause != null; cause = cause.getCause() == cause ? null : cause.getCause()) {
             if (cause instanceof BodyTooLargeException tooLarge) {
@@ -273,66 +215,5 @@ final class BatchForecast {
 
     private static String blank(double value) {
         return Double.isFinite(value) ? String.format(Locale.ROOT, "%.2f", value) : "";
-    }
-
-    private static String shown(String value) {
-        return value.length() <= 40 ? value : value.substring(0, 40) + "…";
-    }
-
-    /**
-     * The series ids read so far, as 64-bit hashes in an open-addressing table: 16 bytes a series at most, where the
-     * ids themselves would take several times that. Two different ids share a hash with a probability of about
-     * n² / 2⁶⁵ (3 in 100 million for a million series); such a pair would be refused as "not together".
-     */
-    static final class SeriesIdSet {
-        private long[] slots = new long[1024];
-        private int count;
-
-        boolean add(String id) {
-            long hash = hash(id);
-            if (count * 2 >= slots.length) {
-                grow();
-            }
-            return insert(slots, hash);
-        }
-
-        private boolean insert(long[] table, long hash) {
-            int mask = table.length - 1;
-            for (int i = (int) (hash ^ (hash >>> 32)) & mask; ; i = (i + 1) & mask) {
-                if (table[i] == 0) {
-                    table[i] = hash;
-                    count++;
-                    return true;
-                }
-                if (table[i] == hash) {
-                    return false;
-                }
-            }
-        }
-
-        private void grow() {
-            long[] old = slots;
-            slots = new long[old.length * 2];
-            count = 0;
-            for (long hash : old) {
-                if (hash != 0) {
-                    insert(slots, hash);
-                }
-            }
-        }
-
-        /** FNV-1a over the UTF-16 units with MurmurHash3's 64-bit finaliser; 0 is kept for an empty slot. */
-        static long hash(String id) {
-            long h = 0xcbf29ce484222325L;
-            for (int i = 0; i < id.length(); i++) {
-                h = (h ^ id.charAt(i)) * 0x100000001b3L;
-            }
-            h ^= h >>> 33;
-            h *= 0xff51afd7ed558ccdL;
-            h ^= h >>> 33;
-            h *= 0xc4ceb93e53e3c2bdL;
-            h ^= h >>> 33;
-            return h == 0 ? 1 : h;
-        }
     }
 }
