@@ -41,4 +41,7 @@ public class ForecastRun {
     @Column(name = "series_done", nullable = false)
     public int seriesDone;
     public String message;
+    /** The background job that computes it (jobs/): state and progress for any instance to answer a poll. */
+    @Column(name = "job_id")
+    public Long jobId;
 }

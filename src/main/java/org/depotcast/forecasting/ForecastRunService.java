@@ -4,12 +4,17 @@ import io.quarkus.logging.Log;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import io.quarkus.scheduler.Scheduled;
 import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.enterprise.event.Observes;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.common.ConflictException;
+import org.depotcast.jobs.JobFailed;
+import org.depotcast.jobs.JobKind;
+import org.depotcast.jobs.JobProgress;
+import org.depotcast.jobs.JobRunner;
+import org.depotcast.jobs.ScheduleClaims;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
-import org.eclipse.microprofile.context.ManagedExecutor;
 
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
@@ -17,31 +22,32 @@ import java.time.ZoneOffset;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
-import java.util.concurrent.atomic.AtomicBoolean;
 import java.util.stream.Collectors;
 
 /**
- * Recomputes every forecast: on demand (in the background, with progress on the run row) and nightly. A run that
- * fails is marked FAILED and leaves earlier runs as they were; readers always see the latest finished run.
+ * Recomputes every forecast: on demand and nightly, as a background job (jobs/) with progress on the job and on the
+ * run row. One run at a time across instances; the nightly run happens once a day across instances (a schedule
+ * claim). A run that fails is marked FAILED and leaves earlier runs as they were; readers see the latest finished run.
  */
 @ApplicationScoped
 public class ForecastRunService {
     /** Trigger of a run as of a past origin: kept for checking accuracy, never the run planning uses. */
     public static final String AS_OF_TRIGGER = "as-of";
+    static final String NIGHTLY_SCHEDULE = "forecast-nightly";
     private static final int PROGRESS_EVERY = 500;
 
     private final ForecastModelFiles modelFiles;
     private final FleetSnapshotLoader loader;
     private final ForecastRepository repository;
-    private final ManagedExecutor executor;
+    private final JobRunner jobs;
+    private final ScheduleClaims claims;
     private final SystemWork system;
     private final AccessScope scope;
     private final int historyMonths;
     private final int horizonMonths;
-    private final AtomicBoolean running = new AtomicBoolean();
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
-                       ManagedExecutor executor, SystemWork system, AccessScope scope,
+                       JobRunner jobs, ScheduleClaims claims, SystemWork system, AccessScope scope,
                        @ConfigProperty(name = "depotcast.forecast.history-months") int historyMonths,
                        @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths) {
         if (historyMonths < 24) {
@@ -53,18 +59,25 @@ public class ForecastRunService {
         this.modelFiles = modelFiles;
         this.loader = loader;
         this.repository = repository;
-        this.executor = executor;
+        this.jobs = jobs;
+        this.claims = claims;
         this.system = system;
         this.scope = scope;
         this.historyMonths = historyMonths;
         this.horizonMonths = horizonMonths;
     }
 
+    /** Every instance fires the schedule; only the one that claims today's run starts it. */
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
-        if (running.compareAndSet(false, true)) {
-            LocalDate origin = currentOrigin();
-            system.run("forecast-schedule", () -> execute(createRun("schedule", origin), origin));
+        if (claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
+            system.run("forecast-schedule", () -> {
+                try {
+                    startExclusive("schedule", currentOrigin());
+                } catch (ConflictException running) {
+                    Log.warn("nightly forecast run skipped: a run is already in progress");
+                }
+            });
         }
     }
 
@@ -84,26 +97,53 @@ public class ForecastRunService {
             throw new org.depotcast.common.InvalidInputException("origin",
                     "must not be after the current month's first day " + current + ", was " + origin);
         }
-        if (!running.compareAndSet(false, true)) {
-            throw new ConflictException(null, "a forecast run is already in progress");
-        }
-        long runId = createRun(from.isBefore(current) ? AS_OF_TRIGGER : trigger, from);
-        executor.runAsync(() -> system.run("forecast-run", () -> execute(runId, from)));
-        return runId;
+        return startExclusive(from.isBefore(current) ? AS_OF_TRIGGER : trigger, from);
     }
 
-    private static LocalDate currentOrigin() {
+    private long startExclusive(String trigger, LocalDate origin) {
+        long[] ids = createExclusive(trigger, origin);
+        jobs.launch(ids[0], progress -> execute(ids[1], origin, progress));
+        return ids[1];
+    }
+
+    /** One run at a time: checked against every instance's running jobs, serialised within this one. */
+    private synchronized long[] createExclusive(String trigger, LocalDate origin) {
+        if (jobs.anyRunning(JobKind.FORECAST_RUN)) {
+            throw new ConflictException(null, "a forecast run is already in progress");
+        }
+        long jobId = jobs.create(JobKind.FORECAST_RUN);
+        return new long[]{jobId, createRun(trigger, origin, jobId)};
+    }
+
+    static LocalDate currentOrigin() {
         return LocalDate.now(ZoneOffset.UTC).withDayOfMonth(1);
     }
 
     /** Runs to the end in the caller's thread, with the forecast origin at the start of {@code today}'s month. */
     public ForecastRun runNow(String trigger, LocalDate today) {
-        if (!running.compareAndSet(false, true)) {
-            throw new ConflictException(null, "a forecast run is already in progress");
-        }
-        long runId = createRun(trigger, today.withDayOfMonth(1));
-        system.run("forecast-run", () -> execute(runId, today));
-        return QuarkusTransaction.requiringNew().call(() -> repository.run(runId).orElseThrow());
+        long[] ids = createExclusive(trigger, today.withDayOfMonth(1));
+        jobs.runHere(ids[0], progress -> execute(ids[1], today, progress));
+        return run(ids[1]);
+    }
+
+    /**
+     * Inside another job (the accuracy report): an {@link #AS_OF_TRIGGER} run as of {@code origin}, computed in the
+     * caller's thread and linked to the caller's job; answers its id. A failure propagates to the caller's job.
+     */
+    public long runAsOfWithin(JobProgress progress, LocalDate origin) {
+        long runId = createRun(AS_OF_TRIGGER, origin.withDayOfMonth(1), progress.jobId());
+        execute(runId, origin.withDayOfMonth(1), progress);
+        return runId;
+    }
+
+    /** A failed or abandoned job fails the run it was computing, with the job's safe message. */
+    void onJobFailed(@Observes JobFailed failed) {
+        QuarkusTransaction.requiringNew().run(() -> repository.getEntityManager().createQuery(
+                        "update ForecastRun r set r.status = :failed, r.finishedAt = :now, r.message = :message "
+                                + "where r.jobId = :job and r.status = :running")
+                .setParameter("failed", ForecastRun.Status.FAILED).setParameter("now", OffsetDateTime.now(ZoneOffset.UTC))
+                .setParameter("message", failed.message()).setParameter("job", failed.jobId())
+                .setParameter("running", ForecastRun.Status.RUNNING).executeUpdate());
     }
 
     public java.util.Optional<ForecastRun> latestFinished() {
@@ -120,7 +160,7 @@ public class ForecastRunService {
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "forecast run", id)));
     }
 
-    private long createRun(String trigger, LocalDate origin) {
+    private long createRun(String trigger, LocalDate origin, long jobId) {
         return QuarkusTransaction.requiringNew().call(() -> {
             ForecastRun run = new ForecastRun();
             run.triggerKind = trigger;
@@ -128,65 +168,56 @@ public class ForecastRunService {
             run.status = ForecastRun.Status.RUNNING;
             run.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
             run.horizonMonths = horizonMonths;
+            run.jobId = jobId;
             repository.getEntityManager().persist(run);
             return run.id;
         });
     }
 
-    private void execute(long runId, LocalDate today) {
+    /** Computes and stores the run; answers the job's summary. A failure propagates to the job runner. */
+    private String execute(long runId, LocalDate today, JobProgress progress) {
         long started = System.nanoTime();
-        try {
-            Map<ComponentFamily, ForecastModelDefinition> definitions = modelFiles.load();
-            FleetSnapshot snapshot = loader.load(today, historyMonths);
-            Log.infof("forecast run %d: %d pumps, %d consumption lines read in %d ms", runId, snapshot.pumps().size(),
-                    snapshot.consumption().size(), (System.nanoTime() - started) / 1_000_000);
-            // Families fit independently: one per core.
-            Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
-            Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
-            Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
-            definitions.values().parallelStream()
-                    .map(d -> new FleetModel[]{FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 0),
-                            FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 1)})
-                    .toList().forEach(pair -> {
-                        models.put(pair[0].family(), pair[0]);
-                        holdout.put(pair[1].family(), pair[1]);
-                    });
-            DemandAssembler assembler = new DemandAssembler(snapshot, definitions, models, holdout, horizonMonths);
-            int total = assembler.seriesCount();
-            updateProgress(runId, 0, total, snapshot);
-            List<PartForecastResult> results = assembler.assemble(done -> {
-                if (done % PROGRESS_EVERY == 0) {
-                    // Progress is read from the run row by a client polling GET /api/forecast/runs/{id}.
-                    updateProgress(runId, done, total, snapshot);
-                    Log.infof("forecast run %d: %d of %d series", runId, done, total);
-                }
-            });
-            QuarkusTransaction.requiringNew().timeout(600).run(() -> store(runId, models, results));
-            Log.infof("forecast run %d: %d series done in %d ms", runId, results.size(), (System.nanoTime() - started) / 1_000_000);
-        } catch (RuntimeException e) {
-            Log.error("forecast run " + runId + " failed", e);
-            finish(runId, ForecastRun.Status.FAILED, e.getMessage());
-        } finally {
-            running.set(false);
-        }
+        progress.phase("reading the fleet and the repair records");
+        Map<ComponentFamily, ForecastModelDefinition> definitions = modelFiles.load();
+        FleetSnapshot snapshot = loader.load(today, historyMonths);
+        Log.infof("forecast run %d: %d pumps, %d consumption lines read in %d ms", runId, snapshot.pumps().size(),
+                snapshot.consumption().size(), (System.nanoTime() - started) / 1_000_000);
+        progress.phase("fitting the fleet models");
+        // Families fit independently: one per core.
+        Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
+        definitions.values().parallelStream()
+                .map(d -> new FleetModel[]{FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 0),
+                        FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 1)})
+                .toList().forEach(pair -> {
+                    models.put(pair[0].family(), pair[0]);
+                    holdout.put(pair[1].family(), pair[1]);
+                });
+        DemandAssembler assembler = new DemandAssembler(snapshot, definitions, models, holdout, horizonMonths);
+        int total = assembler.seriesCount();
+        progress.phase("forecasting each part at each location");
+        updateProgress(runId, 0, total, snapshot, progress);
+        List<PartForecastResult> results = assembler.assemble(done -> {
+            if (done % PROGRESS_EVERY == 0) {
+                // Read by clients polling GET /api/jobs/{id} or GET /api/forecast/runs/{id}, on any instance.
+                updateProgress(runId, done, total, snapshot, progress);
+            }
+        });
+        progress.phase("storing the forecasts");
+        QuarkusTransaction.requiringNew().timeout(600).run(() -> store(runId, models, results));
+        Log.infof("forecast run %d: %d series done in %d ms", runId, results.size(), (System.nanoTime() - started) / 1_000_000);
+        return "Forecast run " + runId + ": " + results.size() + " series as of " + today.withDayOfMonth(1) + ".";
     }
 
-    private void updateProgress(long runId, int done, int total, FleetSnapshot snapshot) {
+    private void updateProgress(long runId, int done, int total, FleetSnapshot snapshot, JobProgress progress) {
+        progress.progress(done, total);
         QuarkusTransaction.requiringNew().run(() -> {
             ForecastRun run = repository.run(runId).orElseThrow();
             run.seriesDone = done;
             run.seriesTotal = total;
             run.historyFrom = snapshot.historyStart();
             run.historyTo = snapshot.historyEnd().minusDays(1);
-        });
-    }
-
-    private void finish(long runId, ForecastRun.Status status, String message) {
-        QuarkusTransaction.requiringNew().run(() -> {
-            ForecastRun run = repository.run(runId).orElseThrow();
-            run.status = status;
-            run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
-            run.message = message == null ? null : message.substring(0, Math.min(1000, message.length()));
         });
     }
 

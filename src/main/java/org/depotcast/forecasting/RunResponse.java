@@ -6,9 +6,9 @@ import java.time.OffsetDateTime;
 /** One forecast run; {@code forPlanning} is false for a run as of a past origin, which planning never reads. */
 public record RunResponse(long id, String trigger, boolean forPlanning, String status, LocalDate origin, OffsetDateTime startedAt, OffsetDateTime finishedAt,
                           LocalDate historyFrom, LocalDate historyTo, int horizonMonths, int seriesDone,
-                          int seriesTotal, String message) {
+                          int seriesTotal, String message, Long jobId) {
     static RunResponse from(ForecastRun r) {
         return new RunResponse(r.id, r.triggerKind, !ForecastRunService.AS_OF_TRIGGER.equals(r.triggerKind), r.status.name(), r.origin, r.startedAt, r.finishedAt, r.historyFrom,
-                r.historyTo, r.horizonMonths, r.seriesDone, r.seriesTotal, r.message);
+                r.historyTo, r.horizonMonths, r.seriesDone, r.seriesTotal, r.message, r.jobId);
     }
 }

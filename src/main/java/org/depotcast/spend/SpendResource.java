@@ -73,10 +73,10 @@ class SpendResource {
     }
 
     record RunView(long id, long scenarioId, String status, String phase, int draws, long seed, String message,
-                   java.time.OffsetDateTime startedAt, java.time.OffsetDateTime finishedAt) {
+                   java.time.OffsetDateTime startedAt, java.time.OffsetDateTime finishedAt, Long jobId) {
         static RunView from(SpendRun r) {
             return new RunView(r.id, r.scenarioId, r.status.name(), r.phase, r.draws, r.seed, r.message, r.startedAt,
-                    r.finishedAt);
+                    r.finishedAt, r.jobId);
         }
     }
 

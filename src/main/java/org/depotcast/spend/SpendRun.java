@@ -34,4 +34,7 @@ public class SpendRun {
     public long seed;
     public String results;
     public String message;
+    /** The background job that computes it (jobs/). */
+    @Column(name = "job_id")
+    public Long jobId;
 }

@@ -3,14 +3,16 @@ package org.depotcast.spend;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import io.quarkus.hibernate.orm.panache.PanacheRepository;
-import io.quarkus.logging.Log;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.access.SystemWork;
+import org.depotcast.jobs.JobFailed;
+import org.depotcast.jobs.JobKind;
+import org.depotcast.jobs.JobProgress;
+import org.depotcast.jobs.JobRunner;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
@@ -62,15 +64,9 @@ public class SpendService {
     private final AccessScope scope;
     private final CurrentUser currentUser;
     private final AuditService audit;
-    private final SystemWork system;
+    private final JobRunner jobs;
     private final ObjectMapper json;
     private final FinancialYearService financialYears;
-    /** A plain thread, outside any request: background runs act as the system once the caller was checked. */
-    private final java.util.concurrent.ExecutorService background = java.util.concurrent.Executors.newSingleThreadExecutor(r -> {
-        Thread t = new Thread(r, "spend-projection");
-        t.setDaemon(true);
-        return t;
-    });
 
     @ApplicationScoped
     static class Scenarios implements PanacheRepository<SpendScenario> {
@@ -83,7 +79,7 @@ public class SpendService {
     SpendService(Scenarios scenarios, Runs runs, PartService parts, PumpModelService models, LocationService locations,
                  FleetSnapshotLoader fleet, ForecastQueryService forecasts, ForecastRunService forecastRuns,
                  PlanningService planning, AccessScope scope, CurrentUser currentUser, AuditService audit,
-                 SystemWork system, ObjectMapper json, FinancialYearService financialYears) {
+                 JobRunner jobs, ObjectMapper json, FinancialYearService financialYears) {
         this.financialYears = financialYears;
         this.scenarios = scenarios;
         this.runs = runs;
@@ -97,7 +93,7 @@ public class SpendService {
         this.scope = scope;
         this.currentUser = currentUser;
         this.audit = audit;
-        this.system = system;
+        this.jobs = jobs;
         this.json = json;
     }
 
@@ -181,8 +177,10 @@ public class SpendService {
             throw new org.depotcast.common.NoForecastYetException();
         }
         FinancialYears years = financialYears.current();
+        long jobId = jobs.create(JobKind.SPEND_RUN);
         SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
             SpendRun r = new SpendRun();
+            r.jobId = jobId;
             r.scenarioId = scenarioId;
             r.status = SpendRun.Status.RUNNING;
             r.phase = "queued";
@@ -192,9 +190,17 @@ public class SpendService {
             runs.persist(r);
             return r;
         });
-        // The caller's programme-wide view was checked above; the background work acts for it.
-        background.submit(() -> system.run("spend-run", () -> execute(run.id, scenario.name, definition, years)));
+        // The caller's programme-wide view was checked above; the job runs as the system for it.
+        jobs.launch(jobId, progress -> execute(run.id, scenario.name, definition, years, progress));
         return run;
+    }
+
+    /** A failed or abandoned job fails its run, with the job's safe message. */
+    void onJobFailed(@jakarta.enterprise.event.Observes JobFailed failed) {
+        QuarkusTransaction.requiringNew().run(() -> runs.update(
+                "status = ?1, finishedAt = ?2, message = ?3, phase = ?4 where jobId = ?5 and status = ?6",
+                SpendRun.Status.FAILED, OffsetDateTime.now(ZoneOffset.UTC), failed.message(), "failed", failed.jobId(),
+                SpendRun.Status.RUNNING));
     }
 
     /** Runs to the end in the caller's thread (tests, benchmarks). */
@@ -235,66 +241,57 @@ public class SpendService {
         }
     }
 
-    private void execute(long runId, String name, ScenarioDefinition definition, FinancialYears financialYears) {
-        try {
-            phase(runId, "reading the fleet");
-            LocalDate today = LocalDate.now(ZoneOffset.UTC);
-            FleetSnapshot snapshot = fleet.load(today, 24);
-            List<FinancialYears.Period> periods = financialYears.projection(snapshot.historyEnd(), definition.horizonYears());
-            Map<ComponentFamily, FleetModelResponse> fits = new EnumMap<>(ComponentFamily.class);
-            for (ComponentFamily family : ComponentFamily.values()) {
-                try {
-                    fits.put(family, forecasts.fleetModel(family.name()));
-                } catch (EntityMissingException none) {
-                    // A family with no stored model contributes no breakdown demand.
-                }
+    private String execute(long runId, String name, ScenarioDefinition definition, FinancialYears financialYears,
+                           JobProgress progress) {
+        phase(runId, progress, "reading the fleet");
+        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        FleetSnapshot snapshot = fleet.load(today, 24);
+        List<FinancialYears.Period> periods = financialYears.projection(snapshot.historyEnd(), definition.horizonYears());
+        Map<ComponentFamily, FleetModelResponse> fits = new EnumMap<>(ComponentFamily.class);
+        for (ComponentFamily family : ComponentFamily.values()) {
+            try {
+                fits.put(family, forecasts.fleetModel(family.name()));
+            } catch (EntityMissingException none) {
+                // A family with no stored model contributes no breakdown demand.
             }
-            Map<Long, Part> partsById = new HashMap<>();
-            parts.all().forEach(p -> partsById.put(p.id, p));
-            String currency = checkCurrency(definition, partsById);
-            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, definition, periods);
-            Map<Long, String> depotCodes = new HashMap<>();
-            locations.all().forEach(l -> depotCodes.put(l.id, l.code));
-            builder.addFleet(snapshot, depotCodes);
-            for (ScenarioDefinition.Installation inst : definition.installations() == null
-                    ? List.<ScenarioDefinition.Installation>of() : definition.installations()) {
-                PumpModel model = QuarkusTransaction.requiringNew().call(() -> {
-                    PumpModel m = models.require("modelCode", inst.modelCode());
-                    m.bom.forEach(l -> l.part.family.name());
-                    return m;
-                });
-                builder.addInstallation(inst, model);
-            }
-            String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
-            for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
-                Part part = parts.require("partNumber", p.partNumber());
-                builder.addTopUp(central, part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
-            }
-            SpendLine[] lines = builder.lines();
-            phase(runId, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");
-            SpendDraws draws = SpendSimulation.run(lines, periods.size(), builder.familyNames.size(),
-                    builder.partNumbers.size(), builder.depotCodes.size(), builder.groupLogSd, builder.groupDispersion,
-                    definition.drawsOrDefault(), definition.seedOrDefault());
-            phase(runId, "summarising");
-            SpendResults results = summarise(name, currency, definition, financialYears, periods, builder, draws);
-            String stored = toJson(results);
-            QuarkusTransaction.requiringNew().run(() -> {
-                SpendRun run = runs.findById(runId);
-                run.results = stored;
-                run.status = SpendRun.Status.DONE;
-                run.phase = "done";
-                run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
-            });
-        } catch (RuntimeException e) {
-            Log.error("spend run " + runId + " failed", e);
-            QuarkusTransaction.requiringNew().run(() -> {
-                SpendRun run = runs.findById(runId);
-                run.status = SpendRun.Status.FAILED;
-                run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
-                String message = e.getMessage() == null ? e.getClass().getSimpleName() : e.getMessage();
-                run.message = message.substring(0, Math.min(1000, message.length()));
-            });
         }
+        Map<Long, Part> partsById = new HashMap<>();
+        parts.all().forEach(p -> partsById.put(p.id, p));
+        String currency = checkCurrency(definition, partsById);
+        SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, definition, periods);
+        Map<Long, String> depotCodes = new HashMap<>();
+        locations.all().forEach(l -> depotCodes.put(l.id, l.code));
+        builder.addFleet(snapshot, depotCodes);
+        for (ScenarioDefinition.Installation inst : definition.installations() == null
+                ? List.<ScenarioDefinition.Installation>of() : definition.installations()) {
+            PumpModel model = QuarkusTransaction.requiringNew().call(() -> {
+                PumpModel m = models.require("modelCode", inst.modelCode());
+                m.bom.forEach(l -> l.part.family.name());
+                return m;
+            });
+            builder.addInstallation(inst, model);
+        }
+        String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+        for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
+            Part part = parts.require("partNumber", p.partNumber());
+            builder.addTopUp(central, part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+        }
+        SpendLine[] lines = builder.lines();
+        phase(runId, progress, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");
+        SpendDraws draws = SpendSimulation.run(lines, periods.size(), builder.familyNames.size(),
+                builder.partNumbers.size(), builder.depotCodes.size(), builder.groupLogSd, builder.groupDispersion,
+                definition.drawsOrDefault(), definition.seedOrDefault());
+        phase(runId, progress, "summarising");
+        SpendResults results = summarise(name, currency, definition, financialYears, periods, builder, draws);
+        String stored = toJson(results);
+        QuarkusTransaction.requiringNew().run(() -> {
+            SpendRun run = runs.findById(runId);
+            run.results = stored;
+            run.status = SpendRun.Status.DONE;
+            run.phase = "done";
+            run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        });
+        return "Spend run " + runId + ": " + periods.size() + " periods, " + lines.length + " lines.";
     }
 
     /** Every part in one catalogue currency; the scenario converts it with its own rate. */
@@ -350,7 +347,8 @@ public class SpendService {
                 financialYears.startMonth(), years, notes);
     }
 
-    private void phase(long runId, String phase) {
+    private void phase(long runId, JobProgress progress, String phase) {
+        progress.phase(phase);
         QuarkusTransaction.requiringNew().run(() -> runs.findById(runId).phase = phase);
     }
 
