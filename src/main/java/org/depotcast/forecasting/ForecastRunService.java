@@ -45,6 +45,8 @@ public class ForecastRunService {
     private final AccessScope scope;
     private final int historyMonths;
     private final int horizonMonths;
+    /** Set once every start-up step (the demo loading among them) is over: the schedule may fire before that. */
+    private volatile boolean started;
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
                        JobRunner jobs, ScheduleClaims claims, SystemWork system, AccessScope scope,
@@ -67,10 +69,14 @@ public class ForecastRunService {
         this.horizonMonths = horizonMonths;
     }
 
+    void afterStartUp(@Observes @jakarta.annotation.Priority(Integer.MAX_VALUE) io.quarkus.runtime.StartupEvent event) {
+        started = true;
+    }
+
     /** Every instance fires the schedule; only the one that claims today's run starts it. */
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
-        if (claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
+        if (started && claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
             system.run("forecast-schedule", () -> {
                 try {
                     startExclusive("schedule", currentOrigin());
@@ -138,7 +144,7 @@ public class ForecastRunService {
 
     /** A failed or abandoned job fails the run it was computing, with the job's safe message. */
     void onJobFailed(@Observes JobFailed failed) {
-        QuarkusTransaction.requiringNew().run(() -> repository.getEntityManager().createQuery(
+        QuarkusTransaction.joiningExisting().run(() -> repository.getEntityManager().createQuery(
                         "update ForecastRun r set r.status = :failed, r.finishedAt = :now, r.message = :message "
                                 + "where r.jobId = :job and r.status = :running")
                 .setParameter("failed", ForecastRun.Status.FAILED).setParameter("now", OffsetDateTime.now(ZoneOffset.UTC))

@@ -22,10 +22,18 @@ public class JobInstance {
             throw new IllegalStateException("depotcast.jobs.dead-after (" + deadAfter
                     + ") must be at least three heartbeats (depotcast.jobs.heartbeat-every = " + heartbeatEvery + ")");
         }
-        String host = System.getenv().getOrDefault("HOSTNAME", "host");
+        String host = hostName();
         host = host.substring(0, Math.min(40, host.length()));
         this.id = host + "-" + ProcessHandle.current().pid() + "-" + UUID.randomUUID().toString().substring(0, 8);
         this.deadAfter = deadAfter;
+    }
+
+    private static String hostName() {
+        try {
+            return java.net.InetAddress.getLocalHost().getHostName();
+        } catch (java.io.IOException unknown) {
+            return "host";
+        }
     }
 
     public String id() {

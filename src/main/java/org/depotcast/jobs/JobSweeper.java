@@ -59,14 +59,19 @@ public class JobSweeper {
         for (BackgroundJob job : silent) {
             String message = "The " + job.kind.words() + " stopped: the service instance running it (" + job.ownerInstance
                     + ") has not answered since " + job.heartbeatAt.withNano(0) + "; start it again.";
-            int changed = QuarkusTransaction.requiringNew().call(() -> jobs.update(
-                    "state = ?1, phase = ?2, message = ?3, finishedAt = ?4 where id = ?5 and state = ?6 and heartbeatAt < ?7",
-                    JobState.FAILED, JobState.FAILED.words(), message, OffsetDateTime.now(ZoneOffset.UTC), job.id,
-                    JobState.RUNNING, limit));
-            if (changed == 1) {
+            // The job and the feature's rows (observers join this transaction) fail together.
+            boolean changed = QuarkusTransaction.requiringNew().call(() -> {
+                int rows = jobs.update("state = ?1, phase = ?2, message = ?3, finishedAt = ?4 "
+                                + "where id = ?5 and state = ?6 and heartbeatAt < ?7", JobState.FAILED,
+                        JobState.FAILED.words(), message, OffsetDateTime.now(ZoneOffset.UTC), job.id, JobState.RUNNING, limit);
+                if (rows == 1) {
+                    failed.fire(new JobFailed(job.id, job.kind, message));
+                }
+                return rows == 1;
+            });
+            if (changed) {
                 Log.warnf("job %d (%s) of instance %s marked failed: no heartbeat since %s", job.id, job.kind,
                         job.ownerInstance, job.heartbeatAt);
-                failed.fire(new JobFailed(job.id, job.kind, message));
                 marked++;
             }
         }

@@ -48,12 +48,11 @@ class JobWorker {
         executing.add(jobId);
         try {
             String summary = system.call(kind.name().toLowerCase(java.util.Locale.ROOT), () -> work.run(progressOf(jobId)));
-            end(jobId, JobState.DONE, summary);
+            end(jobId, JobState.DONE, summary, () -> { });
         } catch (RuntimeException | Error e) {
             Log.errorf(e, "job %d (%s) failed on instance %s", jobId, kind, instance.id());
             String message = safeMessage(kind, jobId, e);
-            end(jobId, JobState.FAILED, message);
-            failed.fire(new JobFailed(jobId, kind, message));
+            end(jobId, JobState.FAILED, message, () -> failed.fire(new JobFailed(jobId, kind, message)));
         } finally {
             executing.remove(jobId);
         }
@@ -101,8 +100,11 @@ class JobWorker {
         });
     }
 
-    /** Only a running job ends here: one already marked failed by a sweep stays failed. */
-    private void end(long jobId, JobState state, String message) {
+    /**
+     * Only a running job ends here: one already marked failed by a sweep stays failed. {@code alsoNow} runs in the same
+     * transaction, so a feature's rows fail together with the job (a poll never sees one without the other).
+     */
+    private void end(long jobId, JobState state, String message, Runnable alsoNow) {
         QuarkusTransaction.requiringNew().run(() -> {
             BackgroundJob job = jobs.findById(jobId);
             if (job.state != JobState.RUNNING) {
@@ -115,6 +117,7 @@ class JobWorker {
             if (state == JobState.DONE) {
                 job.progressDone = job.progressTotal;
             }
+            alsoNow.run();
         });
     }
 

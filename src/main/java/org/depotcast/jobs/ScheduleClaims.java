@@ -26,6 +26,11 @@ public class ScheduleClaims {
 
     /** True for exactly one caller per (schedule, day) across every instance on the database. */
     public boolean claim(String schedule, LocalDate day) {
+        String before = holder(schedule, day);
+        if (before != null) {
+            Log.infof("schedule %s on %s already claimed by %s", schedule, day, before);
+            return false; // the common case after the first instance: no failed insert to log
+        }
         try {
             QuarkusTransaction.requiringNew().run(() -> em.createNativeQuery(
                             "insert into schedule_claim (schedule_name, run_on, instance_id, claimed_at) values (?1, ?2, ?3, ?4)")

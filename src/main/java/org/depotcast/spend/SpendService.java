@@ -197,7 +197,7 @@ public class SpendService {
 
     /** A failed or abandoned job fails its run, with the job's safe message. */
     void onJobFailed(@jakarta.enterprise.event.Observes JobFailed failed) {
-        QuarkusTransaction.requiringNew().run(() -> runs.update(
+        QuarkusTransaction.joiningExisting().run(() -> runs.update(
                 "status = ?1, finishedAt = ?2, message = ?3, phase = ?4 where jobId = ?5 and status = ?6",
                 SpendRun.Status.FAILED, OffsetDateTime.now(ZoneOffset.UTC), failed.message(), "failed", failed.jobId(),
                 SpendRun.Status.RUNNING));
