@@ -78,6 +78,8 @@ class AccuracyReportTest {
         TestData.as("lead").get("/api/forecast/runs/" + report.getLong("forecastRunId")).then().statusCode(200)
                 .body("trigger", equalTo("as-of")).body("origin", equalTo(origin.toString()));
         TestData.as("officer").get(location.substring(location.indexOf("/api/"))).then().statusCode(200);
+        // The report covers every depot: an officer of one depot does not read it.
+        TestData.as("officer2").get(location.substring(location.indexOf("/api/"))).then().statusCode(403);
         String csv = TestData.as("officer").get(REPORTS + "/" + accepted.path("id") + "/rows.csv").then().statusCode(200)
                 .extract().asString();
         assertTrue(csv.startsWith("part_number,location,level,origin,actual,service_forecast"), csv.substring(0, 80));

@@ -110,6 +110,7 @@ class JobsTest {
         TestData.as("lead").get("/api/jobs?state=sleeping").then().statusCode(400)
                 .contentType("application/problem+json").body("errors[0].field", equalTo("state"));
         TestData.as("mechanic1").get("/api/jobs/" + jobId).then().statusCode(403);
+        TestData.as("officer2").get("/api/jobs/" + jobId).then().statusCode(200).body("state", equalTo("DONE"));
         TestData.as("lead").get("/api/jobs/987654321").then().statusCode(404);
     }
 
