@@ -132,7 +132,8 @@ async function showRuns() {
     mount(document.getElementById('runs'), table({caption: 'Recent forecast runs', rows: runs, empty: 'No forecast run yet.',
         columns: [{label: 'Run', num: true, value: r => String(r.id)},
             {label: 'State', value: r => state(...(RUN_STATES[r.status] || [r.status, 'quiet']))},
-            {label: 'Started by', value: r => r.trigger === 'request' ? 'a person' : r.trigger === 'schedule' ? 'the nightly schedule' : r.trigger},
+            {label: 'Started by', value: r => r.trigger === 'request' ? 'a person' : r.trigger === 'schedule' ? 'the nightly schedule'
+                : r.trigger === 'as-of' ? `an accuracy check as of ${r.origin}` : r.trigger},
             {label: 'Started', value: r => fmt.dateTime(r.startedAt)},
             {label: 'Finished', value: r => fmt.dateTime(r.finishedAt)},
             {label: 'Forecasts made', num: true, value: r => r.seriesTotal ? `${fmt.num(r.seriesDone)} of ${fmt.num(r.seriesTotal)}` : '–'},
@@ -232,7 +233,8 @@ async function loadFamilies() {
 }
 
 const runs = await showRuns();
-if (runs.some(r => r.status === 'DONE')) {
+// A run as of a past date (an accuracy check) is never the one the pages read from.
+if (runs.some(r => r.status === 'DONE' && r.trigger !== 'as-of')) {
     await Promise.all([loadFamilies(), partsForPlace()]);
     await Promise.all([showPart(false).catch(e => showError(e)), showFleet().catch(e => showError(e))]);
 } else {
