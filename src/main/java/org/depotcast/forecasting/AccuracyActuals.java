@@ -1,13 +1,20 @@
 package org.depotcast.forecasting;
 
 import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
 import java.util.TreeMap;
+import java.util.function.BiConsumer;
 
-/** What happened after the origin, per part and location, from the repair records; and stored forecasts read back. */
+/**
+ * What the repair records show around an origin, per part and location (the programme, the pump's depot and the kit of
+ * the mechanic who fitted the part: the locations a forecast run assembles its series for), breakdowns and scheduled
+ * services together; and stored forecasts read back for scoring.
+ */
 final class AccuracyActuals {
     private AccuracyActuals() {
     }
@@ -16,36 +23,64 @@ final class AccuracyActuals {
         return partNumber + "|" + location;
     }
 
-    /**
-     * Breakdown units replaced in [from, to), per part at the programme, at the pump's depot and in the kit of the
-     * mechanic who fitted them: the same locations a forecast run assembles its series for.
-     */
-    static Map<String, Double> breakdownTotals(FleetSnapshot snapshot, LocalDate from, LocalDate to) {
-        Map<String, Double> totals = new TreeMap<>();
-        for (FleetSnapshot.Consumption c : snapshot.consumption()) {
-            if (!c.breakdown() || c.day().isBefore(from) || !c.day().isBefore(to)) {
-                continue;
-            }
-            String part = snapshot.partNumbers().get(c.partId());
-            totals.merge(key(part, DemandAssembler.PROGRAMME), c.quantity(), Double::sum);
-            totals.merge(key(part, snapshot.locationCodes().get(c.depotId())), c.quantity(), Double::sum);
-            String kit = c.mechanic() == null ? null : snapshot.kitByMechanic().get(c.mechanic());
-            if (kit != null) {
-                totals.merge(key(part, kit), c.quantity(), Double::sum);
-            }
+    /** A stored forecast as read: where its series starts and its first 12 months' total. */
+    record Stored(String partNumber, String location, LocalDate historyFrom, double yearMean, double yearVariance) {
+    }
+
+    static Stored stored(PartForecast f, String partNumber, LocalDate runHistoryFrom) {
+        double[] monthly = ForecastRecords.split(f.monthlyForecast);
+        double[] variance = ForecastRecords.split(f.monthlyVariance);
+        double[] preventive = ForecastRecords.split(f.preventiveMonthly);
+        double mean = 0, summed = 0;
+        for (int m = 0; m < AccuracyScoring.MONTHS && m < monthly.length; m++) {
+            mean += monthly[m];
+            // Runs made before monthly variances were kept: the breakdowns' variance plus the services as Poisson.
+            summed += m < variance.length ? variance[m] : f.variancePerMonth + preventive[m];
         }
+        return new Stored(partNumber, f.locationCode, f.historyFrom != null ? f.historyFrom : runHistoryFrom, mean,
+                f.yearVariance != null ? f.yearVariance : summed);
+    }
+
+    /** Units replaced in [from, to), per series key. */
+    static Map<String, Double> totals(FleetSnapshot snapshot, LocalDate from, LocalDate to) {
+        Map<String, Double> totals = new TreeMap<>();
+        forEachUse(snapshot, (c, key) -> {
+            if (!c.day().isBefore(from) && c.day().isBefore(to)) {
+                totals.merge(key, c.quantity(), Double::sum);
+            }
+        });
         return totals;
     }
 
-    static AccuracyScoring.Forecast forecast(PartForecast f, String partNumber) {
-        double[] monthly = ForecastRecords.split(f.monthlyForecast);
-        double[] preventive = ForecastRecords.split(f.preventiveMonthly);
-        double[] breakdown = new double[monthly.length];
-        for (int m = 0; m < monthly.length; m++) {
-            breakdown[m] = monthly[m] - (m < preventive.length ? preventive[m] : 0);
+    /** Each stored series' monthly demand from its start to the month before {@code origin}: the benchmarks' input. */
+    static Map<String, double[]> histories(FleetSnapshot snapshot, List<Stored> stored, LocalDate origin) {
+        Map<String, double[]> histories = new HashMap<>();
+        Map<String, LocalDate> starts = new HashMap<>();
+        for (Stored s : stored) {
+            LocalDate start = s.historyFrom().withDayOfMonth(1);
+            starts.put(key(s.partNumber(), s.location()), start);
+            histories.put(key(s.partNumber(), s.location()),
+                    new double[(int) Math.max(0, ChronoUnit.MONTHS.between(start, origin))]);
         }
-        return new AccuracyScoring.Forecast(partNumber, f.locationCode, breakdown, f.variancePerMonth,
-                ForecastRecords.split(f.monthlyHistory));
+        forEachUse(snapshot, (c, key) -> {
+            LocalDate start = starts.get(key);
+            if (start != null && !c.day().isBefore(start) && c.day().isBefore(origin)) {
+                histories.get(key)[(int) ChronoUnit.MONTHS.between(start, c.day().withDayOfMonth(1))] += c.quantity();
+            }
+        });
+        return histories;
+    }
+
+    private static void forEachUse(FleetSnapshot snapshot, BiConsumer<FleetSnapshot.Consumption, String> use) {
+        for (FleetSnapshot.Consumption c : snapshot.consumption()) {
+            String part = snapshot.partNumbers().get(c.partId());
+            use.accept(c, key(part, DemandAssembler.PROGRAMME));
+            use.accept(c, key(part, snapshot.locationCodes().get(c.depotId())));
+            String kit = c.mechanic() == null ? null : snapshot.kitByMechanic().get(c.mechanic());
+            if (kit != null) {
+                use.accept(c, key(part, kit));
+            }
+        }
     }
 
     static List<String> notes(Map<String, Double> actuals, Set<String> scored) {
@@ -58,15 +93,16 @@ final class AccuracyActuals {
             }
         }
         List<String> notes = new ArrayList<>();
-        notes.add("Breakdown demand only: scheduled services are planned work, and the history the benchmarks are made "
-                + "from holds breakdowns alone.");
-        notes.add("Ranges: the service's from its stored monthly forecasts and variance (months independent); the "
-                + "last-12-month mean's and Croston's from the larger of their mean and in-sample squared error.");
+        notes.add("Demand is every part replaced, at breakdowns and at scheduled services, by the repair records' date "
+                + "(the fix, else the report).");
+        notes.add("Ranges: the service's are the ranges its stored forecast states for the 12-month total; the "
+                + "last-12-month mean's and Croston's come from the larger of their mean and in-sample squared error, "
+                + "months taken as independent.");
         notes.add("Total bias is (forecast − actual) / actual over a level's series; coverage is the share of series "
                 + "whose actual fell inside the range. An honest 80 % range holds about 80 % of them.");
         if (series > 0) {
-            notes.add(series + " part and location series had breakdown demand in the year but no forecast at the "
-                    + "origin (nothing there yet) and are left out: " + Math.round(unforecast) + " units.");
+            notes.add(series + " part and location series had demand in the year but no forecast at the origin "
+                    + "(nothing there yet) and are left out: " + Math.round(unforecast) + " units.");
         }
         return notes;
     }

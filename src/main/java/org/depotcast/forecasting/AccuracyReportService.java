@@ -26,8 +26,8 @@ import java.util.Set;
 
 /**
  * The accuracy report for the programme lead: a forecast run as of a past origin (the as-of machinery: nothing dated
- * on or after the origin is used, and planning never reads the run) scored against the breakdown demand the repair
- * records show for the 12 months after it, beside the last-12-month mean and Croston. Runs as a background job.
+ * on or after the origin is used, and planning never reads the run) scored against the demand the repair records
+ * show for the 12 months after it, beside the last-12-month mean and Croston. Runs as a background job.
  */
 @ApplicationScoped
 public class AccuracyReportService {
@@ -120,18 +120,23 @@ public class AccuracyReportService {
         progress.phase("reading the repair records of the 12 months after the origin");
         LocalDate end = origin.plusMonths(AccuracyScoring.MONTHS);
         FleetSnapshot after = loader.load(end, 24);
-        Map<String, Double> actuals = AccuracyActuals.breakdownTotals(after, origin, end);
+        Map<String, Double> actuals = AccuracyActuals.totals(after, origin, end);
         Set<String> kits = new HashSet<>(after.kitByMechanic().values());
         progress.phase("scoring the forecasts and the benchmarks");
-        List<AccuracyScoring.Forecast> stored = QuarkusTransaction.requiringNew().call(() -> forecasts
-                .list("runId = ?1 order by partId, locationCode", runId).stream()
-                .map(f -> AccuracyActuals.forecast(f, after.partNumbers().get(f.partId))).toList());
+        List<AccuracyActuals.Stored> stored = QuarkusTransaction.requiringNew().call(() -> {
+            LocalDate runFrom = forecasts.getEntityManager().find(ForecastRun.class, runId).historyFrom;
+            return forecasts.list("runId = ?1 order by partId, locationCode", runId).stream()
+                    .map(f -> AccuracyActuals.stored(f, after.partNumbers().get(f.partId), runFrom)).toList();
+        });
+        Map<String, double[]> histories = AccuracyActuals.histories(after, stored, origin);
         List<AccuracyResults.Row> rows = new ArrayList<>(stored.size());
         Set<String> scoredKeys = new HashSet<>();
-        for (AccuracyScoring.Forecast f : stored) {
-            String key = AccuracyActuals.key(f.partNumber(), f.location());
+        for (AccuracyActuals.Stored s : stored) {
+            String key = AccuracyActuals.key(s.partNumber(), s.location());
             scoredKeys.add(key);
-            rows.add(AccuracyScoring.row(f, AccuracyScoring.level(f.location(), kits), actuals.getOrDefault(key, 0.0)));
+            AccuracyScoring.Forecast f = new AccuracyScoring.Forecast(s.partNumber(), s.location(), s.yearMean(),
+                    s.yearVariance(), histories.get(key));
+            rows.add(AccuracyScoring.row(f, AccuracyScoring.level(s.location(), kits), actuals.getOrDefault(key, 0.0)));
             progress.progress(rows.size(), stored.size());
         }
         List<String> notes = AccuracyActuals.notes(actuals, scoredKeys);

@@ -4,8 +4,8 @@ import java.time.LocalDate;
 import java.util.List;
 
 /**
- * What an accuracy report found: breakdown demand over the 12 months after the origin, forecast as of the origin
- * against the repair records, per part × location and summarised per level and method.
+ * What an accuracy report found: demand (breakdowns and scheduled services) over the 12 months after the origin,
+ * forecast as of the origin against the repair records, per part × location and summarised per level and method.
  *
  * @param actualFrom first day of the 12 months compared
  * @param actualTo   last day of them

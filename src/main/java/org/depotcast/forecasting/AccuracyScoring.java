@@ -12,11 +12,11 @@ import java.util.Map;
 import java.util.Set;
 
 /**
- * Scores the stored forecasts of an as-of run, and two plain benchmarks made from the same history, against the
- * breakdown demand of the 12 months after the origin. Breakdown demand only: scheduled services are planned work
- * and the history the benchmarks see is breakdowns alone. The service's 12-month total has the stored monthly
- * breakdown forecasts as mean and 12 × the stored monthly variance (periods independent, the stored interval model);
- * the benchmarks use the core's interval model ({@link SeriesForecaster}: variance = max(mean, in-sample MSE)).
+ * Scores the stored forecasts of an as-of run, and two plain benchmarks made from the same series' history, against
+ * the demand (breakdowns and scheduled services) of the 12 months after the origin. The service's 12-month total is
+ * the stored forecast's: the sum of its first 12 months with the stored variance of that total, drawn as
+ * {@link ForecastRange} draws the ranges the pages show; the benchmarks use the core's interval model
+ * ({@link SeriesForecaster}: variance = max(mean, in-sample MSE), months independent).
  */
 final class AccuracyScoring {
     static final int MONTHS = 12;
@@ -25,17 +25,15 @@ final class AccuracyScoring {
     private AccuracyScoring() {
     }
 
-    /** A stored forecast reduced to what scoring needs. */
-    record Forecast(String partNumber, String location, double[] breakdownMonthly, double variancePerMonth,
-                    double[] history) {
+    /**
+     * A stored forecast reduced to what scoring needs: the mean and variance of its first 12 months' total demand,
+     * units and units², and the series' monthly demand from its start to the origin.
+     */
+    record Forecast(String partNumber, String location, double yearMean, double yearVariance, double[] history) {
     }
 
     static AccuracyResults.Row row(Forecast f, String level, double actual) {
-        double mean = 0;
-        for (int m = 0; m < MONTHS && m < f.breakdownMonthly().length; m++) {
-            mean += Math.max(0, f.breakdownMonthly()[m]);
-        }
-        DemandDistribution service = DemandDistribution.fromMoments(mean, MONTHS * f.variancePerMonth());
+        DemandDistribution service = ForecastRange.of(f.yearMean(), f.yearVariance()).demand();
         return new AccuracyResults.Row(f.partNumber(), f.location(), level, actual, score(service, actual),
                 score(benchmark(f.history(), ForecastMethod.MEAN12), actual),
                 score(benchmark(f.history(), ForecastMethod.CROSTON), actual));

@@ -3,30 +3,27 @@ package org.depotcast.forecasting;
 import org.apache.commons.math3.distribution.PoissonDistribution;
 import org.junit.jupiter.api.Test;
 
-import java.util.Arrays;
 import java.util.List;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
-/** One series scored by hand: the service's stored forecast and the 12-month-mean benchmark against an actual. */
+/** One series scored by hand: the service's stored 12-month total and the 12-month-mean benchmark against an actual. */
 class AccuracyScoringTest {
 
     @Test
     void aSeriesIsScoredAgainstItsActualTotal() {
-        double[] breakdown = new double[24];
-        Arrays.fill(breakdown, 1.0);
         double[] history = new double[24];
         // The last 12 months hold 18 units: the 12-month mean is 1.5 a month, 18 over the year.
         for (int m = 12; m < 24; m += 2) {
             history[m] = 3;
         }
         history[3] = 5; // earlier months do not count for the 12-month mean
-        AccuracyScoring.Forecast f = new AccuracyScoring.Forecast("P-1", "DEP-A", breakdown, 1.0, history);
+        AccuracyScoring.Forecast f = new AccuracyScoring.Forecast("P-1", "DEP-A", 12, 12, history);
 
         AccuracyResults.Row row = AccuracyScoring.row(f, "DEPOT", 15);
 
-        // Service: 12 months × 1.0 with variance 12 × 1.0 → Poisson(12); error 12 − 15 = −3.
+        // Service: a 12-month total of 12 with variance 12 → Poisson(12); error 12 − 15 = −3.
         assertEquals(12.0, row.service().forecast(), 1e-12);
         assertEquals(-3.0, row.service().error(), 1e-12);
         PoissonDistribution poisson12 = new PoissonDistribution(12); // Commons Math as the outside reference
@@ -42,14 +39,12 @@ class AccuracyScoringTest {
 
     @Test
     void summariesPerLevelAndMethodByHand() {
-        double[] flat = new double[12];
-        Arrays.fill(flat, 0.5);
         double[] none = new double[12];
         // Service forecasts 6 at both depots; actuals 4 and 10 → errors 2 and −4: MAE 3, mean error −1,
         // total bias (12 − 14)/14 = −14.29 %.
         List<AccuracyResults.Row> rows = List.of(
-                AccuracyScoring.row(new AccuracyScoring.Forecast("P", "DEP-A", flat, 0.5, none), "DEPOT", 4),
-                AccuracyScoring.row(new AccuracyScoring.Forecast("P", "DEP-B", flat, 0.5, none), "DEPOT", 10));
+                AccuracyScoring.row(new AccuracyScoring.Forecast("P", "DEP-A", 6, 6, none), "DEPOT", 4),
+                AccuracyScoring.row(new AccuracyScoring.Forecast("P", "DEP-B", 6, 6, none), "DEPOT", 10));
         AccuracyResults.LevelSummary service = AccuracyScoring.summaries(rows).stream()
                 .filter(s -> s.method().equals(AccuracyResults.SERVICE)).findFirst().orElseThrow();
         assertEquals("DEPOT", service.level());
