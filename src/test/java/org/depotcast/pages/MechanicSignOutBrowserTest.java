@@ -85,4 +85,33 @@ class MechanicSignOutBrowserTest extends MechanicPhoneSession {
         String repairs = url("/api/repairs");
         assertNoPageErrors("HTTP 422 POST " + repairs, repairs + " - Failed to load resource: the server responded with a status of 422");
     }
+
+    @Test
+    @SuppressWarnings("unchecked")
+    void someoneSigningInWithoutTheLastOneSigningOutSeesNoneOfTheirDataAndTheirUnsentActionStays() throws Exception {
+        openPageOnPhone();
+        offline(true);
+        recordFixedRepair(sealPart, 9);
+        waitOutbox(1);
+        offline(false);
+        wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
+
+        // The next person signs in over the first one's session (say it had run out) without signing out.
+        String second = TestData.unique("mech").toLowerCase();
+        String secondKit = data.kit(depot, second);
+        data.asSystem(() -> accounts.create(second, PASSWORD, Set.of("mechanic"), locations.require(null, secondKit).id));
+        signIn(second, PASSWORD);
+        wait(Duration.ofSeconds(20)).until(d -> d.getCurrentUrl().contains("/app/mechanic/"));
+        waitReady();
+        wait(Duration.ofSeconds(20)).until(d -> d.findElement(By.id("kit-title")).getText().startsWith("My kit " + secondKit));
+        assertEquals("1 unsent action of " + mechanic + " is kept on this phone and sent when that account signs in here again.",
+                waitFor(By.id("others-waiting")).getText());
+        assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-refused"), "not the second one's to see or discard");
+        List<Object> kept = (List<Object>) driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + "const open = indexedDB.open('depotcast-mechanic'); open.onsuccess = () => { const r = open.result"
+                + ".transaction('snapshot').objectStore('snapshot').getAllKeys(); r.onsuccess = () => done(r.result); };");
+        assertEquals(List.of(second), kept, "only the signed-in person's data stays on the phone");
+        String repairs = url("/api/repairs");
+        assertNoPageErrors("HTTP 422 POST " + repairs, repairs + " - Failed to load resource: the server responded with a status of 422");
+    }
 }

@@ -20,6 +20,7 @@ const el = id => document.getElementById(id);
 let me = null;
 let snapshot = null;
 let outbox = [];
+let othersWaiting = [];
 let forms = null;
 let formsKey = '';
 
@@ -61,6 +62,9 @@ function drawSync() {
             : 'No data on this phone yet.'),
         h('p', {id: 'outbox-count'}, waiting ? `${waiting} ${waiting === 1 ? 'action is' : 'actions are'} waiting to send.` : 'Nothing waiting to send.',
             refused ? h('strong', {}, ` ${refused} refused by the server: see "Waiting to send".`) : null),
+        othersWaiting.length ? h('p', {id: 'others-waiting'}, `${othersWaiting.length} unsent ${othersWaiting.length === 1 ? 'action' : 'actions'} `
+            + `of ${[...new Set(othersWaiting.map(i => i.username))].join(', ')} ${othersWaiting.length === 1 ? 'is' : 'are'} kept on this `
+            + 'phone and sent when that account signs in here again.') : null,
         h('p', {class: 'row'}, h('button', {type: 'button', id: 'send-now', disabled: !navigator.onLine || !me,
             onclick: () => syncAndRefresh(true)}, waiting ? 'Send now and refresh' : 'Refresh now')));
 }
@@ -111,7 +115,9 @@ function drawData() {
 }
 
 async function drawOutbox() {
-    outbox = me ? await store.items(me.username) : [];
+    const all = await store.items();
+    outbox = me ? all.filter(i => i.username === me.username) : [];
+    othersWaiting = all.filter(i => !me || i.username !== me.username);
     mount(el('outbox-body'), outboxView(outbox, discard));
     const waiting = outbox.filter(i => i.state === 'waiting').length;
     const refused = outbox.length - waiting;
@@ -207,6 +213,7 @@ async function start() {
     window.addEventListener('offline', drawSync);
     setInterval(() => (outbox.some(i => i.state === 'waiting') ? syncAndRefresh(false) : drawSync()), 60000);
     if (me && navigator.onLine) {
+        await store.dropOtherSnapshots(me.username);
         await syncAndRefresh(false);
     } else if (!snapshot) {
         say('This page needs one visit with a connection before it can work without one.', 'error');

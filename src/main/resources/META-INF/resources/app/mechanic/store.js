@@ -77,3 +77,14 @@ export function update(item) {
 export function remove(id) {
     return run('outbox', 'readwrite', s => s.delete(id));
 }
+
+/** A snapshot is one person's data: when someone else signs in on this phone, the others' go (never their outbox). */
+export async function dropOtherSnapshots(username) {
+    const keys = await run('snapshot', 'readonly', s => s.getAllKeys());
+    const others = (keys || []).filter(k => k !== username);
+    if (others.length) {
+        await run('snapshot', 'readwrite', s => {
+            others.forEach(k => s.delete(k));
+        });
+    }
+}
