@@ -1,6 +1,9 @@
 package org.depotcast.requests;
 
 import io.quarkus.test.junit.QuarkusTest;
+import jakarta.inject.Inject;
+import org.depotcast.forecasting.ForecastRunService;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -13,6 +16,16 @@ import static org.depotcast.TestData.as;
  */
 @QuarkusTest
 class AccessMatrixTest {
+    @Inject
+    ForecastRunService runs;
+
+    /** Planning answers 409 before the first forecast run: the cells below are about access, so one must exist. */
+    @BeforeEach
+    void forecastsExist() {
+        if (runs.latestFinished().isEmpty()) {
+            runs.runNow("test", java.time.LocalDate.of(2026, 12, 2));
+        }
+    }
 
     @ParameterizedTest(name = "{0} {1} {2} -> {3}")
     @CsvSource({
@@ -43,6 +56,13 @@ class AccessMatrixTest {
             // forecasts: programme-wide only for the lead and the central store
             "officer2, GET, /api/forecast/parts/OB-CS-50, 403",
             "mechanic1, GET, /api/forecast/locations/DEP-TESHVALE, 403",
+            // background jobs: status for officers of any location; the accuracy report for the programme's view
+            "mechanic1, GET, /api/jobs, 403",
+            "officer2, GET, /api/jobs, 200",
+            "lead, GET, /api/jobs, 200",
+            "officer, POST, /api/forecast/accuracy-reports?origin=2020-01-01, 403",
+            "officer2, GET, /api/forecast/accuracy-reports/1, 403",
+            "mechanic1, GET, /api/forecast/accuracy-reports/1, 403",
             // requests
             "officer, POST, /api/requests, 403",
             "mechanic1, POST, /api/requests/1/approve, 403",
