@@ -26,7 +26,8 @@ final class DemandSpread {
     private final int horizon;
     private final int yearMonths;
     private final Map<String, double[]> process = new HashMap<>();
-    private final Map<String, double[][]> gradient = new HashMap<>();
+    /** Per series, month m's gradient at [m × p, (m + 1) × p): one flat array, as there are tens of thousands. */
+    private final Map<String, double[]> gradient = new HashMap<>();
     private final Map<String, double[]> serviceVariance = new HashMap<>();
     private final Map<String, double[]> serviceYearVariance = new HashMap<>();
 
@@ -47,12 +48,12 @@ final class DemandSpread {
         int p = covariates.length == 0 ? 1 : covariates[0].length + 1;
         for (String key : keys) {
             double[] proc = process.computeIfAbsent(key, k -> new double[horizon]);
-            double[][] g = gradient.computeIfAbsent(key, k -> new double[horizon][p]);
+            double[] g = gradient.computeIfAbsent(key, k -> new double[horizon * p]);
             for (int m = 0; m < horizon; m++) {
                 proc[m] += units[m] * phi;
-                g[m][0] += units[m];
+                g[m * p] += units[m];
                 for (int j = 1; j < p; j++) {
-                    g[m][j] += units[m] * covariates[m][j - 1];
+                    g[m * p + j] += units[m] * covariates[m][j - 1];
                 }
             }
         }
@@ -74,21 +75,23 @@ final class DemandSpread {
     double[] fleetVariance(String key, double[] mean, FleetCredibility.Weight weight, PoissonFit fit) {
         double[] out = new double[horizon + 1];
         double[] proc = process.get(key);
-        double[][] g = gradient.get(key);
+        double[] g = gradient.get(key);
         if (proc == null) {
             return out;
         }
         double theta = weight.ratio(), thetaVar = weight.ratioVariance();
-        double[] yearGradient = new double[g[0].length];
+        int p = g.length / horizon;
+        double[] yearGradient = new double[p], month = new double[p];
         double yearMean = 0, yearProcess = 0;
         for (int m = 0; m < horizon; m++) {
-            double coefficients = fit == null ? 0 : fit.linearVariance(g[m]);
+            System.arraycopy(g, m * p, month, 0, p);
+            double coefficients = fit == null ? 0 : fit.linearVariance(month);
             out[m] = theta * proc[m] + thetaVar * mean[m] * mean[m] + (theta * theta + thetaVar) * coefficients;
             if (m < yearMonths) {
                 yearMean += mean[m];
                 yearProcess += proc[m];
-                for (int j = 0; j < yearGradient.length; j++) {
-                    yearGradient[j] += g[m][j];
+                for (int j = 0; j < p; j++) {
+                    yearGradient[j] += month[j];
                 }
             }
         }
