@@ -45,8 +45,6 @@ public class ForecastRunService {
     private final AccessScope scope;
     private final int historyMonths;
     private final int horizonMonths;
-    /** Set once every start-up step (the demo loading among them) is over: the schedule may fire before that. */
-    private volatile boolean started;
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
                        JobRunner jobs, ScheduleClaims claims, SystemWork system, AccessScope scope,
@@ -69,14 +67,10 @@ public class ForecastRunService {
         this.horizonMonths = horizonMonths;
     }
 
-    void afterStartUp(@Observes @jakarta.annotation.Priority(Integer.MAX_VALUE) io.quarkus.runtime.StartupEvent event) {
-        started = true;
-    }
-
     /** Every instance fires the schedule; only the one that claims today's run starts it. */
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
-        if (started && claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
+        if (claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
             system.run("forecast-schedule", () -> {
                 try {
                     startExclusive("schedule", currentOrigin());

@@ -18,14 +18,28 @@ import java.time.ZoneOffset;
 public class ScheduleClaims {
     private final EntityManager em;
     private final JobInstance instance;
+    /** Set once every start-up step (the demo loading among them) is over: a schedule may fire before that. */
+    private volatile boolean started;
 
     ScheduleClaims(EntityManager em, JobInstance instance) {
         this.em = em;
         this.instance = instance;
     }
 
-    /** True for exactly one caller per (schedule, day) across every instance on the database. */
+    void afterStartUp(@jakarta.enterprise.event.Observes @jakarta.annotation.Priority(Integer.MAX_VALUE)
+                      io.quarkus.runtime.StartupEvent event) {
+        started = true;
+    }
+
+    /**
+     * True for exactly one caller per (schedule, day) across every instance on the database; false on an instance
+     * still starting (its data may be half loaded), which leaves the day to another instance or a later firing.
+     */
     public boolean claim(String schedule, LocalDate day) {
+        if (!started) {
+            Log.infof("schedule %s fired during start-up: not claimed", schedule);
+            return false;
+        }
         String before = holder(schedule, day);
         if (before != null) {
             Log.infof("schedule %s on %s already claimed by %s", schedule, day, before);
