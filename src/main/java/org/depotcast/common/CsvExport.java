@@ -88,6 +88,17 @@ public record CsvExport(String fileName, List<String> header, List<? extends Lis
         FORMAT.printRecord(out, safe);
     }
 
+    /** One cell as the export writer writes it (spreadsheet-safe, quoted where needed), for rows built by hand. */
+    public static String formatCell(Object cell) {
+        StringBuilder out = new StringBuilder();
+        try {
+            FORMAT.print(spreadsheetSafe(cell), out, true);
+        } catch (IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+        return out.toString();
+    }
+
     /** 200 with a finished temporary CSV file as an attachment; the file is deleted once sent (or not sendable). */
     public static Response fileResponse(String fileName, java.nio.file.Path file) {
         if (!SAFE_FILE_NAME.matcher(fileName).matches()) {

@@ -56,6 +56,10 @@ final class BatchCells {
             problems.add(line, "quantity", "is required");
             return Double.NaN;
         }
+        int whole = wholeNumber(text);
+        if (whole >= 0 && whole <= VALUE_MAX) {
+            return whole;
+        }
         try {
             double quantity = text.length() > 40 ? Double.NaN : Double.parseDouble(text);
             if (quantity >= 0 && quantity <= VALUE_MAX) {
@@ -66,6 +70,25 @@ final class BatchCells {
             problems.add(line, "quantity", "must be a number, was '" + shown(text) + "'");
         }
         return Double.NaN;
+    }
+
+    /**
+     * A count written as plain digits (most demand is), read without the general number parser, which is a large
+     * share of a batch's time; -1 for anything else (up to 9 digits, so no overflow).
+     */
+    private static int wholeNumber(String text) {
+        if (text.length() > 9) {
+            return -1;
+        }
+        int value = 0;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c < '0' || c > '9') {
+                return -1;
+            }
+            value = value * 10 + (c - '0');
+        }
+        return value;
     }
 
     static String cell(CsvRecord record, int index) {

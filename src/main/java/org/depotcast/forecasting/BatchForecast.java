@@ -55,7 +55,8 @@ final class BatchForecast {
     private BatchForecast(StatelessForecastService.Settings settings) throws IOException {
         this.settings = settings;
         this.output = Files.createTempFile("depotcast-batch-", ".csv");
-        this.out = new BufferedWriter(Files.newBufferedWriter(output, StandardCharsets.UTF_8), 1 << 16);
+        this.out = new BufferedWriter(new java.io.OutputStreamWriter(Files.newOutputStream(output), StandardCharsets.UTF_8),
+                1 << 16);
     }
 
     /** Reads the whole body and answers with the forecasts, or throws a 400 naming every problem found. */
@@ -181,6 +182,10 @@ final class BatchForecast {
         String method = f.method().name().toLowerCase(Locale.ROOT);
         String demandClass = f.profile().demandClass().name().toLowerCase(Locale.ROOT);
         String alpha = blank(f.alpha()), beta = blank(f.beta());
+        // The id cell (made spreadsheet-safe and quoted by the export writer) and the cells after the forecast are
+        // the same on every step of the series, so each is formatted once.
+        String idCell = CsvExport.formatCell(id);
+        String after = "," + method + "," + alpha + "," + beta + "," + demandClass + "\n";
         double shownValue = Double.NaN;
         String value = "";
         for (int h = 0; h < settings.horizon(); h++) {
@@ -188,7 +193,12 @@ final class BatchForecast {
                 shownValue = f.forecast()[h];
                 value = String.format(Locale.ROOT, "%.6f", shownValue);
             }
-            CsvExport.writeRow(out, id, Integer.toString(h + 1), value, method, alpha, beta, demandClass);
+            out.write(idCell);
+            out.write(',');
+            out.write(Integer.toString(h + 1));
+            out.write(',');
+            out.write(value);
+            out.write(after);
         }
     }
 
