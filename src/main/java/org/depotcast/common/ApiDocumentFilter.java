@@ -42,6 +42,7 @@ public class ApiDocumentFilter implements OASFilter {
         TAGS.put("/api/forecast", new String[]{"Forecasting", "Stored forecasts, forecast runs, fleet models and what-if forecasts"});
         TAGS.put("/api/planning", new String[]{"Planning", "Stock policies, alerts, purchase plans and transfers between depots"});
         TAGS.put("/api/policy", TAGS.get("/api/planning"));
+        TAGS.put("/api/sensors", new String[]{"Sensors", "Daily readings from pump sensors, measured hours and pumps that have probably stopped"});
         TAGS.put("/api/spend", new String[]{"Spend", "Spend scenarios, Monte Carlo projections and back-checks"});
         TAGS.put("/", new String[]{"Access", "Sign-in, sessions, accounts, the signed-in profile and the audit trail"});
     }

@@ -20,6 +20,13 @@ class PumpRepository implements PanacheRepository<Pump> {
                        p.model.id, p.usageHoursPerDay from Pump p""", Object[].class).getResultList();
     }
 
+    /** One row per pump for sensor intake. See {@link PumpService#intakeRows()}. */
+    List<Object[]> intakeRows() {
+        return getEntityManager().createQuery("""
+                select p.id, p.assetId, p.installedOn, p.model.id, p.depot.id, p.assignedMechanic from Pump p""",
+                Object[].class).getResultList();
+    }
+
     List<Pump> search(Long depotId, PumpStatus status) {
         if (depotId == null && status == null) {
             return listAll(Sort.by("assetId"));

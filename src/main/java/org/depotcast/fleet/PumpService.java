@@ -98,6 +98,14 @@ public class PumpService {
         return pumps.planningRows();
     }
 
+    /**
+     * Every pump as a plain row, for sensor intake (tens of thousands of pumps, no entities): id, asset id, installed
+     * on, pump model id, depot id, assigned mechanic.
+     */
+    public List<Object[]> intakeRows() {
+        return pumps.intakeRows();
+    }
+
     public List<Pump> all() {
         return pumps.search(null, null);
     }

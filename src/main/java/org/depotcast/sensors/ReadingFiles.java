@@ -1,0 +1,137 @@
+package org.depotcast.sensors;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import org.depotcast.common.CsvRow;
+import org.depotcast.common.CsvUpload;
+import org.depotcast.common.InvalidInputException;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStream;
+import java.io.InputStreamReader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.util.Iterator;
+import java.util.List;
+import java.util.Set;
+import java.util.function.Consumer;
+
+/**
+ * Reads an intake file one row at a time from the request stream (never the whole file as one string), as CSV
+ * ({@code asset_id,day} and one or more of {@code hours,strokes,litres}) or as newline-delimited JSON
+ * ({@code {"assetId":"…","day":"yyyy-mm-dd","hours":3.5}}, or {@code strokes} / {@code litres}).
+ */
+final class ReadingFiles {
+    /** A JSON line longer than this is not a reading; it is refused and skipped without being held. */
+    static final int LONGEST_LINE = 1_000;
+    private static final List<String> VALUE_COLUMNS = List.of("hours", "strokes", "litres");
+
+    private ReadingFiles() {
+    }
+
+    static void readCsv(InputStream body, Consumer<RawReading> rows) {
+        try (CsvUpload upload = CsvUpload.open(body, List.of("asset_id", "day"), Set.of())) {
+            boolean anyValueColumn = false;
+            Iterator<CsvRow> it = upload.iterator();
+            while (it.hasNext()) {
+                CsvRow row = it.next();
+                if (!anyValueColumn && VALUE_COLUMNS.stream().noneMatch(row::has)) {
+                    throw new InvalidInputException("header", "needs a column 'hours', 'strokes' or 'litres'");
+                }
+                anyValueColumn = true;
+                rows.accept(new RawReading(row.line(), row.optionalText("asset_id"), row.optionalText("day"),
+                        cell(row, "hours"), cell(row, "strokes"), cell(row, "litres"), null));
+            }
+            try {
+                upload.problems().throwIfAny();
+            } catch (InvalidInputException unreadableTail) {
+                // The file broke off (an unbalanced quote): the rows before it stand, the rest is refused.
+                unreadableTail.errors().forEach(e -> rows.accept(RawReading.unreadable(rowOf(e.field()), e.message())));
+            }
+        }
+    }
+
+    private static String cell(CsvRow row, String column) {
+        return row.has(column) ? row.optionalText(column) : null;
+    }
+
+    private static long rowOf(String field) {
+        String digits = field.replaceAll("\\D+", " ").trim();
+        return digits.isEmpty() ? 0 : Long.parseLong(digits.split(" ")[0]);
+    }
+
+    static void readNdjson(InputStream body, ObjectMapper json, Consumer<RawReading> rows) {
+        if (body == null) {
+            throw new InvalidInputException("body", "the body is empty");
+        }
+        BufferedReader in = new BufferedReader(new InputStreamReader(
+                org.depotcast.common.BodySizeLimit.counted(body), StandardCharsets.UTF_8), 64 * 1024);
+        StringBuilder line = new StringBuilder(128);
+        long number = 0;
+        try {
+            while (true) {
+                line.setLength(0);
+                int end = readLine(in, line);
+                if (end == -1 && line.isEmpty()) {
+                    return;
+                }
+                number++;
+                if (end == -2) {
+                    rows.accept(RawReading.unreadable(number, "line longer than " + LONGEST_LINE + " characters"));
+                } else if (!line.toString().isBlank()) {
+                    rows.accept(parse(number, line.toString(), json));
+                }
+                if (end == -1) {
+                    return;
+                }
+            }
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+    }
+
+    /** Reads to the end of a line; 0 at a line end, -1 at the end of the body, -2 for a line too long (skipped). */
+    private static int readLine(BufferedReader in, StringBuilder line) throws IOException {
+        boolean tooLong = false;
+        for (int c = in.read(); ; c = in.read()) {
+            if (c == -1) {
+                return tooLong ? -2 : -1;
+            }
+            if (c == '\n') {
+                return tooLong ? -2 : 0;
+            }
+            if (c != '\r' && !tooLong) {
+                if (line.length() >= LONGEST_LINE) {
+                    tooLong = true;
+                    line.setLength(0);
+                    line.append('x');
+                } else {
+                    line.append((char) c);
+                }
+            }
+        }
+    }
+
+    private static RawReading parse(long number, String text, ObjectMapper json) {
+        JsonNode node;
+        try {
+            node = json.readTree(text);
+        } catch (IOException e) {
+            return RawReading.unreadable(number, "not a JSON object");
+        }
+        if (node == null || !node.isObject()) {
+            return RawReading.unreadable(number, "not a JSON object");
+        }
+        return new RawReading(number, text(node, "assetId"), text(node, "day"), text(node, "hours"),
+                text(node, "strokes"), text(node, "litres"), null);
+    }
+
+    private static String text(JsonNode node, String field) {
+        JsonNode value = node.get(field);
+        if (value == null || value.isNull()) {
+            return null;
+        }
+        return value.isValueNode() ? value.asText() : "{}";
+    }
+}

@@ -1,0 +1,75 @@
+package org.depotcast.sensors;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import jakarta.annotation.security.RolesAllowed;
+import jakarta.validation.Valid;
+import jakarta.validation.constraints.NotNull;
+import jakarta.ws.rs.Consumes;
+import jakarta.ws.rs.GET;
+import jakarta.ws.rs.HeaderParam;
+import jakarta.ws.rs.POST;
+import jakarta.ws.rs.PUT;
+import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.Produces;
+import jakarta.ws.rs.core.HttpHeaders;
+import jakarta.ws.rs.core.MediaType;
+import org.depotcast.access.Roles;
+
+import java.io.InputStream;
+import java.util.List;
+
+@Path("/api/sensors")
+@Produces(MediaType.APPLICATION_JSON)
+class SensorResource {
+    static final String NDJSON = "application/x-ndjson";
+
+    private final SensorIntakeService intake;
+    private final SensorConversionService conversions;
+    private final SensorPumpService pumps;
+    private final ObjectMapper json;
+
+    SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps,
+                   ObjectMapper json) {
+        this.intake = intake;
+        this.conversions = conversions;
+        this.pumps = pumps;
+        this.json = json;
+    }
+
+    @POST
+    @Path("readings")
+    @Consumes({"text/csv", MediaType.TEXT_PLAIN, NDJSON})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public IntakeResult readings(@HeaderParam(HttpHeaders.CONTENT_TYPE) String contentType, InputStream body) {
+        boolean ndjson = contentType != null && contentType.toLowerCase(java.util.Locale.ROOT).startsWith(NDJSON);
+        return intake.intake(rows -> {
+            if (ndjson) {
+                ReadingFiles.readNdjson(body, json, rows);
+            } else {
+                ReadingFiles.readCsv(body, rows);
+            }
+        });
+    }
+
+    @GET
+    @Path("pumps/{assetId}/months")
+    public PumpSensorUsage months(@PathParam("assetId") String assetId) {
+        return pumps.usageOf(assetId);
+    }
+
+    @GET
+    @Path("conversions")
+    public List<SensorConversionResponse> conversions() {
+        return conversions.all();
+    }
+
+    @PUT
+    @Path("conversions/{modelCode}")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
+    public SensorConversionResponse setConversion(@PathParam("modelCode") String modelCode,
+                                                  @Valid @NotNull SensorConversionRequest request) {
+        return conversions.set(modelCode, request);
+    }
+}

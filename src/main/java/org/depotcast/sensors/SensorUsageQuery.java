@@ -1,0 +1,126 @@
+package org.depotcast.sensors;
+
+import io.agroal.api.AgroalDataSource;
+import jakarta.enterprise.context.ApplicationScoped;
+
+import java.sql.Connection;
+import java.sql.Date;
+import java.sql.PreparedStatement;
+import java.sql.ResultSet;
+import java.sql.SQLException;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Measured operating hours for other features (the fleet model's usage, the preventive schedule, spend): read from
+ * the monthly roll-up only, never the daily table. Programme-wide reads without an access check: callers are
+ * planning runs that already see the whole programme; endpoints check the caller before using this.
+ */
+@ApplicationScoped
+public class SensorUsageQuery {
+    /** Whole months before the origin that make a pump's measured daily load. */
+    public static final int USAGE_WINDOW_MONTHS = 3;
+    /** Fewer days read than this in the window and the quarterly estimate stands (too little to measure a load). */
+    public static final int LEAST_DAYS_FOR_A_LOAD = 14;
+
+    private final AgroalDataSource dataSource;
+
+    SensorUsageQuery(AgroalDataSource dataSource) {
+        this.dataSource = dataSource;
+    }
+
+    /** The pump's months, oldest first. */
+    public List<MonthlyOperatingHours> monthsOf(long pumpId) {
+        List<MonthlyOperatingHours> months = new ArrayList<>();
+        query("select pump_id, month_start, hours, days_covered from sensor_monthly_usage where pump_id = ? "
+                + "order by month_start", s -> s.setLong(1, pumpId), r -> months.add(month(r)));
+        return months;
+    }
+
+    /** Every pump's months in [from, to) (first days of months), for model runs. */
+    public List<MonthlyOperatingHours> monthsBetween(LocalDate from, LocalDate to) {
+        List<MonthlyOperatingHours> months = new ArrayList<>();
+        query("select pump_id, month_start, hours, days_covered from sensor_monthly_usage where month_start >= ? "
+                + "and month_start < ? order by pump_id, month_start", s -> {
+            s.setDate(1, Date.valueOf(from.withDayOfMonth(1)));
+            s.setDate(2, Date.valueOf(to.withDayOfMonth(1)));
+        }, r -> months.add(month(r)));
+        return months;
+    }
+
+    /**
+     * Per pump with at least {@link #LEAST_DAYS_FOR_A_LOAD} days read in the {@link #USAGE_WINDOW_MONTHS} whole months
+     * before {@code origin}: measured hours per day over the days read. Pumps not in the map keep their estimate.
+     */
+    public Map<Long, MeasuredUsage> measuredUsageBefore(LocalDate origin) {
+        return measuredUsage(origin, null);
+    }
+
+    /** One pump's measured usage as {@link #measuredUsageBefore}; null when it keeps its estimate. */
+    public MeasuredUsage measuredUsageOf(long pumpId, LocalDate origin) {
+        return measuredUsage(origin, pumpId).get(pumpId);
+    }
+
+    private Map<Long, MeasuredUsage> measuredUsage(LocalDate origin, Long pumpId) {
+        LocalDate to = origin.withDayOfMonth(1);
+        LocalDate from = to.minusMonths(USAGE_WINDOW_MONTHS);
+        Map<Long, MeasuredUsage> usage = new HashMap<>();
+        query("select pump_id, sum(hours), sum(days_covered) from sensor_monthly_usage where month_start >= ? "
+                + "and month_start < ?" + (pumpId == null ? "" : " and pump_id = ?") + " group by pump_id", s -> {
+            s.setDate(1, Date.valueOf(from));
+            s.setDate(2, Date.valueOf(to));
+            if (pumpId != null) {
+                s.setLong(3, pumpId);
+            }
+        }, r -> {
+            int days = r.getInt(3);
+            if (days >= LEAST_DAYS_FOR_A_LOAD) {
+                double hours = r.getBigDecimal(2).doubleValue();
+                usage.put(r.getLong(1), new MeasuredUsage(r.getLong(1), hours / days, hours, days, from,
+                        to.minusDays(1)));
+            }
+        });
+        return usage;
+    }
+
+    /** Daily hours of one pump in [from, to], as hours per day by day; days without a reading are absent. */
+    public Map<LocalDate, Double> daysOf(long pumpId, LocalDate from, LocalDate to) {
+        Map<LocalDate, Double> days = new HashMap<>();
+        query("select read_on, hours from sensor_daily_usage where pump_id = ? and read_on between ? and ?", s -> {
+            s.setLong(1, pumpId);
+            s.setDate(2, Date.valueOf(from));
+            s.setDate(3, Date.valueOf(to));
+        }, r -> days.put(r.getDate(1).toLocalDate(), r.getBigDecimal(2).doubleValue()));
+        return days;
+    }
+
+    private static MonthlyOperatingHours month(ResultSet r) throws SQLException {
+        LocalDate start = r.getDate(2).toLocalDate();
+        return new MonthlyOperatingHours(r.getLong(1), start, r.getBigDecimal(3), r.getInt(4), start.lengthOfMonth());
+    }
+
+    interface Binder {
+        void bind(PreparedStatement s) throws SQLException;
+    }
+
+    interface RowReader {
+        void read(ResultSet r) throws SQLException;
+    }
+
+    void query(String sql, Binder binder, RowReader reader) {
+        try (Connection c = dataSource.getConnection(); PreparedStatement s = c.prepareStatement(sql)) {
+            binder.bind(s);
+            try (ResultSet r = s.executeQuery()) {
+                while (r.next()) {
+                    reader.read(r);
+                }
+            }
+        } catch (SQLException e) {
+            throw new IllegalStateException("sensor readings could not be read", e);
+        }
+    }
+
+}
