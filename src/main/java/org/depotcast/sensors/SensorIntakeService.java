@@ -1,5 +1,6 @@
 package org.depotcast.sensors;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
 import io.quarkus.logging.Log;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
@@ -8,6 +9,7 @@ import org.depotcast.access.AuditService;
 import org.depotcast.common.DateBounds;
 import org.depotcast.fleet.PumpService;
 
+import java.io.InputStream;
 import java.sql.SQLException;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -23,15 +25,17 @@ import java.util.function.Consumer;
  * Takes daily readings from sensors in bulk. Every row is checked on its own ({@link ReadingCheck}): a row that
  * cannot be right is refused with its reason and the rest of the file is taken. One reading per pump and day: the
  * same value again changes nothing; a different value replaces the one held and is audited (before and after).
- * Rows are written in chunks with multi-row upserts, and each chunk adds its change to the monthly roll-up, so a
- * file's memory is bounded by one chunk whatever its length.
+ * Rows are gathered in chunks; each chunk reads the pump-months it touches, applies its rows and writes each month
+ * once with its sum and days covered (the monthly roll-up), so a file's memory is bounded by one chunk whatever its
+ * length.
  *
- * <p>Files are taken one at a time in this process: a chunk reads the values held before writing, and the roll-up
- * adds differences, which two files writing the same day at once could count twice.
+ * <p>Files are taken one at a time in this process: a chunk reads the months held before writing them back, which two
+ * files writing the same month at once would overwrite.
  */
 @ApplicationScoped
 public class SensorIntakeService {
-    static final int CHUNK_ROWS = 5_000;
+    /** Rows held before a write: a week of 50,000 pumps is about two chunks (some 20 MB). */
+    static final int CHUNK_ROWS = 200_000;
     static final int REFUSED_LISTED = 1_000;
     private static final int TRANSACTION_TIMEOUT_SECONDS = 3_600;
 
@@ -41,9 +45,11 @@ public class SensorIntakeService {
     private final AccessScope scope;
     private final AuditService audit;
     private final SensorConversionService conversions;
+    private final ObjectMapper json;
 
     SensorIntakeService(SensorReadingStore store, PumpService pumps, AccessScope scope, AuditService audit,
-                        SensorConversionService conversions) {
+                        SensorConversionService conversions, ObjectMapper json) {
+        this.json = json;
         this.store = store;
         this.pumps = pumps;
         this.scope = scope;
@@ -51,8 +57,18 @@ public class SensorIntakeService {
         this.conversions = conversions;
     }
 
+    /** A CSV file: {@code asset_id,day} and one of {@code hours,strokes,litres} (see {@link ReadingFiles}). */
+    public IntakeResult intakeCsv(InputStream body) {
+        return intake(rows -> ReadingFiles.readCsv(body, rows));
+    }
+
+    /** Newline-delimited JSON: one object a line (see {@link ReadingFiles}). */
+    public IntakeResult intakeNdjson(InputStream body) {
+        return intake(rows -> ReadingFiles.readNdjson(body, json, rows));
+    }
+
     /** Reads the file through {@code reader}, which hands over one raw row at a time. */
-    public IntakeResult intake(Consumer<Consumer<RawReading>> reader) {
+    IntakeResult intake(Consumer<Consumer<RawReading>> reader) {
         oneFileAtATime.lock();
         try {
             // The transaction ends (commits) before the next file may read what is held.
@@ -81,7 +97,7 @@ public class SensorIntakeService {
             }
         });
         write(chunk, tally);
-        audit.record("SENSOR_READINGS_RECEIVED", "sensor_daily_usage", tally.rowsRead + " rows", null,
+        audit.record("SENSOR_READINGS_RECEIVED", "sensor_reading", tally.rowsRead + " rows", null,
                 Map.of("added", tally.added, "replaced", tally.replaced, "unchanged", tally.unchanged,
                         "refused", tally.refused));
         Log.infof("sensor intake: %d rows, %d added, %d replaced, %d unchanged, %d refused", tally.rowsRead,
@@ -89,46 +105,46 @@ public class SensorIntakeService {
         return tally.result();
     }
 
+    /**
+     * Reads the chunk's pump-months once, applies its rows in file order (a later row for the same day replaces the
+     * earlier, audited), and writes each touched month once.
+     */
     private void write(List<ReadingCheck.Checked> chunk, Tally tally) {
         if (chunk.isEmpty()) {
             return;
         }
         Set<Long> pumpIds = new HashSet<>();
-        Set<Long> keys = new HashSet<>(chunk.size() * 2);
+        Set<Long> keys = new HashSet<>();
         LocalDate from = LocalDate.MAX, to = LocalDate.MIN;
         for (ReadingCheck.Checked r : chunk) {
+            LocalDate month = r.day().withDayOfMonth(1);
             pumpIds.add(r.pump().id());
-            keys.add(SensorReadingStore.key(r.pump().id(), r.day()));
-            from = r.day().isBefore(from) ? r.day() : from;
-            to = r.day().isAfter(to) ? r.day() : to;
+            keys.add(SensorReadingStore.key(r.pump().id(), month));
+            from = month.isBefore(from) ? month : from;
+            to = month.isAfter(to) ? month : to;
         }
         try {
-            Map<Long, Integer> current = store.held(pumpIds, from, to, keys);
-            Map<Long, SensorReadingStore.DayWrite> writes = new LinkedHashMap<>();
-            Map<Long, long[]> months = new LinkedHashMap<>();
+            Map<Long, MonthDays> held = store.held(pumpIds, from, to, keys);
+            Map<Long, MonthDays> touched = new LinkedHashMap<>();
             for (ReadingCheck.Checked r : chunk) {
-                long key = SensorReadingStore.key(r.pump().id(), r.day());
-                Integer old = current.put(key, r.hundredths());
-                if (old != null && old == r.hundredths()) {
+                LocalDate month = r.day().withDayOfMonth(1);
+                long key = SensorReadingStore.key(r.pump().id(), month);
+                MonthDays days = held.computeIfAbsent(key, k -> MonthDays.empty(month));
+                int old = days.set(r.day(), r.hundredths());
+                if (old == r.hundredths()) {
                     tally.unchanged++;
                     continue;
                 }
-                if (old == null) {
+                touched.put(key, days);
+                if (old == MonthDays.MISSING) {
                     tally.added++;
                 } else {
                     tally.replaced++;
-                    audit.record("SENSOR_READING_REPLACED", "sensor_daily_usage", r.pump().assetId() + "@" + r.day(),
+                    audit.record("SENSOR_READING_REPLACED", "sensor_reading", r.pump().assetId() + "@" + r.day(),
                             Map.of("hours", old / 100.0), Map.of("hours", r.hundredths() / 100.0, "row", r.row()));
                 }
-                writes.put(key, new SensorReadingStore.DayWrite(r.pump().id(), r.day(), r.hundredths()));
-                long[] month = months.computeIfAbsent(SensorReadingStore.key(r.pump().id(), r.day().withDayOfMonth(1)),
-                        k -> new long[]{r.pump().id(), r.day().withDayOfMonth(1).toEpochDay(), 0, 0});
-                month[2] += r.hundredths() - (old == null ? 0 : old);
-                month[3] += old == null ? 1 : 0;
             }
-            store.writeDays(new ArrayList<>(writes.values()));
-            store.addToMonths(months.values().stream().map(m -> new SensorReadingStore.MonthDelta(m[0],
-                    LocalDate.ofEpochDay(m[1]), m[2], (int) m[3])).toList());
+            store.write(new ArrayList<>(touched.entrySet()));
         } catch (SQLException e) {
             throw new IllegalStateException("sensor readings could not be written", e);
         }

@@ -4,7 +4,6 @@ import io.agroal.api.AgroalDataSource;
 import jakarta.enterprise.context.ApplicationScoped;
 
 import java.math.BigDecimal;
-import java.sql.Array;
 import java.sql.Connection;
 import java.sql.Date;
 import java.sql.PreparedStatement;
@@ -15,24 +14,19 @@ import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
- * The daily and monthly sensor tables through plain JDBC: intake writes hundreds of thousands of rows a file, which
+ * The {@code sensor_month} table through plain JDBC: intake writes hundreds of thousands of readings a file, which
  * entities would hold in memory and write one statement each. Writes are multi-row upserts (H2 {@code MERGE INTO …
- * KEY}, PostgreSQL {@code INSERT … ON CONFLICT}), so sending a day again can never make a second row. The connection
- * is the caller's transaction's (Agroal enlists it), so the audit entries written through JPA commit with the rows.
+ * KEY}, PostgreSQL {@code INSERT … ON CONFLICT}) of whole pump-months with their sum and days covered, so a month
+ * can never hold two readings for a day nor a sum that disagrees with its days. The connection is the caller's
+ * transaction's (Agroal enlists it), so audit entries written through JPA commit with the rows.
  */
 @ApplicationScoped
 class SensorReadingStore {
-    /** Rows per multi-row statement: 3 parameters each, well under both databases' parameter limits. */
-    static final int ROWS_PER_STATEMENT = 500;
-
-    /** A day's reading to write, and the month delta it makes (hundredths of an hour, days newly covered). */
-    record DayWrite(long pumpId, LocalDate day, int hundredths) {
-    }
-
-    record MonthDelta(long pumpId, LocalDate monthStart, long hundredths, int days) {
-    }
+    /** Pump-months per multi-row statement: 5 parameters each, well under both databases' parameter limits. */
+    static final int ROWS_PER_STATEMENT = 400;
 
     private final AgroalDataSource dataSource;
     private volatile Boolean postgres;
@@ -41,26 +35,28 @@ class SensorReadingStore {
         this.dataSource = dataSource;
     }
 
+    /** A key for a pump and a day (or a month's first day). */
     static long key(long pumpId, LocalDate day) {
         return (pumpId << 20) | day.toEpochDay();
     }
 
-    /** Hours already held (hundredths) for the given keys, read by pump and the chunk's span of days. */
-    Map<Long, Integer> held(Collection<Long> pumpIds, LocalDate from, LocalDate to, java.util.Set<Long> keys)
+    /** The months held for the given keys (pump and month start), read by pump and the span of months. */
+    Map<Long, MonthDays> held(Collection<Long> pumpIds, LocalDate fromMonth, LocalDate toMonth, Set<Long> keys)
             throws SQLException {
-        Map<Long, Integer> held = new HashMap<>();
+        Map<Long, MonthDays> held = new HashMap<>();
         try (Connection c = dataSource.getConnection(); PreparedStatement s = c.prepareStatement(
-                "select pump_id, read_on, hours from sensor_daily_usage where pump_id = any(?) and read_on between ? and ?")) {
-            Array ids = c.createArrayOf("BIGINT", pumpIds.toArray(new Long[0]));
-            s.setArray(1, ids);
-            s.setDate(2, Date.valueOf(from));
-            s.setDate(3, Date.valueOf(to));
+                "select pump_id, month_start, day_hours from sensor_month where pump_id = any(?) "
+                        + "and month_start between ? and ?")) {
+            s.setArray(1, c.createArrayOf("BIGINT", pumpIds.toArray(new Long[0])));
+            s.setDate(2, Date.valueOf(fromMonth));
+            s.setDate(3, Date.valueOf(toMonth));
             try (ResultSet r = s.executeQuery()) {
                 while (r.next()) {
-                    long key = key(r.getLong(1), r.getDate(2).toLocalDate());
-                    // Only the chunk's own days are kept, so memory stays bounded by the chunk.
+                    LocalDate month = r.getDate(2).toLocalDate();
+                    long key = key(r.getLong(1), month);
+                    // Only the file's own months are kept, so memory stays bounded by the chunk.
                     if (keys.contains(key)) {
-                        held.put(key, r.getBigDecimal(3).movePointRight(2).intValueExact());
+                        held.put(key, MonthDays.decode(month, r.getString(3)));
                     }
                 }
             }
@@ -68,20 +64,24 @@ class SensorReadingStore {
         return held;
     }
 
-    void writeDays(List<DayWrite> days) throws SQLException {
-        if (days.isEmpty()) {
+    /** Writes whole pump-months: their days, sum and days covered. */
+    void write(List<Map.Entry<Long, MonthDays>> months) throws SQLException {
+        if (months.isEmpty()) {
             return;
         }
         try (Connection c = dataSource.getConnection()) {
             boolean pg = isPostgres(c);
-            for (int from = 0; from < days.size(); from += ROWS_PER_STATEMENT) {
-                List<DayWrite> part = days.subList(from, Math.min(days.size(), from + ROWS_PER_STATEMENT));
-                try (PreparedStatement s = c.prepareStatement(upsertDays(pg, part.size()))) {
+            for (int from = 0; from < months.size(); from += ROWS_PER_STATEMENT) {
+                List<Map.Entry<Long, MonthDays>> part = months.subList(from,
+                        Math.min(months.size(), from + ROWS_PER_STATEMENT));
+                try (PreparedStatement s = c.prepareStatement(upsert(pg, part.size()))) {
                     int i = 1;
-                    for (DayWrite d : part) {
-                        s.setLong(i++, d.pumpId());
-                        s.setDate(i++, Date.valueOf(d.day()));
-                        s.setBigDecimal(i++, BigDecimal.valueOf(d.hundredths(), 2));
+                    for (Map.Entry<Long, MonthDays> m : part) {
+                        s.setLong(i++, m.getKey() >>> 20);
+                        s.setDate(i++, Date.valueOf(m.getValue().monthStart()));
+                        s.setString(i++, m.getValue().encode());
+                        s.setBigDecimal(i++, BigDecimal.valueOf(m.getValue().sumHundredths(), 2));
+                        s.setInt(i++, m.getValue().daysCovered());
                     }
                     s.executeUpdate();
                 }
@@ -89,43 +89,17 @@ class SensorReadingStore {
         }
     }
 
-    /** Adds the deltas to the monthly sums: the roll-up stays the sum of its days without reading them again. */
-    void addToMonths(Collection<MonthDelta> deltas) throws SQLException {
-        if (deltas.isEmpty()) {
-            return;
-        }
-        try (Connection c = dataSource.getConnection();
-             PreparedStatement s = c.prepareStatement(isPostgres(c) ? """
-                     insert into sensor_monthly_usage (pump_id, month_start, hours, days_covered) values (?, ?, ?, ?)
-                     on conflict (pump_id, month_start) do update
-                     set hours = sensor_monthly_usage.hours + excluded.hours,
-                         days_covered = sensor_monthly_usage.days_covered + excluded.days_covered""" : """
-                     merge into sensor_monthly_usage m
-                     using (values (cast(? as bigint), cast(? as date), cast(? as numeric(9, 2)), cast(? as integer)))
-                         as d(pump_id, month_start, hours, days_covered)
-                     on m.pump_id = d.pump_id and m.month_start = d.month_start
-                     when matched then update set hours = m.hours + d.hours, days_covered = m.days_covered + d.days_covered
-                     when not matched then insert (pump_id, month_start, hours, days_covered)
-                         values (d.pump_id, d.month_start, d.hours, d.days_covered)""")) {
-            for (MonthDelta d : deltas) {
-                s.setLong(1, d.pumpId());
-                s.setDate(2, Date.valueOf(d.monthStart()));
-                s.setBigDecimal(3, BigDecimal.valueOf(d.hundredths(), 2));
-                s.setInt(4, d.days());
-                s.addBatch();
-            }
-            s.executeBatch();
-        }
-    }
-
-    private static String upsertDays(boolean pg, int rows) {
-        StringBuilder sql = new StringBuilder(pg ? "insert into sensor_daily_usage (pump_id, read_on, hours) values "
-                : "merge into sensor_daily_usage (pump_id, read_on, hours) key (pump_id, read_on) values ");
+    private static String upsert(boolean pg, int rows) {
+        StringBuilder sql = new StringBuilder(pg
+                ? "insert into sensor_month (pump_id, month_start, day_hours, hours, days_covered) values "
+                : "merge into sensor_month (pump_id, month_start, day_hours, hours, days_covered) "
+                        + "key (pump_id, month_start) values ");
         for (int i = 0; i < rows; i++) {
-            sql.append(i == 0 ? "(?, ?, ?)" : ", (?, ?, ?)");
+            sql.append(i == 0 ? "(?, ?, ?, ?, ?)" : ", (?, ?, ?, ?, ?)");
         }
         if (pg) {
-            sql.append(" on conflict (pump_id, read_on) do update set hours = excluded.hours");
+            sql.append(" on conflict (pump_id, month_start) do update set day_hours = excluded.day_hours, "
+                    + "hours = excluded.hours, days_covered = excluded.days_covered");
         }
         return sql.toString();
     }

@@ -1,6 +1,5 @@
 package org.depotcast.sensors;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
 import jakarta.annotation.security.RolesAllowed;
 import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotNull;
@@ -27,14 +26,11 @@ class SensorResource {
     private final SensorIntakeService intake;
     private final SensorConversionService conversions;
     private final SensorPumpService pumps;
-    private final ObjectMapper json;
 
-    SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps,
-                   ObjectMapper json) {
+    SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps) {
         this.intake = intake;
         this.conversions = conversions;
         this.pumps = pumps;
-        this.json = json;
     }
 
     @POST
@@ -43,13 +39,7 @@ class SensorResource {
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public IntakeResult readings(@HeaderParam(HttpHeaders.CONTENT_TYPE) String contentType, InputStream body) {
         boolean ndjson = contentType != null && contentType.toLowerCase(java.util.Locale.ROOT).startsWith(NDJSON);
-        return intake.intake(rows -> {
-            if (ndjson) {
-                ReadingFiles.readNdjson(body, json, rows);
-            } else {
-                ReadingFiles.readCsv(body, rows);
-            }
-        });
+        return ndjson ? intake.intakeNdjson(body) : intake.intakeCsv(body);
     }
 
     @GET

@@ -35,7 +35,7 @@ public class SensorUsageQuery {
     /** The pump's months, oldest first. */
     public List<MonthlyOperatingHours> monthsOf(long pumpId) {
         List<MonthlyOperatingHours> months = new ArrayList<>();
-        query("select pump_id, month_start, hours, days_covered from sensor_monthly_usage where pump_id = ? "
+        query("select pump_id, month_start, hours, days_covered from sensor_month where pump_id = ? "
                 + "order by month_start", s -> s.setLong(1, pumpId), r -> months.add(month(r)));
         return months;
     }
@@ -43,7 +43,7 @@ public class SensorUsageQuery {
     /** Every pump's months in [from, to) (first days of months), for model runs. */
     public List<MonthlyOperatingHours> monthsBetween(LocalDate from, LocalDate to) {
         List<MonthlyOperatingHours> months = new ArrayList<>();
-        query("select pump_id, month_start, hours, days_covered from sensor_monthly_usage where month_start >= ? "
+        query("select pump_id, month_start, hours, days_covered from sensor_month where month_start >= ? "
                 + "and month_start < ? order by pump_id, month_start", s -> {
             s.setDate(1, Date.valueOf(from.withDayOfMonth(1)));
             s.setDate(2, Date.valueOf(to.withDayOfMonth(1)));
@@ -68,7 +68,7 @@ public class SensorUsageQuery {
         LocalDate to = origin.withDayOfMonth(1);
         LocalDate from = to.minusMonths(USAGE_WINDOW_MONTHS);
         Map<Long, MeasuredUsage> usage = new HashMap<>();
-        query("select pump_id, sum(hours), sum(days_covered) from sensor_monthly_usage where month_start >= ? "
+        query("select pump_id, sum(hours), sum(days_covered) from sensor_month where month_start >= ? "
                 + "and month_start < ?" + (pumpId == null ? "" : " and pump_id = ?") + " group by pump_id", s -> {
             s.setDate(1, Date.valueOf(from));
             s.setDate(2, Date.valueOf(to));
@@ -86,14 +86,23 @@ public class SensorUsageQuery {
         return usage;
     }
 
-    /** Daily hours of one pump in [from, to], as hours per day by day; days without a reading are absent. */
+    /** Daily hours of one pump in [from, to]; days without a reading are absent. */
     public Map<LocalDate, Double> daysOf(long pumpId, LocalDate from, LocalDate to) {
         Map<LocalDate, Double> days = new HashMap<>();
-        query("select read_on, hours from sensor_daily_usage where pump_id = ? and read_on between ? and ?", s -> {
+        query("select month_start, day_hours from sensor_month where pump_id = ? and month_start between ? and ?", s -> {
             s.setLong(1, pumpId);
-            s.setDate(2, Date.valueOf(from));
+            s.setDate(2, Date.valueOf(from.withDayOfMonth(1)));
             s.setDate(3, Date.valueOf(to));
-        }, r -> days.put(r.getDate(1).toLocalDate(), r.getBigDecimal(2).doubleValue()));
+        }, r -> {
+            MonthDays month = MonthDays.decode(r.getDate(1).toLocalDate(), r.getString(2));
+            for (LocalDate day = month.monthStart(); day.getMonth() == month.monthStart().getMonth();
+                 day = day.plusDays(1)) {
+                int hundredths = month.get(day);
+                if (hundredths != MonthDays.MISSING && !day.isBefore(from) && !day.isAfter(to)) {
+                    days.put(day, hundredths / 100.0);
+                }
+            }
+        });
         return days;
     }
 

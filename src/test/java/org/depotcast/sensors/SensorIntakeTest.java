@@ -82,7 +82,7 @@ class SensorIntakeTest {
         csv("officer", "asset_id,day,hours\n" + p + ",2026-10-05,4\n" + p + ",2026-10-06,1\n" + p + ",2026-10-01,4.5\n")
                 .then().statusCode(200).body("added", equalTo(2)).body("replaced", equalTo(1)).body("refused", equalTo(0));
         monthIs(p, "2026-10-01", 15.75f, 5);
-        as("admin").queryParam("entityType", "sensor_daily_usage").get("/api/audit").then().statusCode(200)
+        as("admin").queryParam("entityType", "sensor_reading").get("/api/audit").then().statusCode(200)
                 .body("findAll { it.entityKey == '" + p + "@2026-10-01' }.action", hasItem("SENSOR_READING_REPLACED"))
                 .body("find { it.entityKey == '" + p + "@2026-10-01' }.beforeJson", equalTo("{\"hours\":5.5}"));
     }
