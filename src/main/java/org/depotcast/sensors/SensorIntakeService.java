@@ -46,9 +46,11 @@ public class SensorIntakeService {
     private final AuditService audit;
     private final SensorConversionService conversions;
     private final ObjectMapper json;
+    private final StopFlagService stopFlags;
 
     SensorIntakeService(SensorReadingStore store, PumpService pumps, AccessScope scope, AuditService audit,
-                        SensorConversionService conversions, ObjectMapper json) {
+                        SensorConversionService conversions, ObjectMapper json, StopFlagService stopFlags) {
+        this.stopFlags = stopFlags;
         this.json = json;
         this.store = store;
         this.pumps = pumps;
@@ -72,13 +74,18 @@ public class SensorIntakeService {
         oneFileAtATime.lock();
         try {
             // The transaction ends (commits) before the next file may read what is held.
-            return QuarkusTransaction.requiringNew().timeout(TRANSACTION_TIMEOUT_SECONDS).call(() -> run(reader));
+            Tally tally = QuarkusTransaction.requiringNew().timeout(TRANSACTION_TIMEOUT_SECONDS).call(() -> run(reader));
+            if (!tally.touchedPumps.isEmpty()) {
+                // Judged as of the file's last day: a late file does not read as a gap.
+                stopFlags.refresh(tally.touchedPumps, tally.lastDay);
+            }
+            return tally.result();
         } finally {
             oneFileAtATime.unlock();
         }
     }
 
-    private IntakeResult run(Consumer<Consumer<RawReading>> reader) {
+    private Tally run(Consumer<Consumer<RawReading>> reader) {
         PumpIndex index = PumpIndex.of(pumps.intakeRows(), scope.current());
         ReadingCheck check = new ReadingCheck(index, conversions.factorsByModel(), DateBounds.latestEvent());
         Tally tally = new Tally();
@@ -91,6 +98,10 @@ public class SensorIntakeService {
                 return;
             }
             chunk.add(outcome.reading());
+            tally.touchedPumps.add(outcome.reading().pump().id());
+            if (tally.lastDay == null || outcome.reading().day().isAfter(tally.lastDay)) {
+                tally.lastDay = outcome.reading().day();
+            }
             if (chunk.size() == CHUNK_ROWS) {
                 write(chunk, tally);
                 chunk.clear();
@@ -102,7 +113,7 @@ public class SensorIntakeService {
                         "refused", tally.refused));
         Log.infof("sensor intake: %d rows, %d added, %d replaced, %d unchanged, %d refused", tally.rowsRead,
                 tally.added, tally.replaced, tally.unchanged, tally.refused);
-        return tally.result();
+        return tally;
     }
 
     /**
@@ -152,6 +163,8 @@ public class SensorIntakeService {
 
     private static final class Tally {
         long rowsRead, added, replaced, unchanged, refused;
+        final Set<Long> touchedPumps = new HashSet<>();
+        LocalDate lastDay;
         final List<RefusedRow> listed = new ArrayList<>();
 
         void refuse(RefusedRow row) {

@@ -27,6 +27,8 @@ import java.util.Set;
 class SensorReadingStore {
     /** Pump-months per multi-row statement: 5 parameters each, well under both databases' parameter limits. */
     static final int ROWS_PER_STATEMENT = 400;
+    /** Pump ids per look-up query. */
+    static final int IDS_PER_QUERY = 5_000;
 
     private final AgroalDataSource dataSource;
     private volatile Boolean postgres;
@@ -44,24 +46,44 @@ class SensorReadingStore {
     Map<Long, MonthDays> held(Collection<Long> pumpIds, LocalDate fromMonth, LocalDate toMonth, Set<Long> keys)
             throws SQLException {
         Map<Long, MonthDays> held = new HashMap<>();
-        try (Connection c = dataSource.getConnection(); PreparedStatement s = c.prepareStatement(
-                "select pump_id, month_start, day_hours from sensor_month where pump_id = any(?) "
-                        + "and month_start between ? and ?")) {
-            s.setArray(1, c.createArrayOf("BIGINT", pumpIds.toArray(new Long[0])));
-            s.setDate(2, Date.valueOf(fromMonth));
-            s.setDate(3, Date.valueOf(toMonth));
-            try (ResultSet r = s.executeQuery()) {
-                while (r.next()) {
-                    LocalDate month = r.getDate(2).toLocalDate();
-                    long key = key(r.getLong(1), month);
-                    // Only the file's own months are kept, so memory stays bounded by the chunk.
-                    if (keys.contains(key)) {
-                        held.put(key, MonthDays.decode(month, r.getString(3)));
+        List<Long> ids = new java.util.ArrayList<>(pumpIds);
+        try (Connection c = dataSource.getConnection()) {
+            for (int from = 0; from < ids.size(); from += IDS_PER_QUERY) {
+                String sql = "select pump_id, month_start, day_hours from sensor_month where "
+                        + pumpIdIn(ids.subList(from, Math.min(ids.size(), from + IDS_PER_QUERY)))
+                        + " and month_start between ? and ?";
+                try (PreparedStatement s = c.prepareStatement(sql)) {
+                    s.setDate(1, Date.valueOf(fromMonth));
+                    s.setDate(2, Date.valueOf(toMonth));
+                    try (ResultSet r = s.executeQuery()) {
+                        while (r.next()) {
+                            LocalDate month = r.getDate(2).toLocalDate();
+                            long key = key(r.getLong(1), month);
+                            // Only the chunk's own months are kept, so memory stays bounded by the chunk.
+                            if (keys.contains(key)) {
+                                held.put(key, MonthDays.decode(month, r.getString(3)));
+                            }
+                        }
                     }
                 }
             }
         }
         return held;
+    }
+
+    /**
+     * {@code pump_id in (…)} with the ids written out. Ids are our own numbers, never text from a request. H2 plans
+     * {@code pump_id = any(?)} with an array parameter as a scan of the whole table on a statement's first run (6.5 s
+     * for 1,000 ids in 600,000 rows, against 0.1–0.4 s for the written-out list), and each chunk prepares afresh.
+     */
+    static String pumpIdIn(Collection<Long> pumpIds) {
+        StringBuilder sql = new StringBuilder(pumpIds.size() * 8).append("pump_id in (");
+        boolean first = true;
+        for (Long id : pumpIds) {
+            sql.append(first ? "" : ",").append(id.longValue());
+            first = false;
+        }
+        return sql.append(')').toString();
     }
 
     /** Writes whole pump-months: their days, sum and days covered. */

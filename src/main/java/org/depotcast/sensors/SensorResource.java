@@ -10,12 +10,17 @@ import jakarta.ws.rs.POST;
 import jakarta.ws.rs.PUT;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
+import jakarta.ws.rs.QueryParam;
 import jakarta.ws.rs.Produces;
 import jakarta.ws.rs.core.HttpHeaders;
 import jakarta.ws.rs.core.MediaType;
 import org.depotcast.access.Roles;
+import org.depotcast.common.DateBounds;
+import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.QueryParams;
 
 import java.io.InputStream;
+import java.time.LocalDate;
 import java.util.List;
 
 @Path("/api/sensors")
@@ -26,8 +31,15 @@ class SensorResource {
     private final SensorIntakeService intake;
     private final SensorConversionService conversions;
     private final SensorPumpService pumps;
+    private final ProbablyDownService probablyDown;
+    private final StopFlagService stopFlags;
+    private final SensorServicePlanService servicePlan;
 
-    SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps) {
+    SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps,
+                   ProbablyDownService probablyDown, StopFlagService stopFlags, SensorServicePlanService servicePlan) {
+        this.servicePlan = servicePlan;
+        this.probablyDown = probablyDown;
+        this.stopFlags = stopFlags;
         this.intake = intake;
         this.conversions = conversions;
         this.pumps = pumps;
@@ -61,5 +73,37 @@ class SensorResource {
     public SensorConversionResponse setConversion(@PathParam("modelCode") String modelCode,
                                                   @Valid @NotNull SensorConversionRequest request) {
         return conversions.set(modelCode, request);
+    }
+
+    @GET
+    @Path("probably-down")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public ProbablyDownReport probablyDown(@QueryParam("depot") String depot) {
+        if (depot == null || depot.isBlank()) {
+            throw new InvalidInputException("depot", "required: the depot's code");
+        }
+        return probablyDown.atDepot(depot);
+    }
+
+    record StopCheckResult(LocalDate day, int probablyDown) {
+    }
+
+    @POST
+    @Path("stop-check")
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public StopCheckResult stopCheck(@QueryParam("day") String day) {
+        LocalDate asOf = QueryParams.optionalDate("day", day);
+        LocalDate judged = asOf == null ? DateBounds.today() : asOf;
+        return new StopCheckResult(judged, stopFlags.refreshAll(judged));
+    }
+
+    @GET
+    @Path("service-plan")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public ServicePlanReport servicePlan(@QueryParam("depot") String depot) {
+        if (depot == null || depot.isBlank()) {
+            throw new InvalidInputException("depot", "required: the depot's code");
+        }
+        return servicePlan.planAt(depot, DateBounds.today());
     }
 }

@@ -106,6 +106,93 @@ public class SensorUsageQuery {
         return days;
     }
 
+    /**
+     * Per pump, its last {@code days} days up to {@code lastDay}, oldest first, hours a day; NaN for a day with no
+     * reading. Pumps with no month in that span are absent.
+     */
+    public Map<Long, double[]> windows(java.util.Collection<Long> pumpIds, LocalDate lastDay, int days) {
+        LocalDate firstDay = lastDay.minusDays(days - 1L);
+        Map<Long, double[]> windows = new HashMap<>();
+        List<Long> ids = new ArrayList<>(pumpIds);
+        for (int from = 0; from < ids.size(); from += 5_000) {
+            List<Long> part = ids.subList(from, Math.min(ids.size(), from + 5_000));
+            query("select pump_id, month_start, day_hours from sensor_month where "
+                    + SensorReadingStore.pumpIdIn(part) + " and month_start between ? and ?", s -> {
+                s.setDate(1, Date.valueOf(firstDay.withDayOfMonth(1)));
+                s.setDate(2, Date.valueOf(lastDay.withDayOfMonth(1)));
+            }, r -> {
+                double[] window = windows.computeIfAbsent(r.getLong(1), k -> {
+                    double[] empty = new double[days];
+                    java.util.Arrays.fill(empty, Double.NaN);
+                    return empty;
+                });
+                MonthDays month = MonthDays.decode(r.getDate(2).toLocalDate(), r.getString(3));
+                for (LocalDate day = month.monthStart(); day.getMonth() == month.monthStart().getMonth();
+                     day = day.plusDays(1)) {
+                    long index = day.toEpochDay() - firstDay.toEpochDay();
+                    int hundredths = month.get(day);
+                    if (index >= 0 && index < days && hundredths != MonthDays.MISSING) {
+                        window[(int) index] = hundredths / 100.0;
+                    }
+                }
+            });
+        }
+        return windows;
+    }
+
+    /** A pump's readings since a day: hours and days read, and its last days read (oldest first). */
+    public record ReadSince(double measuredHours, int daysRead, double[] lastDaysRead) {
+    }
+
+    /** Per pump, its readings from its own first day up to {@code lastDay}; pumps with none are absent. */
+    public Map<Long, ReadSince> readSince(Map<Long, LocalDate> firstDays, LocalDate lastDay, int lastDaysKept) {
+        Map<Long, double[]> totals = new HashMap<>();
+        Map<Long, java.util.ArrayDeque<Double>> last = new HashMap<>();
+        List<Long> ids = new ArrayList<>(firstDays.keySet());
+        LocalDate earliest = firstDays.values().stream().min(LocalDate::compareTo).orElse(lastDay);
+        for (int from = 0; from < ids.size(); from += 5_000) {
+            List<Long> part = ids.subList(from, Math.min(ids.size(), from + 5_000));
+            query("select pump_id, month_start, day_hours from sensor_month where " + SensorReadingStore.pumpIdIn(part)
+                    + " and month_start between ? and ? order by pump_id, month_start", s -> {
+                s.setDate(1, Date.valueOf(earliest.withDayOfMonth(1)));
+                s.setDate(2, Date.valueOf(lastDay.withDayOfMonth(1)));
+            }, r -> {
+                long pumpId = r.getLong(1);
+                LocalDate first = firstDays.get(pumpId);
+                MonthDays month = MonthDays.decode(r.getDate(2).toLocalDate(), r.getString(3));
+                double[] total = totals.computeIfAbsent(pumpId, k -> new double[2]);
+                java.util.ArrayDeque<Double> kept = last.computeIfAbsent(pumpId, k -> new java.util.ArrayDeque<>());
+                for (LocalDate day = month.monthStart(); day.getMonth() == month.monthStart().getMonth();
+                     day = day.plusDays(1)) {
+                    int hundredths = month.get(day);
+                    if (hundredths == MonthDays.MISSING || day.isAfter(lastDay)) {
+                        continue;
+                    }
+                    if (!day.isBefore(first)) {
+                        total[0] += hundredths / 100.0;
+                        total[1]++;
+                    }
+                    kept.addLast(hundredths / 100.0);
+                    if (kept.size() > lastDaysKept) {
+                        kept.removeFirst();
+                    }
+                }
+            });
+        }
+        Map<Long, ReadSince> read = new HashMap<>();
+        totals.forEach((pumpId, t) -> read.put(pumpId, new ReadSince(t[0], (int) t[1],
+                last.get(pumpId).stream().mapToDouble(Double::doubleValue).toArray())));
+        return read;
+    }
+
+    /** Pumps with at least one month of readings from {@code fromMonth} on. */
+    public List<Long> pumpsReadSince(LocalDate fromMonth) {
+        List<Long> pumps = new ArrayList<>();
+        query("select distinct pump_id from sensor_month where month_start >= ?",
+                s -> s.setDate(1, Date.valueOf(fromMonth.withDayOfMonth(1))), r -> pumps.add(r.getLong(1)));
+        return pumps;
+    }
+
     private static MonthlyOperatingHours month(ResultSet r) throws SQLException {
         LocalDate start = r.getDate(2).toLocalDate();
         return new MonthlyOperatingHours(r.getLong(1), start, r.getBigDecimal(3), r.getInt(4), start.lengthOfMonth());

@@ -1,0 +1,111 @@
+package org.depotcast.sensors;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.BomLine;
+import org.depotcast.core.sensors.ServiceByHours;
+import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.repairs.ServiceDue;
+import org.depotcast.repairs.ServiceDueService;
+
+import java.math.BigDecimal;
+import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
+import java.util.Comparator;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+
+/**
+ * Service by operating hours ({@link ServiceByHours}) for a depot's pumps. The last service and the recorded
+ * estimate of hours since it come from the repairs feature's service schedule; where a pump's sensor read, its days
+ * read replace the estimate for those days (the estimate is taken as even over the span, so an unread day keeps its
+ * share of it).
+ */
+@ApplicationScoped
+public class SensorServicePlanService {
+    static final int HORIZON_DAYS = 90;
+
+    private final ServiceDueService schedule;
+    private final PumpService pumps;
+    private final SensorUsageQuery usage;
+    private final DepotStock stock;
+
+    SensorServicePlanService(ServiceDueService schedule, PumpService pumps, SensorUsageQuery usage, DepotStock stock) {
+        this.schedule = schedule;
+        this.pumps = pumps;
+        this.usage = usage;
+        this.stock = stock;
+    }
+
+    @Transactional
+    public ServicePlanReport planAt(String depotCode, LocalDate today) {
+        Map<String, Pump> byAsset = new HashMap<>();
+        pumps.search(depotCode, null).forEach(p -> byAsset.put(p.assetId, p));
+        List<ServiceDue> due = schedule.dueAt(today, depotCode);
+        Map<Long, LocalDate> from = new HashMap<>();
+        due.forEach(d -> from.put(byAsset.get(d.assetId()).id, d.countedFrom()));
+        Map<Long, SensorUsageQuery.ReadSince> read = usage.readSince(from, today, ServiceByHours.RECENT_DAYS);
+        List<ServicePlanReport.PumpDue> rows = new ArrayList<>();
+        for (ServiceDue d : due) {
+            Pump pump = byAsset.get(d.assetId());
+            SensorUsageQuery.ReadSince sensor = read.get(pump.id);
+            long spanDays = Math.max(1, ChronoUnit.DAYS.between(d.countedFrom(), today));
+            double measured = sensor == null ? 0 : sensor.measuredHours();
+            double unreadShare = sensor == null ? 1 : Math.max(0, 1 - (double) sensor.daysRead() / spanDays);
+            ServiceByHours.Projection p = ServiceByHours.project(today, d.serviceIntervalHours(), measured,
+                    d.hoursSinceService() * unreadShare, sensor == null ? new double[0] : sensor.lastDaysRead(),
+                    d.hoursPerDay());
+            UsageBasis basis = sensor == null ? UsageBasis.QUARTERLY_ESTIMATE : UsageBasis.MEASURED_BY_SENSOR;
+            rows.add(new ServicePlanReport.PumpDue(pump.assetId, pump.assignedMechanic, basis.words(),
+                    d.serviceIntervalHours(), p.hoursSinceService(), measured, p.recentHoursPerDay(), p.hoursLeft(),
+                    p.dueOn()));
+        }
+        rows.sort(Comparator.comparing(ServicePlanReport.PumpDue::dueOn, Comparator.nullsLast(Comparator.naturalOrder()))
+                .thenComparing(ServicePlanReport.PumpDue::assetId));
+        return new ServicePlanReport(depotCode, today, rows, weeks(depotCode, today, rows, byAsset));
+    }
+
+    /** Week k covers today + 7k … today + 7k + 6; a pump already overdue counts in the first week. */
+    private List<ServicePlanReport.Week> weeks(String depotCode, LocalDate today, List<ServicePlanReport.PumpDue> rows,
+                                               Map<String, Pump> byAsset) {
+        int weekCount = (HORIZON_DAYS + 6) / 7;
+        List<List<String>> pumpsDue = new ArrayList<>();
+        List<Map<String, Double>> units = new ArrayList<>();
+        for (int w = 0; w < weekCount; w++) {
+            pumpsDue.add(new ArrayList<>());
+            units.add(new TreeMap<>());
+        }
+        for (ServicePlanReport.PumpDue row : rows) {
+            if (row.dueOn() == null || row.dueOn().isAfter(today.plusDays(HORIZON_DAYS - 1L))) {
+                continue;
+            }
+            int week = (int) Math.max(0, ChronoUnit.DAYS.between(today, row.dueOn()) / 7);
+            pumpsDue.get(week).add(row.assetId());
+            Pump pump = byAsset.get(row.assetId());
+            for (BomLine line : pump.model.bom) {
+                double kit = line.serviceKitQuantity(pump.depthM.doubleValue());
+                if (kit > 0) {
+                    units.get(week).merge(line.part.partNumber, kit, Double::sum);
+                }
+            }
+        }
+        Map<String, BigDecimal> inStock = stock.depotAndKits(depotCode);
+        Map<String, Double> toDate = new TreeMap<>();
+        List<ServicePlanReport.Week> weeks = new ArrayList<>();
+        for (int w = 0; w < weekCount; w++) {
+            List<ServicePlanReport.KitPart> parts = new ArrayList<>();
+            units.get(w).forEach((part, u) -> {
+                double cumulative = toDate.merge(part, u, Double::sum);
+                BigDecimal held = inStock.getOrDefault(part, BigDecimal.ZERO);
+                parts.add(new ServicePlanReport.KitPart(part, u, cumulative, held,
+                        held.doubleValue() >= Math.ceil(cumulative - 1e-9)));
+            });
+            weeks.add(new ServicePlanReport.Week(today.plusDays(7L * w), pumpsDue.get(w), parts));
+        }
+        return weeks;
+    }
+}

@@ -1,0 +1,146 @@
+package org.depotcast.sensors;
+
+import io.quarkus.hibernate.orm.panache.PanacheRepository;
+import io.quarkus.logging.Log;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.access.AuditService;
+import org.depotcast.core.sensors.StopDetector;
+import org.depotcast.fleet.RepairFacts;
+import org.depotcast.fleet.RepairRecords;
+
+import java.math.BigDecimal;
+import java.math.RoundingMode;
+import java.time.LocalDate;
+import java.util.Collection;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Keeps the "probably down" flags in step with the sensors and the repairs: a pump the detector finds stopped
+ * ({@link StopDetector}), with a probability of at least {@value #LEAST_PROBABILITY} and no repair reported since the
+ * stop, is flagged; a flag closes when a repair is reported (REPAIR_REPORTED) or when use comes back without one
+ * (FALSE_ALARM, counted in the report).
+ */
+@ApplicationScoped
+public class StopFlagService {
+    static final double LEAST_PROBABILITY = 0.5;
+
+    @ApplicationScoped
+    static class StopFlags implements PanacheRepository<StopFlag> {
+        List<StopFlag> open() {
+            return list("state", StopFlag.State.OPEN);
+        }
+
+        List<StopFlag> ofPumps(Collection<Long> pumpIds) {
+            return list("pumpId in ?1 order by flaggedOn desc", pumpIds);
+        }
+
+        boolean exists(long pumpId, LocalDate stoppedFrom) {
+            return count("pumpId = ?1 and stoppedFrom = ?2", pumpId, stoppedFrom) > 0;
+        }
+    }
+
+    private final StopFlags flags;
+    private final SensorUsageQuery usage;
+    private final RepairRecords repairs;
+    private final AuditService audit;
+    private final StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
+
+    StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit) {
+        this.flags = flags;
+        this.usage = usage;
+        this.repairs = repairs;
+        this.audit = audit;
+    }
+
+    /** Judges every pump read in the detector's window up to {@code asOf}. */
+    @Transactional
+    public int refreshAll(LocalDate asOf) {
+        int days = StopDetector.Settings.DEFAULT.windowDays();
+        return refresh(usage.pumpsReadSince(asOf.minusDays(days - 1L)), asOf);
+    }
+
+    /** Judges the given pumps as of {@code asOf}; returns the flags open afterwards among them. */
+    @Transactional
+    public int refresh(Collection<Long> pumpIds, LocalDate asOf) {
+        Map<Long, double[]> windows = usage.windows(pumpIds, asOf, StopDetector.Settings.DEFAULT.windowDays());
+        Map<Long, RepairFacts> facts = repairs.factsOfAll();
+        Map<Long, StopFlag> open = new HashMap<>();
+        flags.open().forEach(f -> open.put(f.pumpId, f));
+        int opened = 0, stillOpen = 0;
+        for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
+            StopDetector.Verdict verdict = detector.judge(pump.getValue());
+            RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
+            StopFlag flag = open.get(pump.getKey());
+            if (flag != null) {
+                stillOpen += follow(flag, verdict, repair, asOf) ? 1 : 0;
+            } else if (raise(pump.getKey(), verdict, repair, asOf)) {
+                opened++;
+                stillOpen++;
+            }
+        }
+        if (opened > 0) {
+            Log.infof("sensors: %d pumps newly probably down as of %s", opened, asOf);
+        }
+        return stillOpen;
+    }
+
+    /** Closes a flag on a repair reported since the stop, or on use returning; true while it stays open. */
+    private boolean follow(StopFlag flag, StopDetector.Verdict verdict, RepairFacts repair, LocalDate asOf) {
+        LocalDate repairReported = repair.openRepairRef() != null ? repair.openSince()
+                : repair.lastFixedOn() != null && !repair.lastFixedOn().isBefore(flag.stoppedFrom)
+                ? repair.lastFixedOn() : null;
+        if (repairReported != null) {
+            close(flag, StopFlag.State.REPAIR_REPORTED, repairReported);
+            return false;
+        }
+        if (verdict.state() == StopDetector.State.IN_USE) {
+            close(flag, StopFlag.State.FALSE_ALARM, asOf);
+            return false;
+        }
+        if (verdict.state() == StopDetector.State.STOPPED) {
+            flag.probability = probability(Math.max(verdict.probabilityDown(), flag.probability.doubleValue()));
+        }
+        return true;
+    }
+
+    private boolean raise(long pumpId, StopDetector.Verdict verdict, RepairFacts repair, LocalDate asOf) {
+        if (verdict.state() != StopDetector.State.STOPPED || verdict.probabilityDown() < LEAST_PROBABILITY
+                || repair.openRepairRef() != null) {
+            return false;
+        }
+        LocalDate stoppedFrom = asOf.minusDays(StopDetector.Settings.DEFAULT.windowDays() - 1L - verdict.changeIndex());
+        if ((repair.lastFixedOn() != null && !repair.lastFixedOn().isBefore(stoppedFrom))
+                || flags.exists(pumpId, stoppedFrom)) {
+            return false;
+        }
+        StopFlag flag = new StopFlag();
+        flag.pumpId = pumpId;
+        flag.stoppedFrom = stoppedFrom;
+        flag.flaggedOn = asOf;
+        flag.probability = probability(verdict.probabilityDown());
+        flag.baselineHours = BigDecimal.valueOf(verdict.baselineMean()).setScale(2, RoundingMode.HALF_UP);
+        flag.state = StopFlag.State.OPEN;
+        flags.persist(flag);
+        audit.record("PUMP_PROBABLY_DOWN", "sensor_stop_flag", pumpId + "@" + stoppedFrom, null,
+                Map.of("probability", flag.probability, "flaggedOn", asOf.toString()));
+        return true;
+    }
+
+    private void close(StopFlag flag, StopFlag.State state, LocalDate on) {
+        flag.state = state;
+        flag.closedOn = on;
+        audit.record("PUMP_FLAG_CLOSED", "sensor_stop_flag", flag.pumpId + "@" + flag.stoppedFrom,
+                Map.of("state", StopFlag.State.OPEN.words), Map.of("state", state.words, "closedOn", on.toString()));
+    }
+
+    private static BigDecimal probability(double p) {
+        return BigDecimal.valueOf(p).setScale(4, RoundingMode.HALF_UP);
+    }
+
+    List<StopFlag> flagsOf(Collection<Long> pumpIds) {
+        return pumpIds.isEmpty() ? List.of() : flags.ofPumps(pumpIds);
+    }
+}

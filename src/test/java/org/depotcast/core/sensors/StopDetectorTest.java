@@ -1,0 +1,116 @@
+package org.depotcast.core.sensors;
+
+import org.junit.jupiter.api.Test;
+
+import java.util.Arrays;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+
+/**
+ * Page's CUSUM (1954) on hand-made series, worked by hand with the default settings (baseline 28 days, watch 14,
+ * k = 0.5σ, h = 4σ as in Montgomery 2009 §9.1.3, prior 1/365 a day).
+ */
+class StopDetectorTest {
+    private final StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
+
+    /** 28 baseline days alternating 5 and 7 h: μ₀ = 6, s = √(28/27) = 1.018350, so k = 0.509175, h = 4.073401. */
+    private static double[] series(double... watch) {
+        double[] hours = new double[42];
+        for (int i = 0; i < 28; i++) {
+            hours[i] = i % 2 == 0 ? 5 : 7;
+        }
+        System.arraycopy(watch, 0, hours, 28, 14);
+        return hours;
+    }
+
+    private static double[] repeat(double value, int times) {
+        double[] out = new double[times];
+        Arrays.fill(out, value);
+        return out;
+    }
+
+    private static double[] join(double[]... parts) {
+        return Arrays.stream(parts).flatMapToDouble(Arrays::stream).toArray();
+    }
+
+    @Test
+    void aCleanStopIsFlaggedOnItsFirstDayWithTheProbabilityOfTwoIdleDays() {
+        StopDetector.Verdict v = detector.judge(series(join(repeat(6, 12), repeat(0, 2))));
+        // Day 40: S = 0 + (6 − 0.509175) − 0 = 5.490825 > h = 4.073401, and S stood at 0 on day 39.
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(40, v.changeIndex());
+        assertEquals(6.0, v.baselineMean(), 1e-12);
+        assertEquals(1.018350, v.baselineSd(), 1e-6);
+        // No idle day in 28 read: q = (0 + 1)/(28 + 2) = 1/30; two idle days: P = π/(π + (1 − π)/900), π = 1/365,
+        // = 900/1264.
+        assertEquals(900.0 / 1264.0, v.probabilityDown(), 1e-12);
+        assertEquals(0.712025, v.probabilityDown(), 1e-6);
+        assertEquals(2, v.nearNothingDays());
+    }
+
+    @Test
+    void aPumpIdleEverySeventhDayNeedsThreeIdleDaysToSignalAndIsLessLikelyDown() {
+        double[] hours = new double[42];
+        for (int i = 0; i < 28; i++) {
+            hours[i] = i % 7 == 6 ? 0 : 6;
+        }
+        System.arraycopy(join(repeat(6, 11), repeat(0, 3)), 0, hours, 28, 14);
+        StopDetector.Verdict v = detector.judge(hours);
+        // μ₀ = 144/28 = 5.142857, s = √((864 − 28 μ₀²)/27) = 2.138090; k = 1.069045, h = 8.552360; each idle day adds
+        // 4.073812: 4.07, 8.15, 12.22 → the signal on the third, the change on the first (day 39).
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(39, v.changeIndex());
+        assertEquals(2.138090, v.baselineSd(), 1e-6);
+        // 4 idle days of 28: q = 5/30 = 1/6; three idle days: P = 1/(1 + (364/365)(365)/216) = 216/580.
+        assertEquals(216.0 / 580.0, v.probabilityDown(), 1e-12);
+    }
+
+    @Test
+    void noReadingInTheLastThreeDaysIsATransmissionGapNotAStop() {
+        double[] hours = series(join(repeat(6, 9), repeat(0, 2), repeat(Double.NaN, 3)));
+        assertEquals(StopDetector.State.NO_DATA, detector.judge(hours).state());
+        // Two missing days at the end are not yet a gap: the zeros before them are judged.
+        double[] shorter = series(join(repeat(6, 9), repeat(0, 3), repeat(Double.NaN, 2)));
+        assertEquals(StopDetector.State.STOPPED, detector.judge(shorter).state());
+    }
+
+    @Test
+    void aGradualDeclineIsToldFromAStop() {
+        double[] watch = new double[14];
+        for (int i = 0; i < 14; i++) {
+            watch[i] = 5.5 - 0.35 * i;
+        }
+        // S: 0 (5.5), 0.340825, 1.031650, 2.072475, 3.463300, 5.204125 > h on day 33; S last 0 on day 28 → change 29.
+        StopDetector.Verdict v = detector.judge(series(watch));
+        assertEquals(StopDetector.State.DECLINING, v.state());
+        assertEquals(29, v.changeIndex());
+        assertEquals(0.0, v.probabilityDown());
+    }
+
+    @Test
+    void noiseAndADipThatRecoversAreNormalUse() {
+        assertEquals(StopDetector.State.IN_USE, detector.judge(series(join(repeat(5, 1), repeat(7, 1), repeat(5, 1),
+                repeat(7, 1), repeat(4.5, 1), repeat(7.5, 1), repeat(5, 1), repeat(7, 1), repeat(5, 1), repeat(7, 1),
+                repeat(4.2, 1), repeat(6, 1), repeat(5.5, 1), repeat(6, 1)))).state());
+        StopDetector.Verdict dip = detector.judge(series(join(repeat(6, 8), repeat(0, 2), repeat(6, 4))));
+        assertEquals(StopDetector.State.IN_USE, dip.state());
+        assertEquals(36, dip.changeIndex());
+    }
+
+    @Test
+    void tooLittleBaselineIsSaid() {
+        double[] hours = series(repeat(6, 14));
+        for (int i = 0; i < 20; i++) {
+            hours[i] = Double.NaN;
+        }
+        assertEquals(StopDetector.State.TOO_LITTLE_DATA, detector.judge(hours).state());
+        assertEquals(StopDetector.State.TOO_LITTLE_DATA, detector.judge(join(repeat(0, 28), repeat(0, 14))).state());
+    }
+
+    @Test
+    void brokenContractsNameTheArgument() {
+        assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[10]));
+        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10, 0));
+    }
+}

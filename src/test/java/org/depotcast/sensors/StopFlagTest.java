@@ -1,0 +1,92 @@
+package org.depotcast.sensors;
+
+import io.restassured.path.json.JsonPath;
+import io.quarkus.test.junit.QuarkusTest;
+import org.junit.jupiter.api.Test;
+
+import java.time.LocalDate;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+import static org.depotcast.TestData.as;
+import static org.hamcrest.Matchers.equalTo;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** Probably-down flags through the API: raised on a stop, closed as a false alarm when use returns, or by a repair. */
+@QuarkusTest
+class StopFlagTest {
+    private static final LocalDate FIRST = LocalDate.of(2026, 9, 1);
+
+    /** The detector test's series: 28 days alternating 5 and 7 h, 12 days of 6 h, then two days of nothing. */
+    private static String stoppedHistory(String asset) {
+        StringBuilder csv = new StringBuilder("asset_id,day,hours\n");
+        for (int d = 0; d < 42; d++) {
+            double hours = d < 28 ? (d % 2 == 0 ? 5 : 7) : d < 40 ? 6 : 0;
+            csv.append(asset).append(',').append(FIRST.plusDays(d)).append(',').append(hours).append('\n');
+        }
+        return csv.toString();
+    }
+
+    private static Map<String, Object> reportOf(String asset) {
+        JsonPath report = as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down")
+                .then().statusCode(200).extract().jsonPath();
+        Map<String, Object> pump = report.getMap("pumps.find { it.assetId == '" + asset + "' }");
+        return pump == null ? new HashMap<>() : pump;
+    }
+
+    @Test
+    void aStopIsFlaggedWithItsProbabilityAndUseComingBackClosesItAsAFalseAlarm() {
+        String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        SensorIntakeTest.csv("officer", stoppedHistory(p)).then().statusCode(200).body("added", equalTo(42));
+        Map<String, Object> flagged = reportOf(p);
+        assertEquals("probably down", flagged.get("state"));
+        assertEquals("2026-10-11", flagged.get("stoppedFrom"));
+        // As worked by hand in StopDetectorTest: 900/1264.
+        assertEquals(0.7120, ((Number) flagged.get("probabilityDown")).doubleValue(), 1e-6);
+        long falseAlarmsBefore = as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down")
+                .then().extract().jsonPath().getLong("falseAlarms");
+
+        SensorIntakeTest.csv("officer", "asset_id,day,hours\n" + p + ",2026-10-13,6\n" + p + ",2026-10-14,6.5\n")
+                .then().statusCode(200);
+        assertTrue(reportOf(p).isEmpty(), "the flag closed");
+        as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down").then()
+                .body("falseAlarms", equalTo((int) falseAlarmsBefore + 1));
+    }
+
+    @Test
+    void aReportedRepairClosesTheFlagAndAPumpWithAnOpenRepairIsNotFlagged() {
+        String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        SensorIntakeTest.csv("officer", stoppedHistory(p)).then().statusCode(200);
+        assertFalse(reportOf(p).isEmpty());
+        Map<String, Object> repair = new HashMap<>();
+        repair.put("repairRef", "sensor-" + p);
+        repair.put("assetId", p);
+        repair.put("kind", "BREAKDOWN");
+        repair.put("reportedOn", "2026-10-13");
+        repair.put("lines", List.of());
+        as("officer").contentType("application/json").body(repair).post("/api/repairs").then().statusCode(201);
+        as("lead").queryParam("day", "2026-10-13").post("/api/sensors/stop-check").then().statusCode(200);
+        assertTrue(reportOf(p).isEmpty(), "closed by the repair");
+
+        String broken = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        repair.put("repairRef", "sensor-" + broken);
+        repair.put("assetId", broken);
+        repair.put("reportedOn", "2026-10-11");
+        as("officer").contentType("application/json").body(repair).post("/api/repairs").then().statusCode(201);
+        SensorIntakeTest.csv("officer", stoppedHistory(broken)).then().statusCode(200);
+        assertTrue(reportOf(broken).isEmpty(), "already reported: nothing to flag");
+    }
+
+    @Test
+    void theListNeedsADepotTheCallerMaySee() {
+        as("officer").get("/api/sensors/probably-down").then().statusCode(400)
+                .contentType("application/problem+json").body("errors[0].field", equalTo("depot"));
+        as("officer2").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down").then().statusCode(403);
+        as("officer").queryParam("day", "31/12/2026").post("/api/sensors/stop-check").then().statusCode(403);
+        as("lead").queryParam("day", "31/12/2026").post("/api/sensors/stop-check").then().statusCode(400)
+                .body("errors[0].field", equalTo("day"));
+    }
+}
