@@ -18,8 +18,6 @@ import java.util.function.Function;
  * runs at the daily load {@link UsageOutlook} expects.
  */
 final class HorizonDemand {
-    private static final double DAYS_PER_MONTH = 365.25 / 12;
-
     private final Map<ComponentFamily, ForecastModelDefinition> definitions;
     private final int horizon;
     private final long origin;
@@ -51,8 +49,8 @@ final class HorizonDemand {
             // Its age at the middle of each forecast month.
             double age = (origin - pump.installedDay()) / 365.25 + (m + 0.5) / 12;
             x[m] = FleetModel.covariateValues(model.covariates(), pump.depthM(), Math.max(0, age), hoursPerDay);
-            units[m] = model.ratePerHour(x[m]) * hoursPerDay * DAYS_PER_MONTH * model.depotRatio(pump.depotId())
-                    * model.unitsPerEvent() * pump.inServiceShare(monthStart[m], monthStart[m + 1]);
+            units[m] = model.ratePerHour(x[m]) * hoursPerDay * serviceDays(pump, m) * model.depotRatio(pump.depotId())
+                    * model.unitsPerEvent();
         }
         spread.addBreakdowns(keys, units, x, model.unitsPerEvent() * (model.fit() == null ? 1 : model.fit().varianceFactor()));
         for (String key : keys) {
@@ -68,7 +66,7 @@ final class HorizonDemand {
         double hoursPerDay = usage.hoursPerDay(pump);
         double[] hoursPerMonth = new double[horizon];
         for (int m = 0; m < horizon; m++) {
-            hoursPerMonth[m] = hoursPerDay * DAYS_PER_MONTH * pump.inServiceShare(monthStart[m], monthStart[m + 1]);
+            hoursPerMonth[m] = hoursPerDay * serviceDays(pump, m);
         }
         ServiceTiming.Outlook outlook = ServiceTiming.outlook(hoursPerMonth, pump.serviceIntervalHours(),
                 pump.hoursSinceService(origin), pump.serviceKnown(), usage.logSd(), spread.yearMonths());
@@ -94,6 +92,14 @@ final class HorizonDemand {
                 }
             }
         }
+    }
+
+    /**
+     * Days the pump is in service in horizon month m: the calendar month's own length (February's exposure is 28
+     * days, not a twelfth of a year), cut at a planned installation or decommissioning.
+     */
+    private double serviceDays(FleetSnapshot.PumpRecord pump, int m) {
+        return (monthStart[m + 1] - monthStart[m]) * pump.inServiceShare(monthStart[m], monthStart[m + 1]);
     }
 
     /** Series with a fleet expectation. */

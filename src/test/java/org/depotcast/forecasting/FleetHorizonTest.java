@@ -22,7 +22,7 @@ class FleetHorizonTest {
     private static final LocalDate ORIGIN = LocalDate.of(2025, 1, 1);
     private static final long CUP_SEAL = 100, DEPOT_A = 10, DEPOT_B = 11;
     /** The declared prior (too few breakdowns to fit): 0.1 events per 1,000 h, 2 units each, at 5 h/day. */
-    private static final double UNITS_PER_FULL_MONTH = 0.1 / 1000 * 5.0 * 365.25 / 12 * 2.0;
+    private static final double UNITS_PER_DAY = 0.1 / 1000 * 5.0 * 2.0;
 
     private static FleetSnapshotLoader.Pump pump(long id, long depot, LocalDate installed, LocalDate decommissioned) {
         return new FleetSnapshotLoader.Pump(id, depot, null, 30, installed, decommissioned, 9125, 5.0,
@@ -61,11 +61,12 @@ class FleetHorizonTest {
         for (int m = 0; m < 3; m++) {
             assertEquals(0, b[m], 1e-12, "not installed yet in month " + m);
         }
-        assertEquals(UNITS_PER_FULL_MONTH * 21 / 30, b[3], 1e-9, "installed on 10 April: 21 of April's 30 days");
-        assertEquals(UNITS_PER_FULL_MONTH, b[4], 1e-9);
+        assertEquals(UNITS_PER_DAY * 21, b[3], 1e-9, "installed on 10 April: 21 of April's 30 days");
+        assertEquals(UNITS_PER_DAY * 31, b[4], 1e-9, "all of May");
         double[] a = f.get("DEP-A").monthly();
-        assertEquals(2 * UNITS_PER_FULL_MONTH, a[5], 1e-9, "both pumps in June");
-        assertEquals(UNITS_PER_FULL_MONTH, a[6], 1e-9, "one pump from July, the other decommissioned on 1 July");
+        assertEquals(2 * UNITS_PER_DAY * 28, a[1], 1e-9, "both pumps in February, a month of 28 days");
+        assertEquals(2 * UNITS_PER_DAY * 30, a[5], 1e-9, "both pumps in June");
+        assertEquals(UNITS_PER_DAY * 31, a[6], 1e-9, "one pump from July, the other decommissioned on 1 July");
         assertEquals(f.get("DEP-A").monthly()[8] + b[8], f.get("PROGRAMME").monthly()[8], 1e-12);
         assertTrue(f.get("DEP-B").yearVariance() > 0, "the new pump's breakdowns are uncertain too");
     }
@@ -77,6 +78,6 @@ class FleetHorizonTest {
         FleetSnapshot.PumpRecord two = snapshot.pumps().stream().filter(p -> p.id() == 2).findFirst().orElseThrow();
         assertTrue(two.endDay() > LocalDate.of(2030, 1, 1).toEpochDay(), "its decommissioning was not known then");
         double[] a = forecast(snapshot).get("DEP-A").monthly();
-        assertEquals(2 * UNITS_PER_FULL_MONTH, a[11], 1e-9);
+        assertEquals(2 * UNITS_PER_DAY * 31, a[11], 1e-9, "both pumps all December");
     }
 }
