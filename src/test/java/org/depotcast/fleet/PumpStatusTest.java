@@ -195,8 +195,11 @@ class PumpStatusTest {
                 .body("statusSince", equalTo("2025-03-04"));
         as("officer").get("/api/pumps/" + openPump).then().body("status", equalTo("BROKEN"))
                 .body("statusSince", equalTo("2026-11-15"));
-        // The demo's open repair R000454 (reported 2026-11-29) left its pump broken from that day.
-        as("officer").get("/api/pumps/OB-00055").then().body("status", equalTo("BROKEN"));
+        // The demo's open breakdowns (refs R000001 …, loaded from seed-data) left their pumps broken.
+        List<Map<String, Object>> open = as("officer").get("/api/repairs?open=true&limit=10000").then().statusCode(200)
+                .extract().jsonPath().getList("findAll { it.kind == 'BREAKDOWN' && it.repairRef ==~ /R[0-9]{6}/ }");
+        org.junit.jupiter.api.Assertions.assertFalse(open.isEmpty(), "the demo has open breakdowns");
+        as("officer").get("/api/pumps/" + open.get(open.size() - 1).get("assetId")).then().body("status", equalTo("BROKEN"));
         String export = as("officer").get("/api/pumps/export").then().statusCode(200).extract().asString();
         assertTrue(export.lines().anyMatch(l -> l.startsWith(openPump + ",") && l.contains(",BROKEN,2026-11-15,")));
     }
