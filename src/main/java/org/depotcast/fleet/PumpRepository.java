@@ -14,10 +14,11 @@ class PumpRepository implements PanacheRepository<Pump> {
     }
 
     /** One row per pump for planning runs, without loading entities. See {@link PumpService#planningRows()}. */
-    List<Object[]> planningRows() {
+    List<PumpPlanningRow> planningRows() {
         return getEntityManager().createQuery("""
-                select p.id, p.depot.id, p.assignedMechanic, p.depthM, p.installedOn, p.status, p.decommissionedOn,
-                       p.model.id, p.usageHoursPerDay from Pump p""", Object[].class).getResultList();
+                select new org.depotcast.fleet.PumpPlanningRow(p.id, p.depot.id, p.assignedMechanic, p.depthM,
+                       p.installedOn, p.status, p.decommissionedOn, p.model.id, p.usageHoursPerDay) from Pump p""",
+                PumpPlanningRow.class).getResultList();
     }
 
     /** One row per pump for sensor intake. See {@link PumpService#intakeRows()}. */

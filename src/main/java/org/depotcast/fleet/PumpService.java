@@ -90,11 +90,8 @@ public class PumpService {
         return pump;
     }
 
-    /**
-     * Every pump as a plain row, for programme-wide planning runs: id, depot id, assigned mechanic, depth (m),
-     * installed on, status, decommissioned on, pump model id, usage hours per day.
-     */
-    public List<Object[]> planningRows() {
+    /** Every pump as a plain row, for programme-wide planning runs. */
+    public List<PumpPlanningRow> planningRows() {
         return pumps.planningRows();
     }
 

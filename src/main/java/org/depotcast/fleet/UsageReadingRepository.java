@@ -43,9 +43,8 @@ class UsageReadingRepository implements PanacheRepository<UsageReading> {
     }
 
     /** Every reading, oldest first per pump; rows: pump id, read on, hours per day. */
-    List<Object[]> allReadings() {
-        return getEntityManager().createQuery(
-                "select r.pump.id, r.readOn, r.hoursPerDay from UsageReading r order by r.pump.id, r.readOn",
-                Object[].class).getResultList();
+    List<UsageReadingRow> allReadings() {
+        return getEntityManager().createQuery("select new org.depotcast.fleet.UsageReadingRow(r.pump.id, r.readOn, "
+                + "r.hoursPerDay) from UsageReading r order by r.pump.id, r.readOn", UsageReadingRow.class).getResultList();
     }
 }

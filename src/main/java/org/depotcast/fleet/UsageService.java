@@ -42,7 +42,7 @@ public class UsageService {
     }
 
     /** Readings of every pump, oldest first per pump; rows: pump id, read on, hours per day. */
-    public List<Object[]> allReadings() {
+    public List<UsageReadingRow> allReadings() {
         return readings.allReadings();
     }
 

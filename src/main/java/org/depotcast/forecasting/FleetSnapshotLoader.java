@@ -8,16 +8,18 @@ import org.depotcast.catalogue.PartService;
 import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.core.forecast.UsageTimeline;
+import org.depotcast.fleet.PumpPlanningRow;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.PumpStatus;
+import org.depotcast.fleet.UsageReadingRow;
 import org.depotcast.fleet.UsageService;
+import org.depotcast.repairs.ConsumptionRow;
 import org.depotcast.repairs.RepairKind;
 import org.depotcast.repairs.RepairService;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
-import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -69,27 +71,27 @@ public class FleetSnapshotLoader {
 
     private Rows rows() {
         List<Reading> readings = new ArrayList<>();
-        for (Object[] row : usage.allReadings()) {
-            readings.add(new Reading((Long) row[0], (LocalDate) row[1], ((BigDecimal) row[2]).doubleValue()));
+        for (UsageReadingRow row : usage.allReadings()) {
+            readings.add(new Reading(row.pumpId(), row.readOn(), row.hoursPerDay().doubleValue()));
         }
         List<FleetSnapshot.Consumption> consumption = new ArrayList<>();
-        for (Object[] row : repairs.consumptionRows()) {
-            consumption.add(new FleetSnapshot.Consumption((Long) row[0], (Long) row[1], (Long) row[2], (String) row[3],
-                    row[4] == RepairKind.BREAKDOWN, (LocalDate) row[5], ((BigDecimal) row[6]).doubleValue()));
+        for (ConsumptionRow row : repairs.consumptionRows()) {
+            consumption.add(new FleetSnapshot.Consumption(row.partId(), row.pumpId(), row.depotId(), row.mechanic(),
+                    row.kind() == RepairKind.BREAKDOWN, row.on(), row.quantity().doubleValue()));
         }
         Map<Long, PumpModel> modelsById = new HashMap<>();
         models.all().forEach(m -> modelsById.put(m.id, m));
         List<Pump> register = new ArrayList<>();
-        for (Object[] row : pumps.planningRows()) {
-            double depth = ((BigDecimal) row[3]).doubleValue();
-            PumpModel model = modelsById.get((Long) row[7]);
+        for (PumpPlanningRow row : pumps.planningRows()) {
+            double depth = row.depthM().doubleValue();
+            PumpModel model = modelsById.get(row.modelId());
             List<FleetSnapshot.BomPart> bom = new ArrayList<>(model.bom.size());
             for (BomLine line : model.bom) {
                 bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(depth)));
             }
-            register.add(new Pump((Long) row[0], (Long) row[1], (String) row[2], depth, (LocalDate) row[4],
-                    row[5] == PumpStatus.DECOMMISSIONED ? (LocalDate) row[6] : null, model.serviceIntervalHours,
-                    ((BigDecimal) row[8]).doubleValue(), List.copyOf(bom)));
+            register.add(new Pump(row.pumpId(), row.depotId(), row.mechanic(), depth, row.installedOn(),
+                    row.status() == PumpStatus.DECOMMISSIONED ? row.decommissionedOn() : null, model.serviceIntervalHours,
+                    row.usageHoursPerDay().doubleValue(), List.copyOf(bom)));
         }
         Map<String, String> kits = new HashMap<>();
         Map<Long, String> codes = new HashMap<>();

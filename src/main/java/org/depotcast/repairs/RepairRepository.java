@@ -109,11 +109,11 @@ class RepairRepository implements PanacheRepository<Repair> {
      * Every part replaced, one row per repair line: part id, pump id, depot id, mechanic, repair kind, date fixed
      * (reported when not yet fixed), quantity. The raw demand history for forecasting.
      */
-    List<Object[]> consumptionRows() {
+    List<ConsumptionRow> consumptionRows() {
         return getEntityManager().createQuery("""
-                select l.part.id, r.pump.id, r.pump.depot.id, r.mechanic, r.kind,
-                       coalesce(r.fixedOn, r.reportedOn), l.quantity
+                select new org.depotcast.repairs.ConsumptionRow(l.part.id, r.pump.id, r.pump.depot.id, r.mechanic,
+                       r.kind, coalesce(r.fixedOn, r.reportedOn), l.quantity)
                 from RepairLine l join l.repair r
-                """, Object[].class).getResultList();
+                """, ConsumptionRow.class).getResultList();
     }
 }

@@ -136,7 +136,7 @@ public class RepairService {
     }
 
     /** Consumption history rows for forecasting; see {@link RepairRepository#consumptionRows()}. */
-    public List<Object[]> consumptionRows() {
+    public List<ConsumptionRow> consumptionRows() {
         return repairs.consumptionRows();
     }
 

@@ -6,9 +6,9 @@ import org.depotcast.core.forecast.UsageTimeline;
 import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.PumpStatus;
+import org.depotcast.fleet.UsageReadingRow;
 import org.depotcast.fleet.UsageService;
 
-import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -42,12 +42,12 @@ public class ServiceDueService {
         for (Object[] row : repairs.lastServices()) {
             lastService.put((Long) row[0], (LocalDate) row[1]);
         }
-        Map<Long, List<Object[]>> readings = new HashMap<>();
+        Map<Long, List<UsageReadingRow>> readings = new HashMap<>();
         java.util.Set<Long> ids = new java.util.HashSet<>();
         visible.forEach(p -> ids.add(p.id));
-        for (Object[] row : usage.allReadings()) {
-            if (ids.contains((Long) row[0])) {
-                readings.computeIfAbsent((Long) row[0], k -> new ArrayList<>()).add(row);
+        for (UsageReadingRow row : usage.allReadings()) {
+            if (ids.contains(row.pumpId())) {
+                readings.computeIfAbsent(row.pumpId(), k -> new ArrayList<>()).add(row);
             }
         }
         LocalDate recordsStart = repairs.firstReportedOn();
@@ -59,10 +59,11 @@ public class ServiceDueService {
         return due;
     }
 
-    static ServiceDue of(Pump pump, LocalDate lastService, List<Object[]> readings, LocalDate recordsStart, LocalDate today) {
-        long[] days = readings.stream().mapToLong(r -> ((LocalDate) r[1]).toEpochDay()).sorted().toArray();
-        double[] hours = readings.stream().sorted(Comparator.comparing(r -> (LocalDate) r[1]))
-                .mapToDouble(r -> ((BigDecimal) r[2]).doubleValue()).toArray();
+    static ServiceDue of(Pump pump, LocalDate lastService, List<UsageReadingRow> readings, LocalDate recordsStart,
+                         LocalDate today) {
+        long[] days = readings.stream().mapToLong(r -> r.readOn().toEpochDay()).sorted().toArray();
+        double[] hours = readings.stream().sorted(Comparator.comparing(UsageReadingRow::readOn))
+                .mapToDouble(r -> r.hoursPerDay().doubleValue()).toArray();
         UsageTimeline timeline = new UsageTimeline(days, hours, pump.usageHoursPerDay == null
                 ? Pump.DEFAULT_HOURS_PER_DAY.doubleValue() : pump.usageHoursPerDay.doubleValue());
         boolean onRecord = lastService != null || recordsStart == null || !pump.installedOn.isBefore(recordsStart);
