@@ -24,6 +24,12 @@ class AccuracyReportResource {
         this.reports = reports;
     }
 
+    /** Earlier reports, newest first, with their job's state: the page lists them to reopen one. */
+    @GET
+    public java.util.List<AccuracyReportService.ReportListing> recent(@QueryParam("limit") String limit) {
+        return reports.recent(QueryParams.intInRange("limit", limit, 20, 1, 100));
+    }
+
     /** 202 with the report to poll (its job's state and progress, then its results). */
     @POST
     @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})

@@ -103,6 +103,18 @@ public class AccuracyReportService {
                 report.results == null ? null : read(report.results));
     }
 
+    /** A report in a list: what was asked, by whom, and where its job stands (results are read one report at a time). */
+    public record ReportListing(long id, LocalDate origin, String createdBy, OffsetDateTime createdAt, JobView job) {
+    }
+
+    /** The latest {@code limit} reports, newest first. */
+    public List<ReportListing> recent(int limit) {
+        scope.requireProgramme();
+        List<AccuracyReport> latest = QuarkusTransaction.requiringNew().call(() -> forecasts.getEntityManager()
+                .createQuery("from AccuracyReport order by id desc", AccuracyReport.class).setMaxResults(limit).getResultList());
+        return latest.stream().map(r -> new ReportListing(r.id, r.origin, r.createdBy, r.createdAt, jobViews.job(r.jobId))).toList();
+    }
+
     /** The report's rows, one line per part and location with each method's forecast, ranges and error. */
     public org.depotcast.common.CsvExport csv(long id) {
         ReportView view = report(id);

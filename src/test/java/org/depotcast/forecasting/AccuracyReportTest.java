@@ -78,6 +78,17 @@ class AccuracyReportTest {
         TestData.as("lead").get("/api/forecast/runs/" + report.getLong("forecastRunId")).then().statusCode(200)
                 .body("trigger", equalTo("as-of")).body("origin", equalTo(origin.toString()));
         TestData.as("officer").get(location.substring(location.indexOf("/api/"))).then().statusCode(200);
+        // Listed among the earlier reports, newest first, with its origin and its job's state.
+        TestData.as("officer").get(REPORTS + "?limit=100").then().statusCode(200)
+                .body("find { it.id == " + accepted.path("id") + " }.origin", equalTo(origin.toString()))
+                .body("find { it.id == " + accepted.path("id") + " }.job.state", equalTo("DONE"));
+        List<Integer> listed = TestData.as("lead").get(REPORTS).then().statusCode(200).extract().path("id");
+        assertTrue(listed.size() <= 20 && !listed.isEmpty(), listed.toString());
+        for (int i = 1; i < listed.size(); i++) {
+            assertTrue(listed.get(i - 1) > listed.get(i), "newest first: " + listed);
+        }
+        TestData.as("lead").get(REPORTS + "?limit=0").then().statusCode(400).contentType(PROBLEM)
+                .body("errors.field", hasItem("limit"));
         // The report covers every depot: an officer of one depot does not read it.
         TestData.as("officer2").get(location.substring(location.indexOf("/api/"))).then().statusCode(403);
         String csv = TestData.as("officer").get(REPORTS + "/" + accepted.path("id") + "/rows.csv").then().statusCode(200)

@@ -62,6 +62,7 @@ class AccessMatrixTest {
             "lead, GET, /api/jobs, 200",
             "officer, POST, /api/forecast/accuracy-reports?origin=2020-01-01, 403",
             "officer2, GET, /api/forecast/accuracy-reports/1, 403",
+            "officer2, GET, /api/forecast/accuracy-reports, 403",
             "mechanic1, GET, /api/forecast/accuracy-reports/1, 403",
             // requests
             "officer, POST, /api/requests, 403",
