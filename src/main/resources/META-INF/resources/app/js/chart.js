@@ -8,6 +8,8 @@
  *   fanChart(opts)   lineChart with a central series and its nested 80 % / 95 % ranges (yearly spend)
  *   barChart({title, x, xLabel, yLabel, series, format})  grouped bars; a second series is hatched, not only
  *       coloured, so it reads in black and white
+ *   scatterChart({title, xLabel, yLabel, points: [{label, x, y}], diagonal, pointName})  one dot per point on
+ *       numeric axes; diagonal draws the line y = x (where forecast equals actual); the table lists the points
  * format(value) turns a number into text for ticks and the table (default: thousands separators, 1 decimal).
  * Each returns a <figure> to put in the page.
  */
@@ -74,6 +76,7 @@ function swatch(kind, i, hatchId) {
     const color = INK[i % INK.length];
     const body = kind === 'band95' ? s('rect', {x: 0, y: 0, width: 24, height: 12, fill: '#1d5f7a', 'fill-opacity': .15})
         : kind === 'band80' ? s('rect', {x: 0, y: 0, width: 24, height: 12, fill: '#1d5f7a', 'fill-opacity': .35})
+        : kind === 'dot' ? s('circle', {cx: 12, cy: 6, r: 4, fill: color, 'fill-opacity': .6, stroke: color})
         : kind === 'bar' ? s('rect', {x: 0, y: 0, width: 24, height: 12, fill: i % 2 ? `url(#${hatchId})` : color, stroke: color})
         : s('line', {x1: 0, x2: 24, y1: 6, y2: 6, stroke: color, 'stroke-width': 3, 'stroke-dasharray': kind === 'dashed' ? '6 4' : null});
     return s('svg', {viewBox: '0 0 24 12', 'aria-hidden': 'true'}, body, kind === 'bar' ? hatch(hatchId) : null);
@@ -144,4 +147,22 @@ export function barChart({title, x, xLabel, yLabel, series, format = v => num(v,
     const svg = svgFor(title, [hatch(hatchId), f.g, bars, xTicks]);
     return figure(title, svg, series.map((r, k) => ['bar', k, `${r.name} (${k % 2 ? 'hatched' : 'solid'} bars)`]),
         x, xLabel, series.map(r => ({label: r.name, values: r.values})), format);
+}
+
+export function scatterChart({title, xLabel, yLabel, points, diagonal = false, pointName = 'Point', format = v => num(v, 1)}) {
+    const xs = points.map(p => p.x), ys = points.map(p => p.y);
+    // One scale for both axes when the diagonal matters, so y = x runs corner to corner.
+    const f = frame([], diagonal ? [...xs, ...ys] : ys, yLabel, xLabel, format);
+    const ticks = niceTicks(Math.min(0, ...(diagonal ? [...xs, ...ys] : xs)), Math.max(0, ...(diagonal ? [...xs, ...ys] : xs)));
+    const lo = ticks[0], hi = ticks[ticks.length - 1];
+    const px = v => M.left + ((v - lo) / (hi - lo)) * f.innerW;
+    const xTicks = ticks.map(t => s('text', {x: px(t), y: M.top + f.innerH + 16, 'text-anchor': 'middle', class: 'chart-axis'}, format(t)));
+    const line = diagonal ? s('line', {x1: px(Math.max(lo, 0)), y1: f.y(Math.max(lo, 0)), x2: px(hi), y2: f.y(hi),
+        stroke: INK[2], 'stroke-width': 1.5, 'stroke-dasharray': '6 4'}) : null;
+    const dots = points.map(p => s('circle', {cx: px(p.x), cy: f.y(p.y), r: 4, fill: INK[0], 'fill-opacity': .6, stroke: INK[0]},
+        s('title', {}, `${p.label}: ${format(p.x)}, ${format(p.y)}`)));
+    const svg = svgFor(title, [f.g, xTicks, line, dots]);
+    const legendItems = [['dot', 0, `${pointName} (dot)`], ...(diagonal ? [['dashed', 2, 'Where the two are equal (dashed line)']] : [])];
+    return figure(title, svg, legendItems, points.map(p => p.label), pointName,
+        [{label: xLabel, values: xs}, {label: yLabel, values: ys}], format);
 }

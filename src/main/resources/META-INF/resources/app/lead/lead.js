@@ -12,7 +12,8 @@ const TABS = [
     ['/app/lead/', 'Forecasts'],
     ['/app/lead/budget.html', 'Budget plan'],
     ['/app/lead/spend.html', 'Spend'],
-    ['/app/lead/settings.html', 'Service levels and lanes']
+    ['/app/lead/settings.html', 'Service levels and lanes'],
+    ['/app/lead/accuracy.html', 'Forecast accuracy']
 ];
 
 export const METHOD_WORDS = {
@@ -32,10 +33,15 @@ function tabs() {
         TABS.map(([href, label]) => h('a', {href, 'aria-current': here === href ? 'page' : null}, label)));
 }
 
-/** Starts a lead page: role check and top bar, tabs under the heading, the provenance line when asked. */
-export async function startLeadPage({withProvenance = true} = {}) {
-    const me = await startPage({roles: ['programme-lead']});
-    document.querySelector('main h1').after(tabs());
+/**
+ * Starts a lead page: role check and top bar, tabs under the heading (for the lead), the provenance line when asked.
+ * A page others may read too names their roles.
+ */
+export async function startLeadPage({withProvenance = true, roles = ['programme-lead']} = {}) {
+    const me = await startPage({roles});
+    if (me.roles.includes('programme-lead')) {
+        document.querySelector('main h1').after(tabs());
+    }
     let run = null;
     const line = document.getElementById('provenance');
     if (withProvenance && line) {
