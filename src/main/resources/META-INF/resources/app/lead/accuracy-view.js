@@ -9,8 +9,8 @@ import {scatterChart} from '/app/js/chart.js';
 import {rowsTable} from './accuracy-rows.js';
 
 export const METHOD_NAMES = {service: 'the service', mean12: 'the 12-month mean', croston: 'Croston'};
-export const LEVEL_WORDS = {PROGRAMME: 'whole programme', DEPOT: 'depot', KIT: 'mechanic\'s kit'};
-const LEVEL_SERIES = {PROGRAMME: 'one series per part', DEPOT: 'part × depot series', KIT: 'part × kit series'};
+const LEVEL_WORDS = {PROGRAMME: ['Whole programme', 'parts'], DEPOT: ['Depots', 'part × depot series'],
+    KIT: ['Mechanics\' kits', 'part × kit series']};
 const units = v => fmt.num(v, 1);
 const whole = v => fmt.num(v, 0);
 
@@ -54,7 +54,7 @@ function sentences(results) {
 function levelTable(results) {
     return table({caption: 'Each forecast per level: average miss, total bias and how often the ranges held', id: 'level-summary',
         rows: results.summaries, columns: [
-            {label: 'Level', value: s => `${LEVEL_WORDS[s.level] || s.level} (${whole(s.series)} ${LEVEL_SERIES[s.level] || 'series'})`},
+            {label: 'Level', value: s => `${(LEVEL_WORDS[s.level] || [s.level])[0]} (${whole(s.series)} ${(LEVEL_WORDS[s.level] || [])[1] || 'series'})`},
             {label: 'Forecast by', value: s => METHOD_NAMES[s.method] || s.method},
             {label: 'Off by on average', num: true, value: s => `${units(s.mae)} units`},
             {label: 'Forecast / used', num: true, value: s => `${whole(s.forecastTotal)} / ${whole(s.actualTotal)}`},

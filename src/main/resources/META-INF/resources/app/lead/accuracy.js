@@ -72,7 +72,15 @@ if (mayStart) {
     });
 }
 
-const reports = await listEarlier();
+// A depot's officer may open the page but not the programme's figures: said in words instead of a bare refusal.
+const reports = await listEarlier().catch(e => {
+    if (!e.refused) {
+        throw e;
+    }
+    mount(document.getElementById('earlier'), h('p', {class: 'message message--error'}, 'These checks cover the whole '
+        + 'programme, so they are for the programme lead, officers of the central store and administrators.'));
+    return [];
+});
 const asked = Number(new URLSearchParams(location.search).get('report'));
 const shown = Number.isInteger(asked) && asked > 0 ? asked : reports[0]?.id;
 if (shown) {
