@@ -16,6 +16,7 @@ import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
 import jakarta.ws.rs.core.MediaType;
 import jakarta.ws.rs.core.Response;
+import jakarta.ws.rs.core.UriInfo;
 
 import java.util.List;
 import java.util.Set;
@@ -62,12 +63,18 @@ class AccountResource {
 
     @POST
     @Consumes(MediaType.APPLICATION_JSON)
-    public Response create(@Valid @NotNull CreateAccount body) {
+    public Response create(@Valid @NotNull CreateAccount body, UriInfo uri) {
         Long kitId = body.kitCode() == null || body.kitCode().isBlank() ? null : locations.requireId("kitCode", body.kitCode());
         // Every named location is checked before the account is made, so a refused one leaves no account behind.
         List<Long> locationIds = body.locationCodes() == null ? List.of() : ids("locationCodes", body.locationCodes());
         UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId, locationIds);
-        return Response.status(201).entity(view(account)).build();
+        return Response.created(uri.getAbsolutePathBuilder().path(account.username).build()).entity(view(account)).build();
+    }
+
+    @GET
+    @Path("{username}")
+    public AccountView get(@PathParam("username") String username) {
+        return view(accounts.require(username));
     }
 
     @PUT

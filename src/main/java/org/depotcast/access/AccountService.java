@@ -61,6 +61,13 @@ public class AccountService {
                 locations.codesOf(accounts.assignedLocationIds(account.id)), kit);
     }
 
+    /** The account of that name; 404 when there is none. */
+    @Transactional
+    public UserAccount require(String username) {
+        return accounts.byUsername(username)
+                .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "account", username));
+    }
+
     public long count() {
         return accounts.count();
     }

@@ -99,8 +99,11 @@ class PumpResource {
     @Path("{assetId}/usage")
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.MECHANIC, Roles.ADMIN})
-    public Response recordUsage(@PathParam("assetId") String assetId, @Valid @NotNull UsageReadingRequest request) {
-        return Response.status(201).entity(UsageReadingResponse.from(usage.record(assetId, request))).build();
+    public Response recordUsage(@PathParam("assetId") String assetId, @Valid @NotNull UsageReadingRequest request,
+                                UriInfo uri) {
+        // The reading is read back in the pump's usage history.
+        return Response.created(uri.getAbsolutePath()).entity(UsageReadingResponse.from(usage.record(assetId, request)))
+                .build();
     }
 
     @POST

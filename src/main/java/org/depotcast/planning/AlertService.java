@@ -138,6 +138,16 @@ public class AlertService {
         return location.kind == LocationKind.CENTRAL_STORE ? settings.centralReviewDays() : settings.depotReviewDays();
     }
 
+    /** One recorded acknowledgement or snooze; 404 when there is none, 403 when its location is out of scope. */
+    @Transactional
+    public AlertAction action(long id) {
+        AlertAction action = actions.findByIdOptional(id)
+                .orElseThrow(() -> new EntityMissingException(null, "alert action", id));
+        Location location = locations.require(null, action.locationCode);
+        scope.require(location.id, location.code);
+        return action;
+    }
+
     /**
      * Acknowledges or snoozes the alert of a part at a location: the action covers every reason the alert has now
      * (see {@link AlertActionFold}). 404 when the part has no alert there (or, with {@code kind}, no such reason).

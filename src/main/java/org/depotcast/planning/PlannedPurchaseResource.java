@@ -44,9 +44,12 @@ class PlannedPurchaseResource {
             + "whole for parts counted by the piece, at most 1,000,000), replacing an earlier quantity: 201 when the "
             + "part was not in the plan, 200 when it was.")
     public Response put(@PathParam("location") String location, @PathParam("partNumber") String partNumber,
-                        @Valid @NotNull PlannedPurchases.Put body) {
+                        @Valid @NotNull PlannedPurchases.Put body, UriInfo uri) {
         PlannedPurchaseService.Saved saved = service.put(location, partNumber, body);
-        return Response.status(saved.created() ? 201 : 200).entity(saved.line()).build();
+        // The new line is read back in the store's plan.
+        return saved.created() ? Response.created(uri.getBaseUriBuilder().path("api/planning/planned-purchases")
+                .queryParam("location", saved.line().location()).build()).entity(saved.line()).build()
+                : Response.ok(saved.line()).build();
     }
 
     @DELETE

@@ -61,10 +61,21 @@ class PlanningResource {
     @Path("alerts/actions")
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
-    public Response act(@Valid @NotNull PlanningRequests.AlertActionRequest r) {
+    public Response act(@Valid @NotNull PlanningRequests.AlertActionRequest r, UriInfo uri) {
         AlertAction a = alerts.act(r.partNumber(), r.location(), r.kind(), r.action(), r.snoozeUntil(), r.note());
-        return Response.status(201).entity(new PlanningRequests.AlertActionResponse(a.id, a.action, a.actor,
-                List.of(a.reasons.split(",")), a.snoozedUntil)).build();
+        return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(a.id)).build()).entity(actionResponse(a))
+                .build();
+    }
+
+    @GET
+    @Path("alerts/actions/{id}")
+    public PlanningRequests.AlertActionResponse action(@PathParam("id") long id) {
+        return actionResponse(alerts.action(id));
+    }
+
+    private static PlanningRequests.AlertActionResponse actionResponse(AlertAction a) {
+        return new PlanningRequests.AlertActionResponse(a.id, a.action, a.actor, List.of(a.reasons.split(",")),
+                a.snoozedUntil);
     }
 
     @POST
