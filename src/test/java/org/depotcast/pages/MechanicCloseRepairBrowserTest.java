@@ -79,7 +79,9 @@ class MechanicCloseRepairBrowserTest extends MechanicPhoneSession {
         offline(false);
         waitOutbox(0);
         wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
-        String message = driver.findElement(By.cssSelector(".outbox__item--refused .outbox__message")).getText();
+        // The outbox list may be drawn again as the page refreshes its data: read the message once it holds still.
+        String message = wait(Duration.ofSeconds(30)).ignoring(org.openqa.selenium.StaleElementReferenceException.class)
+                .until(d -> d.findElement(By.cssSelector(".outbox__item--refused .outbox__message")).getText());
         assertTrue(message.startsWith("Fixed on: is already recorded as ") && !message.contains(yesterday), "in the phone's own date words: " + message);
         screenshot("mechanic-close-refused");
         assertEquals(0, new BigDecimal("3").compareTo(stock.onHand(sealPart, kit)), "taken once, by the officer's closing");
