@@ -90,11 +90,28 @@ class LeadAccuracyBrowserTest extends BrowserSession {
 
         driver.manage().deleteAllCookies();
         signIn("officer", "officer-demo");
-        open("/app/lead/accuracy.html?report=" + id);
+        waitReady();
+        driver.findElement(By.cssSelector(".tabs a[href='/app/lead/accuracy.html']")).click();
         waitReady();
         waitFor(By.id("programme-summary"));
         assertFalse(driver.findElement(By.id("check-card")).isDisplayed(), "an officer reads checks but starts none");
+        open("/app/lead/accuracy.html?report=" + id);
+        waitReady();
+        assertTrue(waitFor(By.id("programme-summary")).getText().contains(shown(number(depot, "mae"), 1)));
         assertNoPageErrors();
+    }
+
+    @Test
+    void aDepotOfficerIsToldTheChecksCoverTheWholeProgramme() {
+        signIn("officer2", "officer2-demo");
+        waitReady();
+        assertTrue(driver.findElements(By.cssSelector(".tabs a[href='/app/lead/accuracy.html']")).isEmpty(),
+                "no link to figures the account may not read");
+        open("/app/lead/accuracy.html");
+        waitReady();
+        assertTrue(waitFor(By.id("earlier")).getText().contains("cover the whole programme"));
+        assertFalse(driver.findElement(By.id("check-card")).isDisplayed());
+        assertNoPageErrors("HTTP 403 GET " + url(REPORTS), REPORTS + "?limit=50 - Failed to load resource: the server responded with a status of 403");
     }
 
     private void rowsNarrowAndSort(JsonPath report) {

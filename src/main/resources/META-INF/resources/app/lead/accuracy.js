@@ -4,7 +4,7 @@
  * the earlier checks. ?report=ID opens one; without it the newest check shows.
  */
 import {startLeadPage, ready, follow, api, fmt, monthLabel} from './lead.js';
-import {h, mount, table, state, busy, showError} from '/app/js/ui.js';
+import {h, mount, table, state, busy, showError, say} from '/app/js/ui.js';
 import {showReport} from './accuracy-view.js';
 
 const REPORTS = '/api/forecast/accuracy-reports';
@@ -65,7 +65,19 @@ if (mayStart) {
             if (!form.origin.value) {
                 throw {errors: [{field: 'origin', message: `choose a day on or before ${fmt.date(latest)}`}], detail: 'No check was started.'};
             }
-            const started = await api.post(api.query(REPORTS, {origin: form.origin.value}));
+            let started;
+            try {
+                started = await api.post(api.query(REPORTS, {origin: form.origin.value}));
+            } catch (e) {
+                // One check runs at a time: when another is under way, follow it instead of only refusing.
+                const running = e.status === 409 ? (await listEarlier()).find(r => r.job.state === 'RUNNING') : null;
+                if (!running) {
+                    throw e;
+                }
+                say(`A check of the 12 months from ${monthLabel(running.origin)} is already running; it is shown below. `
+                    + 'Start yours when it has finished.', 'info');
+                started = running;
+            }
             await listEarlier();
             await openReport(started.id);
         }, form);

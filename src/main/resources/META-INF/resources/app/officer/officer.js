@@ -65,10 +65,13 @@ function picker(stores, store) {
         h('label', {for: 'store'}, 'Store'), select, h('button', {type: 'submit'}, 'Show'));
 }
 
-function tabs(page, store) {
+function tabs(page, store, stores) {
+    // The accuracy checks cover the whole programme: only accounts that see the central store may read them.
+    const accuracy = stores.some(s => s.kind === 'CENTRAL_STORE')
+        ? h('a', {href: '/app/lead/accuracy.html'}, 'Forecast accuracy') : null;
     return h('nav', {class: 'tabs', 'aria-label': 'Stores work'}, TASKS.map(t => h('a', {
         href: `${t.href}?location=${encodeURIComponent(store ? store.code : '')}`,
-        'aria-current': t.page === page ? 'page' : null}, t.label)));
+        'aria-current': t.page === page ? 'page' : null}, t.label)), accuracy);
 }
 
 export async function startOfficer({page, title}) {
@@ -80,7 +83,7 @@ export async function startOfficer({page, title}) {
     const head = document.getElementById('head');
     document.title = `${title}${store ? ` · ${store.code}` : ''} · depotcast`;
     mount(head, h('div', {class: 'page-head'}, h('h1', {}, title, store ? h('span', {class: 'muted h1-store'}, ` at ${storeName(store)}`) : null),
-        stores.length > 1 ? picker(stores, store) : null), tabs(page, store), line);
+        stores.length > 1 ? picker(stores, store) : null), tabs(page, store, stores), line);
     if (!store) {
         head.append(h('p', {class: 'message'}, 'No store is assigned to your account yet. Ask an administrator to assign your depot.'));
     }
