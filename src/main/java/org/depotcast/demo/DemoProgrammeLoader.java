@@ -13,7 +13,7 @@ import org.depotcast.catalogue.PartService;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.UsageService;
-import org.depotcast.repairs.RepairService;
+import org.depotcast.repairs.RepairHistoryCsv;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
@@ -41,7 +41,7 @@ class DemoProgrammeLoader {
     private final LocationService locations;
     private final PumpService pumps;
     private final UsageService usage;
-    private final RepairService repairs;
+    private final RepairHistoryCsv repairs;
     private final StockCountService counts;
     private final PurchaseOrderService orders;
     private final AccountService accounts;
@@ -50,7 +50,7 @@ class DemoProgrammeLoader {
     private final Path seedDirectory;
 
     DemoProgrammeLoader(PartService parts, PumpModelService models, LocationService locations, PumpService pumps,
-                        UsageService usage, RepairService repairs, StockCountService counts,
+                        UsageService usage, RepairHistoryCsv repairs, StockCountService counts,
                         PurchaseOrderService orders, AccountService accounts, SystemWork system,
                         @ConfigProperty(name = "depotcast.mode") String mode,
                         @ConfigProperty(name = "depotcast.seed.directory") String seedDirectory) {

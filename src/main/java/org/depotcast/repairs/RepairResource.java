@@ -16,7 +16,6 @@ import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
 import org.depotcast.common.ImportResult;
-import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.QueryParams;
 
 import java.io.InputStream;
@@ -26,9 +25,11 @@ import java.util.List;
 @Produces(MediaType.APPLICATION_JSON)
 class RepairResource {
     private final RepairService service;
+    private final RepairHistoryCsv csv;
 
-    RepairResource(RepairService service) {
+    RepairResource(RepairService service, RepairHistoryCsv csv) {
         this.service = service;
+        this.csv = csv;
     }
 
     /** Newest report first; {@code open=true} keeps the repairs not fixed yet. */
@@ -36,18 +37,8 @@ class RepairResource {
     public List<RepairResponse> list(@QueryParam("asset") String asset, @QueryParam("since") String since,
                                      @QueryParam("limit") String limit, @QueryParam("open") String open) {
         return service.search(asset, QueryParams.optionalDate("since", since),
-                        QueryParams.intInRange("limit", limit, 200, 1, 10_000), flag("open", open))
+                        QueryParams.intInRange("limit", limit, 200, 1, 10_000), QueryParams.optionalBoolean("open", open))
                 .stream().map(RepairResponse::from).toList();
-    }
-
-    private static boolean flag(String name, String value) {
-        if (value == null || value.isBlank() || value.strip().equalsIgnoreCase("false")) {
-            return false;
-        }
-        if (value.strip().equalsIgnoreCase("true")) {
-            return true;
-        }
-        throw new InvalidInputException(name, "must be true or false, was '" + value + "'");
     }
 
     @GET
@@ -81,13 +72,13 @@ class RepairResource {
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public ImportResult importCsv(InputStream csv) {
-        return new ImportResult(service.importCsv(csv));
+        return new ImportResult(this.csv.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
     public Response exportCsv() {
-        return service.exportCsv().response();
+        return csv.exportCsv().response();
     }
 }

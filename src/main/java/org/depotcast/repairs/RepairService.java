@@ -9,10 +9,6 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvExport;
-import org.depotcast.common.CsvImport;
-import org.depotcast.common.CsvImporter;
-import org.depotcast.common.CsvRow;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
@@ -25,7 +21,6 @@ import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
 
-import java.io.InputStream;
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
@@ -38,9 +33,6 @@ import java.util.Optional;
 /** Repair records, and the consumption each fixed repair posts to the ledger from the mechanic's kit. */
 @ApplicationScoped
 public class RepairService {
-    static final List<String> CSV_COLUMNS = List.of("repair_ref", "asset_id", "mechanic", "kind", "reported_on",
-            "diagnosed_on", "parts_available_on", "fixed_on", "fault", "part_number", "quantity");
-
     private final RepairRepository repairs;
     private final PumpService pumps;
     private final PartService parts;
@@ -49,12 +41,10 @@ public class RepairService {
     private final CurrentUser currentUser;
     private final org.depotcast.access.AuditService audit;
     private final PumpStatusService pumpStatus;
-    private final CsvImporter importer;
 
     RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
                   StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit,
-                  PumpStatusService pumpStatus, CsvImporter importer) {
-        this.importer = importer;
+                  PumpStatusService pumpStatus) {
         this.audit = audit;
         this.pumpStatus = pumpStatus;
         this.repairs = repairs;
@@ -250,123 +240,7 @@ public class RepairService {
         }
     }
 
-    /**
-     * Imports repair history (one row per replaced part; rows sharing a reference make one repair), each repair
-     * checked as {@link #record} checks it (the pump is the caller's, the reference new, dates in order, parts known).
-     * History is kept for forecasting and reporting and is not posted to the ledger: opening stock is counted after it.
-     */
-    @Transactional
-    public int importCsv(InputStream csv) {
-        HistoryImport history = new HistoryImport();
-        Map<String, String> pumpOfRef = new HashMap<>();
-        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 5), row -> read(row, pumpOfRef))
-                .identifiers("repair_ref", "asset_id", "mechanic", "part_number")
-                .scopeColumn("asset_id")
-                .applyGrouped(RepairRequest::repairRef, RepairService::joined, "lines",
-                        r -> r.lines() == null ? List.of() : r.lines(), history::add)
-                .afterAll(history::finish));
-    }
-
-    private static RepairRequest read(CsvRow row, Map<String, String> pumpOfRef) {
-        String ref = row.text("repair_ref");
-        String assetId = row.text("asset_id");
-        if (ref != null && assetId != null && !assetId.equals(pumpOfRef.computeIfAbsent(ref, r -> assetId))) {
-            row.reject("asset_id", "repair '" + ref + "' names another pump on an earlier row");
-        }
-        String partNumber = row.optionalText("part_number");
-        List<RepairRequest.Line> lines = partNumber == null ? List.of()
-                : List.of(new RepairRequest.Line(partNumber, row.decimal("quantity")));
-        return new RepairRequest(ref, assetId, row.text("mechanic"), row.choice("kind", RepairKind.class),
-                row.date("reported_on"), row.optionalDate("diagnosed_on"), row.optionalDate("parts_available_on"),
-                row.optionalDate("fixed_on"), row.optionalText("fault"), lines);
-    }
-
-    /** The repair as its first row gives it, with every row's part. */
-    private static RepairRequest joined(RepairRequest first, RepairRequest next) {
-        List<RepairRequest.Line> lines = new ArrayList<>(first.lines());
-        lines.addAll(next.lines());
-        return new RepairRequest(first.repairRef(), first.assetId(), first.mechanic(), first.kind(), first.reportedOn(),
-                first.diagnosedOn(), first.partsAvailableOn(), first.fixedOn(), first.fault(), lines);
-    }
-
-    /** One history import: pumps, parts and stored references read once, so thousands of repairs cost no lookups. */
-    private final class HistoryImport {
-        private final Map<String, Pump> pumpsById = new HashMap<>();
-        private final Map<String, Part> partsByNumber = new HashMap<>();
-        private final java.util.Set<String> touched = new java.util.HashSet<>();
-        private java.util.Set<String> storedRefs;
-        private java.util.function.Predicate<Pump> visible;
-        private int written;
-
-        void add(RepairRequest request) {
-            if (storedRefs == null) {
-                pumps.all().forEach(p -> pumpsById.put(p.assetId, p));
-                parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
-                storedRefs = repairs.allRefs();
-                visible = pumps.visibleFilter();
-            }
-            Pump pump = pumpsById.get(request.assetId());
-            if (pump == null) {
-                throw new EntityMissingException("assetId", "pump", request.assetId());
-            }
-            if (!visible.test(pump)) {
-                throw new io.quarkus.security.ForbiddenException("pump '" + request.assetId()
-                        + "' is outside your depots or assignments");
-            }
-            if (storedRefs.contains(request.repairRef())) {
-                throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' is already recorded");
-            }
-            String dateProblem = dateOrderProblem(request.reportedOn(), request.diagnosedOn(),
-                    request.partsAvailableOn(), request.fixedOn());
-            if (dateProblem != null) {
-                throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
-            }
-            Repair repair = newRepair(request, pump, request.mechanic());
-            repair.ledgerPosted = false;
-            for (int i = 0; i < request.lines().size(); i++) {
-                RepairRequest.Line l = request.lines().get(i);
-                Part part = partsByNumber.get(l.partNumber());
-                if (part == null) {
-                    throw new EntityMissingException("lines[" + i + "].partNumber", "part", l.partNumber());
-                }
-                BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
-                if (repair.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
-                    throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber
-                            + "' appears twice in repair '" + request.repairRef() + "'");
-                }
-                repair.addLine(line(part, quantity));
-            }
-            touched.add(pump.assetId);
-            repairs.persist(repair);
-            if (++written % 500 == 0) {
-                repairs.flush();
-                repairs.getEntityManager().clear();
-            }
-        }
-
-        void finish() {
-            repairs.flush();
-            audit.record("REPAIRS_IMPORTED", "repair", written + " repairs", null, Map.of("repairs", written));
-            // Each pump takes the status its repairs imply (an open breakdown: broken; else working since the last fix).
-            pumpStatus.followRepairs(pumps.all().stream().filter(p -> touched.contains(p.assetId)).toList());
-        }
-    }
-
-    public CsvExport exportCsv() {
-        List<List<?>> rows = new ArrayList<>();
-        var visible = pumps.visibleFilter();
-        for (Repair r : repairs.allInOrder().stream().filter(r -> visible.test(r.pump)).toList()) {
-            List<RepairLine> lines = r.lines.isEmpty() ? java.util.Collections.singletonList(null) : r.lines;
-            for (RepairLine l : lines) {
-                rows.add(java.util.Arrays.asList(r.repairRef, r.pump.assetId, r.mechanic, r.kind, r.reportedOn,
-                        blank(r.diagnosedOn), blank(r.partsAvailableOn), blank(r.fixedOn), r.fault == null ? "" : r.fault,
-                        l == null ? "" : l.part.partNumber, l == null ? "" : l.quantity.stripTrailingZeros().toPlainString()));
-            }
-        }
-        return new CsvExport("repairs.csv", CSV_COLUMNS, rows);
-    }
-
-    private static Repair newRepair(RepairRequest r, Pump pump, String mechanic) {
+    static Repair newRepair(RepairRequest r, Pump pump, String mechanic) {
         Repair repair = new Repair();
         repair.repairRef = r.repairRef();
         repair.pump = pump;
@@ -380,7 +254,7 @@ public class RepairService {
         return repair;
     }
 
-    private static RepairLine line(Part part, BigDecimal quantity) {
+    static RepairLine line(Part part, BigDecimal quantity) {
         RepairLine line = new RepairLine();
         line.part = part;
         line.quantity = quantity;
@@ -401,9 +275,5 @@ public class RepairService {
             }
         }
         return null;
-    }
-
-    private static Object blank(LocalDate date) {
-        return date == null ? "" : date;
     }
 }
