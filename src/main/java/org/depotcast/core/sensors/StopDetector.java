@@ -12,15 +12,16 @@ package org.depotcast.core.sensors;
  * with h = 4σ or 5σ). σ is floored at max(0.25 h, 10 % of μ₀), so a pump with very even use is not flagged for a
  * small dip. The change is placed at the day after S last stood at 0 (Page's estimate of the change point).
  *
- * <p>After a signal: if every day read from the change on is near nothing (at most {@code stopFraction} of μ₀, or
- * 0.25 h), the pump has <b>stopped</b>; if the last day read is back at half of μ₀ or more, it was a dip and the pump
- * is <b>in normal use</b>; otherwise its use is <b>declining</b>. A baseline with fewer than
+ * <p>After a signal: if the days read at the end are near nothing (at most {@code stopFraction} of μ₀, or 0.25 h),
+ * the pump has <b>stopped</b>, from the first day of that run (a low day before it, such as a quiet weekday, may have
+ * started the sum, so the run and not Page's change point dates the stop); if the last day read is back at half of
+ * μ₀ or more, it was a dip and the pump is <b>in normal use</b>; otherwise its use is <b>declining</b>. A baseline with fewer than
  * {@code leastBaselineDays} days read, or with a mean of 0.25 h or less, is too little to judge a fall against. No reading in the last
  * {@code gapDays} days is <b>no data received</b> (a transmission gap), whatever came before: a sensor that stops
  * sending is not a pump that stops pumping.
  *
  * <p>The probability that a stopped pump is down, rather than idle, is Bayes' rule over the run of near-nothing days:
- * P = π / (π + (1 − π) qⁿ), with n the days read since the change, q the share of near-nothing days in the pump's own
+ * P = π / (π + (1 − π) qⁿ), with n the near-nothing days read at the end, q the share of near-nothing days in the pump's own
  * baseline by Laplace's rule of succession ((z + 1)/(m + 2) for z such days out of m read), and π the prior chance
  * that a breakdown starts on a given day ({@code dailyBreakdownChance}). Each idle day is taken as independent.
  */
@@ -142,26 +143,35 @@ public final class StopDetector {
     private Verdict afterChange(double[] hours, int change, double mean, double sd, double nearNothing, double q) {
         double sum = 0;
         int read = 0;
-        boolean allNearNothing = true;
         for (int t = change; t < hours.length; t++) {
             if (!Double.isNaN(hours[t])) {
                 sum += hours[t];
                 read++;
-                allNearNothing &= hours[t] <= nearNothing;
             }
         }
         double level = read == 0 ? Double.NaN : sum / read;
-        if (!allNearNothing && lastRead(hours) >= 0.5 * mean) {
+        // The run of near-nothing days read at the end (days with no reading neither break nor lengthen it).
+        int run = 0, runStart = -1;
+        for (int t = hours.length - 1; t >= 0; t--) {
+            if (Double.isNaN(hours[t])) {
+                continue;
+            }
+            if (hours[t] > nearNothing) {
+                break;
+            }
+            run++;
+            runStart = t;
+        }
+        if (run > 0) {
+            double prior = settings.dailyBreakdownChance();
+            double probability = prior / (prior + (1 - prior) * Math.pow(q, run));
+            return new Verdict(State.STOPPED, runStart, mean, sd, level, probability, run);
+        }
+        if (lastRead(hours) >= 0.5 * mean) {
             // Use has come back: a dip, not a fall.
             return new Verdict(State.IN_USE, change, mean, sd, level, 0, 0);
         }
-        if (!allNearNothing) {
-            return new Verdict(State.DECLINING, change, mean, sd, level, 0, 0);
-        }
-        double prior = settings.dailyBreakdownChance();
-        double idleChance = Math.pow(q, read);
-        double probability = prior / (prior + (1 - prior) * idleChance);
-        return new Verdict(State.STOPPED, change, mean, sd, level, probability, read);
+        return new Verdict(State.DECLINING, change, mean, sd, level, 0, 0);
     }
 
     private static double lastRead(double[] hours) {

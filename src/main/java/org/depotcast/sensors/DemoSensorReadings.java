@@ -1,0 +1,110 @@
+package org.depotcast.sensors;
+
+import io.quarkus.logging.Log;
+import io.quarkus.narayana.jta.QuarkusTransaction;
+import io.quarkus.runtime.StartupEvent;
+import jakarta.annotation.Priority;
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.enterprise.event.Observes;
+import org.depotcast.access.SystemWork;
+import org.depotcast.common.DateBounds;
+import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpStatus;
+import org.depotcast.repairs.Repair;
+import org.depotcast.repairs.RepairKind;
+import org.depotcast.repairs.RepairService;
+import org.eclipse.microprofile.config.inject.ConfigProperty;
+
+import java.sql.SQLException;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * Demo mode: after the demo programme is loaded, gives about 40 % of its pumps a year of daily sensor readings up to
+ * yesterday, made from each pump's recorded load and its recorded breakdowns ({@link DemoSensorSeries}), seeded so
+ * every first start makes the same readings. Written as whole pump-months straight through the store (a few
+ * thousand rows), then judged for stops once.
+ */
+@ApplicationScoped
+class DemoSensorReadings {
+    static final long SEED = 14;
+    static final int DAYS = 365;
+
+    private final PumpService pumps;
+    private final RepairService repairs;
+    private final SensorReadingStore store;
+    private final SensorUsageQuery usage;
+    private final StopFlagService flags;
+    private final SystemWork system;
+    private final String mode;
+
+    DemoSensorReadings(PumpService pumps, RepairService repairs, SensorReadingStore store, SensorUsageQuery usage,
+                       StopFlagService flags, SystemWork system, @ConfigProperty(name = "depotcast.mode") String mode) {
+        this.pumps = pumps;
+        this.repairs = repairs;
+        this.store = store;
+        this.usage = usage;
+        this.flags = flags;
+        this.system = system;
+        this.mode = mode;
+    }
+
+    /** After the demo loader (priority 20). */
+    void load(@Observes @Priority(30) StartupEvent event) {
+        if ("demo".equals(mode)) {
+            system.run("demo-sensors", this::loadIfEmpty);
+        }
+    }
+
+    private void loadIfEmpty() {
+        LocalDate lastDay = DateBounds.today().minusDays(1);
+        if (!usage.pumpsReadSince(LocalDate.of(1900, 1, 1)).isEmpty()) {
+            return;
+        }
+        long started = System.nanoTime();
+        int months = QuarkusTransaction.requiringNew().timeout(600).call(() -> write(lastDay));
+        if (months > 0) {
+            int probablyDown = flags.refreshAll(lastDay);
+            Log.infof("demo sensor readings: %d pump-months in %d ms; %d pumps probably down", months,
+                    (System.nanoTime() - started) / 1_000_000, probablyDown);
+        }
+    }
+
+    private int write(LocalDate lastDay) throws SQLException {
+        LocalDate firstDay = lastDay.minusDays(DAYS - 1L);
+        Map<Long, List<Repair>> breakdowns = new HashMap<>();
+        for (Repair r : repairs.search(null, firstDay.minusDays(60), Integer.MAX_VALUE)) {
+            if (r.kind == RepairKind.BREAKDOWN) {
+                breakdowns.computeIfAbsent(r.pump.id, k -> new ArrayList<>()).add(r);
+            }
+        }
+        Map<Long, MonthDays> months = new LinkedHashMap<>();
+        for (Pump pump : pumps.all()) {
+            if (pump.status == PumpStatus.DECOMMISSIONED || !DemoSensorSeries.hasSensor(pump.assetId, SEED)) {
+                continue;
+            }
+            List<DemoSensorSeries.Stop> stops = new ArrayList<>();
+            for (Repair r : breakdowns.getOrDefault(pump.id, List.of())) {
+                stops.add(new DemoSensorSeries.Stop(r.reportedOn, r.fixedOn));
+            }
+            double[] hours = DemoSensorSeries.of(pump.assetId, SEED, pump.usageHoursPerDay.doubleValue(), firstDay,
+                    DAYS, stops).hours();
+            for (int d = 0; d < DAYS; d++) {
+                LocalDate day = firstDay.plusDays(d);
+                if (Double.isNaN(hours[d]) || day.isBefore(pump.installedOn)) {
+                    continue;
+                }
+                LocalDate month = day.withDayOfMonth(1);
+                months.computeIfAbsent(SensorReadingStore.key(pump.id, month), k -> MonthDays.empty(month))
+                        .set(day, (int) Math.round(hours[d] * 100));
+            }
+        }
+        store.write(new ArrayList<>(months.entrySet()));
+        return months.size();
+    }
+}

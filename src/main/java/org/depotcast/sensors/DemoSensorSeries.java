@@ -1,0 +1,69 @@
+package org.depotcast.sensors;
+
+import java.time.LocalDate;
+import java.util.Arrays;
+import java.util.List;
+import java.util.SplittableRandom;
+
+/**
+ * A demo pump's invented daily hours of use, seeded by the pump's asset id so a pump always gets the same series:
+ * its recorded load scaled by a lasting pump factor (lognormal, σ 0.2); a seasonal swing of ±25 % peaking in March
+ * (the dry season, when other sources fail); one quiet day a week at 35 %; day-to-day noise (lognormal, σ 0.15);
+ * for 8 % of pumps a gradual decline to 45 % over 60 days from a day in the year; transmission gaps (1.5 % of days
+ * start one of 1–7 days with no reading); and each recorded breakdown as use near nothing from 0–3 days before its
+ * report (the sensor sees the stop before anyone reports it) until its fix, or to the end while it is open.
+ */
+final class DemoSensorSeries {
+    /** Share of demo pumps fitted with a sensor. */
+    static final double SENSOR_SHARE = 0.40;
+
+    record Stop(LocalDate reportedOn, LocalDate fixedOn) {
+    }
+
+    /** The hours, and for each stop (in the order given) the day its use fell. */
+    record Series(double[] hours, List<LocalDate> stoppedFrom) {
+    }
+
+    private DemoSensorSeries() {
+    }
+
+    static boolean hasSensor(String assetId, long seed) {
+        return new SplittableRandom(seed * 1_000_003L + assetId.hashCode()).nextDouble() < SENSOR_SHARE;
+    }
+
+    /** Hours per day from {@code firstDay} for {@code days} days; NaN where no reading came. */
+    static Series of(String assetId, long seed, double loadHoursPerDay, LocalDate firstDay, int days,
+                     List<Stop> stops) {
+        SplittableRandom random = new SplittableRandom(seed * 7_919L + assetId.hashCode());
+        double level = loadHoursPerDay * Math.exp(0.2 * random.nextGaussian());
+        int quietWeekday = random.nextInt(7);
+        int declineFrom = random.nextDouble() < 0.08 ? random.nextInt(days) : Integer.MAX_VALUE;
+        double[] hours = new double[days];
+        for (int d = 0; d < days; d++) {
+            LocalDate day = firstDay.plusDays(d);
+            double season = 1 + 0.25 * Math.cos(2 * Math.PI * (day.getDayOfYear() - 75) / 365.25);
+            double week = day.getDayOfWeek().getValue() - 1 == quietWeekday ? 0.35 : 1.0;
+            double decline = d < declineFrom ? 1 : Math.max(0.45, 1 - 0.55 * (d - declineFrom) / 60.0);
+            double noise = Math.exp(0.15 * random.nextGaussian());
+            hours[d] = Math.min(24, Math.round(level * season * week * decline * noise * 100) / 100.0);
+        }
+        List<LocalDate> stoppedFrom = new java.util.ArrayList<>();
+        for (Stop stop : stops) {
+            LocalDate from = stop.reportedOn().minusDays(random.nextInt(4));
+            stoppedFrom.add(from);
+            LocalDate to = stop.fixedOn() == null ? firstDay.plusDays(days) : stop.fixedOn();
+            for (LocalDate day = from; day.isBefore(to); day = day.plusDays(1)) {
+                long d = day.toEpochDay() - firstDay.toEpochDay();
+                if (d >= 0 && d < days) {
+                    hours[(int) d] = random.nextDouble() < 0.7 ? 0 : Math.round(random.nextDouble() * 10) / 100.0;
+                }
+            }
+        }
+        for (int d = 0; d < days; d++) {
+            if (random.nextDouble() < 0.015) {
+                Arrays.fill(hours, d, Math.min(days, d + 1 + random.nextInt(7)), Double.NaN);
+            }
+        }
+        return new Series(hours, stoppedFrom);
+    }
+}
