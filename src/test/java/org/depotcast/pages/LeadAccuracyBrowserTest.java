@@ -4,6 +4,7 @@ import io.quarkus.test.junit.QuarkusTest;
 import io.restassured.path.json.JsonPath;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
+import org.openqa.selenium.Keys;
 import org.openqa.selenium.StaleElementReferenceException;
 import org.openqa.selenium.WebElement;
 
@@ -125,7 +126,11 @@ class LeadAccuracyBrowserTest extends BrowserSession {
         search.clear();
         search.sendKeys(" ");
         WebElement used = driver.findElement(By.xpath("//table[@id='row-table']//th/button[starts-with(normalize-space(.), 'Used')]"));
-        used.click();
+        used.sendKeys(Keys.ENTER);
+        WebElement focused = driver.switchTo().activeElement();
+        assertTrue(focused.getText().startsWith("Used"), "the keyboard stays on the heading it sorted by");
+        assertFalse("none".equals(focused.getCssValue("outline-style")), "and its focus shows");
+        assertEquals("used:up", driver.findElement(By.id("row-sort")).getAttribute("value"));
         assertEquals("ascending", driver.findElement(By.xpath("//table[@id='row-table']//th[button[starts-with(normalize-space(.), 'Used')]]"))
                 .getAttribute("aria-sort"));
         List<Double> values = driver.findElements(By.cssSelector("#row-table tbody td[data-label='Used']")).stream()

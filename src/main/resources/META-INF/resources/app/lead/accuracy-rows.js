@@ -1,7 +1,7 @@
 /*
  * The rows of an accuracy check: one line per part and place with what was used, each forecast of the 12-month
  * total and whether the service's ranges held. A search box and a level choice narrow them; a column heading's
- * button sorts by it (again to reverse). At most LIMIT lines are drawn at once; the CSV has them all.
+ * button sorts by it (again to reverse), and so does the "Sort by" choice (a phone shows no headings). At most LIMIT lines are drawn at once; the CSV has them all.
  */
 import {fmt} from './lead.js';
 import {h, mount, state} from '/app/js/ui.js';
@@ -34,6 +34,8 @@ export function rowsTable(rows) {
     const search = h('input', {id: 'row-search', type: 'search', name: 'search', placeholder: 'Part number or place'});
     const level = h('select', {id: 'row-level', name: 'level'}, LEVELS.map(([v, words]) => h('option', {value: v}, words)));
     level.value = view.level;
+    const order = h('select', {id: 'row-sort', name: 'sort'}, COLUMNS.map(c => [
+        h('option', {value: `${c.key}:up`}, `${c.label}, lowest first`), h('option', {value: `${c.key}:down`}, `${c.label}, highest first`)]));
     const head = h('tr');
     const body = h('tbody');
     const count = h('p', {class: 'hint', id: 'row-count', 'aria-live': 'polite'});
@@ -54,6 +56,7 @@ export function rowsTable(rows) {
                 c.key === view.key ? h('span', {'aria-hidden': 'true'}, view.descending ? ' ▼' : ' ▲') : null))));
         mount(body, chosen.slice(0, LIMIT).map(r => h('tr', {}, COLUMNS.map(c =>
             h('td', {class: c.num ? 'num' : null, 'data-label': c.label}, c.value(r))))));
+        order.value = `${view.key}:${view.descending ? 'down' : 'up'}`;
         count.textContent = chosen.length > LIMIT ? `Showing ${whole(LIMIT)} of ${whole(chosen.length)} rows: narrow the search, or download the CSV.`
             : `${whole(chosen.length)} of ${whole(rows.length)} rows.`;
     }
@@ -69,6 +72,11 @@ export function rowsTable(rows) {
         view.text = search.value;
         draw();
     });
+    order.addEventListener('change', () => {
+        [view.key] = order.value.split(':');
+        view.descending = order.value.endsWith(':down');
+        draw();
+    });
     level.addEventListener('change', () => {
         view.level = level.value;
         draw();
@@ -78,7 +86,8 @@ export function rowsTable(rows) {
         h('h3', {id: 'rows-heading'}, 'Every part and place'),
         h('form', {class: 'lead-form filters', role: 'search', onsubmit: e => e.preventDefault()},
             h('div', {class: 'inline-field'}, h('label', {for: 'row-search'}, 'Find a part or place'), search),
-            h('div', {class: 'inline-field'}, h('label', {for: 'row-level'}, 'Series'), level)),
+            h('div', {class: 'inline-field'}, h('label', {for: 'row-level'}, 'Series'), level),
+            h('div', {class: 'inline-field'}, h('label', {for: 'row-sort'}, 'Sort by'), order)),
         count,
         h('div', {class: 'table-wrap'}, h('table', {class: 'stack', id: 'row-table'},
             h('caption', {}, 'Forecast and use per part and place, 12-month totals in units'), h('thead', {}, head), body)));
