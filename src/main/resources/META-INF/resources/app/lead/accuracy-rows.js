@@ -29,6 +29,30 @@ const COLUMNS = [
     {key: 'croston', label: 'Croston', num: true, sort: r => r.croston.forecast, value: r => whole(r.croston.forecast)}
 ];
 
+/** The rows the view asks for: its level and search text, sorted by its column. */
+function chosenRows(rows, view) {
+    const text = view.text.trim().toLowerCase();
+    const chosen = rows.filter(r => (!view.level || r.level === view.level)
+        && (!text || r.partNumber.toLowerCase().includes(text) || r.location.toLowerCase().includes(text)));
+    const column = COLUMNS.find(c => c.key === view.key);
+    return chosen.sort((a, b) => {
+        const x = column.sort(a), y = column.sort(b);
+        const order = typeof x === 'string' ? x.localeCompare(y) : x - y;
+        return view.descending ? -order : order;
+    });
+}
+
+function headings(view, sortBy) {
+    return COLUMNS.map(c => h('th', {scope: 'col', class: c.num ? 'num' : null,
+        'aria-sort': c.key === view.key ? (view.descending ? 'descending' : 'ascending') : null},
+        h('button', {type: 'button', class: 'sort', onclick: () => sortBy(c.key)}, c.label,
+            c.key === view.key ? h('span', {'aria-hidden': 'true'}, view.descending ? ' ▼' : ' ▲') : null)));
+}
+
+function field(id, words, input) {
+    return h('div', {class: 'inline-field'}, h('label', {for: id}, words), input);
+}
+
 export function rowsTable(rows) {
     const view = {text: '', level: 'DEPOT', key: 'miss', descending: true};
     const search = h('input', {id: 'row-search', type: 'search', name: 'search', placeholder: 'Part number or place'});
@@ -41,19 +65,8 @@ export function rowsTable(rows) {
     const count = h('p', {class: 'hint', id: 'row-count', 'aria-live': 'polite'});
 
     function draw() {
-        const text = view.text.trim().toLowerCase();
-        const chosen = rows.filter(r => (!view.level || r.level === view.level)
-            && (!text || r.partNumber.toLowerCase().includes(text) || r.location.toLowerCase().includes(text)));
-        const column = COLUMNS.find(c => c.key === view.key);
-        chosen.sort((a, b) => {
-            const x = column.sort(a), y = column.sort(b);
-            const order = typeof x === 'string' ? x.localeCompare(y) : x - y;
-            return view.descending ? -order : order;
-        });
-        mount(head, COLUMNS.map(c => h('th', {scope: 'col', class: c.num ? 'num' : null,
-            'aria-sort': c.key === view.key ? (view.descending ? 'descending' : 'ascending') : null},
-            h('button', {type: 'button', class: 'sort', onclick: () => sortBy(c.key)}, c.label,
-                c.key === view.key ? h('span', {'aria-hidden': 'true'}, view.descending ? ' ▼' : ' ▲') : null))));
+        const chosen = chosenRows(rows, view);
+        mount(head, headings(view, sortBy));
         mount(body, chosen.slice(0, LIMIT).map(r => h('tr', {}, COLUMNS.map(c =>
             h('td', {class: c.num ? 'num' : null, 'data-label': c.label}, c.value(r))))));
         order.value = `${view.key}:${view.descending ? 'down' : 'up'}`;
@@ -68,26 +81,17 @@ export function rowsTable(rows) {
         head.querySelector('th[aria-sort] button').focus();
     }
 
-    search.addEventListener('input', () => {
-        view.text = search.value;
-        draw();
-    });
+    search.addEventListener('input', () => draw(view.text = search.value));
+    level.addEventListener('change', () => draw(view.level = level.value));
     order.addEventListener('change', () => {
         [view.key] = order.value.split(':');
         view.descending = order.value.endsWith(':down');
         draw();
     });
-    level.addEventListener('change', () => {
-        view.level = level.value;
-        draw();
-    });
     draw();
-    return h('section', {'aria-labelledby': 'rows-heading'},
-        h('h3', {id: 'rows-heading'}, 'Every part and place'),
+    return h('section', {'aria-labelledby': 'rows-heading'}, h('h3', {id: 'rows-heading'}, 'Every part and place'),
         h('form', {class: 'lead-form filters', role: 'search', onsubmit: e => e.preventDefault()},
-            h('div', {class: 'inline-field'}, h('label', {for: 'row-search'}, 'Find a part or place'), search),
-            h('div', {class: 'inline-field'}, h('label', {for: 'row-level'}, 'Series'), level),
-            h('div', {class: 'inline-field'}, h('label', {for: 'row-sort'}, 'Sort by'), order)),
+            field('row-search', 'Find a part or place', search), field('row-level', 'Series', level), field('row-sort', 'Sort by', order)),
         count,
         h('div', {class: 'table-wrap'}, h('table', {class: 'stack', id: 'row-table'},
             h('caption', {}, 'Forecast and use per part and place, 12-month totals in units'), h('thead', {}, head), body)));
