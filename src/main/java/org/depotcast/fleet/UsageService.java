@@ -28,10 +28,12 @@ public class UsageService {
     private final PumpService pumps;
     private final org.depotcast.access.AuditService audit;
     private final CsvImporter importer;
+    private final jakarta.enterprise.inject.Instance<MeasuredLoads> measured;
 
     UsageService(UsageReadingRepository readings, PumpService pumps, org.depotcast.access.AuditService audit,
-                 CsvImporter importer) {
+                 CsvImporter importer, jakarta.enterprise.inject.Instance<MeasuredLoads> measured) {
         this.importer = importer;
+        this.measured = measured;
         this.audit = audit;
         this.readings = readings;
         this.pumps = pumps;
@@ -41,9 +43,16 @@ public class UsageService {
         return readings.ofPump(pumps.requireVisible(null, assetId).id);
     }
 
-    /** Readings of every pump, oldest first per pump; rows: pump id, read on, hours per day. */
+    /**
+     * The usage history of every pump, oldest first per pump: the typed-in readings, except that in a month a sensor
+     * measured (see {@link MeasuredLoads}) the measured load stands in place of any estimate typed in that month.
+     */
     public List<UsageReadingRow> allReadings() {
-        return readings.allReadings();
+        List<UsageReadingRow> typed = readings.allReadings();
+        if (measured.isUnsatisfied()) {
+            return typed;
+        }
+        return UsageHistory.merge(typed, measured.get().monthlyLoads());
     }
 
     @Transactional

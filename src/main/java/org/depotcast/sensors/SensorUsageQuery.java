@@ -20,7 +20,9 @@ import java.util.Map;
  * planning runs that already see the whole programme; endpoints check the caller before using this.
  */
 @ApplicationScoped
-public class SensorUsageQuery {
+public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
+    /** Fewer days read in a month than this and the month gives no measured load (the estimate stands). */
+    public static final int LEAST_DAYS_IN_A_MONTH = 7;
     /** Whole months before the origin that make a pump's measured daily load. */
     public static final int USAGE_WINDOW_MONTHS = 3;
     /** Fewer days read than this in the window and the quarterly estimate stands (too little to measure a load). */
@@ -38,6 +40,19 @@ public class SensorUsageQuery {
         query("select pump_id, month_start, hours, days_covered from sensor_month where pump_id = ? "
                 + "order by month_start", s -> s.setLong(1, pumpId), r -> months.add(month(r)));
         return months;
+    }
+
+    /** Each pump's measured load per month with at least {@link #LEAST_DAYS_IN_A_MONTH} days read. */
+    @Override
+    public List<org.depotcast.fleet.UsageReadingRow> monthlyLoads() {
+        List<org.depotcast.fleet.UsageReadingRow> loads = new ArrayList<>();
+        query("select pump_id, month_start, hours, days_covered from sensor_month where days_covered >= ? "
+                + "order by pump_id, month_start", s -> s.setInt(1, LEAST_DAYS_IN_A_MONTH), r -> {
+            MonthlyOperatingHours month = month(r);
+            loads.add(new org.depotcast.fleet.UsageReadingRow(month.pumpId(), month.monthStart(),
+                    java.math.BigDecimal.valueOf(month.hoursPerDayRead()).setScale(3, java.math.RoundingMode.HALF_UP)));
+        });
+        return loads;
     }
 
     /** Every pump's months in [from, to) (first days of months), for model runs. */
