@@ -1,6 +1,5 @@
 package org.depotcast.forecasting;
 
-import de.siegmar.fastcsv.reader.CsvRecord;
 import org.depotcast.common.Bounds;
 import org.depotcast.common.CsvProblems;
 import org.depotcast.common.FieldError;
@@ -17,8 +16,7 @@ final class BatchCells {
     }
 
     /** Where series_id, period and quantity are in the header; 400 naming each one missing. */
-    static int[] columns(CsvRecord header) {
-        List<String> names = header.getFields().stream().map(String::strip).toList();
+    static int[] columns(List<String> names) {
         int[] index = new int[COLUMNS.size()];
         List<FieldError> missing = new java.util.ArrayList<>();
         for (int i = 0; i < COLUMNS.size(); i++) {
@@ -31,6 +29,25 @@ final class BatchCells {
             throw new InvalidInputException(missing);
         }
         return index;
+    }
+
+    /** A period read as plain digits by the row reader. */
+    static int period(CsvProblems problems, int line, int period) {
+        if (period <= StatelessForecastService.PERIOD_MAX) {
+            return period;
+        }
+        problems.add(line, "period", "must be from 0 to " + StatelessForecastService.PERIOD_MAX
+                + " (a period number such as 202401), was " + period);
+        return -1;
+    }
+
+    /** A quantity read as plain digits by the row reader. */
+    static double quantity(CsvProblems problems, int line, int quantity) {
+        if (quantity <= VALUE_MAX) {
+            return quantity;
+        }
+        problems.add(line, "quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was '" + quantity + "'");
+        return Double.NaN;
     }
 
     static int period(CsvProblems problems, int line, String text) {
@@ -56,10 +73,6 @@ final class BatchCells {
             problems.add(line, "quantity", "is required");
             return Double.NaN;
         }
-        int whole = wholeNumber(text);
-        if (whole >= 0 && whole <= VALUE_MAX) {
-            return whole;
-        }
         try {
             double quantity = text.length() > 40 ? Double.NaN : Double.parseDouble(text);
             if (quantity >= 0 && quantity <= VALUE_MAX) {
@@ -70,29 +83,6 @@ final class BatchCells {
             problems.add(line, "quantity", "must be a number, was '" + shown(text) + "'");
         }
         return Double.NaN;
-    }
-
-    /**
-     * A count written as plain digits (most demand is), read without the general number parser, which is a large
-     * share of a batch's time; -1 for anything else (up to 9 digits, so no overflow).
-     */
-    private static int wholeNumber(String text) {
-        if (text.length() > 9) {
-            return -1;
-        }
-        int value = 0;
-        for (int i = 0; i < text.length(); i++) {
-            char c = text.charAt(i);
-            if (c < '0' || c > '9') {
-                return -1;
-            }
-            value = value * 10 + (c - '0');
-        }
-        return value;
-    }
-
-    static String cell(CsvRecord record, int index) {
-        return index < record.getFieldCount() ? record.getField(index).strip() : "";
     }
 
     static String shown(String value) {

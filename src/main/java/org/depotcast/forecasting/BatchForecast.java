@@ -2,7 +2,6 @@ package org.depotcast.forecasting;
 
 import de.siegmar.fastcsv.reader.CsvParseException;
 import de.siegmar.fastcsv.reader.CsvReader;
-import de.siegmar.fastcsv.reader.CsvRecord;
 import org.depotcast.common.BodySizeLimit;
 import org.depotcast.common.BodyTooLargeException;
 import org.depotcast.common.Bounds;
@@ -84,17 +83,18 @@ final class BatchForecast {
 
     private void read(InputStream body) throws IOException {
         CsvExport.writeRow(out, OUTPUT_HEADER.toArray());
-        try (CsvReader<CsvRecord> reader = CsvReader.builder().skipEmptyLines(true).detectBomHeader(true)
-                .allowMissingFields(true).allowExtraFields(true).ofCsvRecord(body)) {
-            Iterator<CsvRecord> records = reader.iterator();
+        BatchRowReader handler = new BatchRowReader();
+        try (CsvReader<BatchRowReader.Row> reader = CsvReader.builder().skipEmptyLines(true).detectBomHeader(true)
+                .allowMissingFields(true).allowExtraFields(true).build(handler, body)) {
+            Iterator<BatchRowReader.Row> records = reader.iterator();
             if (!records.hasNext()) {
                 throw new InvalidInputException("body", "CSV body is empty");
             }
-            int[] columns = BatchCells.columns(records.next());
+            handler.useColumns(BatchCells.columns(records.next().header));
             while (records.hasNext()) {
-                CsvRecord record = records.next();
+                BatchRowReader.Row row = records.next();
                 rows++;
-                readRow(record, columns);
+                readRow(row);
             }
         } catch (CsvParseException | UncheckedIOException e) {
             rethrowIfTooLarge(e);
@@ -109,11 +109,13 @@ final class BatchForecast {
         out.close();
     }
 
-    private void readRow(CsvRecord record, int[] columns) throws IOException {
-        int line = (int) Math.min(Integer.MAX_VALUE, record.getStartingLineNumber());
-        String id = BatchCells.cell(record, columns[0]);
-        int period = BatchCells.period(problems, line, BatchCells.cell(record, columns[1]));
-        double quantity = BatchCells.quantity(problems, line, BatchCells.cell(record, columns[2]));
+    private void readRow(BatchRowReader.Row row) throws IOException {
+        int line = (int) Math.min(Integer.MAX_VALUE, row.line);
+        String id = row.id;
+        int period = row.periodText == null ? BatchCells.period(problems, line, row.period)
+                : BatchCells.period(problems, line, row.periodText);
+        double quantity = row.quantityText == null ? BatchCells.quantity(problems, line, row.quantity)
+                : BatchCells.quantity(problems, line, row.quantityText);
         if (id.isEmpty()) {
             problems.add(line, "series_id", "is required");
             return;
