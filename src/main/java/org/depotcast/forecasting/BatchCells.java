@@ -4,6 +4,7 @@ import org.depotcast.common.Bounds;
 import org.depotcast.common.CsvProblems;
 import org.depotcast.common.FieldError;
 import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.QueryParams;
 
 import java.util.List;
 
@@ -63,7 +64,7 @@ final class BatchCells {
             problems.add(line, "period", "must be from 0 to " + StatelessForecastService.PERIOD_MAX
                     + " (a period number such as 202401), was " + period);
         } catch (NumberFormatException e) {
-            problems.add(line, "period", "must be a whole number, was '" + shown(text) + "'");
+            problems.add(line, "period", "must be a whole number, was '" + QueryParams.shown(text) + "'");
         }
         return -1;
     }
@@ -78,14 +79,10 @@ final class BatchCells {
             if (quantity >= 0 && quantity <= VALUE_MAX) {
                 return quantity;
             }
-            problems.add(line, "quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was '" + shown(text) + "'");
+            problems.add(line, "quantity", "must be from 0 to " + Bounds.SERIES_VALUE_MAX + ", was '" + QueryParams.shown(text) + "'");
         } catch (NumberFormatException e) {
-            problems.add(line, "quantity", "must be a number, was '" + shown(text) + "'");
+            problems.add(line, "quantity", "must be a number, was '" + QueryParams.shown(text) + "'");
         }
         return Double.NaN;
-    }
-
-    static String shown(String value) {
-        return value.length() <= 40 ? value : value.substring(0, 40) + "…";
     }
 }

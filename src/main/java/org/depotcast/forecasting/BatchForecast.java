@@ -8,6 +8,7 @@ import org.depotcast.common.Bounds;
 import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvProblems;
 import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.QueryParams;
 import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
 
@@ -127,7 +128,7 @@ final class BatchForecast {
         if (!id.equals(currentId)) {
             finishSeries();
             if (!seen.add(id)) {
-                problems.add(line, "series_id", "the rows of series '" + BatchCells.shown(id) + "' must be together: it "
+                problems.add(line, "series_id", "the rows of series '" + QueryParams.shown(id) + "' must be together: it "
                         + "appeared earlier in the file, before another series");
                 return;
             }
@@ -143,7 +144,7 @@ final class BatchForecast {
         int low = size == 0 ? period : Math.min(minPeriod, period);
         int high = size == 0 ? period : Math.max(maxPeriod, period);
         if (high - low >= Bounds.SERIES_PERIODS_MAX) {
-            problems.add(line, "period", "series '" + BatchCells.shown(currentId) + "' spans more than "
+            problems.add(line, "period", "series '" + QueryParams.shown(currentId) + "' spans more than "
                     + Bounds.SERIES_PERIODS_MAX + " periods");
             return;
         }
@@ -169,7 +170,7 @@ final class BatchForecast {
         for (int i = 0; i < size; i++) {
             int at = periods[i] - minPeriod;
             if (filled[at]) {
-                problems.add(lines[i], "period", "period " + periods[i] + " appears twice for series '" + BatchCells.shown(currentId) + "'");
+                problems.add(lines[i], "period", "period " + periods[i] + " appears twice for series '" + QueryParams.shown(currentId) + "'");
             }
             filled[at] = true;
             history[at] = quantities[i];

@@ -130,8 +130,4 @@ public class StatelessForecastService {
     private static SeriesResponse.Scores scores(ErrorScores s) {
         return new SeriesResponse.Scores(ForecastRecords.finite(s.mase()), ForecastRecords.finite(s.rmsse()), ForecastRecords.finite(s.scaledBias()));
     }
-
-    private static String blank(double value) {
-        return Double.isFinite(value) ? String.format(Locale.ROOT, "%.2f", value) : "";
-    }
 }
