@@ -50,6 +50,7 @@ public class ScheduleClaims {
                             "insert into schedule_claim (schedule_name, run_on, instance_id, claimed_at) values (?1, ?2, ?3, ?4)")
                     .setParameter(1, schedule).setParameter(2, day).setParameter(3, instance.id())
                     .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate());
+            Log.infof("schedule %s on %s claimed by this instance %s", schedule, day, instance.id());
             return true;
         } catch (RuntimeException refused) {
             String holder = holder(schedule, day);
