@@ -11,7 +11,7 @@ import java.math.BigDecimal;
 import java.util.HashMap;
 import java.util.Map;
 
-/** Units on hand per part at a depot and in its mechanics' kits together, as the caller may see them. */
+/** Units on hand per part at a location, or in a depot's mechanics' kits together, as the caller may see them. */
 @ApplicationScoped
 class DepotStock {
     private final LocationService locations;
@@ -22,9 +22,8 @@ class DepotStock {
         this.stock = stock;
     }
 
-    Map<String, BigDecimal> depotAndKits(String depotCode) {
-        Location depot = locations.require("depot", depotCode);
-        Map<String, BigDecimal> units = add(new HashMap<>(), depot.code);
+    Map<String, BigDecimal> kitsOf(Location depot) {
+        Map<String, BigDecimal> units = new HashMap<>();
         for (Location kit : locations.ofKind(LocationKind.KIT)) {
             if (kit.parent != null && kit.parent.id.equals(depot.id)) {
                 add(units, kit.code);
@@ -33,8 +32,9 @@ class DepotStock {
         return units;
     }
 
-    Map<String, BigDecimal> depotOnly(String depotCode) {
-        return add(new HashMap<>(), depotCode);
+    /** One location's own shelves (a depot without its kits, or one kit). */
+    Map<String, BigDecimal> atLocation(String locationCode) {
+        return add(new HashMap<>(), locationCode);
     }
 
     private Map<String, BigDecimal> add(Map<String, BigDecimal> units, String locationCode) {

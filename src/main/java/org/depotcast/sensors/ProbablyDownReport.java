@@ -6,18 +6,30 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The pumps of a depot that have probably stopped, the parts they are expected to need, summed and set against the
- * depot's and its mechanics' kits' stock, and how earlier flags ended (repairs reported, false alarms).
+ * The pumps of a depot (or a mechanic's own pumps) that have probably stopped, the parts they are expected to need,
+ * summed and set against the stock the caller sees (the depot and its mechanics' kits, or the mechanic's own kit),
+ * and how earlier flags ended (repairs reported, false alarms).
+ *
+ * @param mechanic     the mechanic whose own pumps these are; null for a depot's report
+ * @param stockCounted where the stock set against the parts is, in words
  */
-public record ProbablyDownReport(String depotCode, String method, Long forecastRunId, List<Pump> pumps,
-                                 List<PartNeed> parts, long closedByRepair, long falseAlarms) {
-    /** One flagged pump; {@code expectedRepairsByFamily} and {@code expectedParts} are probability-weighted. */
+public record ProbablyDownReport(String depotCode, String mechanic, LocalDate asOf, String method, Long forecastRunId,
+                                 List<Pump> pumps, List<PartNeed> parts, String stockCounted, long closedByRepair,
+                                 long falseAlarms) {
+    /**
+     * One flagged pump; {@code expectedRepairsByFamily} and {@code expectedParts} are probability-weighted.
+     * {@code openRepairRef}: a breakdown repair reported since the flag, which closes it at the next check (else null).
+     */
     public record Pump(String assetId, String assignedMechanic, String state, LocalDate stoppedFrom,
-                       LocalDate flaggedOn, double probabilityDown, double baselineHoursPerDay,
-                       Map<String, Double> expectedRepairsByFamily, Map<String, Double> expectedParts) {
+                       LocalDate flaggedOn, long daysSinceUseFell, double probabilityDown, double baselineHoursPerDay,
+                       String openRepairRef, Map<String, Double> expectedRepairsByFamily,
+                       Map<String, Double> expectedParts) {
     }
 
-    /** A part the flagged pumps are expected to need, against stock at the depot and in its kits. */
+    /**
+     * A part the flagged pumps are expected to need, against stock; {@code onHandDepot} is null in a mechanic's report
+     * (the depot's shelves are outside a mechanic's scope), and {@code onHandKits} is then the mechanic's own kit.
+     */
     public record PartNeed(String partNumber, double expectedUnits, BigDecimal onHandDepot, BigDecimal onHandKits,
                            boolean enoughInStock) {
     }

@@ -2,21 +2,20 @@ package org.depotcast.sensors;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.access.AccessScope;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.BomLine;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.sensors.StoppedPumpParts;
 import org.depotcast.fleet.Pump;
-import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.RepairRecords;
 import org.depotcast.forecasting.FleetModelResponse;
 import org.depotcast.forecasting.ForecastQueryService;
-import org.depotcast.stock.Location;
-import org.depotcast.stock.LocationService;
 
 import java.math.BigDecimal;
+import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
@@ -24,8 +23,9 @@ import java.util.Map;
 import java.util.TreeMap;
 
 /**
- * Per depot, the pumps probably down ({@link StopFlagService}) with the parts expected for each from the latest
- * forecast run's fleet models ({@link StoppedPumpParts}), summed and set against stock at the depot and its kits.
+ * Per depot (or a mechanic's own pumps), the pumps probably down ({@link StopFlagService}) with the parts expected
+ * for each from the latest forecast run's fleet models ({@link StoppedPumpParts}), summed and set against the stock
+ * the caller sees ({@link SensorAreas}).
  */
 @ApplicationScoped
 public class ProbablyDownService {
@@ -35,32 +35,31 @@ public class ProbablyDownService {
             + "family's share of the pump's fleet-model breakdown rate (depth, age, load) times units per repair.";
 
     private final StopFlagService flags;
-    private final PumpService pumps;
-    private final LocationService locations;
-    private final DepotStock stock;
+    private final SensorAreas areas;
+    private final RepairRecords repairRecords;
     private final ForecastQueryService forecasts;
-    private final AccessScope scope;
     private final SystemWork system;
 
-    ProbablyDownService(StopFlagService flags, PumpService pumps, LocationService locations, DepotStock stock,
-                        ForecastQueryService forecasts, AccessScope scope, SystemWork system) {
+    ProbablyDownService(StopFlagService flags, SensorAreas areas, RepairRecords repairRecords,
+                        ForecastQueryService forecasts, SystemWork system) {
         this.flags = flags;
-        this.pumps = pumps;
-        this.locations = locations;
-        this.stock = stock;
+        this.areas = areas;
+        this.repairRecords = repairRecords;
         this.forecasts = forecasts;
-        this.scope = scope;
         this.system = system;
     }
 
+    /**
+     * The report for a depot the caller may see, or for a mechanic naming none, their own pumps against their kit
+     * ({@link SensorAreas}); {@code today} dates the days since use fell.
+     */
     @Transactional
-    public ProbablyDownReport atDepot(String depotCode) {
-        Location depot = locations.require("depot", depotCode);
-        scope.require(depot.id, depot.code);
+    public ProbablyDownReport report(String depotCode, LocalDate today) {
+        SensorArea area = areas.resolve(depotCode);
         Map<Long, Pump> byId = new HashMap<>();
-        pumps.search(depotCode, null).forEach(p -> byId.put(p.id, p));
+        area.pumps().forEach(p -> byId.put(p.id, p));
         List<StopFlag> all = flags.flagsOf(byId.keySet());
-        // Fleet models are programme-wide; only this depot's pumps are shown.
+        // Fleet models are programme-wide; only the area's pumps are shown.
         Map<ComponentFamily, FleetModelResponse> models = system.call("sensor-parts", this::fleetModels);
         List<ProbablyDownReport.Pump> shown = new ArrayList<>();
         Map<String, Double> needed = new TreeMap<>();
@@ -72,13 +71,19 @@ public class ProbablyDownService {
             StoppedPumpParts.Expectation expectation = expect(pump, flag, models);
             expectation.unitsByPart().forEach((part, units) -> needed.merge(part, units, Double::sum));
             shown.add(new ProbablyDownReport.Pump(pump.assetId, pump.assignedMechanic, StopFlag.State.OPEN.words,
-                    flag.stoppedFrom, flag.flaggedOn, flag.probability.doubleValue(), flag.baselineHours.doubleValue(),
+                    flag.stoppedFrom, flag.flaggedOn, Math.max(0, ChronoUnit.DAYS.between(flag.stoppedFrom, today)),
+                    flag.probability.doubleValue(), flag.baselineHours.doubleValue(),
+                    repairRecords.factsOf(pump.id).openRepairRef(),
                     expectation.repairsByFamily(), expectation.unitsByPart()));
         }
+        // Most likely down first, so the parts for the surest cases are read first.
+        shown.sort(Comparator.comparingDouble(ProbablyDownReport.Pump::probabilityDown).reversed()
+                .thenComparing(ProbablyDownReport.Pump::assetId));
         long repaired = all.stream().filter(f -> f.state == StopFlag.State.REPAIR_REPORTED).count();
         long falseAlarms = all.stream().filter(f -> f.state == StopFlag.State.FALSE_ALARM).count();
-        return new ProbablyDownReport(depot.code, METHOD, models.values().stream().findFirst()
-                .map(FleetModelResponse::runId).orElse(null), shown, against(depot, needed), repaired, falseAlarms);
+        Long runId = models.values().stream().findFirst().map(FleetModelResponse::runId).orElse(null);
+        return new ProbablyDownReport(area.depotCode(), area.mechanic(), today, METHOD, runId, shown,
+                against(area, needed), area.stockWords(), repaired, falseAlarms);
     }
 
     private Map<ComponentFamily, FleetModelResponse> fleetModels() {
@@ -111,15 +116,14 @@ public class ProbablyDownService {
         return StoppedPumpParts.expect(flag.probability.doubleValue(), rates, bom);
     }
 
-    private List<ProbablyDownReport.PartNeed> against(Location depot, Map<String, Double> needed) {
-        Map<String, BigDecimal> atDepot = stock.depotOnly(depot.code);
-        Map<String, BigDecimal> withKits = stock.depotAndKits(depot.code);
+    private static List<ProbablyDownReport.PartNeed> against(SensorArea area, Map<String, Double> needed) {
         List<ProbablyDownReport.PartNeed> parts = new ArrayList<>();
         needed.forEach((part, units) -> {
-            BigDecimal depotUnits = atDepot.getOrDefault(part, BigDecimal.ZERO);
-            BigDecimal kitUnits = withKits.getOrDefault(part, BigDecimal.ZERO).subtract(depotUnits);
+            BigDecimal depotUnits = area.atDepot() == null ? null : area.atDepot().getOrDefault(part, BigDecimal.ZERO);
+            BigDecimal kitUnits = area.inKits().getOrDefault(part, BigDecimal.ZERO);
+            BigDecimal held = depotUnits == null ? kitUnits : depotUnits.add(kitUnits);
             parts.add(new ProbablyDownReport.PartNeed(part, units, depotUnits, kitUnits,
-                    depotUnits.add(kitUnits).doubleValue() >= Math.ceil(units - 1e-9)));
+                    held.doubleValue() >= Math.ceil(units - 1e-9)));
         });
         return parts;
     }

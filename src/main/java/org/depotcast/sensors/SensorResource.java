@@ -16,7 +16,6 @@ import jakarta.ws.rs.core.HttpHeaders;
 import jakarta.ws.rs.core.MediaType;
 import org.depotcast.access.Roles;
 import org.depotcast.common.DateBounds;
-import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.QueryParams;
 
 import java.io.InputStream;
@@ -77,12 +76,9 @@ class SensorResource {
 
     @GET
     @Path("probably-down")
-    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.MECHANIC})
     public ProbablyDownReport probablyDown(@QueryParam("depot") String depot) {
-        if (depot == null || depot.isBlank()) {
-            throw new InvalidInputException("depot", "required: the depot's code");
-        }
-        return probablyDown.atDepot(depot);
+        return probablyDown.report(depot, DateBounds.today());
     }
 
     record StopCheckResult(LocalDate day, int probablyDown) {
@@ -99,11 +95,8 @@ class SensorResource {
 
     @GET
     @Path("service-plan")
-    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.MECHANIC})
     public ServicePlanReport servicePlan(@QueryParam("depot") String depot) {
-        if (depot == null || depot.isBlank()) {
-            throw new InvalidInputException("depot", "required: the depot's code");
-        }
         return servicePlan.planAt(depot, DateBounds.today());
     }
 }

@@ -5,7 +5,6 @@ import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.BomLine;
 import org.depotcast.core.sensors.ServiceByHours;
 import org.depotcast.fleet.Pump;
-import org.depotcast.fleet.PumpService;
 import org.depotcast.repairs.ServiceDue;
 import org.depotcast.repairs.ServiceDueService;
 
@@ -30,22 +29,22 @@ public class SensorServicePlanService {
     static final int HORIZON_DAYS = 90;
 
     private final ServiceDueService schedule;
-    private final PumpService pumps;
+    private final SensorAreas areas;
     private final SensorUsageQuery usage;
-    private final DepotStock stock;
 
-    SensorServicePlanService(ServiceDueService schedule, PumpService pumps, SensorUsageQuery usage, DepotStock stock) {
+    SensorServicePlanService(ServiceDueService schedule, SensorAreas areas, SensorUsageQuery usage) {
         this.schedule = schedule;
-        this.pumps = pumps;
+        this.areas = areas;
         this.usage = usage;
-        this.stock = stock;
     }
 
+    /** For a depot the caller may see, or for a mechanic naming none, their own pumps and kit ({@link SensorAreas}). */
     @Transactional
     public ServicePlanReport planAt(String depotCode, LocalDate today) {
+        SensorArea area = areas.resolve(depotCode);
         Map<String, Pump> byAsset = new HashMap<>();
-        pumps.search(depotCode, null).forEach(p -> byAsset.put(p.assetId, p));
-        List<ServiceDue> due = schedule.dueAt(today, depotCode);
+        area.pumps().forEach(p -> byAsset.put(p.assetId, p));
+        List<ServiceDue> due = schedule.dueAt(today, area.mechanic() == null ? area.depotCode() : null);
         Map<Long, LocalDate> from = new HashMap<>();
         due.forEach(d -> from.put(byAsset.get(d.assetId()).id, d.countedFrom()));
         Map<Long, SensorUsageQuery.ReadSince> read = usage.readSince(from, today, ServiceByHours.RECENT_DAYS);
@@ -66,12 +65,13 @@ public class SensorServicePlanService {
         }
         rows.sort(Comparator.comparing(ServicePlanReport.PumpDue::dueOn, Comparator.nullsLast(Comparator.naturalOrder()))
                 .thenComparing(ServicePlanReport.PumpDue::assetId));
-        return new ServicePlanReport(depotCode, today, rows, weeks(depotCode, today, rows, byAsset));
+        return new ServicePlanReport(area.depotCode(), area.mechanic(), today, rows,
+                weeks(area.held(), today, rows, byAsset), area.stockWords());
     }
 
     /** Week k covers today + 7k … today + 7k + 6; a pump already overdue counts in the first week. */
-    private List<ServicePlanReport.Week> weeks(String depotCode, LocalDate today, List<ServicePlanReport.PumpDue> rows,
-                                               Map<String, Pump> byAsset) {
+    private static List<ServicePlanReport.Week> weeks(Map<String, BigDecimal> inStock, LocalDate today,
+                                                      List<ServicePlanReport.PumpDue> rows, Map<String, Pump> byAsset) {
         int weekCount = (HORIZON_DAYS + 6) / 7;
         List<List<String>> pumpsDue = new ArrayList<>();
         List<Map<String, Double>> units = new ArrayList<>();
@@ -93,7 +93,6 @@ public class SensorServicePlanService {
                 }
             }
         }
-        Map<String, BigDecimal> inStock = stock.depotAndKits(depotCode);
         Map<String, Double> toDate = new TreeMap<>();
         List<ServicePlanReport.Week> weeks = new ArrayList<>();
         for (int w = 0; w < weekCount; w++) {
