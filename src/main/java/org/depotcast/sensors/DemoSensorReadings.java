@@ -28,12 +28,15 @@ import java.util.Map;
  * Demo mode: after the demo programme is loaded, gives about 40 % of its pumps a year of daily sensor readings up to
  * yesterday, made from each pump's recorded load and its recorded breakdowns ({@link DemoSensorSeries}), seeded so
  * every first start makes the same readings. Written as whole pump-months straight through the store (a few
- * thousand rows), then judged for stops once.
+ * thousand rows), then judged for stops once. One steady pump per depot ends the year with a stop nobody has reported
+ * yet ({@value #UNREPORTED_STOP_DAYS} days of near-nothing use), so the demo shows pumps probably down.
  */
 @ApplicationScoped
 class DemoSensorReadings {
     static final long SEED = 14;
     static final int DAYS = 365;
+    /** Days of near-nothing use at the end of the year for the one pump per depot whose stop nobody reported yet. */
+    static final int UNREPORTED_STOP_DAYS = 3;
 
     private final PumpService pumps;
     private final RepairService repairs;
@@ -84,7 +87,10 @@ class DemoSensorReadings {
             }
         }
         Map<Long, MonthDays> months = new LinkedHashMap<>();
-        for (Pump pump : pumps.all()) {
+        java.util.Set<String> depotsWithUnreportedStop = new java.util.HashSet<>();
+        List<Pump> all = new ArrayList<>(pumps.all());
+        all.sort(java.util.Comparator.comparing(p -> p.assetId));
+        for (Pump pump : all) {
             if (pump.status == PumpStatus.DECOMMISSIONED || !DemoSensorSeries.hasSensor(pump.assetId, SEED)) {
                 continue;
             }
@@ -94,6 +100,10 @@ class DemoSensorReadings {
             }
             double[] hours = DemoSensorSeries.of(pump.assetId, SEED, pump.usageHoursPerDay.doubleValue(), firstDay,
                     DAYS, stops).hours();
+            if (quietLately(pump, breakdowns.getOrDefault(pump.id, List.of()), lastDay, firstDay)
+                    && depotsWithUnreportedStop.add(pump.depot.code)) {
+                stopUnreported(hours);
+            }
             for (int d = 0; d < DAYS; d++) {
                 LocalDate day = firstDay.plusDays(d);
                 if (Double.isNaN(hours[d]) || day.isBefore(pump.installedOn)) {
@@ -106,5 +116,23 @@ class DemoSensorReadings {
         }
         store.write(new ArrayList<>(months.entrySet()));
         return months.size();
+    }
+
+    /**
+     * Every recorded breakdown is reported, so without this the demo would show no pump probably down: a working
+     * pump in steady use for the whole year, with no breakdown in its last 60 days, is one that may stop unseen.
+     */
+    private static boolean quietLately(Pump pump, List<Repair> breakdowns, LocalDate lastDay, LocalDate firstDay) {
+        LocalDate recent = lastDay.minusDays(60);
+        return pump.status == PumpStatus.WORKING && pump.installedOn.isBefore(firstDay)
+                && pump.usageHoursPerDay.doubleValue() >= 4
+                && breakdowns.stream().noneMatch(r -> r.fixedOn == null || r.fixedOn.isAfter(recent));
+    }
+
+    /** Use near nothing on the last days, as the planted breakdowns look, with no repair reported. */
+    private static void stopUnreported(double[] hours) {
+        for (int d = DAYS - UNREPORTED_STOP_DAYS; d < DAYS; d++) {
+            hours[d] = d % 2 == 0 ? 0 : 0.05;
+        }
     }
 }
