@@ -3,7 +3,9 @@ package org.depotcast.forecasting;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.DemandProfile;
 import org.depotcast.core.forecast.ErrorScores;
+import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.ForecastMethod;
+import org.depotcast.core.forecast.PumpMonths;
 import org.depotcast.core.forecast.SeriesFitter;
 import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
@@ -34,8 +36,8 @@ final class DemandAssembler {
 
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, ForecastModelDefinition> definitions;
-    private final Map<ComponentFamily, FleetModel> models;
-    private final Map<ComponentFamily, FleetModel> holdoutModels;
+    private final Map<ComponentFamily, FleetRateModel> models;
+    private final Map<ComponentFamily, FleetRateModel> holdoutModels;
     private final int horizon;
     private final int months;
     private final Map<String, double[]> history = new LinkedHashMap<>();
@@ -47,7 +49,7 @@ final class DemandAssembler {
     private Map<String, FleetCredibility.Weight> weights = Map.of();
 
     DemandAssembler(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
-                    Map<ComponentFamily, FleetModel> models, Map<ComponentFamily, FleetModel> holdoutModels, int horizon) {
+                    Map<ComponentFamily, FleetRateModel> models, Map<ComponentFamily, FleetRateModel> holdoutModels, int horizon) {
         this.snapshot = snapshot;
         this.definitions = definitions;
         this.models = models;
@@ -55,7 +57,7 @@ final class DemandAssembler {
         this.horizon = horizon;
         this.months = snapshot.months();
         this.credibility = new FleetCredibility(snapshot, models);
-        this.horizonDemand = new HorizonDemand(snapshot, definitions, horizon);
+        this.horizonDemand = new HorizonDemand(new FleetOutlook(snapshot, definitions, models, horizon));
         collect();
     }
 
@@ -65,11 +67,7 @@ final class DemandAssembler {
     }
 
     private static List<String> keysOf(long partId, List<String> locations) {
-        List<String> keys = new ArrayList<>(locations.size());
-        for (String location : locations) {
-            keys.add(key(partId, location));
-        }
-        return keys;
+        return locations.stream().map(location -> key(partId, location)).toList();
     }
 
     private List<String> locationsOf(long depotId, String mechanic) {
@@ -101,32 +99,32 @@ final class DemandAssembler {
         long origin = snapshot.historyEnd().toEpochDay();
         for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
             List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
-            boolean activeNow = pump.endDay() > origin;
             int installedMonth = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(pump.installedDay())));
             credibility.addPump(pump, locations, part -> Long.toString(part.partId()));
+            PumpMonths ahead = pump.endDay() > origin ? horizonDemand.monthsOf(pump) : null;
             for (FleetSnapshot.BomPart part : pump.bom()) {
-                addFleet(pump, part, locations, activeNow, origin);
+                addFleet(pump, part, locations, ahead);
                 for (String location : locations) {
                     firstMonth.merge(key(part.partId(), location), installedMonth, Math::min);
                 }
             }
-            if (activeNow) {
-                horizonDemand.addServices(pump, part -> keysOf(part.partId(), locations));
+            if (ahead != null) {
+                horizonDemand.addServices(pump, ahead, part -> keysOf(part.partId(), locations));
             }
         }
         // Every series with a fleet expectation or a history gets a forecast.
         horizonDemand.keys().forEach(k -> history.computeIfAbsent(k, x -> new double[months]));
     }
 
+    /** {@code ahead}: the pump's months over the horizon, null when it is out of service by the origin. */
     private void addFleet(FleetSnapshot.PumpRecord pump, FleetSnapshot.BomPart part, List<String> locations,
-                          boolean activeNow, long origin) {
-        FleetModel model = models.get(part.family());
-        FleetModel holdout = holdoutModels.get(part.family());
-        if (model == null) {
+                          PumpMonths ahead) {
+        FleetRateModel holdout = holdoutModels.get(part.family());
+        if (!models.containsKey(part.family())) {
             return;
         }
-        if (activeNow) {
-            horizonDemand.addBreakdowns(pump, part, model, keysOf(part.partId(), locations));
+        if (ahead != null) {
+            horizonDemand.addBreakdowns(pump, part, ahead, keysOf(part.partId(), locations));
         }
         if (holdout != null) {
             double[] expected = new double[HOLDOUT_MONTHS];
@@ -137,7 +135,7 @@ final class DemandAssembler {
                 double hours = pump.usage().hoursBetween(from, to);
                 if (hours > 0) {
                     double age = ((from + to) / 2.0 - pump.installedDay()) / 365.25;
-                    double[] x = FleetModel.covariateValues(holdout.covariates(), pump.depthM(), age, hours / (to - from));
+                    double[] x = holdout.covariateValues(pump.depthM(), age, hours / (to - from));
                     expected[m] = holdout.ratePerHour(x) * hours * holdout.unitsPerEvent() * holdout.depotRatio(pump.depotId());
                 }
             }
@@ -160,17 +158,19 @@ final class DemandAssembler {
         return Math.max(0, Math.min(start, months - 1));
     }
 
-    /** Forecasts every series; {@code progress} is told after each one. */
-    List<PartForecastResult> assemble(IntConsumer progress) {
+    /** The credibility of every series under policy "auto" that the fleet model covers, by series key. */
+    Map<String, FleetCredibility.Weight> weigh() {
         List<String> weighed = horizonDemand.fleetKeys().stream().filter(k -> policyOf(partOf(k)).equals("auto")).toList();
         java.util.Set<String> kits = new java.util.HashSet<>(snapshot.kitByMechanic().values());
-        weights = credibility.weigh(weighed, history, this::seriesStart, k -> {
+        return credibility.weigh(weighed, history, this::seriesStart, k -> {
             String location = k.substring(k.indexOf('|') + 1);
             return location.equals(PROGRAMME) ? PROGRAMME : kits.contains(location) ? "kit" : "depot";
-        }, k -> {
-            FleetModel model = models.get(snapshot.partFamilies().get(partOf(k)));
-            return model.unitsPerEvent() * (model.fit() == null ? 1 : model.fit().varianceFactor());
-        });
+        }, k -> models.get(snapshot.partFamilies().get(partOf(k))).unitDispersion());
+    }
+
+    /** Forecasts every series; {@code progress} is told after each one. */
+    List<PartForecastResult> assemble(IntConsumer progress) {
+        weights = weigh();
         // Series are independent and the maps are read-only from here on: use every core.
         java.util.concurrent.atomic.AtomicInteger done = new java.util.concurrent.atomic.AtomicInteger();
         return history.entrySet().parallelStream().map(entry -> {
@@ -224,7 +224,7 @@ final class DemandAssembler {
             monthly[m] = (useFleet ? fleet[m] * weight.ratio() : breakdown) + pm[m];
         }
         // Breakdowns' spread (process, the fitted rate's and the credibility ratio's) plus the services' timing.
-        FleetModel model = models.get(snapshot.partFamilies().get(partId));
+        FleetRateModel model = models.get(snapshot.partFamilies().get(partId));
         DemandSpread spread = horizonDemand.spread();
         double[] fleetVariance = useFleet ? spread.fleetVariance(key, fleet, weight, model == null ? null : model.fit()) : null;
         double[] serviceVariance = spread.serviceVariance(key);

@@ -2,6 +2,7 @@ package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.CredibilityRate;
+import org.depotcast.core.forecast.FleetRateModel;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -39,11 +40,11 @@ final class FleetCredibility {
     }
 
     private final FleetSnapshot snapshot;
-    private final Map<ComponentFamily, FleetModel> models;
+    private final Map<ComponentFamily, FleetRateModel> models;
     private final long[] monthStart;
     private final Map<String, double[]> expected = new HashMap<>();
 
-    FleetCredibility(FleetSnapshot snapshot, Map<ComponentFamily, FleetModel> models) {
+    FleetCredibility(FleetSnapshot snapshot, Map<ComponentFamily, FleetRateModel> models) {
         this.snapshot = snapshot;
         this.models = models;
         int months = snapshot.months();
@@ -58,7 +59,7 @@ final class FleetCredibility {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
         int months = monthStart.length - 1;
         for (FleetSnapshot.BomPart part : pump.bom()) {
-            FleetModel model = models.get(part.family());
+            FleetRateModel model = models.get(part.family());
             if (model == null) {
                 continue;
             }
@@ -73,7 +74,7 @@ final class FleetCredibility {
                     }
                     double hours = pump.usage().hoursBetween(from, to);
                     double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                    double[] x = FleetModel.covariateValues(model.covariates(), pump.depthM(), age, hours / (to - from));
+                    double[] x = model.covariateValues(pump.depthM(), age, hours / (to - from));
                     units[m] = model.ratePerHour(x) * hours * model.unitsPerEvent() * model.depotRatio(pump.depotId());
                 }
                 return units;

@@ -1,8 +1,10 @@
 package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PoissonFit;
 import org.depotcast.core.forecast.PoissonRegression;
+import org.depotcast.core.forecast.RateCovariate;
 import org.depotcast.core.forecast.RateShrinkage;
 
 import java.time.LocalDate;
@@ -50,8 +52,19 @@ final class FleetModelFitter {
         }
     }
 
+    /** Every declared family's model on one snapshot; families fit independently, one per core. */
+    static Map<ComponentFamily, FleetRateModel> fitAll(Map<ComponentFamily, ForecastModelDefinition> definitions,
+                                                       FleetSnapshot snapshot, int skipRecentBlocks) {
+        Map<ComponentFamily, Breakdowns> breakdowns = Breakdowns.of(snapshot);
+        Map<ComponentFamily, FleetRateModel> models = new java.util.EnumMap<>(ComponentFamily.class);
+        definitions.values().parallelStream()
+                .map(d -> Map.entry(d.family(), fit(d, snapshot, breakdowns.get(d.family()), skipRecentBlocks)))
+                .toList().forEach(e -> models.put(e.getKey(), e.getValue()));
+        return models;
+    }
+
     /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
-    static FleetModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns,
+    static FleetRateModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns,
                           int skipRecentBlocks) {
         ComponentFamily family = definition.family();
         Map<Long, long[]> eventDays = breakdowns == null ? Map.of() : breakdowns.daysByPump();
@@ -85,7 +98,7 @@ final class FleetModelFitter {
                     }
                 }
                 double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                covariates[rows] = FleetModel.covariateValues(definition.covariates(), pump.depthM(), age, hours / (to - from));
+                covariates[rows] = RateCovariate.values(definition.covariates(), pump.depthM(), age, hours / (to - from));
                 y[rows] = count;
                 e[rows] = hours;
                 depots[rows] = pump.depotId();
@@ -107,7 +120,7 @@ final class FleetModelFitter {
             }
         }
         Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, java.util.Arrays.copyOf(depots, rows));
-        return new FleetModel(family, definition.covariates(), fit, prior, units, events, exposure, ratios);
+        return new FleetRateModel(definition.covariates(), fit, prior, units, events, exposure, ratios);
     }
 
     private static Map<Long, Double> depotRatios(PoissonFit fit, double[][] covariates, double[] y, double[] e,

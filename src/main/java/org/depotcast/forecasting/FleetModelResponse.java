@@ -1,6 +1,7 @@
 package org.depotcast.forecasting;
 
-import java.util.List;
+import org.depotcast.core.forecast.RateCovariate;
+
 import java.util.Map;
 
 /**
@@ -12,18 +13,16 @@ public record FleetModelResponse(String family, long runId, String source, Map<S
                                  Double dispersion, boolean overdispersed, int events, double exposureHours,
                                  double unitsPerEvent, double eventsPer1000Hours) {
     /**
-     * The fitted breakdown rate per operating hour of one pump: exp(intercept + Σ coefficient × covariate), the
-     * covariates as the fit made them ({@link FleetModel#covariateValues}). Depot ratios are not applied.
+     * The fitted breakdown rate per operating hour of one pump: exp(intercept + Σ coefficient × covariate), each
+     * term computed as the fit made it ({@link RateCovariate#value}). Depot ratios are not applied.
      */
     public double eventsPerHour(double depthM, double ageYears, double hoursPerDay) {
         double eta = coefficients.getOrDefault("intercept", 0.0);
         for (Map.Entry<String, Double> term : coefficients.entrySet()) {
-            if (term.getKey().equals("intercept")) {
-                continue;
+            if (!term.getKey().equals("intercept")) {
+                eta += term.getValue() * RateCovariate.valueOf(term.getKey().toUpperCase(java.util.Locale.ROOT))
+                        .value(depthM, ageYears, hoursPerDay);
             }
-            ForecastModelDefinition.Covariate covariate = ForecastModelDefinition.Covariate.valueOf(
-                    term.getKey().toUpperCase(java.util.Locale.ROOT));
-            eta += term.getValue() * FleetModel.covariateValues(List.of(covariate), depthM, ageYears, hoursPerDay)[0];
         }
         return Math.exp(eta);
     }

@@ -89,14 +89,14 @@ public class ForecastModelFiles {
             }
         }
         ComponentFamily family = enumField(file, root, "family", ComponentFamily.class);
-        List<ForecastModelDefinition.Covariate> covariates = new ArrayList<>();
+        List<org.depotcast.core.forecast.RateCovariate> covariates = new ArrayList<>();
         JsonNode list = root.path("covariates");
         if (!list.isMissingNode()) {
             if (!list.isArray()) {
                 throw new MalformedModelFile(file, "covariates", "must be a list such as [\"log_depth\", \"age_years\"]");
             }
             for (JsonNode item : list) {
-                covariates.add(parseEnum(file, "covariates", item.asText(), ForecastModelDefinition.Covariate.class));
+                covariates.add(parseEnum(file, "covariates", item.asText(), org.depotcast.core.forecast.RateCovariate.class));
             }
         }
         double prior = root.path("priorEventsPer1000Hours").isMissingNode() ? 0.02

@@ -1,9 +1,10 @@
 package org.depotcast.forecasting;
 
+import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PoissonFit;
 
 import java.util.Arrays;
-import java.util.Locale;
 import java.util.stream.Collectors;
 
 /** Converts results to stored rows and back; numbers lists are semicolon-separated. */
@@ -35,13 +36,13 @@ final class ForecastRecords {
         return Double.isFinite(value) ? value : null;
     }
 
-    static FleetModelFitRecord fit(long runId, FleetModel model) {
+    static FleetModelFitRecord fit(long runId, ComponentFamily family, FleetRateModel model) {
         FleetModelFitRecord record = new FleetModelFitRecord();
         record.runId = runId;
-        record.family = model.family().name();
+        record.family = family.name();
         record.source = model.source();
         PoissonFit fit = model.fit();
-        record.covariates = fit == null ? "" : model.covariates().stream().map(c -> c.name().toLowerCase(Locale.ROOT))
+        record.covariates = fit == null ? "" : model.covariates().stream().map(org.depotcast.core.forecast.RateCovariate::term)
                 .collect(Collectors.joining(";"));
         record.coefficients = fit == null ? join(new double[]{Math.log(model.priorPerHour())}) : join(fit.coefficients());
         record.standardErrors = fit == null ? "" : join(fit.standardErrors());

@@ -9,6 +9,7 @@ import org.depotcast.access.AccessScope;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.common.ConflictException;
+import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.jobs.JobFailed;
 import org.depotcast.jobs.JobKind;
 import org.depotcast.jobs.JobProgress;
@@ -19,7 +20,6 @@ import org.eclipse.microprofile.config.inject.ConfigProperty;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
-import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
@@ -184,16 +184,8 @@ public class ForecastRunService {
                 snapshot.consumption().size(), (System.nanoTime() - started) / 1_000_000);
         progress.phase("fitting the fleet models");
         // Families fit independently: one per core.
-        Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
-        Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
-        Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
-        definitions.values().parallelStream()
-                .map(d -> new FleetModel[]{FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 0),
-                        FleetModelFitter.fit(d, snapshot, breakdowns.get(d.family()), 1)})
-                .toList().forEach(pair -> {
-                    models.put(pair[0].family(), pair[0]);
-                    holdout.put(pair[1].family(), pair[1]);
-                });
+        Map<ComponentFamily, FleetRateModel> models = FleetModelFitter.fitAll(definitions, snapshot, 0);
+        Map<ComponentFamily, FleetRateModel> holdout = FleetModelFitter.fitAll(definitions, snapshot, 1);
         DemandAssembler assembler = new DemandAssembler(snapshot, definitions, models, holdout, horizonMonths);
         int total = assembler.seriesCount();
         progress.phase("forecasting each part at each location");
@@ -221,11 +213,9 @@ public class ForecastRunService {
         });
     }
 
-    private void store(long runId, Map<ComponentFamily, FleetModel> models, List<PartForecastResult> results) {
+    private void store(long runId, Map<ComponentFamily, FleetRateModel> models, List<PartForecastResult> results) {
         var em = repository.getEntityManager();
-        for (FleetModel model : models.values()) {
-            em.persist(ForecastRecords.fit(runId, model));
-        }
+        models.forEach((family, model) -> em.persist(ForecastRecords.fit(runId, family, model)));
         int written = 0;
         for (PartForecastResult result : results) {
             em.persist(ForecastRecords.forecast(runId, result));

@@ -3,29 +3,23 @@ package org.depotcast.spend;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.Part;
-import org.depotcast.catalogue.PartService;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.spend.SpendDraws;
 import org.depotcast.core.spend.SpendSimulation;
-import org.depotcast.forecasting.FleetModelResponse;
-import org.depotcast.forecasting.FleetModelsAsOf;
 import org.depotcast.forecasting.FleetSnapshot;
 import org.depotcast.forecasting.FleetSnapshotLoader;
-import org.depotcast.stock.LocationService;
 
 import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
 /**
  * How good the projection has been on this programme: for each of the last complete financial years (see
- * {@link FinancialYearService}), the one-year projection made with only the data before that year began (fleet models refitted on it, the fleet as it
- * stood), beside what the repairs of that year actually used, both at today's catalogue prices (price history is not
+ * {@link FinancialYearService}), the one-year projection made with only the data before that year began (the spend
+ * lines as of that day: fleet models refitted on the history before it, the fleet as it stood), beside what the repairs of that year actually used, both at today's catalogue prices (price history is not
  * kept). Stock top-ups are left out: they are purchases, not use.
  */
 @ApplicationScoped
@@ -33,19 +27,15 @@ public class BackCheckService {
     private static final int DRAWS = 4_000;
 
     private final FleetSnapshotLoader fleet;
-    private final FleetModelsAsOf models;
-    private final PartService parts;
-    private final LocationService locations;
+    private final SpendLineService lines;
     private final AccessScope scope;
     private final FinancialYearService financialYears;
 
-    BackCheckService(FleetSnapshotLoader fleet, FleetModelsAsOf models, PartService parts, LocationService locations,
-                     AccessScope scope, FinancialYearService financialYears) {
+    BackCheckService(FleetSnapshotLoader fleet, SpendLineService lines, AccessScope scope,
+                     FinancialYearService financialYears) {
         this.financialYears = financialYears;
         this.fleet = fleet;
-        this.models = models;
-        this.parts = parts;
-        this.locations = locations;
+        this.lines = lines;
         this.scope = scope;
     }
 
@@ -62,29 +52,23 @@ public class BackCheckService {
         if (years < 1 || years > 5) {
             throw new InvalidInputException("years", "must be between 1 and 5, was " + years);
         }
-        Map<Long, Part> partsById = new HashMap<>();
-        parts.all().forEach(p -> partsById.put(p.id, p));
-        Map<Long, String> codes = new HashMap<>();
-        locations.all().forEach(l -> codes.put(l.id, l.code));
+        Map<Long, Part> partsById = lines.partsById();
         List<YearCheck> checks = new ArrayList<>();
         // A snapshot as of a year's start holds nothing dated after it: what was used comes from today's records.
         List<FleetSnapshot.Consumption> used = fleet.load(LocalDate.now(ZoneOffset.UTC), 36).consumption();
         for (FinancialYears.Period period : financialYears.current().completedBefore(LocalDate.now(ZoneOffset.UTC), years)) {
             LocalDate origin = period.startsOn();
             int year = origin.getYear();
-            FleetSnapshot snapshot = fleet.load(origin, 36);
-            Map<ComponentFamily, FleetModelResponse> fits = models.fit(snapshot);
             ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + period.label(), 1, null, null, null, null,
                     null, null, null, DRAWS, (long) year);
-            SpendLineBuilder builder = new SpendLineBuilder(fits, partsById, oneYear, List.of(period));
-            builder.addFleet(snapshot, codes);
-            var lines = builder.lines();
+            SpendLineBuilder builder = lines.build(oneYear, List.of(period), partsById, false);
+            var yearLines = builder.lines();
             double expectedBreakdowns = 0, expectedServices = 0;
-            for (var line : lines) {
+            for (var line : yearLines) {
                 expectedBreakdowns += line.expectedEvents() * line.unitsPerEvent() * line.unitPrice();
                 expectedServices += line.deterministicUnits() * line.unitPrice();
             }
-            SpendDraws draws = SpendSimulation.run(lines, 1, builder.familyNames.size(), builder.partNumbers.size(),
+            SpendDraws draws = SpendSimulation.run(yearLines, 1, builder.familyNames.size(), builder.partNumbers.size(),
                     Math.max(1, builder.depotCodes.size()), builder.groupLogSd, builder.groupDispersion, DRAWS, year);
             SpendSimulation.Summary s = SpendSimulation.Summary.of(draws.total(0));
             double actualBreakdowns = 0, actualServices = 0;

@@ -26,11 +26,14 @@ import java.util.Map;
 @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.STORES_OFFICER})
 class SpendResource {
     private final SpendService service;
+    private final SpendScenarioService scenarios;
     private final BackCheckService backCheck;
     private final FinancialYearService financialYears;
 
-    SpendResource(SpendService service, BackCheckService backCheck, FinancialYearService financialYears) {
+    SpendResource(SpendService service, SpendScenarioService scenarios, BackCheckService backCheck,
+                  FinancialYearService financialYears) {
         this.service = service;
+        this.scenarios = scenarios;
         this.backCheck = backCheck;
         this.financialYears = financialYears;
     }
@@ -72,11 +75,12 @@ class SpendResource {
     record ScenarioView(long id, String name, ScenarioDefinition definition) {
     }
 
-    record RunView(long id, long scenarioId, String status, String phase, int draws, long seed, String message,
-                   java.time.OffsetDateTime startedAt, java.time.OffsetDateTime finishedAt, Long jobId) {
+    record RunView(long id, long scenarioId, java.time.LocalDate origin, String status, String phase, int draws,
+                   long seed, String message, java.time.OffsetDateTime startedAt, java.time.OffsetDateTime finishedAt,
+                   Long jobId) {
         static RunView from(SpendRun r) {
-            return new RunView(r.id, r.scenarioId, r.status.name(), r.phase, r.draws, r.seed, r.message, r.startedAt,
-                    r.finishedAt, r.jobId);
+            return new RunView(r.id, r.scenarioId, r.origin, r.status.name(), r.phase, r.draws, r.seed, r.message,
+                    r.startedAt, r.finishedAt, r.jobId);
         }
     }
 
@@ -84,7 +88,7 @@ class SpendResource {
     @Path("scenarios")
     @Consumes(MediaType.APPLICATION_JSON)
     public Response save(@Valid @NotNull ScenarioDefinition definition, UriInfo uri) {
-        SpendScenario s = service.save(definition);
+        SpendScenario s = scenarios.save(definition);
         return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(s.id)).build())
                 .entity(new ScenarioView(s.id, s.name, definition)).build();
     }
@@ -93,28 +97,31 @@ class SpendResource {
     @Path("scenarios/{id}")
     @Consumes(MediaType.APPLICATION_JSON)
     public ScenarioView update(@PathParam("id") long id, @Valid @NotNull ScenarioDefinition definition) {
-        SpendScenario s = service.update(id, definition);
+        SpendScenario s = scenarios.update(id, definition);
         return new ScenarioView(s.id, s.name, definition);
     }
 
     @GET
     @Path("scenarios/{id}")
     public ScenarioView scenario(@PathParam("id") long id) {
-        SpendScenario s = service.scenario(id);
-        return new ScenarioView(s.id, s.name, service.fromJson(s.definition));
+        SpendScenario s = scenarios.scenario(id);
+        return new ScenarioView(s.id, s.name, scenarios.fromJson(s.definition));
     }
 
     @GET
     @Path("scenarios")
     public List<ScenarioView> scenarios() {
-        return service.scenarios().stream().map(s -> new ScenarioView(s.id, s.name, service.fromJson(s.definition))).toList();
+        return scenarios.scenarios().stream().map(s -> new ScenarioView(s.id, s.name, scenarios.fromJson(s.definition))).toList();
     }
 
-    /** Starts a run; 202 with the run to poll. */
+    /**
+     * Starts a run; 202 with the run to poll. {@code origin} (yyyy-mm-dd, its month's first day is used) projects
+     * from a past month with only what was known then; left out, the current month. A future one is a 400.
+     */
     @POST
     @Path("scenarios/{id}/runs")
-    public Response start(@PathParam("id") long id, UriInfo uri) {
-        SpendRun run = service.start(id);
+    public Response start(@PathParam("id") long id, @QueryParam("origin") String origin, UriInfo uri) {
+        SpendRun run = service.start(id, org.depotcast.common.QueryParams.optionalDate("origin", origin));
         return Response.accepted(RunView.from(run))
                 .location(uri.getBaseUriBuilder().path("api/spend/runs").path(Long.toString(run.id)).build()).build();
     }

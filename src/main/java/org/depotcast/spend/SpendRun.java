@@ -7,6 +7,7 @@ import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
 import jakarta.persistence.Table;
 
+import java.time.LocalDate;
 import java.time.OffsetDateTime;
 
 /** One run of a scenario; results (JSON) are written once, when it is done. */
@@ -20,6 +21,8 @@ public class SpendRun {
     public Long id;
     @Column(name = "scenario_id", nullable = false)
     public Long scenarioId;
+    /** First day of the projection: nothing dated on or after it is used (null for runs made before origins). */
+    public LocalDate origin;
     @jakarta.persistence.Enumerated(jakarta.persistence.EnumType.STRING)
     @Column(nullable = false)
     public Status status;

@@ -47,6 +47,8 @@ class ScaleBenchmark {
     @Inject
     org.depotcast.spend.SpendService spend;
     @Inject
+    org.depotcast.spend.SpendScenarioService spendScenarios;
+    @Inject
     org.depotcast.access.SystemWork system;
 
     @Test
@@ -105,7 +107,7 @@ class ScaleBenchmark {
                         + "%d transfer suggestions", DEPOTS, Figures.median(planSeconds), alerts, lines, suggestions));
 
         // Issue 6 figure: a 5-year projection with 10,000 Monte Carlo draws at the same scale.
-        long scenario = system.call("benchmark", () -> spend.save(new org.depotcast.spend.ScenarioDefinition(
+        long scenario = system.call("benchmark", () -> spendScenarios.save(new org.depotcast.spend.ScenarioDefinition(
                 "scale five years", 5, null, 2.0, null, 5.0, null, null, null, 10_000, 42L)).id);
         double[] spendSeconds = new double[3];
         for (int round = 0; round < spendSeconds.length; round++) {

@@ -43,9 +43,9 @@ class FleetHorizonTest {
     private static Map<String, PartForecastResult> forecast(FleetSnapshot snapshot) {
         Map<ComponentFamily, ForecastModelDefinition> definitions = new EnumMap<>(ComponentFamily.class);
         definitions.put(ComponentFamily.CUP_SEAL, new ForecastModelDefinition(ComponentFamily.CUP_SEAL,
-                List.of(ForecastModelDefinition.Covariate.LOG_DEPTH), 0.1, 2.0, "fleet", true, "test"));
+                List.of(org.depotcast.core.forecast.RateCovariate.LOG_DEPTH), 0.1, 2.0, "fleet", true, "test"));
         FleetModelFitter.Breakdowns breakdowns = FleetModelFitter.Breakdowns.of(snapshot).get(ComponentFamily.CUP_SEAL);
-        FleetModel model = FleetModelFitter.fit(definitions.get(ComponentFamily.CUP_SEAL), snapshot, breakdowns, 0);
+        org.depotcast.core.forecast.FleetRateModel model = FleetModelFitter.fit(definitions.get(ComponentFamily.CUP_SEAL), snapshot, breakdowns, 0);
         Map<String, PartForecastResult> byLocation = new HashMap<>();
         new DemandAssembler(snapshot, definitions, Map.of(ComponentFamily.CUP_SEAL, model),
                 Map.of(ComponentFamily.CUP_SEAL, model), 12).assemble(done -> { })

@@ -16,7 +16,7 @@ class ForecastModelFilesTest {
                 {"family": "cup_seal", "covariates": ["log_depth", "usage_hours"], "priorEventsPer1000Hours": 0.1,
                  "unitsPerEvent": 2, "methodPolicy": "sba", "preventive": true}""");
         assertEquals(ComponentFamily.CUP_SEAL, d.family());
-        assertEquals(List.of(ForecastModelDefinition.Covariate.LOG_DEPTH, ForecastModelDefinition.Covariate.USAGE_HOURS),
+        assertEquals(List.of(org.depotcast.core.forecast.RateCovariate.LOG_DEPTH, org.depotcast.core.forecast.RateCovariate.USAGE_HOURS),
                 d.covariates());
         assertEquals("sba", d.methodPolicy());
         assertTrue(d.preventive());

@@ -71,7 +71,7 @@ class ForecastOriginTest {
     private static Map<ComponentFamily, ForecastModelDefinition> definitions(String policy) {
         Map<ComponentFamily, ForecastModelDefinition> d = new EnumMap<>(ComponentFamily.class);
         for (ComponentFamily family : List.of(ComponentFamily.CUP_SEAL, ComponentFamily.O_RING)) {
-            d.put(family, new ForecastModelDefinition(family, List.of(ForecastModelDefinition.Covariate.LOG_DEPTH),
+            d.put(family, new ForecastModelDefinition(family, List.of(org.depotcast.core.forecast.RateCovariate.LOG_DEPTH),
                     0.1, 2.0, policy, true, "test"));
         }
         return d;
@@ -80,8 +80,8 @@ class ForecastOriginTest {
     private static List<PartForecastResult> forecast(FleetSnapshot snapshot, String policy) {
         Map<ComponentFamily, ForecastModelDefinition> definitions = definitions(policy);
         Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
-        Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
-        Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, org.depotcast.core.forecast.FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, org.depotcast.core.forecast.FleetRateModel> holdout = new EnumMap<>(ComponentFamily.class);
         definitions.forEach((family, d) -> {
             models.put(family, FleetModelFitter.fit(d, snapshot, breakdowns.get(family), 0));
             holdout.put(family, FleetModelFitter.fit(d, snapshot, breakdowns.get(family), 1));

@@ -81,8 +81,8 @@ class HeldOutYearTest {
             }
         }
         Map<ComponentFamily, FleetModelFitter.Breakdowns> breakdowns = FleetModelFitter.Breakdowns.of(snapshot);
-        Map<ComponentFamily, FleetModel> models = new EnumMap<>(ComponentFamily.class);
-        Map<ComponentFamily, FleetModel> holdout = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, org.depotcast.core.forecast.FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, org.depotcast.core.forecast.FleetRateModel> holdout = new EnumMap<>(ComponentFamily.class);
         definitions.forEach((family, d) -> {
             models.put(family, FleetModelFitter.fit(d, snapshot, breakdowns.get(family), 0));
             holdout.put(family, FleetModelFitter.fit(d, snapshot, breakdowns.get(family), 1));

@@ -188,6 +188,25 @@ class SpendResourceTest {
     }
 
     @Test
+    void aRunTakesAnOriginCheckedAsAForecastRunsIs() throws Exception {
+        long scenario = as("lead").contentType("application/json").body(scenario(TestData.unique("origin")))
+                .post("/api/spend/scenarios").then().statusCode(201).extract().jsonPath().getLong("id");
+        String nextMonth = LocalDate.now(java.time.ZoneOffset.UTC).withDayOfMonth(1).plusMonths(1).toString();
+        as("lead").post("/api/spend/scenarios/" + scenario + "/runs?origin=" + nextMonth).then().statusCode(400)
+                .contentType(PROBLEM).body("errors[0].field", equalTo("origin"));
+        as("lead").post("/api/spend/scenarios/" + scenario + "/runs?origin=June").then().statusCode(400)
+                .contentType(PROBLEM).body("errors[0].field", equalTo("origin"));
+        long run = as("lead").post("/api/spend/scenarios/" + scenario + "/runs?origin=2026-01-17").then().statusCode(202)
+                .body("origin", equalTo("2026-01-01")).extract().jsonPath().getLong("id");
+        for (int i = 0; i < 600 && "RUNNING".equals(as("lead").get("/api/spend/runs/" + run).jsonPath().getString("status")); i++) {
+            Thread.sleep(100);
+        }
+        as("lead").get("/api/spend/runs/" + run).then().body("status", equalTo("DONE")).body("origin", equalTo("2026-01-01"));
+        as("lead").get("/api/spend/runs/" + run + "/results").then().statusCode(200)
+                .body("years[0].startsOn", equalTo("2026-01-01"));
+    }
+
+    @Test
     void badScenariosAreRefused() {
         as("lead").contentType("application/json").body(scenario(TestData.unique("x"), "horizonYears", 11))
                 .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("horizonYears"));

@@ -1,0 +1,110 @@
+package org.depotcast.spend;
+
+import io.quarkus.narayana.jta.QuarkusTransaction;
+import jakarta.enterprise.context.ApplicationScoped;
+import org.depotcast.catalogue.BomLine;
+import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PumpModel;
+import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.forecasting.FleetOutlook;
+import org.depotcast.forecasting.FleetOutlooks;
+import org.depotcast.forecasting.FleetSnapshot;
+import org.depotcast.planning.PlanningService;
+import org.depotcast.planning.StockPolicy;
+import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationService;
+
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.List;
+import java.util.Map;
+
+/**
+ * The expected demand lines of a scenario as of an origin, from the fleet as a forecast run as of the same origin
+ * sees it ({@link FleetOutlooks}): the same snapshot, usage history (measured hours included), rate models, depot
+ * ratios and credibility, so a baseline projection's first twelve months equal the stored forecast depot by depot.
+ */
+@ApplicationScoped
+class SpendLineService {
+    private final FleetOutlooks outlooks;
+    private final PartService parts;
+    private final PumpModelService models;
+    private final LocationService locations;
+    private final PlanningService planning;
+
+    SpendLineService(FleetOutlooks outlooks, PartService parts, PumpModelService models, LocationService locations,
+                     PlanningService planning) {
+        this.outlooks = outlooks;
+        this.parts = parts;
+        this.models = models;
+        this.locations = locations;
+        this.planning = planning;
+    }
+
+    /** Parts by id, checked to share one catalogue currency. */
+    Map<Long, Part> partsById() {
+        Map<Long, Part> partsById = new HashMap<>();
+        parts.all().forEach(p -> partsById.put(p.id, p));
+        return partsById;
+    }
+
+    /** Every part in one catalogue currency; the scenario converts it with its own rate. */
+    static String currency(ScenarioDefinition definition, Map<Long, Part> partsById) {
+        String catalogue = partsById.values().stream().map(p -> p.currency).findFirst().orElse("USD");
+        for (Part p : partsById.values()) {
+            if (!p.currency.equals(catalogue)) {
+                throw new BusinessRuleException("exchangeRate", "part " + p.partNumber + " is priced in " + p.currency
+                        + ", others in " + catalogue + ": one catalogue currency is needed");
+            }
+        }
+        return definition.currency() == null ? catalogue : definition.currency();
+    }
+
+    /**
+     * The fleet's lines over {@code periods} (the first starting at the origin), the scenario's installations and,
+     * when {@code withTopUp}, the stock needed now to reach the policy levels.
+     */
+    SpendLineBuilder build(ScenarioDefinition definition, List<FinancialYears.Period> periods, Map<Long, Part> partsById,
+                           boolean withTopUp) {
+        int months = periods.stream().mapToInt(FinancialYears.Period::monthCount).sum();
+        FleetOutlook outlook = outlooks.asOf(periods.get(0).startsOn(), months);
+        SpendLineBuilder builder = new SpendLineBuilder(outlook, partsById, definition, periods);
+        builder.addFleet();
+        for (ScenarioDefinition.Installation inst : definition.installations() == null
+                ? List.<ScenarioDefinition.Installation>of() : definition.installations()) {
+            addInstallation(builder, inst);
+        }
+        if (withTopUp) {
+            String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+            for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
+                Part part = parts.require("partNumber", p.partNumber());
+                builder.addTopUp(central, part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+            }
+        }
+        return builder;
+    }
+
+    /** As {@link #build} from the first day of {@code origin}'s month over the scenario's financial years. */
+    SpendLineBuilder build(ScenarioDefinition definition, FinancialYears financialYears, LocalDate origin,
+                           Map<Long, Part> partsById) {
+        return build(definition, financialYears.projection(origin.withDayOfMonth(1), definition.horizonYears()),
+                partsById, true);
+    }
+
+    private void addInstallation(SpendLineBuilder builder, ScenarioDefinition.Installation inst) {
+        List<FleetSnapshot.BomPart> bom = new ArrayList<>();
+        int[] interval = new int[1];
+        QuarkusTransaction.requiringNew().run(() -> {
+            PumpModel model = models.require("modelCode", inst.modelCode());
+            interval[0] = model.serviceIntervalHours;
+            for (BomLine line : model.bom) {
+                bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(inst.depthM())));
+            }
+        });
+        long depotId = locations.require("depotCode", inst.depotCode()).id;
+        builder.addInstallation(inst, depotId, interval[0], bom);
+    }
+}
