@@ -28,9 +28,9 @@ final class AccuracyActuals {
     }
 
     static Stored stored(PartForecast f, String partNumber, LocalDate runHistoryFrom) {
-        double[] monthly = ForecastRecords.split(f.monthlyForecast);
-        double[] variance = ForecastRecords.split(f.monthlyVariance);
-        double[] preventive = ForecastRecords.split(f.preventiveMonthly);
+        double[] monthly = f.monthlyForecast;
+        double[] variance = f.monthlyVariance == null ? new double[0] : f.monthlyVariance;
+        double[] preventive = f.preventiveMonthly;
         double mean = 0, summed = 0;
         for (int m = 0; m < AccuracyScoring.MONTHS && m < monthly.length; m++) {
             mean += monthly[m];

@@ -57,7 +57,7 @@ public class ForecastQueryService {
         Map<Long, String> numbers = new java.util.HashMap<>();
         parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
         for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
-            double[] monthly = ForecastRecords.split(f.monthlyForecast);
+            double[] monthly = f.monthlyForecast;
             int n = Math.max(1, Math.min(months, monthly.length));
             double sum = 0;
             for (int m = 0; m < n; m++) {
@@ -161,10 +161,10 @@ public class ForecastQueryService {
     }
 
     private static StoredForecastResponse response(ForecastRun run, String partNumber, PartForecast f) {
-        double[] monthly = ForecastRecords.split(f.monthlyForecast);
-        double[] preventive = ForecastRecords.split(f.preventiveMonthly);
-        double[] history = ForecastRecords.split(f.monthlyHistory);
-        double[] variance = ForecastRecords.split(f.monthlyVariance);
+        double[] monthly = f.monthlyForecast;
+        double[] preventive = f.preventiveMonthly;
+        double[] history = f.monthlyHistory;
+        double[] variance = f.monthlyVariance == null ? new double[0] : f.monthlyVariance;
         LocalDate origin = run.historyTo.plusDays(1);
         List<StoredForecastResponse.Month> months = new ArrayList<>();
         double yearMean = 0, yearVariance = 0;

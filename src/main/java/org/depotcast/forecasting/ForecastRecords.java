@@ -7,7 +7,10 @@ import org.depotcast.core.forecast.PoissonFit;
 import java.util.Arrays;
 import java.util.stream.Collectors;
 
-/** Converts results to stored rows and back; numbers lists are semicolon-separated. */
+/**
+ * Converts results to stored rows. A forecast's monthly series go to JSON columns ({@link MonthlySeriesJson}); the
+ * fleet model fit's coefficient lists are still semicolon-separated.
+ */
 final class ForecastRecords {
     private ForecastRecords() {
     }
@@ -74,12 +77,12 @@ final class ForecastRecords {
         f.historyRmsse = finite(r.historyRmsse());
         f.breakdownPerMonth = r.breakdownPerMonth();
         f.variancePerMonth = r.variancePerMonth();
-        f.monthlyForecast = join(r.monthly());
-        f.preventiveMonthly = join(r.preventive());
-        f.monthlyHistory = join(r.history());
+        f.monthlyForecast = r.monthly();
+        f.preventiveMonthly = r.preventive();
+        f.monthlyHistory = r.history();
         f.historyFrom = r.historyFrom();
         f.methodDetail = r.methodDetail();
-        f.monthlyVariance = join(r.monthlyVariance());
+        f.monthlyVariance = r.monthlyVariance();
         f.yearVariance = finite(r.yearVariance());
         return f;
     }

@@ -1,6 +1,7 @@
 package org.depotcast.forecasting;
 
 import jakarta.persistence.Column;
+import jakarta.persistence.Convert;
 import jakarta.persistence.Entity;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
@@ -8,7 +9,7 @@ import jakarta.persistence.Id;
 import jakarta.persistence.SequenceGenerator;
 import jakarta.persistence.Table;
 
-/** A stored forecast of one part at one location. Monthly lists are semicolon-separated numbers. */
+/** A stored forecast of one part at one location. Monthly series are stored as JSON arrays ({@link MonthlySeriesJson}). */
 @Entity
 @Table(name = "part_forecast")
 public class PartForecast {
@@ -43,9 +44,11 @@ public class PartForecast {
     @Column(name = "variance_per_month", nullable = false)
     public double variancePerMonth;
     @Column(name = "monthly_forecast", nullable = false)
-    public String monthlyForecast;
+    @Convert(converter = MonthlySeriesJson.class)
+    public double[] monthlyForecast;
     @Column(name = "preventive_monthly", nullable = false)
-    public String preventiveMonthly;
+    @Convert(converter = MonthlySeriesJson.class)
+    public double[] preventiveMonthly;
     /** First month of {@link #monthlyHistory}: the series' real start within the run's window. */
     @Column(name = "history_from")
     public java.time.LocalDate historyFrom;
@@ -54,10 +57,12 @@ public class PartForecast {
     public String methodDetail;
     /** Variance of each month's total demand (null in runs made before it was kept). */
     @Column(name = "monthly_variance")
-    public String monthlyVariance;
+    @Convert(converter = MonthlySeriesJson.class)
+    public double[] monthlyVariance;
     /** Variance of the first 12 months' total demand. */
     @Column(name = "year_variance")
     public Double yearVariance;
     @Column(name = "monthly_history", nullable = false)
-    public String monthlyHistory;
+    @Convert(converter = MonthlySeriesJson.class)
+    public double[] monthlyHistory;
 }
