@@ -6,7 +6,6 @@ import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.jobs.JobKind;
@@ -76,22 +75,18 @@ public class AccuracyReportService {
         return ids[0];
     }
 
-    private synchronized long[] create(LocalDate origin) {
-        if (jobs.anyRunning(JobKind.ACCURACY_REPORT)) {
-            throw new ConflictException(null, "an accuracy report is already being computed");
-        }
-        long jobId = jobs.create(JobKind.ACCURACY_REPORT);
+    /** One report at a time across instances: the job runner checks and inserts under a database lock (409). */
+    private long[] create(LocalDate origin) {
         String by = currentUser.name();
-        long reportId = QuarkusTransaction.requiringNew().call(() -> {
+        return jobs.createExclusive(JobKind.ACCURACY_REPORT, jobId -> {
             AccuracyReport report = new AccuracyReport();
             report.jobId = jobId;
             report.origin = origin;
             report.createdBy = by.substring(0, Math.min(80, by.length()));
             report.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
             forecasts.getEntityManager().persist(report);
-            return report.id;
+            return new long[]{report.id, jobId};
         });
-        return new long[]{reportId, jobId};
     }
 
     public ReportView report(long id) {

@@ -101,18 +101,17 @@ public class ForecastRunService {
     }
 
     private long startExclusive(String trigger, LocalDate origin) {
-        long[] ids = createExclusive(trigger, origin);
-        jobs.launch(ids[0], progress -> execute(ids[1], origin, progress));
-        return ids[1];
+        RunIds ids = createExclusive(trigger, origin);
+        jobs.launch(ids.jobId(), progress -> execute(ids.runId(), origin, progress));
+        return ids.runId();
     }
 
-    /** One run at a time: checked against every instance's running jobs, serialised within this one. */
-    private synchronized long[] createExclusive(String trigger, LocalDate origin) {
-        if (jobs.anyRunning(JobKind.FORECAST_RUN)) {
-            throw new ConflictException(null, "a forecast run is already in progress");
-        }
-        long jobId = jobs.create(JobKind.FORECAST_RUN);
-        return new long[]{jobId, createRun(trigger, origin, jobId)};
+    private record RunIds(long jobId, long runId) {
+    }
+
+    /** One run at a time across instances: the job runner checks and inserts under a database lock (409 otherwise). */
+    private RunIds createExclusive(String trigger, LocalDate origin) {
+        return jobs.createExclusive(JobKind.FORECAST_RUN, jobId -> new RunIds(jobId, createRun(trigger, origin, jobId)));
     }
 
     static LocalDate currentOrigin() {
@@ -121,9 +120,9 @@ public class ForecastRunService {
 
     /** Runs to the end in the caller's thread, with the forecast origin at the start of {@code today}'s month. */
     public ForecastRun runNow(String trigger, LocalDate today) {
-        long[] ids = createExclusive(trigger, today.withDayOfMonth(1));
-        jobs.runHere(ids[0], progress -> execute(ids[1], today, progress));
-        return run(ids[1]);
+        RunIds ids = createExclusive(trigger, today.withDayOfMonth(1));
+        jobs.runHere(ids.jobId(), progress -> execute(ids.runId(), today, progress));
+        return run(ids.runId());
     }
 
     /**
@@ -131,7 +130,8 @@ public class ForecastRunService {
      * caller's thread and linked to the caller's job; answers its id. A failure propagates to the caller's job.
      */
     public long runAsOfWithin(JobProgress progress, LocalDate origin) {
-        long runId = createRun(AS_OF_TRIGGER, origin.withDayOfMonth(1), progress.jobId());
+        long runId = QuarkusTransaction.requiringNew().call(() -> createRun(AS_OF_TRIGGER, origin.withDayOfMonth(1),
+                progress.jobId()));
         execute(runId, origin.withDayOfMonth(1), progress);
         return runId;
     }
@@ -160,18 +160,17 @@ public class ForecastRunService {
                 .orElseThrow(() -> new org.depotcast.common.EntityMissingException(null, "forecast run", id)));
     }
 
+    /** In the caller's transaction. */
     private long createRun(String trigger, LocalDate origin, long jobId) {
-        return QuarkusTransaction.requiringNew().call(() -> {
-            ForecastRun run = new ForecastRun();
-            run.triggerKind = trigger;
-            run.origin = origin;
-            run.status = ForecastRun.Status.RUNNING;
-            run.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
-            run.horizonMonths = horizonMonths;
-            run.jobId = jobId;
-            repository.getEntityManager().persist(run);
-            return run.id;
-        });
+        ForecastRun run = new ForecastRun();
+        run.triggerKind = trigger;
+        run.origin = origin;
+        run.status = ForecastRun.Status.RUNNING;
+        run.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        run.horizonMonths = horizonMonths;
+        run.jobId = jobId;
+        repository.getEntityManager().persist(run);
+        return run.id;
     }
 
     /** Computes and stores the run; answers the job's summary. A failure propagates to the job runner. */

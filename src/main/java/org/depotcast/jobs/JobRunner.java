@@ -3,13 +3,17 @@ package org.depotcast.jobs;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.inject.Inject;
+import jakarta.persistence.LockTimeoutException;
+import jakarta.persistence.PessimisticLockException;
 import org.depotcast.access.CurrentUser;
+import org.depotcast.common.ConflictException;
 import org.eclipse.microprofile.context.ManagedExecutor;
 import io.smallrye.context.api.ManagedExecutorConfig;
 import org.eclipse.microprofile.context.ThreadContext;
 
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
+import java.util.function.LongFunction;
 
 /**
  * Starts background jobs. {@link #create} records the job (so the caller can link its own rows to it before any
@@ -23,34 +27,59 @@ public class JobRunner {
     private final JobWorker worker;
     private final JobInstance instance;
     private final CurrentUser currentUser;
+    private final JobStartLock startLock;
 
     @Inject
     @ManagedExecutorConfig(propagated = {}, cleared = ThreadContext.ALL_REMAINING)
     ManagedExecutor executor;
 
-    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser) {
+    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser, JobStartLock startLock) {
         this.jobs = jobs;
         this.worker = worker;
         this.instance = instance;
         this.currentUser = currentUser;
+        this.startLock = startLock;
     }
 
     /** Records a running job of {@code kind} owned by this instance, in its own transaction; answers its id. */
     public long create(JobKind kind) {
         String startedBy = currentUser.name();
-        return QuarkusTransaction.requiringNew().call(() -> {
-            OffsetDateTime now = OffsetDateTime.now(ZoneOffset.UTC);
-            BackgroundJob job = new BackgroundJob();
-            job.kind = kind;
-            job.state = JobState.RUNNING;
-            job.phase = "queued";
-            job.startedBy = JobWorker.clip(startedBy, 80);
-            job.startedAt = now;
-            job.ownerInstance = instance.id();
-            job.heartbeatAt = now;
-            jobs.persist(job);
-            return job.id;
-        });
+        return QuarkusTransaction.requiringNew().call(() -> persist(kind, startedBy, OffsetDateTime.now(ZoneOffset.UTC)));
+    }
+
+    /**
+     * Records a running job of {@code kind} unless one is running on any instance (409), and in the same transaction
+     * lets the caller insert its own rows linked to the new job's id ({@code linkedRows} answers what the caller
+     * needs back). The check and the insert happen under the kind's row lock in the database, so two instances (or
+     * two threads) starting at once cannot both pass the check.
+     */
+    public <T> T createExclusive(JobKind kind, LongFunction<T> linkedRows) {
+        String startedBy = currentUser.name();
+        try {
+            return QuarkusTransaction.requiringNew().call(() -> {
+                OffsetDateTime now = OffsetDateTime.now(ZoneOffset.UTC);
+                startLock.take(kind, now);
+                if (jobs.anyRunning(kind)) {
+                    throw new ConflictException(null, "one " + kind.words() + " at a time: another is already in progress");
+                }
+                return linkedRows.apply(persist(kind, startedBy, now));
+            });
+        } catch (PessimisticLockException | LockTimeoutException waitedTooLong) {
+            throw new ConflictException(null, "another " + kind.words() + " is being started; try again shortly");
+        }
+    }
+
+    private long persist(JobKind kind, String startedBy, OffsetDateTime now) {
+        BackgroundJob job = new BackgroundJob();
+        job.kind = kind;
+        job.state = JobState.RUNNING;
+        job.phase = "queued";
+        job.startedBy = JobWorker.clip(startedBy, 80);
+        job.startedAt = now;
+        job.ownerInstance = instance.id();
+        job.heartbeatAt = now;
+        jobs.persist(job);
+        return job.id;
     }
 
     /** Runs the job's work in the background; answers at once. */
@@ -63,11 +92,6 @@ public class JobRunner {
     public JobView runHere(long jobId, JobWork work) {
         worker.execute(jobId, kindOf(jobId), work);
         return QuarkusTransaction.requiringNew().call(() -> jobs.findById(jobId).view());
-    }
-
-    /** Whether a job of this kind is running on any instance. */
-    public boolean anyRunning(JobKind kind) {
-        return QuarkusTransaction.requiringNew().call(() -> jobs.anyRunning(kind));
     }
 
     private JobKind kindOf(long jobId) {

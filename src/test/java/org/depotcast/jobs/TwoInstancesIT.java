@@ -32,8 +32,8 @@ import static org.junit.jupiter.api.Assertions.fail;
  * Two instances of the packaged service on one PostgreSQL database (DEPOTCAST_CLUSTER_JDBC_URL, set by
  * ops/test-postgres.sh; skipped on the H2 run, where instances cannot share a database). The nightly schedule is
  * made to fire every 5 s on both: one scheduled run happens for the day. A forecast run started on A is polled to
- * its end on B. A is killed while a run is going: B marks the job failed once the heartbeat is older than the limit
- * (4 s here), and the run with it.
+ * its end on B; a start on B while a run is going on A is refused (409). A is killed while a run is going: B marks
+ * the job failed once the heartbeat is older than the limit (4 s here), and the run with it.
  */
 class TwoInstancesIT {
     private static final String AUTH = "Basic " + Base64.getEncoder().encodeToString("lead:lead-demo".getBytes(StandardCharsets.UTF_8));
@@ -81,6 +81,9 @@ class TwoInstancesIT {
         // A dies during a run; B marks its job failed, with a message that names no exception.
         HttpResponse<String> second = post(a, "/api/forecast/runs");
         assertEquals(202, second.statusCode(), second.body());
+        // One run at a time across instances: B refuses a start while A's run is going.
+        HttpResponse<String> alsoOnB = post(b, "/api/forecast/runs");
+        assertEquals(409, alsoOnB.statusCode(), alsoOnB.body());
         a.process().destroyForcibly();
         a.process().waitFor();
         String abandonedJob = field(second.body(), "jobId");
