@@ -21,7 +21,8 @@ export const TASKS = [
     {page: 'requests', href: '/app/officer/requests.html', label: 'Requests'},
     {page: 'transfers', href: '/app/officer/transfers.html', label: 'Transfers'},
     {page: 'purchases', href: '/app/officer/purchases.html', label: 'Purchases'},
-    {page: 'stock', href: '/app/officer/stock.html', label: 'Stock, counts and files'}
+    {page: 'stock', href: '/app/officer/stock.html', label: 'Stock, counts and files'},
+    {page: 'sensors', href: '/app/officer/sensors.html', label: 'Pump sensors'}
 ];
 
 const KIND_WORDS = {

@@ -1,0 +1,133 @@
+/*
+ * Pump sensors at a store: the pumps that have probably stopped (most likely first) with the parts to have ready
+ * summed against the depot's and its kits' stock, and the service kits falling due week by week for 90 days from
+ * operating hours (measured where a pump has a sensor), against the same stock. Shortfalls are said in words.
+ */
+import * as api from '/app/js/api.js';
+import * as fmt from '/app/js/format.js';
+import {h, mount, table, state, figures, caution} from '/app/js/ui.js';
+import {stopCaution, fellWords, repairWords, dueWords, hoursWords} from '/app/js/sensors.js';
+import {startOfficer, describe, ready} from './officer.js';
+
+const {store, parts, run} = await startOfficer({page: 'sensors', title: 'Pump sensors'});
+const main = document.getElementById('content');
+const unit = p => (parts.get(p) || {}).unitOfIssue;
+// Whole units for parts issued by the piece: a part expected 0.4 times still means one to have ready.
+const toHaveReady = (expected, p) => fmt.wholeUnits(unit(p)) ? Math.ceil(expected - 1e-9) : Math.round(expected * 100) / 100;
+
+function sensorProvenance(down, plan) {
+    const fleet = down.forecastRunId
+        ? `Expected parts from the fleet models of forecast run ${down.forecastRunId}${run && run.id === down.forecastRunId
+            ? `, finished ${fmt.dateTime(run.finishedAt)}` : ''}.`
+        : 'No forecast run has finished yet, so no parts are expected for the pumps probably down.';
+    return h('p', {class: 'provenance', id: 'sensor-provenance'}, `Sensor flags and service dates worked out on `
+        + `${fmt.date(plan.today)} from the daily sensor readings received (the quarterly estimates for pumps without a `
+        + `sensor). ${fleet}`);
+}
+
+function downTable(down) {
+    const count = down.pumps.length === 1 ? '1 pump' : `${fmt.num(down.pumps.length)} pumps`;
+    return table({caption: `${count} probably down at ${store.code}, most likely first`,
+        id: 'down-pumps', rows: down.pumps, empty: 'No pump at this store looks stopped: every sensor shows use, or a '
+            + 'repair is already reported.', columns: [
+            {label: 'Pump', value: p => h('strong', {}, p.assetId)},
+            {label: 'State', value: p => state(`Probably down (${fmt.percent(p.probabilityDown, 0)} likely)`, 'urgent')},
+            {label: 'Use fell', value: p => fellWords(p)},
+            {label: 'Usual use', value: p => `${fmt.num(p.baselineHoursPerDay, 1)} h a day before`, num: true},
+            {label: 'Repair', value: p => repairWords(p)},
+            {label: 'Mechanic', value: p => p.assignedMechanic || 'none assigned'}]});
+}
+
+function shortWords(need) {
+    const held = Number(need.onHandDepot || 0) + Number(need.onHandKits || 0);
+    const wanted = toHaveReady(need.expectedUnits, need.partNumber);
+    return need.enoughInStock ? state('Enough in stock', 'ok')
+        : state(`Short by ${fmt.qty(wanted - held, unit(need.partNumber))}`, 'warn');
+}
+
+/** "0.4 expected"; a part expected less than once in twenty repairs says so instead of "0 expected". */
+function expectedWords(units) {
+    return units < 0.05 ? 'less than 0.05 expected' : `${fmt.num(units, 1)} expected`;
+}
+
+function partsTable(down) {
+    // The parts most likely needed first.
+    const rows = [...down.parts].sort((a, b) => b.expectedUnits - a.expectedUnits || a.partNumber.localeCompare(b.partNumber));
+    return table({caption: `Parts to have ready at ${store.code} for these pumps, against stock ${down.stockCounted}`,
+        id: 'down-parts', rows, empty: down.pumps.length ? 'No parts expected: no forecast run has fitted '
+            + 'the fleet models yet.' : 'No parts to have ready.', columns: [
+            {label: 'Part', value: n => describe(parts, n.partNumber)},
+            {label: 'Have ready', value: n => h('span', {}, fmt.qty(toHaveReady(n.expectedUnits, n.partNumber), unit(n.partNumber)),
+                h('span', {class: 'hint'}, expectedWords(n.expectedUnits))), num: true},
+            {label: 'On hand at the depot', value: n => fmt.qty(n.onHandDepot, unit(n.partNumber)), num: true},
+            {label: 'In the kits', value: n => fmt.qty(n.onHandKits, unit(n.partNumber)), num: true},
+            {label: 'State', value: n => shortWords(n)}]});
+}
+
+function downSection(down) {
+    return h('section', {'aria-labelledby': 'down-title'}, h('h2', {id: 'down-title'}, 'Pumps that have probably stopped'),
+        h('div', {class: 'card'}, figures([['Probably down now', fmt.num(down.pumps.length)],
+            ['Earlier flags closed by a repair', fmt.num(down.closedByRepair)],
+            ['Earlier flags that were false alarms', fmt.num(down.falseAlarms)]])),
+        stopCaution(), downTable(down), partsTable(down),
+        h('details', {class: 'small'}, h('summary', {}, 'How a pump is judged probably down'), h('p', {}, down.method)));
+}
+
+function weekLabel(week) {
+    const end = new Date(`${week.weekStart}T12:00:00`);
+    end.setDate(end.getDate() + 6);
+    const iso = `${end.getFullYear()}-${String(end.getMonth() + 1).padStart(2, '0')}-${String(end.getDate()).padStart(2, '0')}`;
+    return `${fmt.date(week.weekStart)} – ${fmt.date(iso)}`;
+}
+
+function weekShortfall(week) {
+    const short = week.parts.filter(k => !k.enoughInStock);
+    if (!week.pumpsDue.length) {
+        return state('Nothing due', 'quiet');
+    }
+    return short.length ? h('span', {}, short.map(k => h('span', {class: 'hint'}, state('Short', 'warn'), ` ${k.partNumber}: `
+        + `${fmt.qty(Math.ceil(k.unitsToDate - Number(k.inStock) - 1e-9), unit(k.partNumber))} short of the `
+        + `${fmt.qty(k.unitsToDate, unit(k.partNumber))} needed by this week's end`)))
+        : state('Enough in stock for the kits due so far', 'ok');
+}
+
+function weeksTable(plan) {
+    return table({caption: `Service kits falling due at ${store.code} by week, for the next 90 days, against stock ${plan.stockCounted}`,
+        id: 'service-weeks', rows: plan.weeks, columns: [
+            {label: 'Week', value: w => weekLabel(w)},
+            {label: 'Pumps due', value: w => w.pumpsDue.length ? h('span', {}, h('strong', {}, fmt.num(w.pumpsDue.length)),
+                h('span', {class: 'hint pump-list'}, w.pumpsDue.join(', '))) : '0'},
+            {label: 'Kit parts this week', value: w => w.parts.length ? h('ul', {class: 'plain-list'}, w.parts.map(k =>
+                h('li', {}, `${fmt.qty(k.unitsThisWeek, unit(k.partNumber))} ${k.partNumber}`))) : '–'},
+            {label: 'Stock', value: w => weekShortfall(w)}]});
+}
+
+function dueTable(plan) {
+    const horizon = plan.weeks.length ? plan.weeks[plan.weeks.length - 1].weekStart : plan.today;
+    const rows = plan.pumps.filter(p => p.dueOn && p.dueOn <= horizon);
+    return h('details', {}, h('summary', {}, `The ${fmt.num(rows.length)} pumps due in these weeks, soonest first`),
+        table({caption: 'Pumps due for service by operating hours', id: 'service-pumps', rows, columns: [
+            {label: 'Pump', value: p => h('strong', {}, p.assetId)},
+            {label: 'Due', value: p => dueWords(p, plan.today)},
+            {label: 'Hours', value: p => h('span', {}, hoursWords(p), h('span', {class: 'hint'}, p.usageBasis))},
+            {label: 'Recent use', value: p => `${fmt.num(p.recentHoursPerDay, 1)} h a day`, num: true},
+            {label: 'Mechanic', value: p => p.assignedMechanic || 'none assigned'}]}));
+}
+
+async function load() {
+    if (!store) {
+        ready();
+        return;
+    }
+    const [down, plan] = await Promise.all([api.get('/api/sensors/probably-down', {depot: store.code}),
+        api.get('/api/sensors/service-plan', {depot: store.code})]);
+    mount(main, sensorProvenance(down, plan),
+        store.kind === 'DEPOT' ? null : h('p', {class: 'message'}, 'The central store has no pumps of its own: choose a depot to see its pumps.'),
+        downSection(down),
+        h('section', {'aria-labelledby': 'service-title'}, h('h2', {id: 'service-title'}, 'Service due by hours'),
+            weeksTable(plan), dueTable(plan)),
+        caution());
+    ready();
+}
+
+await load();

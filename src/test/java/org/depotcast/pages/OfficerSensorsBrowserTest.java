@@ -1,0 +1,73 @@
+package org.depotcast.pages;
+
+import io.quarkus.test.junit.QuarkusTest;
+import io.restassured.path.json.JsonPath;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+
+import java.util.List;
+
+import static org.depotcast.TestData.as;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * The officer's "Pump sensors" page on a desk and a phone: a pump of the demo probably down with its state in words,
+ * the parts to have ready against stock, and the service kits due week by week for 90 days.
+ */
+@QuarkusTest
+class OfficerSensorsBrowserTest extends BrowserSession {
+    private static final String DEPOT = "DEP-MARROWFORD";
+
+    private List<String> texts(String css) {
+        return driver.findElements(By.cssSelector(css)).stream().map(WebElement::getText).toList();
+    }
+
+    @Test
+    void theOfficerSeesADemoPumpProbablyDownItsPartsAndTheServiceWeeks() throws Exception {
+        // Expected parts come from the fleet models, which a finished forecast run fits.
+        OfficerJourneyBrowserTest.forecastRunThroughTheApi(url(""));
+        JsonPath report = as("officer").queryParam("depot", DEPOT).get("/api/sensors/probably-down").then()
+                .statusCode(200).extract().jsonPath();
+        List<String> demoPumps = report.getList("pumps.findAll { it.assetId.startsWith('OB-') }.assetId");
+        assertFalse(demoPumps.isEmpty(), "the demo has a pump probably down at " + DEPOT);
+        List<String> partNumbers = report.getList("parts.partNumber");
+        assertFalse(partNumbers.isEmpty(), "the flagged pumps are expected to need parts");
+        String asset = demoPumps.get(0);
+        long percent = Math.round(100 * report.getDouble("pumps.find { it.assetId == '" + asset + "' }.probabilityDown"));
+
+        signIn("officer", "officer-demo");
+        for (boolean narrow : List.of(false, true)) {
+            if (narrow) {
+                phone();
+            } else {
+                desk();
+            }
+            open("/app/officer/sensors.html?location=" + DEPOT);
+            waitReady();
+            WebElement row = driver.findElements(By.cssSelector("#down-pumps tbody tr")).stream()
+                    .filter(tr -> tr.getText().contains(asset)).findFirst()
+                    .orElseThrow(() -> new AssertionError(asset + " is not listed as probably down"));
+            assertTrue(row.getText().contains("Probably down (" + percent + " % likely)"), row.getText());
+            assertTrue(row.getText().contains("Use fell on"), row.getText());
+            assertTrue(row.getText().contains("No repair reported") || row.getText().contains("reported: the flag closes"));
+            List<String> partRows = texts("#down-parts tbody tr");
+            assertEquals(partNumbers.size(), partRows.size());
+            for (String part : partNumbers) {
+                assertTrue(partRows.stream().anyMatch(t -> t.contains(part)
+                        && (t.contains("Enough in stock") || t.contains("Short by"))), part + " with its stock in words");
+            }
+            assertTrue(driver.findElement(By.cssSelector(".sensor-caution")).getText().startsWith("Probably down, not known to be"));
+            List<String> weeks = texts("#service-weeks tbody tr");
+            assertEquals(13, weeks.size(), "13 weeks cover the 90 days");
+            assertTrue(weeks.stream().anyMatch(w -> w.contains("OB-")), "demo pumps fall due in these weeks");
+            assertTrue(driver.findElement(By.id("sensor-provenance")).getText().contains("forecast run "));
+            Object overflow = driver.executeScript("return document.documentElement.scrollWidth > document.documentElement.clientWidth");
+            assertEquals(Boolean.FALSE, overflow, "the page fits the screen without sideways scrolling");
+            screenshot("officer-sensors-" + (narrow ? "360" : "1280"));
+        }
+        assertNoPageErrors();
+    }
+}
