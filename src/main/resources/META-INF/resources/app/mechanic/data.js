@@ -6,7 +6,7 @@ import * as api from '/app/js/api.js';
 
 export async function fetchSnapshot(me) {
     const kit = me.kitCode;
-    const [runs, balances, pumps, due, openRepairs, requests, parts, kitPlace, depots] = await Promise.all([
+    const [runs, balances, pumps, due, openRepairs, requests, parts, kitPlace, depots, servicePlan, probablyDown] = await Promise.all([
         api.get('/api/forecast/runs', {status: 'DONE', planning: true, limit: 1}),
         kit ? api.get('/api/stock/balances', {location: kit}) : [],
         api.get('/api/pumps'),
@@ -15,7 +15,10 @@ export async function fetchSnapshot(me) {
         api.get('/api/requests'),
         api.get('/api/parts'),
         kit ? api.get(`/api/locations/${encodeURIComponent(kit)}`) : null,
-        api.get('/api/locations', {kind: 'DEPOT'})
+        api.get('/api/locations', {kind: 'DEPOT'}),
+        // Without a depot the sensor reports cover the mechanic's own pumps and kit.
+        api.get('/api/sensors/service-plan'),
+        api.get('/api/sensors/probably-down')
     ]);
     // The round to the pumps starts at the depot the kit belongs to (pumplist.js).
     const home = kitPlace && depots.find(d => d.code === kitPlace.parentCode);
@@ -25,10 +28,16 @@ export async function fetchSnapshot(me) {
     const policies = run && kit ? await api.get('/api/planning/policies', {location: kit}) : null;
     return {
         username: me.username, me, savedAt: new Date().toISOString(), run, balances, policies, depot,
-        pumps: pumps.filter(p => p.status !== 'DECOMMISSIONED'), due, openRepairs,
+        pumps: pumps.filter(p => p.status !== 'DECOMMISSIONED'), due, openRepairs, servicePlan: trimPlan(servicePlan), probablyDown,
         requests: requests.sort((a, b) => String(b.raisedAt).localeCompare(String(a.raisedAt))),
         parts: parts.map(p => ({partNumber: p.partNumber, description: p.description, unitOfIssue: p.unitOfIssue}))
     };
+}
+
+/** The phone keeps only what the page shows of the service plan: the pumps, not the weekly kit sums. */
+function trimPlan(plan) {
+    return {today: plan.today, pumps: plan.pumps.map(p => ({assetId: p.assetId, usageBasis: p.usageBasis, dueOn: p.dueOn,
+        serviceIntervalHours: p.serviceIntervalHours, hoursSinceService: p.hoursSinceService, recentHoursPerDay: p.recentHoursPerDay}))};
 }
 
 const OPEN_STATES = new Set(['RAISED', 'APPROVED', 'PARTLY_APPROVED']);

@@ -14,6 +14,7 @@ import {askForm, repairForm, statusForm} from './forms.js';
 import {closeForm} from './close.js';
 import {section, heading, openSection, followJumps} from './sections.js';
 import {pumpRows} from './pumplist.js';
+import {sensorView, sensorCounts} from './sensorview.js';
 
 const main = document.getElementById('main');
 const el = id => document.getElementById(id);
@@ -26,7 +27,7 @@ let formsKey = '';
 
 function layout() {
     const jumps = h('nav', {class: 'mech-jump', 'aria-label': 'Parts of this page'}, [['outbox', 'Waiting'], ['kit', 'Kit'],
-        ['pumps', 'Pumps'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
+        ['pumps', 'Pumps'], ['sensors', 'Sensors'], ['requests', 'Requests'], ['ask', 'Ask for parts'], ['repair', 'Record a repair'],
         ['close', 'Close a repair'], ['report', 'Report a pump']].map(([id, label]) => h('a', {href: `#${id}`}, label)));
     followJumps(jumps);
     mount(main,
@@ -41,6 +42,7 @@ function layout() {
                 oninput: drawPumps}),
             h('label', {class: 'mech-check'}, h('input', {type: 'checkbox', id: 'pump-all', onchange: drawPumps}), ' Show all my pumps')),
             h('p', {class: 'hint', id: 'pump-count'}), h('div', {id: 'pump-list', class: 'pump-list'})),
+        section('sensors', 'What the sensors say', h('div', {id: 'sensors-body'})),
         section('requests', 'My requests', h('div', {id: 'requests-body'})),
         section('ask', 'Ask for parts', h('div', {id: 'ask-body'})),
         section('repair', 'Record a repair', h('div', {id: 'repair-body'})),
@@ -89,8 +91,13 @@ function drawHeadings(firstTime) {
         + outbox.filter(i => i.kind === 'request').length;
     heading('requests', `My requests: ${open} open`);
     heading('close', `Close a repair as fixed: ${snapshot.openRepairs.length} open`);
+    const sensors = sensorCounts(snapshot);
+    heading('sensors', `What the sensors say: ${sensors.down} probably stopped, ${sensors.due} due for service`);
     if (firstTime && short) {
         openSection('kit');
+    }
+    if (firstTime && sensors.down) {
+        openSection('sensors');
     }
 }
 
@@ -100,6 +107,7 @@ function drawData() {
         : 'No forecast run yet.');
     mount(el('kit-body'), kitView(snapshot, outbox, (asset, wanted) => act('ask', asset, wanted)));
     mount(el('requests-body'), requestsView(snapshot, outbox));
+    mount(el('sensors-body'), sensorView(snapshot, act));
     drawPumps();
     const key = JSON.stringify([snapshot.pumps.map(p => p.assetId + p.status), snapshot.balances.map(b => b.partNumber + b.onHand),
         snapshot.openRepairs.map(r => r.repairRef)]);

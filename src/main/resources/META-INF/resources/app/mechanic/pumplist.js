@@ -5,6 +5,7 @@
  */
 import * as fmt from '/app/js/format.js';
 import {visitOrder} from './route.js';
+import {measuredDue} from './sensorview.js';
 
 function needsAttention(pump, due, repairs, waiting) {
     return pump.status === 'BROKEN' || repairs.length > 0 || (due && (due.state === 'OVERDUE' || due.state === 'DUE_SOON'))
@@ -17,7 +18,8 @@ function rankOf(pump, due, repairs) {
 
 /** {rows: [{pump, due, repairs, stop}], toVisit, words}; stop = {n, legKm} on the round, or null. */
 export function pumpRows(snapshot, waiting, {all, search}) {
-    const due = new Map(snapshot.due.map(d => [d.assetId, d]));
+    const measured = measuredDue(snapshot);
+    const due = new Map(snapshot.due.map(d => [d.assetId, measured.get(d.assetId) || d]));
     const repairs = new Map();
     snapshot.openRepairs.forEach(r => repairs.set(r.assetId, [...(repairs.get(r.assetId) || []), r]));
     const row = p => ({pump: p, due: due.get(p.assetId), repairs: repairs.get(p.assetId) || [], stop: null});

@@ -1,0 +1,111 @@
+package org.depotcast.pages;
+
+import io.quarkus.test.junit.QuarkusTest;
+import io.restassured.path.json.JsonPath;
+import org.junit.jupiter.api.Test;
+import org.openqa.selenium.By;
+import org.openqa.selenium.WebElement;
+import org.openqa.selenium.support.ui.ExpectedConditions;
+
+import java.time.Duration;
+import java.time.LocalDate;
+import java.util.List;
+
+import static io.restassured.RestAssured.given;
+import static org.depotcast.TestData.as;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * A demo mechanic's page shows their pumps due for service in the order of their projected due date and their pumps
+ * probably stopped, at 360 and 1280 px, and still shows them from the phone's cache with no connection.
+ */
+@QuarkusTest
+class MechanicSensorsBrowserTest extends BrowserSession {
+    private static final String DEPOT = "DEP-TESHVALE";
+
+    /** Read in one script, as the page redraws itself when fresh data arrives after drawing the kept copy. */
+    @SuppressWarnings("unchecked")
+    private List<String> read(String css, String attribute) {
+        return (List<String>) driver.executeScript("return [...document.querySelectorAll(arguments[0])]"
+                + ".map(e => arguments[1] ? e.getAttribute(arguments[1]) : e.textContent)", css, attribute);
+    }
+
+    private void openSensors() {
+        if (driver.findElement(By.id("sensors")).getDomAttribute("open") == null) {
+            WebElement summary = driver.findElement(By.cssSelector("#sensors > summary"));
+            driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", summary);
+            summary.click();
+        }
+    }
+
+    /**
+     * The due list in the API's order, its dates rising, the stopped pump listed, nothing wider than the screen.
+     * Online, the page first draws what the phone kept, then the server's answer: the check waits for the latter.
+     */
+    private void assertShows(List<String> expectedDue, String stopped, int width, boolean online) {
+        if (online) {
+            wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.tagName("body")).getDomAttribute("data-refreshed") != null);
+        }
+        wait(Duration.ofSeconds(30)).until(ExpectedConditions.presenceOfElementLocated(By.id("service-due-list")));
+        openSensors();
+        assertEquals(expectedDue, read("#service-due-list > li", "data-asset"), "due pumps in the order of their due date");
+        List<String> dates = read("#service-due-list > li", "data-due");
+        for (int i = 1; i < dates.size(); i++) {
+            assertTrue(dates.get(i - 1).compareTo(dates.get(i)) <= 0, "due dates rise: " + dates);
+        }
+        List<String> card = read("#down-list li[data-asset='" + stopped + "']", null);
+        assertEquals(1, card.size(), stopped + " is listed as probably stopped");
+        assertTrue(card.get(0).contains("Probably down ("), card.get(0));
+        Number scroll = (Number) driver.executeScript("return document.documentElement.scrollWidth");
+        assertTrue(scroll.intValue() <= width, "the page is " + scroll + " px wide on a " + width + " px screen");
+    }
+
+    @Test
+    void dueServicesComeInDueDateOrderWithTheStoppedPumpsAndStillShowOffline() throws Exception {
+        JsonPath depot = as("lead").queryParam("depot", DEPOT).get("/api/sensors/probably-down").then()
+                .statusCode(200).extract().jsonPath();
+        String stopped = depot.getString("pumps.find { it.assetId.startsWith('OB-') }.assetId");
+        assertTrue(stopped != null, "the demo has a pump probably down at " + DEPOT);
+        String mechanic = depot.getString("pumps.find { it.assetId == '" + stopped + "' }.assignedMechanic");
+        JsonPath plan = given().auth().preemptive().basic(mechanic, mechanic + "-demo").get(url("/api/sensors/service-plan"))
+                .then().statusCode(200).extract().jsonPath();
+        String last = LocalDate.parse(plan.getString("today")).plusDays(89).toString();
+        List<String> expected = plan.getList("pumps.findAll { it.dueOn != null && it.dueOn <= '" + last + "' }.assetId");
+        assertFalse(expected.isEmpty(), mechanic + " has pumps due in the next 90 days");
+
+        phone();
+        signIn(mechanic, mechanic + "-demo");
+        wait(Duration.ofSeconds(20)).until(d -> d.getCurrentUrl().contains("/app/mechanic/"));
+        waitReady();
+        assertShows(expected, stopped, 360, true);
+        assertTrue(driver.findElement(By.id("sensors-title")).getText().startsWith("What the sensors say: "));
+        // The weight budget (300 KB first load, MechanicPagesBenchmark): the two sensor answers are a small part of it.
+        Number sensorBytes = (Number) driver.executeScript("return performance.getEntriesByType('resource')"
+                + ".filter(e => e.name.includes('/api/sensors/')).reduce((t, e) => t + e.transferSize, 0)");
+        System.out.printf("sensor data on %s's first load: %.1f KB for %d pumps due%n", mechanic,
+                sensorBytes.doubleValue() / 1024, expected.size());
+        assertTrue(sensorBytes.intValue() > 0 && sensorBytes.intValue() < 80 * 1024, sensorBytes + " bytes of sensor data");
+        screenshot("mechanic-sensors-360");
+        driver.executeAsyncScript("const done = arguments[arguments.length - 1];"
+                + "navigator.serviceWorker.ready.then(() => { const check = () => navigator.serviceWorker.controller"
+                + " ? done(true) : setTimeout(check, 50); check(); });");
+
+        desk();
+        driver.navigate().refresh();
+        waitReady();
+        assertShows(expected, stopped, 1280, true);
+        screenshot("mechanic-sensors-1280");
+
+        phone();
+        offline(true);
+        driver.navigate().refresh();
+        waitReady();
+        assertTrue(driver.findElement(By.id("connection")).getText().startsWith("No connection"));
+        assertShows(expected, stopped, 360, false);
+        screenshot("mechanic-sensors-offline-360");
+        offline(false);
+        assertNoPageErrors();
+    }
+}
