@@ -40,6 +40,9 @@ final class SpendLineBuilder {
     private final int[] periodOfMonth;
     /** 1 when the first period is the rest of the year in progress: whole year k is then period k. */
     private final int stubPeriods;
+    /** Per family: gradient in β of the projected breakdown units, and their sum (for the rate's uncertainty). */
+    private final Map<ComponentFamily, double[]> gradients = new java.util.EnumMap<>(ComponentFamily.class);
+    private final double[] familyUnits = new double[ComponentFamily.values().length];
 
     private record Cell(int period, long partId, String depot) {
     }
@@ -67,9 +70,19 @@ final class SpendLineBuilder {
         for (ComponentFamily f : ComponentFamily.values()) {
             familyNames.add(f.name());
             FleetRateModel m = outlook.model(f);
-            groupLogSd[f.ordinal()] = m != null && m.fitted() ? m.fit().standardErrors()[0] : FleetRateModel.PRIOR_LOG_SD;
+            groupLogSd[f.ordinal()] = FleetRateModel.PRIOR_LOG_SD;
             groupDispersion[f.ordinal()] = m == null ? 1 : m.varianceFactor();
         }
+    }
+
+    /**
+     * σ of each family's lognormal rate multiplier: the standard error of the log of the family's projected
+     * breakdown units over the whole projection, by the delta method on the fit's covariance (the wide prior σ for a
+     * family on its prior). Call once every pump is added.
+     */
+    private void settleRateUncertainty() {
+        gradients.forEach((family, g) -> groupLogSd[family.ordinal()] = outlook.model(family)
+                .logTotalStandardError(g, familyUnits[family.ordinal()]));
     }
 
     /** The register's pumps in service at the origin or planned to go in, as the forecast run counts them. */
@@ -117,6 +130,10 @@ final class SpendLineBuilder {
                 continue;
             }
             FleetRateModel model = outlook.model(part.family());
+            if (units != null) {
+                addGradient(part.family(), model, pump.depthM(), months, units,
+                        count * outlook.credibilityRatio(part.partId(), pump.depotId()));
+            }
             double eventsPerUnit = units == null ? 0 : outlook.credibilityRatio(part.partId(), pump.depotId())
                     / model.unitsPerEvent();
             double[] cell = null;
@@ -131,6 +148,20 @@ final class SpendLineBuilder {
                 if (serviced) {
                     cell[1] += count * services[m] * part.serviceKitQuantity();
                 }
+            }
+        }
+    }
+
+    private void addGradient(ComponentFamily family, FleetRateModel model, double depthM, PumpMonths months,
+                             double[] units, double weight) {
+        double[][] rows = model.covariateRows(depthM, months);
+        double[] g = gradients.computeIfAbsent(family, f -> new double[model.covariates().size() + 1]);
+        for (int m = 0; m < units.length; m++) {
+            double u = units[m] * weight;
+            familyUnits[family.ordinal()] += u;
+            g[0] += u;
+            for (int j = 1; j < g.length; j++) {
+                g[j] += u * rows[m][j - 1];
             }
         }
     }
@@ -165,6 +196,7 @@ final class SpendLineBuilder {
     }
 
     SpendLine[] lines() {
+        settleRateUncertainty();
         List<SpendLine> lines = new ArrayList<>();
         for (Map.Entry<Cell, double[]> e : cells.entrySet()) {
             Cell key = e.getKey();

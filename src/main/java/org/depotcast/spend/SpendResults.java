@@ -75,8 +75,8 @@ public record SpendResults(String scenario, String currency, int draws, long see
         notes.add("The first period includes the stock needed now to bring the programme to its policy levels.");
         notes.add("Demand as of " + periods.get(0).startsOn() + ": the fleet models, depot ratios, credibility and usage "
                 + "history (measured hours where pumps have sensors) of a forecast run as of that day.");
-        notes.add("Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = its "
-                + "intercept's standard error) and overdispersion where the fit found it.");
+        notes.add("Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = the standard "
+                + "error of the family's projected log demand by the delta method) and overdispersion where the fit found it.");
         return new SpendResults(name, currency, definition.drawsOrDefault(), definition.seedOrDefault(),
                 financialYears.startMonth(), years, notes);
     }

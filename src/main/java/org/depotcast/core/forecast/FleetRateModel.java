@@ -105,6 +105,18 @@ public record FleetRateModel(List<RateCovariate> covariates, PoissonFit fit, dou
         return Math.sqrt(fit.linearVariance(gradient));
     }
 
+    /**
+     * Standard error of the log of a sum of expected units (many pumps, many months) from the coefficients'
+     * uncertainty, by the delta method: √(g'Σg) / mean, g = Σ units × (1, x) the sum's gradient in β and Σ the
+     * inflated covariance (Oehlert 1992); {@link #PRIOR_LOG_SD} for a prior or an empty sum.
+     */
+    public double logTotalStandardError(double[] gradient, double mean) {
+        if (fit == null || !(mean > 0)) {
+            return PRIOR_LOG_SD;
+        }
+        return Math.sqrt(fit.linearVariance(gradient)) / mean;
+    }
+
     /** The fit's variance factor: Pearson dispersion when overdispersed (quasi-Poisson), else 1. */
     public double varianceFactor() {
         return fit == null ? 1 : fit.varianceFactor();

@@ -42,6 +42,11 @@ class FleetRateModelTest {
         FleetRateModel model = twoDepths(Map.of());
         assertEquals(1 / Math.sqrt(10), model.logRateStandardError(model.covariateValues(30, 0, 5)), 1e-6);
         assertEquals(1 / Math.sqrt(16), model.logRateStandardError(model.covariateValues(60, 0, 5)), 1e-6);
+        // A sum of units over both groups, a shallow and b deep: the groups' log rates are independent estimates, so
+        // Var(log(a + b)) = (a²/10 + b²/16)/(a + b)², against the gradient g = (a + b, b·log 2) in β.
+        double a = 2, b = 3;
+        assertEquals(Math.sqrt(a * a / 10 + b * b / 16) / (a + b),
+                model.logTotalStandardError(new double[]{a + b, b * Math.log(2)}, a + b), 1e-6);
         // A prior has no fit to be uncertain about: the stated wide σ.
         FleetRateModel prior = new FleetRateModel(List.of(RateCovariate.LOG_DEPTH), null, 1e-4, 2, 3, 500, Map.of());
         assertEquals(FleetRateModel.PRIOR_LOG_SD, prior.logRateStandardError(new double[]{0.3}));
