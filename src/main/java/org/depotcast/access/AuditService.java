@@ -8,8 +8,8 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.common.CsvExport;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 
 /**
@@ -23,22 +23,24 @@ public class AuditService {
     private final Entries entries;
     private final CurrentUser currentUser;
     private final ObjectMapper json;
+    private final Clock clock;
 
     @ApplicationScoped
     static class Entries implements PanacheRepository<AuditEntry> {
     }
 
-    AuditService(Entries entries, CurrentUser currentUser, ObjectMapper json) {
+    AuditService(Entries entries, CurrentUser currentUser, ObjectMapper json, Clock clock) {
         this.entries = entries;
         this.currentUser = currentUser;
         this.json = json;
+        this.clock = clock;
     }
 
     /** Records a change; {@code before} is null for a creation, {@code after} null for a removal. */
     @Transactional(Transactional.TxType.MANDATORY)
     public void record(String action, String entityType, String entityKey, Object before, Object after) {
         AuditEntry entry = new AuditEntry();
-        entry.at = OffsetDateTime.now(ZoneOffset.UTC);
+        entry.at = OffsetDateTime.now(clock);
         entry.actor = currentUser.name();
         entry.action = action;
         entry.entityType = entityType;

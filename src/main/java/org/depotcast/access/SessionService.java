@@ -11,8 +11,8 @@ import org.eclipse.microprofile.config.inject.ConfigProperty;
 import java.nio.charset.StandardCharsets;
 import java.security.SecureRandom;
 import java.time.Duration;
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.Optional;
 import java.util.Set;
 
@@ -38,15 +38,17 @@ public class SessionService {
     private final SessionSettings settings;
     private final byte[] key;
     private final boolean production;
+    private final Clock clock;
 
     SessionService(UserSessionRepository sessions, AccountService accounts, PasswordCheck passwords,
-                   SessionSettings settings, @ConfigProperty(name = "depotcast.mode") String mode) {
+                   SessionSettings settings, @ConfigProperty(name = "depotcast.mode") String mode, Clock clock) {
         this.sessions = sessions;
         this.accounts = accounts;
         this.passwords = passwords;
         this.settings = settings;
         this.production = "production".equals(mode);
         this.key = keyFor(production, settings.key());
+        this.clock = clock;
     }
 
     /** Creating the bean resolves the key, so production mode without one refuses to start. */
@@ -88,7 +90,7 @@ public class SessionService {
         }
         SessionCookie.Issued issued = SessionCookie.issue(key);
         QuarkusTransaction.requiringNew().run(() -> {
-            OffsetDateTime now = OffsetDateTime.now(ZoneOffset.UTC);
+            OffsetDateTime now = OffsetDateTime.now(clock);
             sessions.deleteExpiredBefore(now);
             UserSession session = new UserSession();
             session.idHash = issued.idHash();
@@ -103,7 +105,7 @@ public class SessionService {
     /** The account of a genuine, live session whose account is still enabled. */
     @Transactional
     Optional<Live> resolve(String cookieValue) {
-        OffsetDateTime now = OffsetDateTime.now(ZoneOffset.UTC);
+        OffsetDateTime now = OffsetDateTime.now(clock);
         return SessionCookie.idHashOf(key, cookieValue).flatMap(sessions::byIdHash).filter(s -> s.liveAt(now))
                 .flatMap(s -> accounts.findEnabled(s.username).map(a -> new Live(a.username, a.roleSet(), s.idHash)));
     }
@@ -112,7 +114,7 @@ public class SessionService {
     @Transactional
     public void signOut(String cookieValue) {
         SessionCookie.idHashOf(key, cookieValue).flatMap(sessions::byIdHash).filter(s -> s.endedAt == null)
-                .ifPresent(s -> s.endedAt = OffsetDateTime.now(ZoneOffset.UTC));
+                .ifPresent(s -> s.endedAt = OffsetDateTime.now(clock));
     }
 
     /** Whether the cookie must carry Secure on this answer. */

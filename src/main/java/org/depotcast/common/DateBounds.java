@@ -1,5 +1,9 @@
 package org.depotcast.common;
 
+import io.quarkus.arc.Arc;
+import io.quarkus.arc.ArcContainer;
+
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.time.ZoneOffset;
@@ -27,7 +31,16 @@ public final class DateBounds {
     }
 
     public static LocalDate today() {
-        return LocalDate.now(ZoneOffset.UTC);
+        return LocalDate.now(clock());
+    }
+
+    /**
+     * The service's clock ({@link ClockProducer}). Looked up rather than injected because Bean Validation's validators
+     * and CSV row checks call these helpers statically; the system clock where no container runs (plain unit tests).
+     */
+    private static Clock clock() {
+        ArcContainer container = Arc.container();
+        return container == null || !container.isRunning() ? Clock.systemUTC() : container.instance(Clock.class).get();
     }
 
     public static LocalDate latestEvent() {
@@ -52,7 +65,7 @@ public final class DateBounds {
     }
 
     public static boolean eventInFuture(OffsetDateTime at) {
-        return at.isAfter(OffsetDateTime.now(ZoneOffset.UTC).plusDays(EVENT_DAYS_AHEAD));
+        return at.isAfter(OffsetDateTime.now(clock()).plusDays(EVENT_DAYS_AHEAD));
     }
 
     /** Throws a 400 naming {@code field} for a date outside [EARLIEST, today + ten years]: for filters and plans. */

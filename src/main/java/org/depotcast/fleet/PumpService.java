@@ -18,6 +18,7 @@ import org.depotcast.stock.LocationService;
 
 import java.io.InputStream;
 import java.math.BigDecimal;
+import java.time.Clock;
 import java.time.LocalDate;
 import java.util.HashMap;
 import java.util.HashSet;
@@ -40,9 +41,11 @@ public class PumpService {
     private final org.depotcast.access.AuditService audit;
     private final RepairRecords repairs;
     private final CsvImporter importer;
+    private final Clock clock;
 
     PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope,
-                org.depotcast.access.AuditService audit, RepairRecords repairs, CsvImporter importer) {
+                org.depotcast.access.AuditService audit, RepairRecords repairs, CsvImporter importer,
+                Clock clock) {
         this.importer = importer;
         this.audit = audit;
         this.repairs = repairs;
@@ -50,6 +53,7 @@ public class PumpService {
         this.pumps = pumps;
         this.models = models;
         this.locations = locations;
+        this.clock = clock;
     }
 
     /** Pumps the caller may see: all for leads and admins, their depots' for officers, assigned ones for mechanics. */
@@ -186,7 +190,7 @@ public class PumpService {
         if (status != PumpStatus.WORKING && since == null) {
             throw new BusinessRuleException("statusSince", "a " + status + " pump needs the date it became so");
         }
-        pump.setStatus(status, since == null ? LocalDate.now(java.time.ZoneOffset.UTC) : since, note);
+        pump.setStatus(status, since == null ? LocalDate.now(clock) : since, note);
     }
 
     /**

@@ -14,9 +14,9 @@ import org.depotcast.jobs.JobRunner;
 import org.depotcast.jobs.JobService;
 import org.depotcast.jobs.JobView;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
@@ -38,9 +38,11 @@ public class AccuracyReportService {
     private final AccessScope scope;
     private final CurrentUser currentUser;
     private final ObjectMapper json;
+    private final Clock clock;
 
     AccuracyReportService(ForecastRunService forecastRuns, ForecastRepository forecasts, FleetSnapshotLoader loader,
-                          JobRunner jobs, JobService jobViews, AccessScope scope, CurrentUser currentUser, ObjectMapper json) {
+                          JobRunner jobs, JobService jobViews, AccessScope scope, CurrentUser currentUser, ObjectMapper json,
+                          Clock clock) {
         this.forecastRuns = forecastRuns;
         this.forecasts = forecasts;
         this.loader = loader;
@@ -49,6 +51,7 @@ public class AccuracyReportService {
         this.scope = scope;
         this.currentUser = currentUser;
         this.json = json;
+        this.clock = clock;
     }
 
     /** A report while it runs (results null) and once done. */
@@ -61,7 +64,7 @@ public class AccuracyReportService {
      */
     public long start(LocalDate origin) {
         scope.requireProgramme();
-        LocalDate latest = ForecastRunService.currentOrigin().minusMonths(AccuracyScoring.MONTHS);
+        LocalDate latest = forecastRuns.currentOrigin().minusMonths(AccuracyScoring.MONTHS);
         if (origin == null) {
             throw new InvalidInputException("origin", "is required: a date written yyyy-mm-dd, at most " + latest);
         }
@@ -83,7 +86,7 @@ public class AccuracyReportService {
             report.jobId = jobId;
             report.origin = origin;
             report.createdBy = by.substring(0, Math.min(80, by.length()));
-            report.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+            report.createdAt = OffsetDateTime.now(clock);
             forecasts.getEntityManager().persist(report);
             return new long[]{report.id, jobId};
         });

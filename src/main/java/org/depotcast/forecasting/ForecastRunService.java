@@ -17,9 +17,9 @@ import org.depotcast.jobs.JobRunner;
 import org.depotcast.jobs.ScheduleClaims;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Map;
 import java.util.stream.Collectors;
@@ -45,11 +45,12 @@ public class ForecastRunService {
     private final AccessScope scope;
     private final int historyMonths;
     private final int horizonMonths;
+    private final Clock clock;
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
                        JobRunner jobs, ScheduleClaims claims, SystemWork system, AccessScope scope,
                        @ConfigProperty(name = "depotcast.forecast.history-months") int historyMonths,
-                       @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths) {
+                       @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths, Clock clock) {
         if (historyMonths < 24) {
             throw new IllegalStateException("depotcast.forecast.history-months must be at least 24, was " + historyMonths);
         }
@@ -65,12 +66,13 @@ public class ForecastRunService {
         this.scope = scope;
         this.historyMonths = historyMonths;
         this.horizonMonths = horizonMonths;
+        this.clock = clock;
     }
 
     /** Every instance fires the schedule; only the one that claims today's run starts it. */
     @Scheduled(cron = "{depotcast.forecast.schedule}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
     void nightly() {
-        if (claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(ZoneOffset.UTC))) {
+        if (claims.claim(NIGHTLY_SCHEDULE, LocalDate.now(clock))) {
             system.run("forecast-schedule", () -> {
                 try {
                     startExclusive("schedule", currentOrigin());
@@ -114,8 +116,9 @@ public class ForecastRunService {
         return jobs.createExclusive(JobKind.FORECAST_RUN, jobId -> new RunIds(jobId, createRun(trigger, origin, jobId)));
     }
 
-    static LocalDate currentOrigin() {
-        return LocalDate.now(ZoneOffset.UTC).withDayOfMonth(1);
+    /** The first day of the current month by the service's clock: the origin of a run made now. */
+    public LocalDate currentOrigin() {
+        return LocalDate.now(clock).withDayOfMonth(1);
     }
 
     /** Runs to the end in the caller's thread, with the forecast origin at the start of {@code today}'s month. */
@@ -141,7 +144,7 @@ public class ForecastRunService {
         QuarkusTransaction.joiningExisting().run(() -> repository.getEntityManager().createQuery(
                         "update ForecastRun r set r.status = :failed, r.finishedAt = :now, r.message = :message "
                                 + "where r.jobId = :job and r.status = :running")
-                .setParameter("failed", ForecastRun.Status.FAILED).setParameter("now", OffsetDateTime.now(ZoneOffset.UTC))
+                .setParameter("failed", ForecastRun.Status.FAILED).setParameter("now", OffsetDateTime.now(clock))
                 .setParameter("message", failed.message()).setParameter("job", failed.jobId())
                 .setParameter("running", ForecastRun.Status.RUNNING).executeUpdate());
     }
@@ -166,7 +169,7 @@ public class ForecastRunService {
         run.triggerKind = trigger;
         run.origin = origin;
         run.status = ForecastRun.Status.RUNNING;
-        run.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        run.startedAt = OffsetDateTime.now(clock);
         run.horizonMonths = horizonMonths;
         run.jobId = jobId;
         repository.getEntityManager().persist(run);
@@ -227,7 +230,7 @@ public class ForecastRunService {
         run.seriesDone = results.size();
         run.seriesTotal = results.size();
         run.status = ForecastRun.Status.DONE;
-        run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        run.finishedAt = OffsetDateTime.now(clock);
         run.message = results.stream().collect(Collectors.groupingBy(PartForecastResult::method, Collectors.counting()))
                 .toString();
     }

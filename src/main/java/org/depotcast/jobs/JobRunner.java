@@ -11,8 +11,8 @@ import org.eclipse.microprofile.context.ManagedExecutor;
 import io.smallrye.context.api.ManagedExecutorConfig;
 import org.eclipse.microprofile.context.ThreadContext;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.function.LongFunction;
 
 /**
@@ -28,23 +28,26 @@ public class JobRunner {
     private final JobInstance instance;
     private final CurrentUser currentUser;
     private final JobStartLock startLock;
+    private final Clock clock;
 
     @Inject
     @ManagedExecutorConfig(propagated = {}, cleared = ThreadContext.ALL_REMAINING)
     ManagedExecutor executor;
 
-    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser, JobStartLock startLock) {
+    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser, JobStartLock startLock,
+              Clock clock) {
         this.jobs = jobs;
         this.worker = worker;
         this.instance = instance;
         this.currentUser = currentUser;
         this.startLock = startLock;
+        this.clock = clock;
     }
 
     /** Records a running job of {@code kind} owned by this instance, in its own transaction; answers its id. */
     public long create(JobKind kind) {
         String startedBy = currentUser.name();
-        return QuarkusTransaction.requiringNew().call(() -> persist(kind, startedBy, OffsetDateTime.now(ZoneOffset.UTC)));
+        return QuarkusTransaction.requiringNew().call(() -> persist(kind, startedBy, OffsetDateTime.now(clock)));
     }
 
     /**
@@ -57,7 +60,7 @@ public class JobRunner {
         String startedBy = currentUser.name();
         try {
             return QuarkusTransaction.requiringNew().call(() -> {
-                OffsetDateTime now = OffsetDateTime.now(ZoneOffset.UTC);
+                OffsetDateTime now = OffsetDateTime.now(clock);
                 startLock.take(kind, now);
                 if (jobs.anyRunning(kind)) {
                     throw new ConflictException(null, "one " + kind.words() + " at a time: another is already in progress");

@@ -8,8 +8,8 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.enterprise.event.Event;
 import jakarta.enterprise.event.Observes;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Set;
 
@@ -24,12 +24,14 @@ public class JobSweeper {
     private final JobWorker worker;
     private final JobInstance instance;
     private final Event<JobFailed> failed;
+    private final Clock clock;
 
-    JobSweeper(JobRepository jobs, JobWorker worker, JobInstance instance, Event<JobFailed> failed) {
+    JobSweeper(JobRepository jobs, JobWorker worker, JobInstance instance, Event<JobFailed> failed, Clock clock) {
         this.jobs = jobs;
         this.worker = worker;
         this.instance = instance;
         this.failed = failed;
+        this.clock = clock;
     }
 
     void atStart(@Observes StartupEvent event) {
@@ -43,7 +45,7 @@ public class JobSweeper {
             return;
         }
         QuarkusTransaction.requiringNew().run(() -> jobs.update("heartbeatAt = ?1 where id in ?2 and state = ?3",
-                OffsetDateTime.now(ZoneOffset.UTC), executing, JobState.RUNNING));
+                OffsetDateTime.now(clock), executing, JobState.RUNNING));
     }
 
     @Scheduled(every = "{depotcast.jobs.sweep-every}", concurrentExecution = Scheduled.ConcurrentExecution.SKIP)
@@ -53,7 +55,7 @@ public class JobSweeper {
 
     /** Marks failed every running job whose heartbeat is older than the limit; answers how many. */
     public int sweep() {
-        OffsetDateTime limit = OffsetDateTime.now(ZoneOffset.UTC).minus(instance.deadAfter());
+        OffsetDateTime limit = OffsetDateTime.now(clock).minus(instance.deadAfter());
         List<BackgroundJob> silent = QuarkusTransaction.requiringNew().call(() -> jobs.silentSince(limit));
         int marked = 0;
         for (BackgroundJob job : silent) {
@@ -63,7 +65,7 @@ public class JobSweeper {
             boolean changed = QuarkusTransaction.requiringNew().call(() -> {
                 int rows = jobs.update("state = ?1, phase = ?2, message = ?3, finishedAt = ?4 "
                                 + "where id = ?5 and state = ?6 and heartbeatAt < ?7", JobState.FAILED,
-                        JobState.FAILED.words(), message, OffsetDateTime.now(ZoneOffset.UTC), job.id, JobState.RUNNING, limit);
+                        JobState.FAILED.words(), message, OffsetDateTime.now(clock), job.id, JobState.RUNNING, limit);
                 if (rows == 1) {
                     failed.fire(new JobFailed(job.id, job.kind, message));
                 }

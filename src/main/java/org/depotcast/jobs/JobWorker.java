@@ -12,8 +12,8 @@ import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.NoForecastYetException;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -30,13 +30,15 @@ class JobWorker {
     private final JobInstance instance;
     private final SystemWork system;
     private final Event<JobFailed> failed;
+    private final Clock clock;
     private final Set<Long> executing = ConcurrentHashMap.newKeySet();
 
-    JobWorker(JobRepository jobs, JobInstance instance, SystemWork system, Event<JobFailed> failed) {
+    JobWorker(JobRepository jobs, JobInstance instance, SystemWork system, Event<JobFailed> failed, Clock clock) {
         this.jobs = jobs;
         this.instance = instance;
         this.system = system;
         this.failed = failed;
+        this.clock = clock;
     }
 
     Set<Long> executing() {
@@ -96,7 +98,7 @@ class JobWorker {
         QuarkusTransaction.requiringNew().run(() -> {
             BackgroundJob job = jobs.findById(jobId);
             change.accept(job);
-            job.heartbeatAt = OffsetDateTime.now(ZoneOffset.UTC);
+            job.heartbeatAt = OffsetDateTime.now(clock);
         });
     }
 
@@ -113,7 +115,7 @@ class JobWorker {
             job.state = state;
             job.phase = state.words();
             job.message = clip(message, MESSAGE_LENGTH);
-            job.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+            job.finishedAt = OffsetDateTime.now(clock);
             if (state == JobState.DONE) {
                 job.progressDone = job.progressTotal;
             }

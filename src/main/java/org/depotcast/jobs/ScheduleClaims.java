@@ -5,9 +5,9 @@ import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.persistence.EntityManager;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 
 /**
  * Makes a scheduled run happen once across instances that share the database: each instance tries to insert
@@ -18,12 +18,14 @@ import java.time.ZoneOffset;
 public class ScheduleClaims {
     private final EntityManager em;
     private final JobInstance instance;
+    private final Clock clock;
     /** Set once every start-up step (the demo loading among them) is over: a schedule may fire before that. */
     private volatile boolean started;
 
-    ScheduleClaims(EntityManager em, JobInstance instance) {
+    ScheduleClaims(EntityManager em, JobInstance instance, Clock clock) {
         this.em = em;
         this.instance = instance;
+        this.clock = clock;
     }
 
     void afterStartUp(@jakarta.enterprise.event.Observes @jakarta.annotation.Priority(Integer.MAX_VALUE)
@@ -49,7 +51,7 @@ public class ScheduleClaims {
             QuarkusTransaction.requiringNew().run(() -> em.createNativeQuery(
                             "insert into schedule_claim (schedule_name, run_on, instance_id, claimed_at) values (?1, ?2, ?3, ?4)")
                     .setParameter(1, schedule).setParameter(2, day).setParameter(3, instance.id())
-                    .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate());
+                    .setParameter(4, OffsetDateTime.now(clock)).executeUpdate());
             Log.infof("schedule %s on %s claimed by this instance %s", schedule, day, instance.id());
             return true;
         } catch (RuntimeException refused) {

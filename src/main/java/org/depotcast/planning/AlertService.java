@@ -14,9 +14,9 @@ import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HashMap;
@@ -38,10 +38,11 @@ public class AlertService {
     private final PlanningSettings settings;
     private final AccessScope scope;
     private final AuditService audit;
+    private final Clock clock;
 
     AlertService(PlanningService planning, PartService parts, LocationService locations, RepairService repairs,
                  AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings, AccessScope scope,
-                 AuditService audit) {
+                 AuditService audit, Clock clock) {
         this.planning = planning;
         this.parts = parts;
         this.locations = locations;
@@ -51,6 +52,7 @@ public class AlertService {
         this.settings = settings;
         this.scope = scope;
         this.audit = audit;
+        this.clock = clock;
     }
 
     /**
@@ -61,7 +63,7 @@ public class AlertService {
     @Transactional
     public List<ReorderAlert> alerts(String locationCode, AlertKind onlyKind, boolean includeSnoozed) {
         planning.requireForecasts();
-        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        LocalDate today = LocalDate.now(clock);
         Map<String, AlertAction> latest = latestActions(locationCode);
         Map<String, List<ReorderAlert.WaitingPump>> waiting = waitingPumps(today);
         List<ReorderAlert> alerts = new ArrayList<>();
@@ -159,10 +161,10 @@ public class AlertService {
         Part part = parts.require("partNumber", partNumber);
         Location location = locations.require("location", locationCode);
         scope.require(location.id, location.code);
-        if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(ZoneOffset.UTC)))) {
+        if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(clock)))) {
             throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
         }
-        ReorderAlert alert = raiseAt(location, waitingPumps(LocalDate.now(ZoneOffset.UTC))).stream()
+        ReorderAlert alert = raiseAt(location, waitingPumps(LocalDate.now(clock))).stream()
                 .filter(a -> a.partNumber().equals(part.partNumber)).findFirst()
                 .filter(a -> kind == null || a.has(kind))
                 .orElseThrow(() -> new EntityMissingException(null, "alert", part.partNumber + " at " + locationCode
@@ -176,7 +178,7 @@ public class AlertService {
         record.snoozedUntil = action == AlertAction.Action.SNOOZE ? snoozeUntil : null;
         record.note = note;
         record.actor = currentUser.name();
-        record.actedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        record.actedAt = OffsetDateTime.now(clock);
         actions.persist(record);
         audit.record("ALERT_" + action.name(), "alert", partNumber + "@" + locationCode, null,
                 java.util.Map.of("reasons", record.reasons, "snoozedUntil", String.valueOf(record.snoozedUntil),

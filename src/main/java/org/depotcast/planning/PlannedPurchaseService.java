@@ -16,9 +16,9 @@ import org.depotcast.stock.LocationService;
 import org.depotcast.stock.PurchaseOrderRequest;
 import org.depotcast.stock.PurchaseOrderService;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 
 /**
@@ -35,9 +35,11 @@ public class PlannedPurchaseService {
     private final AccessScope scope;
     private final CurrentUser currentUser;
     private final AuditService audit;
+    private final Clock clock;
 
     PlannedPurchaseService(PlannedPurchaseRepository plans, PartService parts, LocationService locations,
-                           PurchaseOrderService orders, AccessScope scope, CurrentUser currentUser, AuditService audit) {
+                           PurchaseOrderService orders, AccessScope scope, CurrentUser currentUser, AuditService audit,
+                           Clock clock) {
         this.plans = plans;
         this.parts = parts;
         this.locations = locations;
@@ -45,6 +47,7 @@ public class PlannedPurchaseService {
         this.scope = scope;
         this.currentUser = currentUser;
         this.audit = audit;
+        this.clock = clock;
     }
 
     /** Created is true when the part was not in the plan before. */
@@ -76,7 +79,7 @@ public class PlannedPurchaseService {
         line.quantity = Quantities.requirePositive("quantity", request.quantity(), part.wholeUnits());
         line.note = request.note();
         line.addedBy = currentUser.name();
-        line.addedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        line.addedAt = OffsetDateTime.now(clock);
         if (created) {
             plans.persist(line);
         }
@@ -106,7 +109,7 @@ public class PlannedPurchaseService {
             throw new BusinessRuleException("supplier", "no part from '" + request.supplier() + "' is in the purchase plan of "
                     + location.code);
         }
-        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        LocalDate today = LocalDate.now(clock);
         orders.place(new PurchaseOrderRequest(request.orderNumber(), request.supplier(), location.code, today,
                 request.expectedOn(), lines.stream().map(p -> new PurchaseOrderRequest.Line(p.part.partNumber, p.quantity)).toList()));
         List<PlannedPurchases.Line> taken = lines.stream().map(PlannedPurchases.Line::from).toList();

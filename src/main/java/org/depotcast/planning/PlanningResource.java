@@ -17,8 +17,8 @@ import jakarta.ws.rs.core.UriInfo;
 import org.depotcast.access.Roles;
 import org.depotcast.common.QueryParams;
 
+import java.time.Clock;
 import java.time.LocalDate;
-import java.time.ZoneOffset;
 import java.util.List;
 
 @Path("/api/planning")
@@ -29,14 +29,16 @@ class PlanningResource {
     private final PurchasePlanService purchasePlans;
     private final TransferService transfers;
     private final TransferOrderService transferOrders;
+    private final Clock clock;
 
     PlanningResource(PlanningService planning, AlertService alerts, PurchasePlanService purchasePlans,
-                     TransferService transfers, TransferOrderService transferOrders) {
+                     TransferService transfers, TransferOrderService transferOrders, Clock clock) {
         this.planning = planning;
         this.alerts = alerts;
         this.purchasePlans = purchasePlans;
         this.transfers = transfers;
         this.transferOrders = transferOrders;
+        this.clock = clock;
     }
 
     @GET
@@ -83,7 +85,7 @@ class PlanningResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public Response propose(@Valid @NotNull PlanningRequests.PurchasePlanRequest r, UriInfo uri) {
-        LocalDate date = r.planningDate() == null ? LocalDate.now(ZoneOffset.UTC) : r.planningDate();
+        LocalDate date = r.planningDate() == null ? LocalDate.now(clock) : r.planningDate();
         PurchasePlanResponse plan = purchasePlans.propose(r.budget(), date);
         return Response.created(uri.getAbsolutePathBuilder().path(Long.toString(plan.id())).build()).entity(plan).build();
     }

@@ -15,9 +15,9 @@ import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.StockQueryService;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -42,11 +42,13 @@ public class PlanningService {
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
     private final org.depotcast.requests.RequestService requests;
+    private final Clock clock;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
                     CurrentUser currentUser, PlanningSettings settings,
                     org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
-                    org.depotcast.requests.RequestService requests, ServiceLevelRepository serviceLevelsSet) {
+                    org.depotcast.requests.RequestService requests, ServiceLevelRepository serviceLevelsSet,
+                    Clock clock) {
         this.serviceLevelsSet = serviceLevelsSet;
         this.requests = requests;
         this.scope = scope;
@@ -58,6 +60,7 @@ public class PlanningService {
         this.currentUser = currentUser;
         this.calculator = new PolicyCalculator(settings);
         this.settings = settings;
+        this.clock = clock;
     }
 
     /**
@@ -178,7 +181,7 @@ public class PlanningService {
             throw new InvalidInputException("level", "must be in (0, 1), was " + level);
         }
         PolicyCalculator.ServiceLevels before = serviceLevels(null);
-        serviceLevelsSet.set(partClass, level, currentUser.name(), OffsetDateTime.now(ZoneOffset.UTC));
+        serviceLevelsSet.set(partClass, level, currentUser.name(), OffsetDateTime.now(clock));
         audit.record("SERVICE_LEVEL_SET", "service_level", partClass, before, Map.of("level", level));
     }
 }

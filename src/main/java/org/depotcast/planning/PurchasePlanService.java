@@ -18,9 +18,9 @@ import org.depotcast.stock.PurchaseOrderService;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -42,6 +42,7 @@ public class PurchasePlanService {
     private final Plans plans;
     private final org.depotcast.access.AccessScope scope;
     private final org.depotcast.access.AuditService audit;
+    private final Clock clock;
 
     @ApplicationScoped
     static class Plans implements PanacheRepository<PurchasePlan> {
@@ -49,7 +50,7 @@ public class PurchasePlanService {
 
     PurchasePlanService(PlanningService planning, PartService parts, PurchaseOrderService orders, LocationService locations,
                         CurrentUser currentUser, Plans plans, org.depotcast.access.AccessScope scope,
-                        org.depotcast.access.AuditService audit) {
+                        org.depotcast.access.AuditService audit, Clock clock) {
         this.scope = scope;
         this.audit = audit;
         this.planning = planning;
@@ -58,6 +59,7 @@ public class PurchasePlanService {
         this.locations = locations;
         this.currentUser = currentUser;
         this.plans = plans;
+        this.clock = clock;
     }
 
     @Transactional
@@ -77,7 +79,7 @@ public class PurchasePlanService {
         }
         MarginalAllocation.Plan allocation = MarginalAllocation.allocate(items, budget.doubleValue());
         PurchasePlan plan = new PurchasePlan();
-        plan.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+        plan.createdAt = OffsetDateTime.now(clock);
         plan.createdBy = currentUser.name();
         plan.planningDate = planningDate;
         plan.budget = budget;

@@ -23,8 +23,8 @@ import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
 
 import java.math.BigDecimal;
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
@@ -46,6 +46,7 @@ public class TransferOrderService {
     private final CurrentUser currentUser;
     private final AccessScope scope;
     private final AuditService audit;
+    private final Clock clock;
 
     @ApplicationScoped
     static class Orders implements PanacheRepository<TransferOrder> {
@@ -75,7 +76,7 @@ public class TransferOrderService {
     }
 
     TransferOrderService(Orders orders, LocationService locations, PartService parts, StockLedgerService ledger,
-                         CurrentUser currentUser, AccessScope scope, AuditService audit) {
+                         CurrentUser currentUser, AccessScope scope, AuditService audit, Clock clock) {
         this.orders = orders;
         this.locations = locations;
         this.parts = parts;
@@ -83,6 +84,7 @@ public class TransferOrderService {
         this.currentUser = currentUser;
         this.scope = scope;
         this.audit = audit;
+        this.clock = clock;
     }
 
     /** A dispatch, and whether it was made before under the same key (a resend). */
@@ -133,7 +135,7 @@ public class TransferOrderService {
         order.from = from;
         order.to = to;
         order.status = TransferOrder.Status.IN_TRANSIT;
-        order.dispatchedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        order.dispatchedAt = OffsetDateTime.now(clock);
         order.actor = actor;
         if (key != null) {
             order.idempotencyOwner = key.ownerFor(actor);
@@ -223,7 +225,7 @@ public class TransferOrderService {
         receipt.receivedQuantity = received;
         receipt.writtenOffQuantity = writtenOff;
         receipt.writeOffReason = writtenOff.signum() > 0 ? body.writeOffReason().strip() : null;
-        receipt.recordedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        receipt.recordedAt = OffsetDateTime.now(clock);
         receipt.actor = currentUser.name();
         return receipt;
     }

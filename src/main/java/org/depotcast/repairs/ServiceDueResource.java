@@ -7,6 +7,7 @@ import jakarta.ws.rs.QueryParam;
 import jakarta.ws.rs.core.MediaType;
 import org.eclipse.microprofile.openapi.annotations.Operation;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
 
@@ -14,9 +15,11 @@ import java.util.List;
 @Produces(MediaType.APPLICATION_JSON)
 class ServiceDueResource {
     private final ServiceDueService service;
+    private final Clock clock;
 
-    ServiceDueResource(ServiceDueService service) {
+    ServiceDueResource(ServiceDueService service, Clock clock) {
         this.service = service;
+        this.clock = clock;
     }
 
     /**
@@ -28,6 +31,6 @@ class ServiceDueResource {
             + "since the last preventive service (or installation) at its recorded daily loads, the model's interval, "
             + "hours left and the day it falls due at today's load; overdue first. Optional depot filter.")
     public List<ServiceDue> due(@QueryParam("depot") String depot) {
-        return service.dueAt(LocalDate.now(), depot);
+        return service.dueAt(LocalDate.now(clock), depot);
     }
 }

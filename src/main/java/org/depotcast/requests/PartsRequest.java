@@ -65,8 +65,8 @@ public class PartsRequest {
     @Version
     public long version;
 
-    /** Moves to a new state if the current one allows it, and records who did it and why. */
-    void moveTo(RequestStatus next, Set<RequestStatus> allowedFrom, String actor, String reason) {
+    /** Moves to a new state if the current one allows it, and records who did it, when and why. */
+    void moveTo(RequestStatus next, Set<RequestStatus> allowedFrom, String actor, String reason, OffsetDateTime at) {
         if (!allowedFrom.contains(status)) {
             throw new ConflictException("status", "request " + clientRef + " is " + status + "; it cannot become " + next);
         }
@@ -75,7 +75,7 @@ public class PartsRequest {
         event.request = this;
         event.status = next;
         event.actor = actor;
-        event.at = OffsetDateTime.now(java.time.ZoneOffset.UTC);
+        event.at = at;
         event.reason = reason;
         events.add(event);
     }

@@ -8,10 +8,10 @@ import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
+import java.time.Clock;
 import java.time.Duration;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -23,18 +23,21 @@ public class RequestReportService {
     private final RepairService repairs;
     private final LocationService locations;
     private final AccessScope scope;
+    private final Clock clock;
 
-    RequestReportService(RequestService requests, RepairService repairs, LocationService locations, AccessScope scope) {
+    RequestReportService(RequestService requests, RepairService repairs, LocationService locations, AccessScope scope,
+                         Clock clock) {
         this.requests = requests;
         this.repairs = repairs;
         this.locations = locations;
         this.scope = scope;
+        this.clock = clock;
     }
 
     @Transactional
     public List<RequestDtos.DepotReport> perDepot() {
-        OffsetDateTime since = OffsetDateTime.now(ZoneOffset.UTC).minusDays(365);
-        LocalDate today = LocalDate.now(ZoneOffset.UTC);
+        OffsetDateTime since = OffsetDateTime.now(clock).minusDays(365);
+        LocalDate today = LocalDate.now(clock);
         Map<String, long[]> waits = repairs.waitingForPartsSince(today.minusDays(365));
         // Today's waits: a pump counts once however many parts it waits for, at its longest wait.
         Map<String, Map<String, Long>> waitingNow = new java.util.HashMap<>();

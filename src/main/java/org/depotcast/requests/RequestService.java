@@ -25,8 +25,8 @@ import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
 
 import java.math.BigDecimal;
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.EnumSet;
 import java.util.HashMap;
 import java.util.List;
@@ -49,6 +49,7 @@ public class RequestService {
     private final AccessScope scope;
     private final CurrentUser currentUser;
     private final AuditService audit;
+    private final Clock clock;
 
     @ApplicationScoped
     static class Requests implements PanacheRepository<PartsRequest> {
@@ -58,7 +59,8 @@ public class RequestService {
     }
 
     RequestService(Requests requests, PartService parts, PumpService pumps, LocationService locations,
-                   StockLedgerService ledger, AccessScope scope, CurrentUser currentUser, AuditService audit) {
+                   StockLedgerService ledger, AccessScope scope, CurrentUser currentUser, AuditService audit,
+                   Clock clock) {
         this.requests = requests;
         this.parts = parts;
         this.pumps = pumps;
@@ -67,6 +69,7 @@ public class RequestService {
         this.scope = scope;
         this.currentUser = currentUser;
         this.audit = audit;
+        this.clock = clock;
     }
 
     public record Raised(RequestDtos.View request, boolean replayed) {
@@ -97,7 +100,7 @@ public class RequestService {
         request.pump = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId());
         request.urgency = body.urgency();
         request.fault = body.fault();
-        request.raisedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        request.raisedAt = OffsetDateTime.now(clock);
         request.status = RequestStatus.RAISED;
         for (int i = 0; i < body.lines().size(); i++) {
             RequestDtos.Line l = body.lines().get(i);
@@ -111,7 +114,7 @@ public class RequestService {
             line.quantityRequested = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
             request.lines.add(line);
         }
-        request.moveTo(RequestStatus.RAISED, EnumSet.of(RequestStatus.RAISED), mechanic, body.fault());
+        request.moveTo(RequestStatus.RAISED, EnumSet.of(RequestStatus.RAISED), mechanic, body.fault(), OffsetDateTime.now(clock));
         requests.persist(request);
         audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
         return new Raised(RequestDtos.View.from(request), false);
@@ -181,7 +184,7 @@ public class RequestService {
             throw new BusinessRuleException("lines", "approve at least one unit, or refuse the request with a reason");
         }
         request.moveTo(full ? RequestStatus.APPROVED : RequestStatus.PARTLY_APPROVED, EnumSet.of(RequestStatus.RAISED),
-                currentUser.name(), body.note());
+                currentUser.name(), body.note(), OffsetDateTime.now(clock));
         audit.record("REQUEST_APPROVED", "parts_request", request.clientRef, before, RequestDtos.View.from(request));
         return RequestDtos.View.from(request);
     }
@@ -190,7 +193,7 @@ public class RequestService {
     public RequestDtos.View refuse(long id, String reason) {
         PartsRequest request = lockedForDepot(id);
         request.moveTo(RequestStatus.REFUSED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
-                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason);
+                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason, OffsetDateTime.now(clock));
         audit.record("REQUEST_REFUSED", "parts_request", request.clientRef, null, reason);
         return RequestDtos.View.from(request);
     }
@@ -200,7 +203,7 @@ public class RequestService {
     public RequestDtos.View issue(long id) {
         PartsRequest request = lockedForDepot(id);
         request.moveTo(RequestStatus.ISSUED, EnumSet.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED),
-                currentUser.name(), null);
+                currentUser.name(), null, OffsetDateTime.now(clock));
         for (PartsRequestLine line : request.lines) {
             if (line.quantityApproved.signum() > 0) {
                 ledger.postWithin(new MovementCommand(MovementKind.ISSUE_TO_KIT, line.partToIssue().partNumber,
@@ -209,7 +212,7 @@ public class RequestService {
                 line.quantityIssued = line.quantityApproved;
             }
         }
-        request.issuedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        request.issuedAt = OffsetDateTime.now(clock);
         audit.record("REQUEST_ISSUED", "parts_request", request.clientRef, null, RequestDtos.View.from(request));
         return RequestDtos.View.from(request);
     }
@@ -222,7 +225,7 @@ public class RequestService {
             throw new ForbiddenException("only the mechanic who raised a request can cancel it");
         }
         request.moveTo(RequestStatus.CANCELLED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
-                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason);
+                RequestStatus.PARTLY_APPROVED), currentUser.name(), reason, OffsetDateTime.now(clock));
         audit.record("REQUEST_CANCELLED", "parts_request", request.clientRef, null, reason);
         return RequestDtos.View.from(request);
     }
@@ -231,7 +234,7 @@ public class RequestService {
     public RequestDtos.View close(long id) {
         PartsRequest request = locked(id);
         requireParty(request);
-        request.moveTo(RequestStatus.CLOSED, EnumSet.of(RequestStatus.ISSUED), currentUser.name(), null);
+        request.moveTo(RequestStatus.CLOSED, EnumSet.of(RequestStatus.ISSUED), currentUser.name(), null, OffsetDateTime.now(clock));
         audit.record("REQUEST_CLOSED", "parts_request", request.clientRef, null, null);
         return RequestDtos.View.from(request);
     }

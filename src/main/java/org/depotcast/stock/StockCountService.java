@@ -14,6 +14,7 @@ import org.depotcast.common.Quantities;
 
 import java.io.InputStream;
 import java.math.BigDecimal;
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.util.ArrayList;
@@ -40,9 +41,10 @@ public class StockCountService {
     private final AccessScope scope;
     private final StockedParts stocked;
     private final CsvImporter importer;
+    private final Clock clock;
 
     StockCountService(PartService parts, LocationService locations, StockLedgerService ledger, StockQueryService queries,
-                      AccessScope scope, StockedParts stocked, CsvImporter importer) {
+                      AccessScope scope, StockedParts stocked, CsvImporter importer, Clock clock) {
         this.scope = scope;
         this.parts = parts;
         this.locations = locations;
@@ -50,6 +52,7 @@ public class StockCountService {
         this.queries = queries;
         this.stocked = stocked;
         this.importer = importer;
+        this.clock = clock;
     }
 
     /** Books one counted line: a count adjustment for the difference from the books, none when they agree. */
@@ -95,7 +98,7 @@ public class StockCountService {
      */
     @Transactional
     public CsvExport exportCsv(String locationCode) {
-        String today = LocalDate.now(ZoneOffset.UTC).toString();
+        String today = LocalDate.now(clock).toString();
         Map<String, List<?>> rows = new TreeMap<>();
         Map<String, String> descriptions = new java.util.HashMap<>();
         parts.all().forEach(p -> descriptions.put(p.partNumber, p.description));

@@ -16,8 +16,8 @@ import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
 
 import java.math.BigDecimal;
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -37,9 +37,11 @@ public class StockLedgerService {
     private final CurrentUser currentUser;
     private final AccessScope scope;
     private final AuditService audit;
+    private final Clock clock;
 
     StockLedgerService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
-                       PartService parts, CurrentUser currentUser, AccessScope scope, AuditService audit) {
+                       PartService parts, CurrentUser currentUser, AccessScope scope, AuditService audit,
+                       Clock clock) {
         this.audit = audit;
         this.scope = scope;
         this.balances = balances;
@@ -47,6 +49,7 @@ public class StockLedgerService {
         this.locations = locations;
         this.parts = parts;
         this.currentUser = currentUser;
+        this.clock = clock;
     }
 
     /**
@@ -152,7 +155,7 @@ public class StockLedgerService {
         movement.fromLocation = from;
         movement.toLocation = to;
         movement.quantity = quantity;
-        movement.recordedAt = OffsetDateTime.now(ZoneOffset.UTC);
+        movement.recordedAt = OffsetDateTime.now(clock);
         movement.occurredAt = command.occurredAt() == null ? movement.recordedAt : command.occurredAt();
         movement.actor = actor;
         movement.reason = command.reason();
