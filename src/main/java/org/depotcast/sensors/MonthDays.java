@@ -27,9 +27,11 @@ final class MonthDays {
 
     static MonthDays decode(LocalDate monthStart, String text) {
         int[] days = new int[monthStart.lengthOfMonth()];
+        // Read by character: a year of files re-reads hundreds of thousands of months.
         for (int d = 0; d < days.length; d++) {
-            String slot = text.substring(4 * d, 4 * d + 4);
-            days[d] = slot.equals(NO_READING) ? MISSING : Integer.parseInt(slot);
+            int at = 4 * d;
+            days[d] = text.charAt(at) == '.' ? MISSING : (text.charAt(at) - '0') * 1000
+                    + (text.charAt(at + 1) - '0') * 100 + (text.charAt(at + 2) - '0') * 10 + (text.charAt(at + 3) - '0');
         }
         return new MonthDays(monthStart, days);
     }
@@ -49,6 +51,15 @@ final class MonthDays {
 
     LocalDate monthStart() {
         return monthStart;
+    }
+
+    int length() {
+        return hundredths.length;
+    }
+
+    /** Hundredths of an hour on the month's day {@code index} (0 for the first), or {@link #MISSING}. */
+    int onDayIndex(int index) {
+        return hundredths[index];
     }
 
     /** Hundredths of an hour on the day, or {@link #MISSING}. */

@@ -3,7 +3,7 @@ package org.depotcast.sensors;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.time.LocalDate;
-import java.time.format.DateTimeParseException;
+import java.time.DateTimeException;
 import java.util.Map;
 
 /**
@@ -53,8 +53,8 @@ final class ReadingCheck {
         }
         LocalDate day;
         try {
-            day = raw.day() == null ? null : LocalDate.parse(raw.day().strip());
-        } catch (DateTimeParseException e) {
+            day = raw.day() == null ? null : isoDay(raw.day().strip());
+        } catch (DateTimeException e) {
             return refuse(raw, "day", "not a date (yyyy-mm-dd)");
         }
         if (day == null) {
@@ -77,6 +77,12 @@ final class ReadingCheck {
         }
         String field = raw.hours() != null ? "hours" : raw.strokes() != null ? "strokes" : "litres";
         String text = raw.hours() != null ? raw.hours() : raw.strokes() != null ? raw.strokes() : raw.litres();
+        if ("hours".equals(field)) {
+            int plain = plainHundredths(text);
+            if (plain >= 0 && plain <= DAY_HUNDREDTHS) {
+                return new Outcome(new Checked(raw.row(), pump, day, plain), null);
+            }
+        }
         BigDecimal value = number(text);
         if (value == null) {
             return refuse(raw, field, "not a number");
@@ -99,6 +105,55 @@ final class ReadingCheck {
             return refuse(raw, field, "more than 24 hours of use in one day");
         }
         return new Outcome(new Checked(raw.row(), pump, day, hundredths.intValueExact()), null);
+    }
+
+    /**
+     * A day written {@code yyyy-mm-dd} read digit by digit: {@code LocalDate.parse}'s formatter was a quarter of a
+     * year file's intake time. Any other shape goes through the formatter, so what is refused stays the same; an
+     * impossible date (2026-02-30) throws {@link DateTimeException} either way.
+     */
+    static LocalDate isoDay(String text) {
+        if (text.length() == 10 && text.charAt(4) == '-' && text.charAt(7) == '-') {
+            int year = digits(text, 0, 4), month = digits(text, 5, 7), dayOfMonth = digits(text, 8, 10);
+            if (year >= 0 && month >= 0 && dayOfMonth >= 0) {
+                return LocalDate.of(year, month, dayOfMonth);
+            }
+        }
+        return LocalDate.parse(text);
+    }
+
+    private static int digits(String text, int from, int to) {
+        int value = 0;
+        for (int i = from; i < to; i++) {
+            char c = text.charAt(i);
+            if (c < '0' || c > '9') {
+                return -1;
+            }
+            value = value * 10 + (c - '0');
+        }
+        return value;
+    }
+
+    /**
+     * Hours written as plain digits with at most two decimals ({@code 5}, {@code 5.5}, {@code 12.25}) in hundredths,
+     * without a BigDecimal; -1 for any other shape, which then takes the general path (rounding, signs, exponents).
+     */
+    static int plainHundredths(String text) {
+        String t = text.strip();
+        int point = t.indexOf('.');
+        int whole = digitsOrFail(t, 0, point < 0 ? t.length() : point);
+        if (whole < 0 || whole > 24 || (point >= 0 && (t.length() - point - 1 > 2 || t.length() - point - 1 < 1))) {
+            return -1;
+        }
+        if (point < 0) {
+            return whole * 100;
+        }
+        int decimals = digitsOrFail(t, point + 1, t.length());
+        return decimals < 0 ? -1 : whole * 100 + (t.length() - point - 1 == 1 ? decimals * 10 : decimals);
+    }
+
+    private static int digitsOrFail(String text, int from, int to) {
+        return to <= from || to - from > 3 ? -1 : digits(text, from, to);
     }
 
     private static BigDecimal number(String text) {

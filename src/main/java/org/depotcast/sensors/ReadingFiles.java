@@ -2,8 +2,6 @@ package org.depotcast.sensors;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import org.depotcast.common.CsvRow;
-import org.depotcast.common.CsvUpload;
 import org.depotcast.common.InvalidInputException;
 
 import java.io.BufferedReader;
@@ -12,9 +10,6 @@ import java.io.InputStream;
 import java.io.InputStreamReader;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
-import java.util.Iterator;
-import java.util.List;
-import java.util.Set;
 import java.util.function.Consumer;
 
 /**
@@ -25,40 +20,12 @@ import java.util.function.Consumer;
 final class ReadingFiles {
     /** A JSON line longer than this is not a reading; it is refused and skipped without being held. */
     static final int LONGEST_LINE = 1_000;
-    private static final List<String> VALUE_COLUMNS = List.of("hours", "strokes", "litres");
 
     private ReadingFiles() {
     }
 
     static void readCsv(InputStream body, Consumer<RawReading> rows) {
-        try (CsvUpload upload = CsvUpload.open(body, List.of("asset_id", "day"), Set.of())) {
-            boolean anyValueColumn = false;
-            Iterator<CsvRow> it = upload.iterator();
-            while (it.hasNext()) {
-                CsvRow row = it.next();
-                if (!anyValueColumn && VALUE_COLUMNS.stream().noneMatch(row::has)) {
-                    throw new InvalidInputException("header", "needs a column 'hours', 'strokes' or 'litres'");
-                }
-                anyValueColumn = true;
-                rows.accept(new RawReading(row.line(), row.optionalText("asset_id"), row.optionalText("day"),
-                        cell(row, "hours"), cell(row, "strokes"), cell(row, "litres"), null));
-            }
-            try {
-                upload.problems().throwIfAny();
-            } catch (InvalidInputException unreadableTail) {
-                // The file broke off (an unbalanced quote): the rows before it stand, the rest is refused.
-                unreadableTail.errors().forEach(e -> rows.accept(RawReading.unreadable(rowOf(e.field()), e.message())));
-            }
-        }
-    }
-
-    private static String cell(CsvRow row, String column) {
-        return row.has(column) ? row.optionalText(column) : null;
-    }
-
-    private static long rowOf(String field) {
-        String digits = field.replaceAll("\\D+", " ").trim();
-        return digits.isEmpty() ? 0 : Long.parseLong(digits.split(" ")[0]);
+        ReadingCsv.read(body, rows);
     }
 
     static void readNdjson(InputStream body, ObjectMapper json, Consumer<RawReading> rows) {
@@ -66,7 +33,7 @@ final class ReadingFiles {
             throw new InvalidInputException("body", "the body is empty");
         }
         BufferedReader in = new BufferedReader(new InputStreamReader(
-                org.depotcast.common.BodySizeLimit.counted(body), StandardCharsets.UTF_8), 64 * 1024);
+                org.depotcast.common.BodySizeLimit.countedBulk(body), StandardCharsets.UTF_8), 64 * 1024);
         StringBuilder line = new StringBuilder(128);
         long number = 0;
         try {

@@ -4,6 +4,7 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import io.quarkus.logging.Log;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.persistence.EntityManager;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.common.DateBounds;
@@ -47,9 +48,12 @@ public class SensorIntakeService {
     private final SensorConversionService conversions;
     private final ObjectMapper json;
     private final StopFlagService stopFlags;
+    private final EntityManager session;
 
     SensorIntakeService(SensorReadingStore store, PumpService pumps, AccessScope scope, AuditService audit,
-                        SensorConversionService conversions, ObjectMapper json, StopFlagService stopFlags) {
+                        SensorConversionService conversions, ObjectMapper json, StopFlagService stopFlags,
+                        EntityManager session) {
+        this.session = session;
         this.stopFlags = stopFlags;
         this.json = json;
         this.store = store;
@@ -128,19 +132,17 @@ public class SensorIntakeService {
         Set<Long> keys = new HashSet<>();
         LocalDate from = LocalDate.MAX, to = LocalDate.MIN;
         for (ReadingCheck.Checked r : chunk) {
-            LocalDate month = r.day().withDayOfMonth(1);
             pumpIds.add(r.pump().id());
-            keys.add(SensorReadingStore.key(r.pump().id(), month));
-            from = month.isBefore(from) ? month : from;
-            to = month.isAfter(to) ? month : to;
+            keys.add(SensorReadingStore.key(r.pump().id(), r.day()));
+            from = r.day().isBefore(from) ? r.day() : from;
+            to = r.day().isAfter(to) ? r.day() : to;
         }
         try {
-            Map<Long, MonthDays> held = store.held(pumpIds, from, to, keys);
+            Map<Long, MonthDays> held = store.held(pumpIds, from.withDayOfMonth(1), to.withDayOfMonth(1), keys);
             Map<Long, MonthDays> touched = new LinkedHashMap<>();
             for (ReadingCheck.Checked r : chunk) {
-                LocalDate month = r.day().withDayOfMonth(1);
-                long key = SensorReadingStore.key(r.pump().id(), month);
-                MonthDays days = held.computeIfAbsent(key, k -> MonthDays.empty(month));
+                long key = SensorReadingStore.key(r.pump().id(), r.day());
+                MonthDays days = held.computeIfAbsent(key, k -> MonthDays.empty(r.day().withDayOfMonth(1)));
                 int old = days.set(r.day(), r.hundredths());
                 if (old == r.hundredths()) {
                     tally.unchanged++;
@@ -156,6 +158,9 @@ public class SensorIntakeService {
                 }
             }
             store.write(new ArrayList<>(touched.entrySet()));
+            // A bulk file may replace millions of days: their audit entries go out with each chunk, not held to the end.
+            session.flush();
+            session.clear();
         } catch (SQLException e) {
             throw new IllegalStateException("sensor readings could not be written", e);
         }

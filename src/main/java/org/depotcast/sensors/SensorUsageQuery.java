@@ -142,10 +142,10 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
                     return empty;
                 });
                 MonthDays month = MonthDays.decode(r.getDate(2).toLocalDate(), r.getString(3));
-                for (LocalDate day = month.monthStart(); day.getMonth() == month.monthStart().getMonth();
-                     day = day.plusDays(1)) {
-                    long index = day.toEpochDay() - firstDay.toEpochDay();
-                    int hundredths = month.get(day);
+                long offset = month.monthStart().toEpochDay() - firstDay.toEpochDay();
+                for (int d = 0; d < month.length(); d++) {
+                    long index = offset + d;
+                    int hundredths = month.onDayIndex(d);
                     if (index >= 0 && index < days && hundredths != MonthDays.MISSING) {
                         window[(int) index] = hundredths / 100.0;
                     }

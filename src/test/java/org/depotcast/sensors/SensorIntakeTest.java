@@ -148,6 +148,28 @@ class SensorIntakeTest {
         assertEquals(10, usage.monthsOf(pumpId).size());
     }
 
+    @Test
+    void aFileOverTheGeneralBodyLimitIsTakenAsABulkStream() {
+        // A year's export of a thousand pumps is about 9 MB; the readings path takes bulk bodies (over 10 MB).
+        String p = pump("DEP-TESHVALE", "RB-2");
+        StringBuilder body = new StringBuilder(12 * 1024 * 1024).append("asset_id,day,hours\n");
+        long rows = 0;
+        while (body.length() <= 11 * 1024 * 1024) {
+            for (int d = 0; d < 304; d++, rows++) {
+                LocalDate day = LocalDate.of(2026, 1, 1).plusDays(d);
+                body.append(p).append(',').append(day).append(',').append(day.getDayOfMonth() % 12).append(".25\n");
+            }
+        }
+        byte[] bytes = body.toString().getBytes(java.nio.charset.StandardCharsets.UTF_8);
+        // Sent chunked (a stream of unknown length), as a gateway streams a file.
+        as("officer").contentType("text/csv").body(new java.io.ByteArrayInputStream(bytes))
+                .post("/api/sensors/readings").then().statusCode(200).body("rowsRead", equalTo((int) rows))
+                .body("added", equalTo(304)).body("unchanged", equalTo((int) rows - 304)).body("refused", equalTo(0));
+        // March: days 1..31, each day-of-month mod 12 plus a quarter hour.
+        double march = java.util.stream.IntStream.rangeClosed(1, 31).mapToDouble(d -> d % 12 + 0.25).sum();
+        monthIs(p, "2026-03-01", (float) march, 31);
+    }
+
     private static void monthIs(String asset, String monthStart, float hours, int days) {
         as("officer").get("/api/sensors/pumps/" + asset + "/months").then().statusCode(200)
                 .body("months.find { it.monthStart == '" + monthStart + "' }.hours", equalTo(hours))
