@@ -10,14 +10,40 @@ import java.util.SplittableRandom;
  * its recorded load scaled by a lasting pump factor (lognormal, σ 0.2); a seasonal swing of ±25 % peaking in March
  * (the dry season, when other sources fail); one quiet day a week at 35 %; day-to-day noise (lognormal, σ 0.15);
  * for 8 % of pumps a gradual decline to 45 % over 60 days from a day in the year; transmission gaps (1.5 % of days
- * start one of 1–7 days with no reading); and each recorded breakdown as use near nothing from 0–3 days before its
- * report (the sensor sees the stop before anyone reports it) until its fix, or to the end while it is open.
+ * start one of 1–7 days with no reading); and each recorded breakdown as use near nothing from some days before its
+ * report (the sensor sees the stop before anyone reports it; {@link ReportDelay}) until its fix, or to the end while
+ * it is open.
  */
 final class DemoSensorSeries {
     /** Share of demo pumps fitted with a sensor. */
     static final double SENSOR_SHARE = 0.40;
 
     record Stop(LocalDate reportedOn, LocalDate fixedOn) {
+    }
+
+    /** Days from a pump's stop to its breakdown report (see seed-data/README.md for why the demo uses the second). */
+    enum ReportDelay {
+        /** 0–3 days, uniform: the first demo's choice, a programme where a stop is reported at once. */
+        WITHIN_THREE_DAYS,
+        /**
+         * Poisson with a mean of 3 days, at most 14: the caretaker sees the stop, tells the committee, and word reaches
+         * the area mechanic by phone or on market day; 1 stop in 20 reported the same day, 4 in 5 within 5 days.
+         */
+        CARETAKER_TO_MECHANIC;
+
+        int draw(SplittableRandom random) {
+            if (this == WITHIN_THREE_DAYS) {
+                return random.nextInt(4);
+            }
+            // Knuth's product-of-uniforms method for a Poisson draw (The Art of Computer Programming, vol. 2, 3.4.1).
+            double limit = Math.exp(-3.0), product = random.nextDouble();
+            int days = 0;
+            while (product > limit) {
+                days++;
+                product *= random.nextDouble();
+            }
+            return Math.min(14, days);
+        }
     }
 
     /** The hours, and for each stop (in the order given) the day its use fell. */
@@ -34,6 +60,11 @@ final class DemoSensorSeries {
     /** Hours per day from {@code firstDay} for {@code days} days; NaN where no reading came. */
     static Series of(String assetId, long seed, double loadHoursPerDay, LocalDate firstDay, int days,
                      List<Stop> stops) {
+        return of(assetId, seed, loadHoursPerDay, firstDay, days, stops, ReportDelay.CARETAKER_TO_MECHANIC);
+    }
+
+    static Series of(String assetId, long seed, double loadHoursPerDay, LocalDate firstDay, int days,
+                     List<Stop> stops, ReportDelay delay) {
         SplittableRandom random = new SplittableRandom(seed * 7_919L + assetId.hashCode());
         double level = loadHoursPerDay * Math.exp(0.2 * random.nextGaussian());
         int quietWeekday = random.nextInt(7);
@@ -49,7 +80,14 @@ final class DemoSensorSeries {
         }
         List<LocalDate> stoppedFrom = new java.util.ArrayList<>();
         for (Stop stop : stops) {
-            LocalDate from = stop.reportedOn().minusDays(random.nextInt(4));
+            LocalDate from = stop.reportedOn().minusDays(delay.draw(random));
+            for (Stop earlier : stops) {
+                // A pump cannot stop again before its previous repair is done.
+                if (earlier.fixedOn() != null && !earlier.fixedOn().isAfter(stop.reportedOn())
+                        && earlier.fixedOn().isAfter(from)) {
+                    from = earlier.fixedOn();
+                }
+            }
             stoppedFrom.add(from);
             LocalDate to = stop.fixedOn() == null ? firstDay.plusDays(days) : stop.fixedOn();
             for (LocalDate day = from; day.isBefore(to); day = day.plusDays(1)) {

@@ -20,10 +20,14 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The detector replayed day by day over the demo programme's sensor year (the demo's pumps and recorded breakdowns,
- * the year to 2026-11-30), for sensor seeds 14 (the demo's) and 15: for each planted breakdown, the days from its
- * stop to the flag and whether the flag came before the report; flags on days with no planted stop are false alarms,
- * per 1,000 pump-months judged. A flag opens as {@link StopFlagService} opens one (stopped, probability ≥ 0.5, no
- * repair open) and closes when a repair is open or use comes back. Figures print as EVIDENCE lines.
+ * the year to 2026-11-30), for sensor seeds 14 (the demo's) and 15 and both report delays the generator knows: for
+ * each planted breakdown, the days from its stop to the flag and whether the flag came before the report; flags on
+ * days with no planted stop are false alarms, per 1,000 pump-months judged. Day t is judged on the readings up to and
+ * including day t (a day's file arrives that evening); "before the report" means on a day strictly before the report
+ * day. A planted breakdown is judged when its stop has the detector's full 42-day window before it and its report
+ * falls in the year. A flag opens as {@link StopFlagService} opens one (stopped, probability ≥ 0.5, no repair open,
+ * the stop not begun on or before the last fix) and closes when a repair is open or use comes back. Figures print as
+ * EVIDENCE lines.
  */
 class StopDetectionEvidenceTest {
     private static final LocalDate LAST_DAY = LocalDate.of(2026, 11, 30);
@@ -34,21 +38,23 @@ class StopDetectionEvidenceTest {
 
     @Test
     void theDetectorFlagsPlantedBreakdownsEarlyWithFewFalseAlarms() throws IOException {
-        for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
-            double[] figures = replay(seed);
-            System.out.printf("EVIDENCE seed %d: %d planted breakdowns judged, median %.1f days from stop to flag, "
-                            + "%.1f %% flagged before the report (%.1f %% of the %d reported 2 or more days after the "
-                            + "stop), %.2f false alarms per 1,000 pump-months (%.0f pump-months)%n",
-                    seed, (int) figures[0], figures[1], 100 * figures[2], 100 * figures[5], (int) figures[6],
-                    figures[3], figures[4]);
-            assertTrue(figures[0] >= 30, "enough planted breakdowns to judge: " + figures[0]);
-            assertTrue(figures[1] <= 2, "median days to the flag: " + figures[1]);
-            // Two days of near-nothing use are needed (one idle day is too common to mean a breakdown), so a stop
-            // reported the same or the next day cannot be flagged first. The 80 % is not reached (about
-            // 75 %): a guard against getting worse, not the target.
-            assertTrue(figures[5] >= 0.7, "share flagged before the report, reported 2+ days on: " + figures[5]);
-            // The target is 2; seed 15 gives 3.3. A guard against getting worse, not the target.
-            assertTrue(figures[3] <= 4, "false alarms per 1,000 pump-months: " + figures[3]);
+        for (DemoSensorSeries.ReportDelay delay : DemoSensorSeries.ReportDelay.values()) {
+            for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
+                double[] figures = replay(seed, delay);
+                System.out.printf("EVIDENCE %s, seed %d: %d planted breakdowns judged, median %.1f days from stop to "
+                                + "flag, %.1f %% flagged before the report (%.1f %% of the %d reported 2 or more days "
+                                + "after the stop), %.2f false alarms per 1,000 pump-months (%.0f pump-months)%n",
+                        delay, seed, (int) figures[0], figures[1], 100 * figures[2], 100 * figures[5],
+                        (int) figures[6], figures[3], figures[4]);
+                assertTrue(figures[0] >= 30, "enough planted breakdowns to judge: " + figures[0]);
+                assertTrue(figures[1] <= 2, "median days to the flag: " + figures[1]);
+                assertTrue(figures[3] <= 2, "false alarms per 1,000 pump-months: " + figures[3]);
+                // Two days of near-nothing use are needed (one idle day is too common to mean a breakdown), so a
+                // stop reported the same or the next day cannot be flagged first. Of those reported later, 75–82 %
+                // are flagged first (gaps in transmission and earlier idle days hide the rest): a guard, not the
+                // issue's 80 % of all planted breakdowns, which is not reached.
+                assertTrue(figures[5] >= 0.7, "share flagged before the report, reported 2+ days on: " + figures[5]);
+            }
         }
     }
 
@@ -60,7 +66,7 @@ class StopDetectionEvidenceTest {
         DemoSensorSeries.Series b = DemoSensorSeries.of("OB-00001", 14, 5, first, DAYS, stops);
         assertTrue(Arrays.equals(a.hours(), b.hours()) && a.stoppedFrom().equals(b.stoppedFrom()), "same seed, same series");
         LocalDate stopped = a.stoppedFrom().get(0);
-        assertTrue(!stopped.isAfter(LocalDate.of(2026, 3, 10)) && !stopped.isBefore(LocalDate.of(2026, 3, 7)));
+        assertTrue(!stopped.isAfter(LocalDate.of(2026, 3, 10)) && !stopped.isBefore(LocalDate.of(2026, 2, 24)));
         for (LocalDate day = stopped; day.isBefore(LocalDate.of(2026, 3, 20)); day = day.plusDays(1)) {
             double h = a.hours()[index(first, day)];
             assertTrue(Double.isNaN(h) || h <= 0.1, day + ": " + h);
@@ -73,7 +79,7 @@ class StopDetectionEvidenceTest {
      * {planted judged, median delay, share before report, false alarms per 1,000 pump-months, pump-months, share
      * before report of those reported 2+ days after the stop, how many those are}.
      */
-    private static double[] replay(long seed) throws IOException {
+    private static double[] replay(long seed, DemoSensorSeries.ReportDelay delay) throws IOException {
         LocalDate first = LAST_DAY.minusDays(DAYS - 1L);
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(first.minusDays(60));
         Map<String, Double> loads = latestLoads();
@@ -89,7 +95,8 @@ class StopDetectionEvidenceTest {
             }
             List<DemoSensorSeries.Stop> own = stops.getOrDefault(asset, List.of());
             DemoSensorSeries.Series series = DemoSensorSeries.of(asset, seed,
-                    loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day"))), first, DAYS, own);
+                    loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day"))), first, DAYS, own,
+                    delay);
             List<Planted> marks = new ArrayList<>();
             for (int i = 0; i < own.size(); i++) {
                 DemoSensorSeries.Stop s = own.get(i);
@@ -109,7 +116,8 @@ class StopDetectionEvidenceTest {
                     open = !(repairOpen || v.state() == StopDetector.State.IN_USE);
                     continue;
                 }
-                if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < 0.5 || repairOpen) {
+                if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < 0.5 || repairOpen
+                        || stopBeganByLastFix(marks, t, t - window + 1 + v.changeIndex())) {
                     continue;
                 }
                 open = true;
@@ -144,6 +152,16 @@ class StopDetectionEvidenceTest {
         return new double[]{planted, median, planted == 0 ? 0 : (double) beforeReport / planted,
                 1000 * falseAlarms / pumpMonths, pumpMonths,
                 laterReported == 0 ? 0 : (double) laterBeforeReport / laterReported, laterReported};
+    }
+
+    /** As {@link StopFlagService} rules: a stop that began on or before the last fix is that repair's, not a new one. */
+    private static boolean stopBeganByLastFix(List<Planted> marks, int today, int stoppedFrom) {
+        for (Planted m : marks) {
+            if (m.fix() <= today && m.fix() >= stoppedFrom) {
+                return true;
+            }
+        }
+        return false;
     }
 
     /** The pump's load as the demo holds it after loading: its newest usage reading. */

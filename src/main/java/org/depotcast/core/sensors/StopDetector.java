@@ -5,7 +5,8 @@ package org.depotcast.core.sensors;
  *
  * <p>Method: Page's one-sided cumulative sum (CUSUM) for a fall in the mean (E. S. Page, "Continuous inspection
  * schemes", Biometrika 41(1/2):100–115, 1954), on the pump's own pattern: the mean μ₀ and standard deviation σ of the
- * days read in the {@code baselineDays} before the last {@code watchDays}. Over the watched days
+ * days in use (read, and above near nothing: see below) in the {@code baselineDays} before the last {@code watchDays},
+ * so an earlier breakdown inside the baseline neither lowers the level watched nor widens σ. Over the watched days
  * S_t = max(0, S_{t−1} + (μ₀ − k) − x_t), a day with no reading leaving S unchanged; a fall is signalled when
  * S_t > h. The reference value k = σ/2 and the decision interval h = 4σ are the textbook choice for detecting a shift
  * of one standard deviation (Montgomery, Introduction to Statistical Quality Control, 6th ed., 2009, §9.1.3: k = 0.5σ
@@ -16,7 +17,7 @@ package org.depotcast.core.sensors;
  * the pump has <b>stopped</b>, from the first day of that run (a low day before it, such as a quiet weekday, may have
  * started the sum, so the run and not Page's change point dates the stop); if the last day read is back at half of
  * μ₀ or more, it was a dip and the pump is <b>in normal use</b>; otherwise its use is <b>declining</b>. A baseline with fewer than
- * {@code leastBaselineDays} days read, or with a mean of 0.25 h or less, is too little to judge a fall against. No reading in the last
+ * {@code leastBaselineDays} days read (or in use), or with a mean of 0.25 h or less, is too little to judge a fall against. No reading in the last
  * {@code gapDays} days is <b>no data received</b> (a transmission gap), whatever came before: a sensor that stops
  * sending is not a pump that stops pumping.
  *
@@ -94,24 +95,40 @@ public final class StopDetector {
         if (noneRead(hours, hours.length - settings.gapDays(), hours.length)) {
             return new Verdict(State.NO_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
-        double sum = 0, sumSq = 0;
-        int read = 0, idle = 0;
+        double sum = 0;
+        int read = 0;
         for (int i = 0; i < base; i++) {
             if (!Double.isNaN(hours[i])) {
                 sum += hours[i];
-                sumSq += hours[i] * hours[i];
                 read++;
             }
         }
         if (read < settings.leastBaselineDays() || sum / read <= NEAR_NOTHING_HOURS) {
             return new Verdict(State.TOO_LITTLE_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
-        double mean = sum / read;
-        double sd = Math.sqrt(Math.max(0, (sumSq - read * mean * mean) / (read - 1)));
-        double nearNothing = Math.max(NEAR_NOTHING_HOURS, settings.stopFraction() * mean);
+        double nearNothing = Math.max(NEAR_NOTHING_HOURS, settings.stopFraction() * sum / read);
+        // The level in use is read from the days the pump was used: near-nothing days (an earlier breakdown in the
+        // baseline) would pull the mean down and swell σ, so the sum would take days longer to see the next stop.
+        // How often the pump idles is kept apart, for the probability below.
+        double inUseSum = 0, inUseSumSq = 0;
+        int inUse = 0, idle = 0;
         for (int i = 0; i < base; i++) {
-            idle += !Double.isNaN(hours[i]) && hours[i] <= nearNothing ? 1 : 0;
+            if (Double.isNaN(hours[i])) {
+                continue;
+            }
+            if (hours[i] <= nearNothing) {
+                idle++;
+            } else {
+                inUseSum += hours[i];
+                inUseSumSq += hours[i] * hours[i];
+                inUse++;
+            }
         }
+        if (inUse < settings.leastBaselineDays()) {
+            return new Verdict(State.TOO_LITTLE_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
+        }
+        double mean = inUseSum / inUse;
+        double sd = Math.sqrt(Math.max(0, (inUseSumSq - inUse * mean * mean) / (inUse - 1)));
         double sigma = Math.max(sd, Math.max(LEAST_SIGMA_HOURS, 0.1 * mean));
         int change = cusumChange(hours, base, mean, sigma);
         if (change < 0) {

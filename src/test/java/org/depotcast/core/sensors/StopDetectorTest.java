@@ -50,18 +50,19 @@ class StopDetectorTest {
     }
 
     @Test
-    void aPumpIdleEverySeventhDayNeedsThreeIdleDaysToSignalAndIsLessLikelyDown() {
+    void aPumpIdleEverySeventhDayIsWatchedAtItsLevelInUseAndIsLessLikelyDown() {
         double[] hours = new double[42];
         for (int i = 0; i < 28; i++) {
             hours[i] = i % 7 == 6 ? 0 : 6;
         }
         System.arraycopy(join(repeat(6, 11), repeat(0, 3)), 0, hours, 28, 14);
         StopDetector.Verdict v = detector.judge(hours);
-        // μ₀ = 144/28 = 5.142857, s = √((864 − 28 μ₀²)/27) = 2.138090; k = 1.069045, h = 8.552360; each idle day adds
-        // 4.073812: 4.07, 8.15, 12.22 → the signal on the third, the change on the first (day 39).
+        // The level in use is read from the 24 days in use: μ₀ = 6, s = 0, so σ = its floor 0.1 μ₀ = 0.6; k = 0.3,
+        // h = 2.4; the first idle day adds 5.7 > h → the signal and the change on day 39.
         assertEquals(StopDetector.State.STOPPED, v.state());
         assertEquals(39, v.changeIndex());
-        assertEquals(2.138090, v.baselineSd(), 1e-6);
+        assertEquals(6.0, v.baselineMean(), 1e-12);
+        assertEquals(0.0, v.baselineSd(), 1e-12);
         // 4 idle days of 28: q = 5/30 = 1/6; three idle days: P = 1/(1 + (364/365)(365)/216) = 216/580.
         assertEquals(216.0 / 580.0, v.probabilityDown(), 1e-12);
     }
