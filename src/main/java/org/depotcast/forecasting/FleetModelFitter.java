@@ -1,6 +1,7 @@
 package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.CovariateSelection;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PoissonFit;
 import org.depotcast.core.forecast.PoissonRegression;
@@ -17,7 +18,8 @@ import java.util.Map;
  * Fits one family's fleet model on pump-year rows: each pump in each 12-month block of the history (counted back
  * from the forecast origin) is a row with its operating hours as exposure, its covariates at mid-period, and the
  * breakdowns of that family. A family with fewer than {@link #MIN_EVENTS} breakdowns, or a singular design, falls
- * back to the declared prior rate.
+ * back to the declared prior rate. Of the declared covariates, the model keeps those the data carry
+ * ({@link CovariateSelection}, by BIC).
  */
 final class FleetModelFitter {
     static final int MIN_EVENTS = 10;
@@ -112,15 +114,19 @@ final class FleetModelFitter {
         double exposure = java.util.Arrays.stream(e).sum();
         double prior = definition.priorEventsPer1000Hours() / 1000.0;
         PoissonFit fit = null;
+        List<RateCovariate> kept = definition.covariates();
         if (events >= MIN_EVENTS) {
             try {
-                fit = PoissonRegression.fit(covariates, y, e);
+                CovariateSelection.Choice choice = CovariateSelection.byBic(covariates, y, e);
+                fit = choice.fit();
+                kept = java.util.Arrays.stream(choice.columns()).mapToObj(definition.covariates()::get).toList();
+                covariates = CovariateSelection.select(covariates, choice.columns());
             } catch (PoissonRegression.SingularDesignException singular) {
                 fit = null;
             }
         }
         Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, java.util.Arrays.copyOf(depots, rows));
-        return new FleetRateModel(definition.covariates(), fit, prior, units, events, exposure, ratios);
+        return new FleetRateModel(kept, fit, prior, units, events, exposure, ratios);
     }
 
     private static Map<Long, Double> depotRatios(PoissonFit fit, double[][] covariates, double[] y, double[] e,
@@ -146,6 +152,9 @@ final class FleetModelFitter {
         for (int i = 0; i < ids.size(); i++) {
             o[i] = observedExpected.get(ids.get(i))[0];
             ex[i] = observedExpected.get(ids.get(i))[1];
+        }
+        if (!RateShrinkage.groupsDiffer(o, ex, y.length, fit.varianceFactor())) {
+            return ratios; // the depots differ by no more than chance: one fleet rate everywhere
         }
         double[] shrunk = RateShrinkage.shrink(o, ex);
         for (int i = 0; i < ids.size(); i++) {

@@ -3,6 +3,8 @@ package org.depotcast.forecasting;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.ForecastMethod;
+import org.depotcast.core.forecast.SeriesForecaster;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -19,6 +21,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.TreeMap;
 import java.util.concurrent.TimeUnit;
+import java.util.function.ToDoubleFunction;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -30,14 +33,30 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * generator's planted rates (each pump's planted rate × its daily load at the cut × 365.25 days, age at mid-year).
  * Scheduled-service demand is left out of the MAE comparison (the planted rates are breakdown rates); it is in the
  * ranges' check ({@link RangeCoverage}): every month's and the 12-month total's demand at each depot and for the
- * programme against the stored 80 % and 95 % ranges.
+ * programme against the stored 80 % and 95 % ranges. Beside them, the fleet model alone (policy "fleet") and each
+ * single history method on every series, scored alike.
  * {@code -Dheldout.seeds=7,8,9} measures other seeds (printed; the default seed is the one asserted in CI).
  */
 class HeldOutYearTest {
     private static final LocalDate ORIGIN = LocalDate.of(2025, 12, 1);
 
-    record Score(double maeDepot, double maePlanted, double maeProgramme, double maePlantedProgramme, double bias,
-                 double biasPlanted, int series, RangeCoverage.Table ranges) {
+    /** Mean absolute error of 12-month totals over depot × part series and over parts (programme), and total bias. */
+    record Accuracy(double depotMae, double programmeMae, double bias) {
+    }
+
+    /**
+     * @param others the fleet model alone and each single history method, by name, scored like the service
+     */
+    record Score(Accuracy service, Accuracy planted, Map<String, Accuracy> others, int series, RangeCoverage.Table ranges) {
+        Accuracy fleet() {
+            return others.get("fleet model alone");
+        }
+
+        /** The single history method with the lowest value of the given measure. */
+        Map.Entry<String, Accuracy> bestHistory(ToDoubleFunction<Accuracy> measure) {
+            return others.entrySet().stream().filter(e -> !e.getKey().equals("fleet model alone"))
+                    .min(java.util.Comparator.comparingDouble(e -> measure.applyAsDouble(e.getValue()))).orElseThrow();
+        }
     }
 
     @Test
@@ -46,21 +65,39 @@ class HeldOutYearTest {
         List<Score> scores = new ArrayList<>();
         for (String seed : seeds.split(",")) {
             Score s = heldOut(dir.resolve("seed-" + seed.strip()), Long.parseLong(seed.strip()));
-            System.out.printf(Locale.ROOT, "held-out year, seed %s: %d depot x part series; MAE %.2f (planted %.2f); "
-                            + "programme MAE %.2f (planted %.2f); total bias %+.1f%% (planted %+.1f%%)%n", seed, s.series(),
-                    s.maeDepot(), s.maePlanted(), s.maeProgramme(), s.maePlantedProgramme(), 100 * s.bias(),
-                    100 * s.biasPlanted());
+            System.out.printf(Locale.ROOT, "held-out year, seed %s: %d depot x part series%n", seed, s.series());
+            print("service", s.service());
+            print("planted rates", s.planted());
+            s.others().forEach(HeldOutYearTest::print);
             System.out.print(s.ranges().describe("seed " + seed));
             scores.add(s);
         }
         for (Score s : scores) {
             assertEquals(57, s.series());
-            assertTrue(s.maeDepot() <= 1.05 * s.maePlanted(), "depot MAE " + s.maeDepot() + " vs planted " + s.maePlanted());
-            assertTrue(s.maeProgramme() <= 1.05 * s.maePlantedProgramme(),
-                    "programme MAE " + s.maeProgramme() + " vs planted " + s.maePlantedProgramme());
-            assertTrue(Math.abs(s.bias()) <= Math.abs(s.biasPlanted()) + 0.01, "bias " + s.bias());
+            assertTrue(s.service().depotMae() <= 1.05 * s.planted().depotMae(),
+                    "depot MAE " + s.service().depotMae() + " vs planted " + s.planted().depotMae());
+            // At least as accurate as the better of the fleet model alone and the best single history method
+            // (chosen in hindsight, per measure), by MAE and by total bias (2 % slack on MAE for the credibility
+            // update, half a point on bias). At programme level (19 part totals) that best-in-hindsight of eight
+            // methods beats even the planted rates on some seeds by luck; there the bar is the planted rates'.
+            ToDoubleFunction<Accuracy> depot = Accuracy::depotMae, programme = Accuracy::programmeMae;
+            ToDoubleFunction<Accuracy> absBias = a -> Math.abs(a.bias());
+            assertTrue(s.service().depotMae() <= 1.02 * better(s, depot), "depot MAE " + s.service() + " vs " + s.others());
+            assertTrue(s.service().programmeMae() <= Math.max(1.02 * better(s, programme),
+                    1.05 * s.planted().programmeMae()), "programme MAE " + s.service() + " vs " + s.others());
+            assertTrue(Math.abs(s.service().bias()) <= Math.max(better(s, absBias) + 0.005,
+                    Math.abs(s.planted().bias()) + 0.01), "bias " + s.service() + " vs " + s.others());
             s.ranges().assertCalibrated();
         }
+    }
+
+    private static double better(Score s, ToDoubleFunction<Accuracy> measure) {
+        return Math.min(measure.applyAsDouble(s.fleet()), measure.applyAsDouble(s.bestHistory(measure).getValue()));
+    }
+
+    private static void print(String name, Accuracy a) {
+        System.out.printf(Locale.ROOT, "  %-22s depot MAE %6.2f  programme MAE %6.2f  total bias %+5.1f%%%n", name,
+                a.depotMae(), a.programmeMae(), 100 * a.bias());
     }
 
     private static Score heldOut(Path out, long seed) throws IOException, InterruptedException {
@@ -90,6 +127,12 @@ class HeldOutYearTest {
         Map<String, PartForecastResult> forecasts = new HashMap<>();
         new DemandAssembler(snapshot, definitions, models, holdout, 12).assemble(done -> { })
                 .forEach(r -> forecasts.put(r.partId() + "|" + r.locationCode(), r));
+        Map<ComponentFamily, ForecastModelDefinition> fleetOnly = new EnumMap<>(ComponentFamily.class);
+        definitions.forEach((family, d) -> fleetOnly.put(family, new ForecastModelDefinition(d.family(), d.covariates(),
+                d.priorEventsPer1000Hours(), d.unitsPerEvent(), "fleet", d.preventive(), d.source())));
+        Map<String, PartForecastResult> fleetForecasts = new HashMap<>();
+        new DemandAssembler(snapshot, fleetOnly, models, holdout, 12).assemble(done -> { })
+                .forEach(r -> fleetForecasts.put(r.partId() + "|" + r.locationCode(), r));
 
         // What happened in the held-out year, and what the planted rates expected of the pumps known at the cut.
         Map<String, Double> actual = new TreeMap<>(), planted = new TreeMap<>();
@@ -114,35 +157,43 @@ class HeldOutYearTest {
                 }
             }
         }
-        double errService = 0, errPlanted = 0, sumService = 0, sumPlanted = 0, sumActual = 0;
-        Map<Long, double[]> programme = new HashMap<>();
-        for (Map.Entry<String, Double> e : planted.entrySet()) {
-            PartForecastResult f = forecasts.get(e.getKey());
-            double service = 0;
-            for (int m = 0; f != null && m < 12; m++) {
-                service += f.monthly()[m] - f.preventive()[m];
-            }
-            double happened = actual.getOrDefault(e.getKey(), 0.0);
-            errService += Math.abs(service - happened);
-            errPlanted += Math.abs(e.getValue() - happened);
-            sumService += service;
-            sumPlanted += e.getValue();
+        Map<String, Accuracy> others = new java.util.LinkedHashMap<>();
+        others.put("fleet model alone", accuracy(planted.keySet(), k -> breakdownTotal(fleetForecasts.get(k)), actual));
+        for (ForecastMethod method : ForecastMethod.values()) {
+            others.put(method.name().toLowerCase(Locale.ROOT), accuracy(planted.keySet(), k -> {
+                PartForecastResult f = forecasts.get(k);
+                return f == null ? 0 : 12 * SeriesForecaster.forecast(f.history(), method, Double.NaN, Double.NaN, 1).forecast()[0];
+            }, actual));
+        }
+        return new Score(accuracy(planted.keySet(), k -> breakdownTotal(forecasts.get(k)), actual),
+                accuracy(planted.keySet(), planted::get, actual), others, planted.size(),
+                RangeCoverage.score(forecasts, p.rows, ORIGIN));
+    }
+
+    /** The breakdown part of a forecast's first 12 months (scheduled services left out, as in the planted rates). */
+    private static double breakdownTotal(PartForecastResult f) {
+        double total = 0;
+        for (int m = 0; f != null && m < 12; m++) {
+            total += f.monthly()[m] - f.preventive()[m];
+        }
+        return total;
+    }
+
+    private static Accuracy accuracy(java.util.Set<String> keys, ToDoubleFunction<String> forecast,
+                                     Map<String, Double> actual) {
+        double error = 0, sumForecast = 0, sumActual = 0;
+        Map<String, double[]> byPart = new HashMap<>();
+        for (String key : keys) {
+            double f = forecast.applyAsDouble(key), happened = actual.getOrDefault(key, 0.0);
+            error += Math.abs(f - happened);
+            sumForecast += f;
             sumActual += happened;
-            double[] total = programme.computeIfAbsent(Long.parseLong(e.getKey().substring(0, e.getKey().indexOf('|'))),
-                    k -> new double[3]);
-            total[0] += service;
-            total[1] += e.getValue();
-            total[2] += happened;
+            double[] part = byPart.computeIfAbsent(key.substring(0, key.indexOf('|')), k -> new double[2]);
+            part[0] += f;
+            part[1] += happened;
         }
-        RangeCoverage.Table ranges = RangeCoverage.score(forecasts, p.rows, ORIGIN);
-        double progService = 0, progPlanted = 0;
-        for (double[] t : programme.values()) {
-            progService += Math.abs(t[0] - t[2]);
-            progPlanted += Math.abs(t[1] - t[2]);
-        }
-        int n = planted.size();
-        return new Score(errService / n, errPlanted / n, progService / programme.size(), progPlanted / programme.size(),
-                sumService / sumActual - 1, sumPlanted / sumActual - 1, n, ranges);
+        double programmeError = byPart.values().stream().mapToDouble(t -> Math.abs(t[0] - t[1])).sum();
+        return new Accuracy(error / keys.size(), programmeError / byPart.size(), sumForecast / sumActual - 1);
     }
 
     /** The generated CSV files as the loader's plain rows, and the planted rates per family. */

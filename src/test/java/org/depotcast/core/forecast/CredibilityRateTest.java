@@ -4,7 +4,9 @@ import org.junit.jupiter.api.Test;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 class CredibilityRateTest {
     @Test
@@ -26,12 +28,27 @@ class CredibilityRateTest {
 
     @Test
     void unitsInEventsOfTwoWidenTheNoiseAndLowerTheWeight() {
-        // Same data, φ = 2 (two units per event): Σφ·E = 120 → τ² = 80/1,200, Z = 20τ²/(20τ² + 2) = 0.4.
+        // O = (40, 0, 20), E = 20 each, φ = 2 (two units per event): Σ(O − E)² = 800, Σφ·E = 120 → τ² = 680/1,200,
+        // Z = 20τ²/(20τ² + 2) = 0.85; Dean's score 680/√(3 × 2 × 2² × 20²) = 6.94 clears √ln 3.
+        CredibilityRate.Result r = CredibilityRate.combine(new double[]{40, 0, 20}, new double[]{20, 20, 20},
+                new double[]{2, 2, 2});
+        assertEquals(680.0 / 1200, r.priorVariance(), 1e-12);
+        assertEquals(0.85, r.credibility()[0], 1e-12);
+        assertArrayEquals(new double[]{1.85, 0.15, 1.0}, r.ratio(), 1e-12);
+    }
+
+    @Test
+    void aSpreadChanceExplainsLeavesTheFleetRate() {
+        // O = (30, 10, 20), E = 20, φ = 2: the moment estimate τ² = 80/1,200 is positive, but Dean's score (1992)
+        // 80/√(3 × 2 × 2² × 20²) = 0.816 is under √ln 3 = 1.048: no spread shown, every series keeps the fleet rate.
         CredibilityRate.Result r = CredibilityRate.combine(new double[]{30, 10, 20}, new double[]{20, 20, 20},
                 new double[]{2, 2, 2});
-        assertEquals(80.0 / 1200, r.priorVariance(), 1e-12);
-        assertEquals(0.4, r.credibility()[0], 1e-12);
-        assertArrayEquals(new double[]{1.2, 0.8, 1.0}, r.ratio(), 1e-12);
+        assertEquals(0, r.priorVariance());
+        assertArrayEquals(new double[]{0, 0, 0}, r.credibility(), 0);
+        assertArrayEquals(new double[]{1, 1, 1}, r.ratio(), 0);
+        // The threshold grows with the number of series: a score of 100/√9,600 = 1.02 clears √ln 2 = 0.83, not √ln 3.
+        assertTrue(CredibilityRate.spreadShown(100, 9600, 2));
+        assertFalse(CredibilityRate.spreadShown(100, 9600, 3));
     }
 
     @Test
