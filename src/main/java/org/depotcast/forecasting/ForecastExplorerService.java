@@ -38,10 +38,12 @@ public class ForecastExplorerService {
 
     private final ForecastQueryService queries;
     private final PartService parts;
+    private final ForecastModelFiles modelFiles;
 
-    ForecastExplorerService(ForecastQueryService queries, PartService parts) {
+    ForecastExplorerService(ForecastQueryService queries, PartService parts, ForecastModelFiles modelFiles) {
         this.queries = queries;
         this.parts = parts;
+        this.modelFiles = modelFiles;
     }
 
     public ForecastExplorerResponse part(String partNumber, String location) {
@@ -105,7 +107,24 @@ public class ForecastExplorerService {
                 ? "Too few breakdowns to fit (fewer than 10): the declared prior rate is used, the same at every depth and use."
                 : fit.overdispersed() ? "Overdispersed (Pearson χ²/df above 1.5): intervals widened by its square root (quasi-Poisson)."
                 : "Poisson fit; intervals are estimate ± 1.96 standard errors.";
-        return new FleetModelView(fit, terms, reference, byDepth, byUse, note);
+        return new FleetModelView(fit, terms, reference, byDepth, byUse, note + leftOut(fit));
+    }
+
+    /** The declared covariates the fit did not keep (chosen by BIC), in words; empty when none or a prior. */
+    private String leftOut(FleetModelResponse fit) {
+        ForecastModelDefinition definition = modelFiles.load().get(ComponentFamily.valueOf(fit.family()));
+        if (definition == null || !"fit".equals(fit.source())) {
+            return "";
+        }
+        List<String> dropped = definition.covariates().stream().map(c -> c.name().toLowerCase(Locale.ROOT))
+                .filter(name -> !fit.coefficients().containsKey(name)).map(name -> switch (name) {
+                    case "log_depth" -> "borehole depth";
+                    case "age_years" -> "pump age";
+                    case "usage_hours" -> "daily use beyond its hours";
+                    default -> name;
+                }).toList();
+        return dropped.isEmpty() ? "" : " Left out because this family's breakdowns do not show an effect beyond chance "
+                + "(BIC): " + String.join("; ", dropped) + ".";
     }
 
     private static FleetModelView.RatePoint point(FleetModelResponse fit, double value, double depthM, double hoursPerDay,
