@@ -116,7 +116,7 @@ public class ForecastExplorerService {
         if (definition == null || !"fit".equals(fit.source())) {
             return "";
         }
-        List<String> dropped = definition.covariates().stream().map(c -> c.name().toLowerCase(Locale.ROOT))
+        List<String> dropped = definition.covariates().stream().map(org.depotcast.core.forecast.RateCovariate::term)
                 .filter(name -> !fit.coefficients().containsKey(name)).map(name -> switch (name) {
                     case "log_depth" -> "borehole depth";
                     case "age_years" -> "pump age";
