@@ -107,9 +107,13 @@ final class FleetModelFitter {
                 rows++;
             }
         }
-        covariates = java.util.Arrays.copyOf(covariates, rows);
-        y = java.util.Arrays.copyOf(y, rows);
-        e = java.util.Arrays.copyOf(e, rows);
+        return model(definition, java.util.Arrays.copyOf(covariates, rows), java.util.Arrays.copyOf(y, rows),
+                java.util.Arrays.copyOf(e, rows), java.util.Arrays.copyOf(depots, rows), units);
+    }
+
+    /** The model on the collected pump-year rows: the covariates the data carry (BIC), or the prior when too few. */
+    private static FleetRateModel model(ForecastModelDefinition definition, double[][] covariates, double[] y, double[] e,
+                                        long[] depots, double units) {
         int events = (int) java.util.Arrays.stream(y).sum();
         double exposure = java.util.Arrays.stream(e).sum();
         double prior = definition.priorEventsPer1000Hours() / 1000.0;
@@ -125,8 +129,7 @@ final class FleetModelFitter {
                 fit = null;
             }
         }
-        Map<Long, Double> ratios = depotRatios(fit, covariates, y, e, java.util.Arrays.copyOf(depots, rows));
-        return new FleetRateModel(kept, fit, prior, units, events, exposure, ratios);
+        return new FleetRateModel(kept, fit, prior, units, events, exposure, depotRatios(fit, covariates, y, e, depots));
     }
 
     private static Map<Long, Double> depotRatios(PoissonFit fit, double[][] covariates, double[] y, double[] e,
