@@ -3,6 +3,7 @@ package org.depotcast.pages;
 import io.quarkus.test.junit.QuarkusTest;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
+import org.openqa.selenium.StaleElementReferenceException;
 
 import java.math.BigDecimal;
 import java.time.Duration;
@@ -80,9 +81,10 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         offline(false);
         waitOutbox(0);
         wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
-        String message = driver.findElement(By.cssSelector(".outbox__item--refused .outbox__message")).getText();
+        // The outbox list is drawn again as the page refreshes its data: read each text in one step that retries.
+        String message = textOf(By.cssSelector(".outbox__item--refused .outbox__message"));
         assertTrue(message.contains("only 5 of part '" + sealPart + "'") && message.contains("cannot take 9"), message);
-        assertTrue(driver.findElement(By.id("outbox-count")).getText().contains("1 refused by the server"));
+        assertTrue(textOf(By.id("outbox-count")).contains("1 refused by the server"));
         screenshot("mechanic-refused-action");
 
         List<Map<String, Object>> requests = asMechanic().get("/api/requests").then().statusCode(200).extract().jsonPath().getList("$");
@@ -99,5 +101,10 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         assertNoPageErrors("HTTP 422 POST " + repairs,
                 repairs + " - Failed to load resource: the server responded with a status of 422");
         assertEquals(1L, pageProblems().stream().filter(p -> p.startsWith("HTTP ")).count(), "only the refused repair failed");
+    }
+
+    private String textOf(By by) {
+        return wait(Duration.ofSeconds(10)).ignoring(StaleElementReferenceException.class)
+                .until(d -> d.findElement(by).getText());
     }
 }

@@ -137,17 +137,12 @@ class SpendResourceTest {
         List<Map<String, Object>> checks = as("lead").get("/api/spend/back-check?years=3").then().statusCode(200)
                 .extract().jsonPath().getList("$");
         assertEquals(3, checks.size());
-        // The demo was drawn from the planted model, so the method should track it: within 15 % every year, and
-        // inside the 95 % range once there are three or more years of records before the year checked (the first
-        // year has two, and its fit is thinner).
-        for (int i = 0; i < checks.size(); i++) {
-            Map<String, Object> c = checks.get(i);
+        // Within 15 % every year even in the database every test shares (other tests add pumps and past repairs);
+        // the ranges are held to the demo alone in BackCheckTest, on a database of its own.
+        for (Map<String, Object> c : checks) {
             double projected = ((Number) c.get("projectedMean")).doubleValue();
             double actual = ((Number) c.get("actual")).doubleValue();
             assertTrue(Math.abs(projected - actual) / actual < 0.15, "back-check " + c);
-            if (i > 0) {
-                assertTrue((Boolean) c.get("within95"), "back-check " + c);
-            }
         }
         as("lead").get("/api/spend/back-check?years=9").then().statusCode(400).contentType(PROBLEM)
                 .body("errors[0].field", equalTo("years"));
