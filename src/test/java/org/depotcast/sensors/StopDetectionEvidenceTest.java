@@ -1,20 +1,13 @@
 package org.depotcast.sensors;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVRecord;
 import org.depotcast.core.sensors.StopDetector;
 import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
-import java.io.Reader;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.Arrays;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
@@ -30,11 +23,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * EVIDENCE lines.
  */
 class StopDetectionEvidenceTest {
-    private static final LocalDate LAST_DAY = LocalDate.of(2026, 11, 30);
-    private static final int DAYS = 365;
-
-    private record Planted(int stop, int report, int fix) {
-    }
+    private static final int DAYS = DemoSensorYear.DAYS;
 
     @Test
     void theDetectorFlagsPlantedBreakdownsEarlyWithFewFalseAlarms() throws IOException {
@@ -80,58 +69,21 @@ class StopDetectionEvidenceTest {
      * before report of those reported 2+ days after the stop, how many those are}.
      */
     private static double[] replay(long seed, DemoSensorSeries.ReportDelay delay) throws IOException {
-        LocalDate first = LAST_DAY.minusDays(DAYS - 1L);
-        Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(first.minusDays(60));
-        Map<String, Double> loads = latestLoads();
-        StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
         int window = StopDetector.Settings.DEFAULT.windowDays();
         List<Integer> delays = new ArrayList<>();
         int planted = 0, beforeReport = 0, falseAlarms = 0, laterReported = 0, laterBeforeReport = 0;
         double pumpDays = 0;
-        for (CSVRecord pump : csv("pumps.csv")) {
-            String asset = pump.get("asset_id");
-            if (pump.get("status").equals("DECOMMISSIONED") || !DemoSensorSeries.hasSensor(asset, seed)) {
-                continue;
-            }
-            List<DemoSensorSeries.Stop> own = stops.getOrDefault(asset, List.of());
-            DemoSensorSeries.Series series = DemoSensorSeries.of(asset, seed,
-                    loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day"))), first, DAYS, own,
-                    delay);
-            List<Planted> marks = new ArrayList<>();
-            for (int i = 0; i < own.size(); i++) {
-                DemoSensorSeries.Stop s = own.get(i);
-                marks.add(new Planted(index(first, series.stoppedFrom().get(i)), index(first, s.reportedOn()),
-                        s.fixedOn() == null ? DAYS : index(first, s.fixedOn())));
-            }
+        for (DemoSensorYear.PumpYear pump : DemoSensorYear.replay(seed, delay)) {
+            pumpDays += pump.daysJudged();
+            List<DemoSensorYear.Planted> marks = pump.planted();
             boolean[] caught = new boolean[marks.size()];
-            boolean open = false;
-            for (int t = window - 1; t < DAYS; t++) {
-                pumpDays++;
-                StopDetector.Verdict v = detector.judge(Arrays.copyOfRange(series.hours(), t - window + 1, t + 1));
-                boolean repairOpen = false;
-                for (Planted m : marks) {
-                    repairOpen |= m.report() <= t && t < m.fix();
-                }
-                if (open) {
-                    open = !(repairOpen || v.state() == StopDetector.State.IN_USE);
-                    continue;
-                }
-                if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < 0.5 || repairOpen
-                        || stopBeganByLastFix(marks, t, t - window + 1 + v.changeIndex())) {
-                    continue;
-                }
-                open = true;
-                int covering = -1;
-                for (int i = 0; i < marks.size(); i++) {
-                    if (marks.get(i).stop() <= t && t < marks.get(i).fix()) {
-                        covering = i;
-                    }
-                }
-                if (covering < 0) {
+            for (DemoSensorYear.Flag flag : pump.flags()) {
+                int t = flag.openDay();
+                if (flag.covering() < 0) {
                     falseAlarms++;
-                } else if (!caught[covering]) {
-                    caught[covering] = true;
-                    Planted m = marks.get(covering);
+                } else if (!caught[flag.covering()]) {
+                    caught[flag.covering()] = true;
+                    DemoSensorYear.Planted m = marks.get(flag.covering());
                     if (m.stop() >= window && m.report() < DAYS) {
                         delays.add(t - m.stop());
                         beforeReport += t < m.report() ? 1 : 0;
@@ -139,7 +91,7 @@ class StopDetectionEvidenceTest {
                     }
                 }
             }
-            for (Planted m : marks) {
+            for (DemoSensorYear.Planted m : marks) {
                 // Judged: its stop has a full baseline before it and its report falls in the year.
                 planted += m.stop() >= window && m.report() < DAYS ? 1 : 0;
                 laterReported += m.stop() >= window && m.report() < DAYS && m.report() - m.stop() >= 2 ? 1 : 0;
@@ -154,52 +106,7 @@ class StopDetectionEvidenceTest {
                 laterReported == 0 ? 0 : (double) laterBeforeReport / laterReported, laterReported};
     }
 
-    /** As {@link StopFlagService} rules: a stop that began on or before the last fix is that repair's, not a new one. */
-    private static boolean stopBeganByLastFix(List<Planted> marks, int today, int stoppedFrom) {
-        for (Planted m : marks) {
-            if (m.fix() <= today && m.fix() >= stoppedFrom) {
-                return true;
-            }
-        }
-        return false;
-    }
-
-    /** The pump's load as the demo holds it after loading: its newest usage reading. */
-    private static Map<String, Double> latestLoads() throws IOException {
-        Map<String, Double> loads = new HashMap<>();
-        Map<String, LocalDate> newest = new HashMap<>();
-        for (CSVRecord r : csv("usage-readings.csv")) {
-            LocalDate on = LocalDate.parse(r.get("read_on"));
-            if (newest.getOrDefault(r.get("asset_id"), LocalDate.MIN).isBefore(on)) {
-                newest.put(r.get("asset_id"), on);
-                loads.put(r.get("asset_id"), Double.parseDouble(r.get("hours_per_day")));
-            }
-        }
-        return loads;
-    }
-
     private static int index(LocalDate first, LocalDate day) {
         return (int) (day.toEpochDay() - first.toEpochDay());
-    }
-
-    private static Map<String, List<DemoSensorSeries.Stop>> breakdowns(LocalDate since) throws IOException {
-        Map<String, List<DemoSensorSeries.Stop>> stops = new HashMap<>();
-        java.util.Set<String> seen = new java.util.HashSet<>();
-        for (CSVRecord r : csv("repairs.csv")) {
-            LocalDate reported = LocalDate.parse(r.get("reported_on"));
-            if (!r.get("kind").equals("BREAKDOWN") || reported.isBefore(since) || !seen.add(r.get("repair_ref"))) {
-                continue;
-            }
-            String fixed = r.get("fixed_on");
-            stops.computeIfAbsent(r.get("asset_id"), k -> new ArrayList<>()).add(new DemoSensorSeries.Stop(reported,
-                    fixed.isBlank() ? null : LocalDate.parse(fixed)));
-        }
-        return stops;
-    }
-
-    private static List<CSVRecord> csv(String file) throws IOException {
-        try (Reader in = Files.newBufferedReader(Path.of("seed-data", file))) {
-            return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in).getRecords();
-        }
     }
 }

@@ -1,0 +1,178 @@
+package org.depotcast.sensors;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVRecord;
+import org.depotcast.core.sensors.StopDetector;
+
+import java.io.IOException;
+import java.io.Reader;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.time.LocalDate;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Set;
+
+/**
+ * The demo programme's sensor year (to 2026-11-30) replayed day by day with the detector and the service's flag
+ * rules, for the evidence tests. Day t is judged on the readings up to and including day t. A flag opens as
+ * {@link StopFlagService} opens one (stopped, probability ≥ 0.5, no repair open, the stop not begun on or before the
+ * last fix), keeps the highest probability seen while open, and closes when a repair is open or use comes back.
+ */
+final class DemoSensorYear {
+    static final LocalDate LAST_DAY = LocalDate.of(2026, 11, 30);
+    static final int DAYS = 365;
+    static final LocalDate FIRST = LAST_DAY.minusDays(DAYS - 1L);
+
+    /** A recorded breakdown as days of the year: the stop the series shows, the report and the fix. */
+    record Planted(int stop, int report, int fix) {
+    }
+
+    /**
+     * A flag: opened on {@code openDay}, closed on {@code closeDay} ({@link #DAYS} if still open at the end); the
+     * probability held on each day open (index 0 = the open day); {@code covering}: the planted breakdown whose stop
+     * covers the open day, or −1 (a false alarm).
+     */
+    record Flag(int openDay, int closeDay, int stoppedFrom, double[] probability, double baselineHoursPerDay,
+                int covering) {
+        double probabilityOn(int day) {
+            return probability[Math.min(day - openDay, probability.length - 1)];
+        }
+    }
+
+    /** One sensor pump's year: its planted breakdowns, its flags in order, the days judged. */
+    record PumpYear(String assetId, List<Planted> planted, List<Flag> flags, int daysJudged) {
+    }
+
+    private DemoSensorYear() {
+    }
+
+    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay) throws IOException {
+        Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
+        Map<String, Double> loads = latestLoads();
+        StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
+        List<PumpYear> year = new ArrayList<>();
+        for (CSVRecord pump : csv("pumps.csv")) {
+            String asset = pump.get("asset_id");
+            if (pump.get("status").equals("DECOMMISSIONED") || !DemoSensorSeries.hasSensor(asset, seed)) {
+                continue;
+            }
+            List<DemoSensorSeries.Stop> own = stops.getOrDefault(asset, List.of());
+            DemoSensorSeries.Series series = DemoSensorSeries.of(asset, seed,
+                    loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day"))), FIRST, DAYS, own,
+                    delay);
+            List<Planted> marks = new ArrayList<>();
+            for (int i = 0; i < own.size(); i++) {
+                DemoSensorSeries.Stop s = own.get(i);
+                marks.add(new Planted(index(series.stoppedFrom().get(i)), index(s.reportedOn()),
+                        s.fixedOn() == null ? DAYS : index(s.fixedOn())));
+            }
+            year.add(judge(asset, series.hours(), marks, detector));
+        }
+        return year;
+    }
+
+    private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector) {
+        int window = StopDetector.Settings.DEFAULT.windowDays();
+        List<Flag> flags = new ArrayList<>();
+        int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0;
+        double baseline = 0;
+        List<Double> probability = new ArrayList<>();
+        for (int t = window - 1; t < DAYS; t++) {
+            judged++;
+            StopDetector.Verdict v = detector.judge(Arrays.copyOfRange(hours, t - window + 1, t + 1));
+            boolean repairOpen = false;
+            for (Planted m : marks) {
+                repairOpen |= m.report() <= t && t < m.fix();
+            }
+            if (openDay >= 0) {
+                if (repairOpen || v.state() == StopDetector.State.IN_USE) {
+                    flags.add(flag(openDay, t, stoppedFrom, probability, baseline, covering));
+                    openDay = -1;
+                } else {
+                    double last = probability.get(probability.size() - 1);
+                    probability.add(v.state() == StopDetector.State.STOPPED ? Math.max(last, v.probabilityDown()) : last);
+                }
+                continue;
+            }
+            int from = t - window + 1 + v.changeIndex();
+            if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < StopFlagService.LEAST_PROBABILITY
+                    || repairOpen || stopBeganByLastFix(marks, t, from)) {
+                continue;
+            }
+            openDay = t;
+            stoppedFrom = from;
+            baseline = v.baselineMean();
+            probability = new ArrayList<>(List.of(v.probabilityDown()));
+            covering = -1;
+            for (int i = 0; i < marks.size(); i++) {
+                if (marks.get(i).stop() <= t && t < marks.get(i).fix()) {
+                    covering = i;
+                }
+            }
+        }
+        if (openDay >= 0) {
+            flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering));
+        }
+        return new PumpYear(asset, marks, flags, judged);
+    }
+
+    private static Flag flag(int openDay, int closeDay, int stoppedFrom, List<Double> probability, double baseline,
+                             int covering) {
+        return new Flag(openDay, closeDay, stoppedFrom, probability.stream().mapToDouble(Double::doubleValue).toArray(),
+                baseline, covering);
+    }
+
+    /** As {@link StopFlagService} rules: a stop that began on or before the last fix is that repair's, not a new one. */
+    private static boolean stopBeganByLastFix(List<Planted> marks, int today, int stoppedFrom) {
+        for (Planted m : marks) {
+            if (m.fix() <= today && m.fix() >= stoppedFrom) {
+                return true;
+            }
+        }
+        return false;
+    }
+
+    /** The pump's load as the demo holds it after loading: its newest usage reading. */
+    private static Map<String, Double> latestLoads() throws IOException {
+        Map<String, Double> loads = new HashMap<>();
+        Map<String, LocalDate> newest = new HashMap<>();
+        for (CSVRecord r : csv("usage-readings.csv")) {
+            LocalDate on = LocalDate.parse(r.get("read_on"));
+            if (newest.getOrDefault(r.get("asset_id"), LocalDate.MIN).isBefore(on)) {
+                newest.put(r.get("asset_id"), on);
+                loads.put(r.get("asset_id"), Double.parseDouble(r.get("hours_per_day")));
+            }
+        }
+        return loads;
+    }
+
+    static int index(LocalDate day) {
+        return (int) (day.toEpochDay() - FIRST.toEpochDay());
+    }
+
+    private static Map<String, List<DemoSensorSeries.Stop>> breakdowns(LocalDate since) throws IOException {
+        Map<String, List<DemoSensorSeries.Stop>> stops = new HashMap<>();
+        Set<String> seen = new HashSet<>();
+        for (CSVRecord r : csv("repairs.csv")) {
+            LocalDate reported = LocalDate.parse(r.get("reported_on"));
+            if (!r.get("kind").equals("BREAKDOWN") || reported.isBefore(since) || !seen.add(r.get("repair_ref"))) {
+                continue;
+            }
+            String fixed = r.get("fixed_on");
+            stops.computeIfAbsent(r.get("asset_id"), k -> new ArrayList<>()).add(new DemoSensorSeries.Stop(reported,
+                    fixed.isBlank() ? null : LocalDate.parse(fixed)));
+        }
+        return stops;
+    }
+
+    static List<CSVRecord> csv(String file) throws IOException {
+        try (Reader in = Files.newBufferedReader(Path.of("seed-data", file))) {
+            return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(in).getRecords();
+        }
+    }
+}
