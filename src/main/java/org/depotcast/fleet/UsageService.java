@@ -9,6 +9,7 @@ import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvImport;
 import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
+import org.depotcast.core.sensors.ServiceByHours;
 
 import java.io.InputStream;
 import java.math.BigDecimal;
@@ -53,6 +54,13 @@ public class UsageService {
             return typed;
         }
         return UsageHistory.merge(typed, measured.get().monthlyLoads());
+    }
+
+    /** What sensors read per pump from its own first day to {@code lastDay} ({@link MeasuredLoads#measuredSince}). */
+    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate lastDay,
+                                                            int lastDaysKept) {
+        return measured.isUnsatisfied() || firstDays.isEmpty() ? Map.of()
+                : measured.get().measuredSince(firstDays, lastDay, lastDaysKept);
     }
 
     @Transactional

@@ -3,7 +3,6 @@ package org.depotcast.sensors;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.BomLine;
-import org.depotcast.core.sensors.ServiceByHours;
 import org.depotcast.fleet.Pump;
 import org.depotcast.repairs.ServiceDue;
 import org.depotcast.repairs.ServiceDueService;
@@ -19,10 +18,10 @@ import java.util.Map;
 import java.util.TreeMap;
 
 /**
- * Service by operating hours ({@link ServiceByHours}) for a depot's pumps. The last service and the recorded
- * estimate of hours since it come from the repairs feature's service schedule; where a pump's sensor read, its days
- * read replace the estimate for those days (the estimate is taken as even over the span, so an unread day keeps its
- * share of it).
+ * Service by operating hours for a depot's pumps, week by week with the service-kit parts. Each pump's hours, load
+ * and due day are the repairs feature's service schedule ({@link ServiceDueService}), which counts them once by
+ * {@link org.depotcast.core.sensors.ServiceByHours}: where a pump's sensor read, its days read replace the recorded
+ * estimate for those days (the estimate is taken as even over the span, so an unread day keeps its share of it).
  */
 @ApplicationScoped
 public class SensorServicePlanService {
@@ -30,12 +29,10 @@ public class SensorServicePlanService {
 
     private final ServiceDueService schedule;
     private final SensorAreas areas;
-    private final SensorUsageQuery usage;
 
-    SensorServicePlanService(ServiceDueService schedule, SensorAreas areas, SensorUsageQuery usage) {
+    SensorServicePlanService(ServiceDueService schedule, SensorAreas areas) {
         this.schedule = schedule;
         this.areas = areas;
-        this.usage = usage;
     }
 
     /** For a depot the caller may see, or for a mechanic naming none, their own pumps and kit ({@link SensorAreas}). */
@@ -44,24 +41,13 @@ public class SensorServicePlanService {
         SensorArea area = areas.resolve(depotCode);
         Map<String, Pump> byAsset = new HashMap<>();
         area.pumps().forEach(p -> byAsset.put(p.assetId, p));
-        List<ServiceDue> due = schedule.dueAt(today, area.mechanic() == null ? area.depotCode() : null);
-        Map<Long, LocalDate> from = new HashMap<>();
-        due.forEach(d -> from.put(byAsset.get(d.assetId()).id, d.countedFrom()));
-        Map<Long, SensorUsageQuery.ReadSince> read = usage.readSince(from, today, ServiceByHours.RECENT_DAYS);
         List<ServicePlanReport.PumpDue> rows = new ArrayList<>();
-        for (ServiceDue d : due) {
-            Pump pump = byAsset.get(d.assetId());
-            SensorUsageQuery.ReadSince sensor = read.get(pump.id);
-            long spanDays = Math.max(1, ChronoUnit.DAYS.between(d.countedFrom(), today));
-            double measured = sensor == null ? 0 : sensor.measuredHours();
-            double unreadShare = sensor == null ? 1 : Math.max(0, 1 - (double) sensor.daysRead() / spanDays);
-            ServiceByHours.Projection p = ServiceByHours.project(today, d.serviceIntervalHours(), measured,
-                    d.hoursSinceService() * unreadShare, sensor == null ? new double[0] : sensor.lastDaysRead(),
-                    d.hoursPerDay());
-            UsageBasis basis = sensor == null ? UsageBasis.QUARTERLY_ESTIMATE : UsageBasis.MEASURED_BY_SENSOR;
-            rows.add(new ServicePlanReport.PumpDue(pump.assetId, pump.assignedMechanic, basis.words(),
-                    d.serviceIntervalHours(), p.hoursSinceService(), measured, p.recentHoursPerDay(), p.hoursLeft(),
-                    p.dueOn()));
+        for (ServiceDueService.Counted c : schedule.countedAt(today, area.mechanic() == null ? area.depotCode() : null)) {
+            ServiceDue d = c.due();
+            UsageBasis basis = c.measured() == null ? UsageBasis.QUARTERLY_ESTIMATE : UsageBasis.MEASURED_BY_SENSOR;
+            rows.add(new ServicePlanReport.PumpDue(d.assetId(), byAsset.get(d.assetId()).assignedMechanic,
+                    basis.words(), d.serviceIntervalHours(), d.hoursSinceService(),
+                    c.measured() == null ? 0 : c.measured().hoursRead(), d.hoursPerDay(), d.hoursLeft(), d.dueOn()));
         }
         rows.sort(Comparator.comparing(ServicePlanReport.PumpDue::dueOn, Comparator.nullsLast(Comparator.naturalOrder()))
                 .thenComparing(ServicePlanReport.PumpDue::assetId));

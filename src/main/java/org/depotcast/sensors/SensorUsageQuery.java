@@ -2,6 +2,7 @@ package org.depotcast.sensors;
 
 import io.agroal.api.AgroalDataSource;
 import jakarta.enterprise.context.ApplicationScoped;
+import org.depotcast.core.sensors.ServiceByHours;
 
 import java.sql.Connection;
 import java.sql.Date;
@@ -155,12 +156,9 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
         return windows;
     }
 
-    /** A pump's readings since a day: hours and days read, and its last days read (oldest first). */
-    public record ReadSince(double measuredHours, int daysRead, double[] lastDaysRead) {
-    }
-
-    /** Per pump, its readings from its own first day up to {@code lastDay}; pumps with none are absent. */
-    public Map<Long, ReadSince> readSince(Map<Long, LocalDate> firstDays, LocalDate lastDay, int lastDaysKept) {
+    @Override
+    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate lastDay,
+                                                            int lastDaysKept) {
         Map<Long, double[]> totals = new HashMap<>();
         Map<Long, java.util.ArrayDeque<Double>> last = new HashMap<>();
         List<Long> ids = new ArrayList<>(firstDays.keySet());
@@ -194,8 +192,8 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
                 }
             });
         }
-        Map<Long, ReadSince> read = new HashMap<>();
-        totals.forEach((pumpId, t) -> read.put(pumpId, new ReadSince(t[0], (int) t[1],
+        Map<Long, ServiceByHours.Measured> read = new HashMap<>();
+        totals.forEach((pumpId, t) -> read.put(pumpId, new ServiceByHours.Measured(t[0], (int) t[1],
                 last.get(pumpId).stream().mapToDouble(Double::doubleValue).toArray())));
         return read;
     }

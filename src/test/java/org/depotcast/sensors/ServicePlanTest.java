@@ -1,12 +1,21 @@
 package org.depotcast.sensors;
 
+import io.quarkus.narayana.jta.QuarkusTransaction;
 import io.quarkus.test.junit.QuarkusTest;
 import io.restassured.path.json.JsonPath;
+import jakarta.inject.Inject;
+import org.depotcast.core.forecast.UsageTimeline;
+import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.UsageReadingRow;
+import org.depotcast.fleet.UsageService;
 import org.junit.jupiter.api.Test;
 
 import java.time.LocalDate;
 import java.time.ZoneOffset;
 import java.time.temporal.ChronoUnit;
+import java.util.Comparator;
+import java.util.List;
 import java.util.Map;
 
 import static org.depotcast.TestData.as;
@@ -17,6 +26,22 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /** Service by hours: a pump's measured days replace the recorded estimate for those days. */
 @QuarkusTest
 class ServicePlanTest {
+    @Inject
+    UsageService usage;
+    @Inject
+    PumpService pumps;
+
+    /** The recorded estimate of the hours in the span: the pump's usage history as the forecasts count it. */
+    private double recordedEstimate(String asset, LocalDate from, LocalDate today) {
+        Pump pump = QuarkusTransaction.requiringNew().call(() -> pumps.find(asset).orElseThrow());
+        List<UsageReadingRow> rows = usage.allReadings().stream().filter(r -> r.pumpId() == pump.id)
+                .sorted(Comparator.comparing(UsageReadingRow::readOn)).toList();
+        UsageTimeline timeline = new UsageTimeline(rows.stream().mapToLong(r -> r.readOn().toEpochDay()).toArray(),
+                rows.stream().mapToDouble(r -> r.hoursPerDay().doubleValue()).toArray(),
+                pump.usageHoursPerDay.doubleValue());
+        return timeline.hoursBetween(from.toEpochDay(), today.toEpochDay());
+    }
+
     @Test
     void measuredDaysReplaceTheEstimateAndProjectTheDueDay() {
         String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
@@ -26,11 +51,12 @@ class ServicePlanTest {
             csv.append(p).append(',').append(today.minusDays(d)).append(",8\n");
         }
         SensorIntakeTest.csv("officer", csv.toString()).then().statusCode(200).body("added", equalTo(28));
-        Map<String, Object> estimate = as("officer").get("/api/pumps/service-due").then().statusCode(200).extract()
+        Map<String, Object> listed = as("officer").get("/api/pumps/service-due").then().statusCode(200).extract()
                 .jsonPath().getMap("find { it.assetId == '" + p + "' }");
-        double estimated = ((Number) estimate.get("hoursSinceService")).doubleValue();
-        int interval = ((Number) estimate.get("serviceIntervalHours")).intValue();
-        long span = ChronoUnit.DAYS.between(LocalDate.parse((String) estimate.get("countedFrom")), today);
+        LocalDate countedFrom = LocalDate.parse((String) listed.get("countedFrom"));
+        double estimated = recordedEstimate(p, countedFrom, today);
+        int interval = ((Number) listed.get("serviceIntervalHours")).intValue();
+        long span = ChronoUnit.DAYS.between(countedFrom, today);
 
         JsonPath plan = as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/service-plan").then()
                 .statusCode(200).extract().jsonPath();
@@ -45,6 +71,9 @@ class ServicePlanTest {
         LocalDate due = today.plusDays(left <= 0 ? (long) Math.floor(left / 8) : (long) Math.ceil(left / 8 - 1e-9));
         assertEquals(due.toString(), row.get("dueOn"));
         assertEquals(13, plan.getList("weeks").size());
+        // The pump list counts the same hours the same way.
+        assertEquals(since, ((Number) listed.get("hoursSinceService")).doubleValue(), 1e-3);
+        assertEquals(due.toString(), listed.get("dueOn"));
         if (!due.isAfter(today.plusDays(89))) {
             int week = (int) Math.max(0, ChronoUnit.DAYS.between(today, due) / 7);
             assertTrue(plan.getList("weeks[" + week + "].pumpsDue").contains(p));

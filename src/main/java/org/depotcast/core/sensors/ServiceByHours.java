@@ -22,7 +22,50 @@ public final class ServiceByHours {
     public record Projection(double hoursSinceService, double recentHoursPerDay, double hoursLeft, LocalDate dueOn) {
     }
 
+    /**
+     * What a pump's sensor read from the day its hours are counted from: hours read on the days read, how many days
+     * were read, and its last days read (oldest first).
+     */
+    public record Measured(double hoursRead, int daysRead, double[] lastDaysRead) {
+        public Measured {
+            if (!(hoursRead >= 0) || daysRead < 0) {
+                throw new IllegalArgumentException("hoursRead and daysRead must not be negative: " + hoursRead + ", "
+                        + daysRead);
+            }
+        }
+    }
+
+    /**
+     * A pump's use since its last service.
+     *
+     * @param countedFrom          the day the hours are counted from (the last service, else installation, else the
+     *                             first day on record)
+     * @param estimatedHoursSince  the recorded estimate of the hours from {@code countedFrom} to today
+     * @param estimatedHoursPerDay the recorded load in force today
+     * @param measured             what its sensor read since {@code countedFrom}; null for a pump without one
+     */
+    public record PumpUsage(LocalDate countedFrom, int intervalHours, double estimatedHoursSince,
+                            double estimatedHoursPerDay, Measured measured) {
+    }
+
     private ServiceByHours() {
+    }
+
+    /**
+     * The one projection every reader uses. Without a sensor: the recorded estimate and load. With one: the hours read,
+     * plus the estimate's share of the days not read (the estimate taken as even over the span from {@code
+     * countedFrom} to today, at least one day), projected at the mean of the last days read.
+     */
+    public static Projection project(LocalDate today, PumpUsage usage) {
+        Measured m = usage.measured();
+        if (m == null) {
+            return project(today, usage.intervalHours(), 0, usage.estimatedHoursSince(), new double[0],
+                    usage.estimatedHoursPerDay());
+        }
+        long spanDays = Math.max(1, today.toEpochDay() - usage.countedFrom().toEpochDay());
+        double unreadShare = Math.max(0, 1 - (double) m.daysRead() / spanDays);
+        return project(today, usage.intervalHours(), m.hoursRead(), usage.estimatedHoursSince() * unreadShare,
+                m.lastDaysRead(), usage.estimatedHoursPerDay());
     }
 
     /**

@@ -43,4 +43,23 @@ class ServiceByHoursTest {
         assertNull(ServiceByHours.project(TODAY, 1000, 10, 0, new double[]{0, 0}, 5).dueOn());
         assertThrows(IllegalArgumentException.class, () -> ServiceByHours.project(TODAY, 0, 0, 0, new double[0], 5));
     }
+
+    @Test
+    void aPumpUsageTakesTheEstimateWithoutASensorAndTheDaysReadWithOne() {
+        // No sensor: 5,000 h estimated since the service at 5 h a day; 4,125 h left = 825 days.
+        ServiceByHours.Projection estimate = ServiceByHours.project(TODAY, new ServiceByHours.PumpUsage(
+                TODAY.minusDays(1000), 9_125, 5_000, 5, null));
+        assertEquals(5_000, estimate.hoursSinceService(), 1e-9);
+        assertEquals(TODAY.plusDays(825), estimate.dueOn());
+        // A sensor read 70 of the 100 days since the service, 560 h; the estimate of 500 h keeps 30 % for the days
+        // not read: 560 + 150 = 710 h; 290 h left at the last days' 8 h a day = 36.25 → 37 days.
+        double[] last = new double[28];
+        Arrays.fill(last, 8);
+        ServiceByHours.Projection measured = ServiceByHours.project(TODAY, new ServiceByHours.PumpUsage(
+                TODAY.minusDays(100), 1_000, 500, 5, new ServiceByHours.Measured(560, 70, last)));
+        assertEquals(710, measured.hoursSinceService(), 1e-9);
+        assertEquals(8, measured.recentHoursPerDay(), 1e-12);
+        assertEquals(TODAY.plusDays(37), measured.dueOn());
+        assertThrows(IllegalArgumentException.class, () -> new ServiceByHours.Measured(-1, 0, new double[0]));
+    }
 }
