@@ -43,6 +43,9 @@ final class BatchForecast {
     private final SeriesIdSet seen = new SeriesIdSet();
     private final Path output;
     private final Writer out;
+    private final FixedDecimals forecastText = new FixedDecimals(6);
+    private final FixedDecimals alphaText = new FixedDecimals(2);
+    private final FixedDecimals betaText = new FixedDecimals(2);
     private String currentId;
     private int[] lines = new int[64];
     private int[] periods = new int[64];
@@ -184,18 +187,13 @@ final class BatchForecast {
                 settings.horizon());
         String method = f.method().name().toLowerCase(Locale.ROOT);
         String demandClass = f.profile().demandClass().name().toLowerCase(Locale.ROOT);
-        String alpha = blank(f.alpha()), beta = blank(f.beta());
+        String alpha = blank(alphaText, f.alpha()), beta = blank(betaText, f.beta());
         // The id cell (made spreadsheet-safe and quoted by the export writer) and the cells after the forecast are
         // the same on every step of the series, so each is formatted once.
         String idCell = CsvExport.formatCell(id);
         String after = "," + method + "," + alpha + "," + beta + "," + demandClass + "\n";
-        double shownValue = Double.NaN;
-        String value = "";
         for (int h = 0; h < settings.horizon(); h++) {
-            if (Double.compare(f.forecast()[h], shownValue) != 0) {
-                shownValue = f.forecast()[h];
-                value = String.format(Locale.ROOT, "%.6f", shownValue);
-            }
+            String value = forecastText.format(f.forecast()[h]);
             out.write(idCell);
             out.write(',');
             out.write(Integer.toString(h + 1));
@@ -226,7 +224,7 @@ final class BatchForecast {
         }
     }
 
-    private static String blank(double value) {
-        return Double.isFinite(value) ? String.format(Locale.ROOT, "%.2f", value) : "";
+    private static String blank(FixedDecimals text, double value) {
+        return Double.isFinite(value) ? text.format(value) : "";
     }
 }

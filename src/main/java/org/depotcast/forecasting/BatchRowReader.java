@@ -56,7 +56,7 @@ final class BatchRowReader extends AbstractBaseCsvCallbackHandler<BatchRowReader
         if (columns == null) {
             header.add(new String(buffer, start, end - start));
         } else if (index == columns[0]) {
-            if (!java.util.Arrays.equals(idChars, 0, idChars.length, buffer, start, end)) {
+            if (!sameId(buffer, start, end)) {
                 idChars = java.util.Arrays.copyOfRange(buffer, start, end);
                 row.id = new String(idChars);
             }
@@ -84,6 +84,23 @@ final class BatchRowReader extends AbstractBaseCsvCallbackHandler<BatchRowReader
             }
         }
         return row;
+    }
+
+    /**
+     * Whether the cell holds the id of the row before. A plain loop: ids are a few characters, and
+     * {@code Arrays.equals} over ranges (bounds checks, then the vectorised mismatch) took a quarter of the batch's
+     * processor time in a profile.
+     */
+    private boolean sameId(char[] buffer, int start, int end) {
+        if (end - start != idChars.length) {
+            return false;
+        }
+        for (int i = 0; i < idChars.length; i++) {
+            if (idChars[i] != buffer[start + i]) {
+                return false;
+            }
+        }
+        return true;
     }
 
     /** Plain digits (at most 9, so no overflow) as a number; -1 for anything else, the empty cell included. */
