@@ -7,9 +7,11 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.QueryParams;
+import org.depotcast.core.forecast.FleetRateModel;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -127,14 +129,26 @@ public class ForecastQueryService {
                 .orElseThrow(() -> new EntityMissingException(null, "fleet model", family));
         List<String> terms = new ArrayList<>();
         terms.add("intercept");
-        if (!r.covariates.isEmpty()) {
-            terms.addAll(List.of(r.covariates.split(";")));
-        }
-        double[] coefficients = ForecastRecords.split(r.coefficients);
-        double[] errors = ForecastRecords.split(r.standardErrors);
-        return new FleetModelResponse(r.family, run.id, r.source, named(terms, coefficients), named(terms, errors),
-                r.deviance, r.dfResidual, r.dispersion, r.overdispersed, r.events, r.exposureHours, r.unitsPerEvent,
-                Math.exp(coefficients[0]) * 1000);
+        terms.addAll(r.covariates);
+        return new FleetModelResponse(r.family, run.id, r.source, named(terms, r.coefficients),
+                named(terms, r.standardErrors), r.deviance, r.dfResidual, r.dispersion, r.overdispersed, r.events,
+                r.exposureHours, r.unitsPerEvent, Math.exp(r.coefficients[0]) * 1000);
+    }
+
+    /**
+     * The latest finished run's fleet rate models as the run used them (with its depot ratios where it kept them);
+     * empty before any run has finished. Programme-wide, as {@link #fleetModel}.
+     */
+    @Transactional
+    public Optional<FleetRates> fleetRates() {
+        scope.requireProgramme();
+        return repository.latestFinishedRun().map(run -> {
+            Map<ComponentFamily, FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
+            for (FleetModelFitRecord r : repository.fitsOf(run.id)) {
+                models.put(ComponentFamily.valueOf(r.family), r.rateModel());
+            }
+            return new FleetRates(run.id, models);
+        });
     }
 
     /** The whole programme for leads, admins and central-store officers; a depot or kit for those it is assigned to. */

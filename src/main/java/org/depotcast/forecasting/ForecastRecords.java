@@ -1,62 +1,15 @@
 package org.depotcast.forecasting;
 
-import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.core.forecast.FleetRateModel;
-import org.depotcast.core.forecast.PoissonFit;
-
-import java.util.Arrays;
-import java.util.stream.Collectors;
-
 /**
- * Converts results to stored rows. A forecast's monthly series go to JSON columns ({@link MonthlySeriesJson}); the
- * fleet model fit's coefficient lists are still semicolon-separated.
+ * Converts results to stored rows: a forecast's monthly series go to JSON columns ({@link MonthlySeriesJson}); a
+ * fleet model is stored by {@link FleetModelFitRecord#of}.
  */
 final class ForecastRecords {
     private ForecastRecords() {
     }
 
-    /** Six decimals are plenty for units per month; plain concatenation because runs write millions of numbers. */
-    static String join(double[] values) {
-        StringBuilder out = new StringBuilder(values.length * 8);
-        for (int i = 0; i < values.length; i++) {
-            if (i > 0) {
-                out.append(';');
-            }
-            double v = values[i];
-            out.append(Double.isFinite(v) ? Double.toString(Math.round(v * 1e6) / 1e6) : "NaN");
-        }
-        return out.toString();
-    }
-
-    static double[] split(String values) {
-        if (values == null || values.isEmpty()) {
-            return new double[0];
-        }
-        return Arrays.stream(values.split(";")).mapToDouble(Double::parseDouble).toArray();
-    }
-
     static Double finite(double value) {
         return Double.isFinite(value) ? value : null;
-    }
-
-    static FleetModelFitRecord fit(long runId, ComponentFamily family, FleetRateModel model) {
-        FleetModelFitRecord record = new FleetModelFitRecord();
-        record.runId = runId;
-        record.family = family.name();
-        record.source = model.source();
-        PoissonFit fit = model.fit();
-        record.covariates = fit == null ? "" : model.covariates().stream().map(org.depotcast.core.forecast.RateCovariate::term)
-                .collect(Collectors.joining(";"));
-        record.coefficients = fit == null ? join(new double[]{Math.log(model.priorPerHour())}) : join(fit.coefficients());
-        record.standardErrors = fit == null ? "" : join(fit.standardErrors());
-        record.deviance = fit == null ? null : fit.deviance();
-        record.dfResidual = fit == null ? null : fit.dfResidual();
-        record.dispersion = fit == null ? null : finite(fit.dispersion());
-        record.overdispersed = fit != null && fit.overdispersed();
-        record.events = model.events();
-        record.exposureHours = model.exposureHours();
-        record.unitsPerEvent = model.unitsPerEvent();
-        return record;
     }
 
     static PartForecast forecast(long runId, PartForecastResult r) {

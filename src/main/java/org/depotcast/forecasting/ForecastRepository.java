@@ -47,4 +47,9 @@ class ForecastRepository implements PanacheRepository<PartForecast> {
                         FleetModelFitRecord.class).setParameter("run", runId).setParameter("family", family)
                 .getResultStream().findFirst();
     }
+
+    List<FleetModelFitRecord> fitsOf(long runId) {
+        return getEntityManager().createQuery("select f from FleetModelFitRecord f where f.runId = :run order by f.family",
+                FleetModelFitRecord.class).setParameter("run", runId).getResultList();
+    }
 }

@@ -217,7 +217,7 @@ public class ForecastRunService {
 
     private void store(long runId, Map<ComponentFamily, FleetRateModel> models, List<PartForecastResult> results) {
         var em = repository.getEntityManager();
-        models.forEach((family, model) -> em.persist(ForecastRecords.fit(runId, family, model)));
+        models.forEach((family, model) -> em.persist(FleetModelFitRecord.of(runId, family, model)));
         int written = 0;
         for (PartForecastResult result : results) {
             em.persist(ForecastRecords.forecast(runId, result));
