@@ -8,7 +8,8 @@ import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.sensors.StoppedPumpParts;
 import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.RepairRecords;
-import org.depotcast.forecasting.FleetModelResponse;
+import org.depotcast.core.forecast.FleetRateModel;
+import org.depotcast.forecasting.FleetRates;
 import org.depotcast.forecasting.ForecastQueryService;
 
 import java.math.BigDecimal;
@@ -16,10 +17,10 @@ import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.Comparator;
-import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.TreeMap;
 
 /**
@@ -32,7 +33,8 @@ public class ProbablyDownService {
     static final String METHOD = "Stop: Page's CUSUM (1954) on the pump's daily hours against its previous 28 days "
             + "(k = 0.5σ, h = 4σ). Probability down: Bayes' rule over the days of near-nothing use, against the pump's "
             + "own share of idle days and a prior of one breakdown a pump-year. Parts: the probability times each "
-            + "family's share of the pump's fleet-model breakdown rate (depth, age, load) times units per repair.";
+            + "family's share of the pump's fleet-model breakdown rate (depth, age, load, its depot's ratio where the "
+            + "forecast run kept one) times units per repair.";
 
     private final StopFlagService flags;
     private final SensorAreas areas;
@@ -60,7 +62,8 @@ public class ProbablyDownService {
         area.pumps().forEach(p -> byId.put(p.id, p));
         List<StopFlag> all = flags.flagsOf(byId.keySet());
         // Fleet models are programme-wide; only the area's pumps are shown.
-        Map<ComponentFamily, FleetModelResponse> models = system.call("sensor-parts", this::fleetModels);
+        Optional<FleetRates> rates = system.call("sensor-parts", forecasts::fleetRates);
+        Map<ComponentFamily, FleetRateModel> models = rates.map(FleetRates::models).orElse(Map.of());
         List<ProbablyDownReport.Pump> shown = new ArrayList<>();
         Map<String, Double> needed = new TreeMap<>();
         for (StopFlag flag : all) {
@@ -81,39 +84,36 @@ public class ProbablyDownService {
                 .thenComparing(ProbablyDownReport.Pump::assetId));
         long repaired = all.stream().filter(f -> f.state == StopFlag.State.REPAIR_REPORTED).count();
         long falseAlarms = all.stream().filter(f -> f.state == StopFlag.State.FALSE_ALARM).count();
-        Long runId = models.values().stream().findFirst().map(FleetModelResponse::runId).orElse(null);
+        Long runId = rates.map(FleetRates::runId).orElse(null);
         return new ProbablyDownReport(area.depotCode(), area.mechanic(), today, METHOD, runId, shown,
                 against(area, needed), area.stockWords(), repaired, falseAlarms);
     }
 
-    private Map<ComponentFamily, FleetModelResponse> fleetModels() {
-        Map<ComponentFamily, FleetModelResponse> models = new EnumMap<>(ComponentFamily.class);
-        if (!forecasts.anyRunFinished()) {
-            return models;
-        }
-        for (ComponentFamily family : ComponentFamily.values()) {
-            try {
-                models.put(family, forecasts.fleetModel(family.name()));
-            } catch (org.depotcast.common.EntityMissingException notFitted) {
-                // a family no pump model lists has no fleet model
-            }
-        }
-        return models;
-    }
-
     private static StoppedPumpParts.Expectation expect(Pump pump, StopFlag flag,
-                                                       Map<ComponentFamily, FleetModelResponse> models) {
+                                                       Map<ComponentFamily, FleetRateModel> models) {
         double depthM = pump.depthM.doubleValue();
-        double ageYears = Math.max(0, ChronoUnit.DAYS.between(pump.installedOn, flag.stoppedFrom) / 365.25);
-        List<StoppedPumpParts.FamilyRate> rates = new ArrayList<>();
-        models.forEach((family, model) -> rates.add(new StoppedPumpParts.FamilyRate(family.name(),
-                model.eventsPerHour(depthM, ageYears, flag.baselineHours.doubleValue()), model.unitsPerEvent())));
         List<StoppedPumpParts.BomPart> bom = new ArrayList<>();
         for (BomLine line : pump.model.bom) {
             bom.add(new StoppedPumpParts.BomPart(line.part.partNumber, line.part.family.name(),
                     line.installedQuantity(depthM)));
         }
-        return StoppedPumpParts.expect(flag.probability.doubleValue(), rates, bom);
+        return StoppedPumpParts.expect(flag.probability.doubleValue(), familyRates(pump, flag, models), bom);
+    }
+
+    /**
+     * Each family's breakdown rate for this pump as the forecast run's model gives it: the pump's depth, its age when
+     * use fell and its usual daily hours, times its depot's ratio where the run kept one.
+     */
+    static List<StoppedPumpParts.FamilyRate> familyRates(Pump pump, StopFlag flag,
+                                                         Map<ComponentFamily, FleetRateModel> models) {
+        double depthM = pump.depthM.doubleValue();
+        double ageYears = Math.max(0, ChronoUnit.DAYS.between(pump.installedOn, flag.stoppedFrom) / 365.25);
+        double hoursPerDay = flag.baselineHours.doubleValue();
+        List<StoppedPumpParts.FamilyRate> rates = new ArrayList<>();
+        models.forEach((family, model) -> rates.add(new StoppedPumpParts.FamilyRate(family.name(),
+                model.ratePerHour(depthM, ageYears, hoursPerDay) * model.depotRatio(pump.depot.id),
+                model.unitsPerEvent())));
+        return rates;
     }
 
     private static List<ProbablyDownReport.PartNeed> against(SensorArea area, Map<String, Double> needed) {
