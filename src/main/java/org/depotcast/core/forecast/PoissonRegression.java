@@ -36,6 +36,43 @@ public final class PoissonRegression {
      * @param exposure   n exposures &gt; 0 (operating hours, pump-years)
      */
     public static PoissonFit fit(double[][] covariates, double[] counts, double[] exposure) {
+        double[] offset = logExposure(covariates, counts, exposure);
+        int n = counts.length;
+        int k = covariates[0].length + 1;
+        double[] mu = new double[n], eta = new double[n];
+        for (int i = 0; i < n; i++) {
+            mu[i] = counts[i] + 0.1;
+            eta[i] = Math.log(mu[i]);
+        }
+        double deviance = deviance(counts, mu);
+        double[] beta = new double[k];
+        RealMatrix inverse = null;
+        int iteration = 0;
+        boolean converged = false;
+        while (iteration < MAX_ITERATIONS && !converged) {
+            iteration++;
+            double[][] xtwx = new double[k][k];
+            double[] xtwz = new double[k];
+            accumulateNormalEquations(covariates, counts, offset, mu, eta, xtwx, xtwz);
+            DecompositionSolver solver = cholesky(xtwx);
+            beta = solver.solve(new org.apache.commons.math3.linear.ArrayRealVector(xtwz, false)).toArray();
+            inverse = solver.getInverse();
+            updateMeans(covariates, offset, beta, eta, mu);
+            double previous = deviance;
+            deviance = deviance(counts, mu);
+            converged = Math.abs(deviance - previous) / (Math.abs(deviance) + 0.1) < TOLERANCE;
+        }
+        double[] se = new double[k];
+        for (int a = 0; a < k; a++) {
+            se[a] = Math.sqrt(inverse.getEntry(a, a));
+        }
+        int dfResidual = n - k;
+        double dispersion = dfResidual > 0 ? pearsonChiSquare(counts, mu) / dfResidual : Double.NaN;
+        return new PoissonFit(beta, se, deviance, dfResidual, dispersion, iteration, converged, inverse.getData());
+    }
+
+    /** Checks the arguments' lengths and ranges and returns the offsets log E_i. */
+    private static double[] logExposure(double[][] covariates, double[] counts, double[] exposure) {
         int n = counts.length;
         if (n == 0 || covariates.length != n || exposure.length != n) {
             throw new IllegalArgumentException("covariates, counts and exposure must have the same, non-zero length");
@@ -57,66 +94,54 @@ public final class PoissonRegression {
         if (n < k) {
             throw new SingularDesignException("need at least " + k + " rows for " + k + " coefficients, have " + n);
         }
-        double[] mu = new double[n], eta = new double[n];
-        for (int i = 0; i < n; i++) {
-            mu[i] = counts[i] + 0.1;
-            eta[i] = Math.log(mu[i]);
-        }
-        double deviance = deviance(counts, mu);
-        double[] beta = new double[k];
-        RealMatrix inverse = null;
-        int iteration = 0;
-        boolean converged = false;
-        while (iteration < MAX_ITERATIONS && !converged) {
-            iteration++;
-            double[][] xtwx = new double[k][k];
-            double[] xtwz = new double[k];
-            double[] row = new double[k];
-            for (int i = 0; i < n; i++) {
-                row[0] = 1.0;
-                System.arraycopy(covariates[i], 0, row, 1, k - 1);
-                double w = mu[i];
-                double z = eta[i] - offset[i] + (counts[i] - mu[i]) / mu[i];
-                for (int a = 0; a < k; a++) {
-                    double wa = w * row[a];
-                    xtwz[a] += wa * z;
-                    for (int b = 0; b <= a; b++) {
-                        xtwx[a][b] += wa * row[b];
-                    }
-                }
-            }
+        return offset;
+    }
+
+    /** Adds X'WX (both triangles) and X'Wz for the current μ and η, the intercept being column 0. */
+    private static void accumulateNormalEquations(double[][] covariates, double[] counts, double[] offset,
+                                                  double[] mu, double[] eta, double[][] xtwx, double[] xtwz) {
+        int k = xtwz.length;
+        double[] row = new double[k];
+        for (int i = 0; i < counts.length; i++) {
+            row[0] = 1.0;
+            System.arraycopy(covariates[i], 0, row, 1, k - 1);
+            double w = mu[i];
+            double z = eta[i] - offset[i] + (counts[i] - mu[i]) / mu[i];
             for (int a = 0; a < k; a++) {
-                for (int b = a + 1; b < k; b++) {
-                    xtwx[a][b] = xtwx[b][a];
+                double wa = w * row[a];
+                xtwz[a] += wa * z;
+                for (int b = 0; b <= a; b++) {
+                    xtwx[a][b] += wa * row[b];
                 }
             }
-            DecompositionSolver solver = cholesky(xtwx);
-            beta = solver.solve(new org.apache.commons.math3.linear.ArrayRealVector(xtwz, false)).toArray();
-            inverse = solver.getInverse();
-            for (int i = 0; i < n; i++) {
-                double linear = beta[0];
-                for (int a = 1; a < k; a++) {
-                    linear += beta[a] * covariates[i][a - 1];
-                }
-                eta[i] = linear + offset[i];
-                mu[i] = Math.exp(eta[i]);
-            }
-            double previous = deviance;
-            deviance = deviance(counts, mu);
-            converged = Math.abs(deviance - previous) / (Math.abs(deviance) + 0.1) < TOLERANCE;
         }
-        double[] se = new double[k];
         for (int a = 0; a < k; a++) {
-            se[a] = Math.sqrt(inverse.getEntry(a, a));
+            for (int b = a + 1; b < k; b++) {
+                xtwx[a][b] = xtwx[b][a];
+            }
         }
-        double pearson = 0;
-        for (int i = 0; i < n; i++) {
-            double r = counts[i] - mu[i];
-            pearson += r * r / mu[i];
+    }
+
+    /** η_i = β₀ + x_i'β + offset_i and μ_i = exp(η_i), in place. */
+    private static void updateMeans(double[][] covariates, double[] offset, double[] beta, double[] eta, double[] mu) {
+        for (int i = 0; i < mu.length; i++) {
+            double linear = beta[0];
+            for (int a = 1; a < beta.length; a++) {
+                linear += beta[a] * covariates[i][a - 1];
+            }
+            eta[i] = linear + offset[i];
+            mu[i] = Math.exp(eta[i]);
         }
-        int dfResidual = n - k;
-        double dispersion = dfResidual > 0 ? pearson / dfResidual : Double.NaN;
-        return new PoissonFit(beta, se, deviance, dfResidual, dispersion, iteration, converged, inverse.getData());
+    }
+
+    /** Pearson's X² = Σ (y − μ)²/μ. */
+    private static double pearsonChiSquare(double[] y, double[] mu) {
+        double sum = 0;
+        for (int i = 0; i < y.length; i++) {
+            double r = y[i] - mu[i];
+            sum += r * r / mu[i];
+        }
+        return sum;
     }
 
     private static DecompositionSolver cholesky(double[][] matrix) {

@@ -33,10 +33,20 @@ public final class TransferPlanner {
         if (unitCost.length != m) {
             throw new IllegalArgumentException("unitCost must have one row per donor");
         }
-        List<Move> moves = new ArrayList<>();
         if (m == 0 || n == 0) {
-            return moves;
+            return new ArrayList<>();
         }
+        double[] objective = objective(surplus, n, unitCost, shortagePenalty);
+        List<LinearConstraint> constraints = supplyAndDemandConstraints(surplus, deficit);
+        PointValuePair solution = new SimplexSolver().optimize(new MaxIter(10_000),
+                new LinearObjectiveFunction(objective, 0), new LinearConstraintSet(constraints), GoalType.MINIMIZE,
+                new NonNegativeConstraint(true));
+        return moves(solution.getPoint(), m, n, unitCost);
+    }
+
+    /** c_ij − penalty per lane, lane (i, j) at index i·n + j; checks surpluses and costs. */
+    private static double[] objective(long[] surplus, int n, double[][] unitCost, double shortagePenalty) {
+        int m = surplus.length;
         double[] objective = new double[m * n];
         for (int i = 0; i < m; i++) {
             if (surplus[i] < 0) {
@@ -49,6 +59,12 @@ public final class TransferPlanner {
                 objective[i * n + j] = unitCost[i][j] - shortagePenalty;
             }
         }
+        return objective;
+    }
+
+    /** Σ_j x_ij ≤ surplus_i per donor and Σ_i x_ij ≤ deficit_j per receiver; checks deficits. */
+    private static List<LinearConstraint> supplyAndDemandConstraints(long[] surplus, long[] deficit) {
+        int m = surplus.length, n = deficit.length;
         List<LinearConstraint> constraints = new ArrayList<>();
         for (int i = 0; i < m; i++) {
             double[] row = new double[m * n];
@@ -67,10 +83,12 @@ public final class TransferPlanner {
             }
             constraints.add(new LinearConstraint(column, Relationship.LEQ, deficit[j]));
         }
-        PointValuePair solution = new SimplexSolver().optimize(new MaxIter(10_000),
-                new LinearObjectiveFunction(objective, 0), new LinearConstraintSet(constraints), GoalType.MINIMIZE,
-                new NonNegativeConstraint(true));
-        double[] x = solution.getPoint();
+        return constraints;
+    }
+
+    /** The lanes carrying at least one whole unit in the solution, rounded to remove floating-point noise. */
+    private static List<Move> moves(double[] x, int m, int n, double[][] unitCost) {
+        List<Move> moves = new ArrayList<>();
         for (int i = 0; i < m; i++) {
             for (int j = 0; j < n; j++) {
                 long units = Math.round(x[i * n + j]);
