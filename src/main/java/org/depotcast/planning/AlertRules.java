@@ -22,11 +22,29 @@ final class AlertRules {
      *                       the alert, and tells a shortage from parts that only planned services need
      */
     static ReorderAlert raise(StockPolicy p, List<ReorderAlert.WaitingPump> waiting, StockPolicy breakdownsOnly) {
-        boolean forecast = !NO_FORECAST.equals(p.forecastMethod());
         Double cover = p.dailyDemand() > 0 ? p.onHand() / p.dailyDemand() : null;
-        List<ReorderAlert.Reason> reasons = new ArrayList<>();
         boolean out = p.onHand() <= 0 && !waiting.isEmpty();
+        List<ReorderAlert.Reason> reasons = new ArrayList<>();
+        addShortageReasons(reasons, p, waiting, breakdownsOnly);
+        addHoldingReasons(reasons, p, cover);
+        if (reasons.isEmpty()) {
+            return null;
+        }
+        reasons.sort(Comparator.comparing(ReorderAlert.Reason::kind));
+        double risk = breakdownsOnly != null ? breakdownsOnly.pumpDaysAtRisk() : p.pumpDaysAtRisk();
         if (out) {
+            risk += waiting.size() * (double) p.protectionDays();
+        }
+        return new ReorderAlert(p.partNumber(), p.locationCode(), p.level(), reasons.get(0).kind(), List.copyOf(reasons),
+                risk, p.onHand(), p.onOrder(), p.committed(), p.position(), p.reorderPoint(), p.orderUpTo(),
+                p.dailyDemand(), cover, waiting.size(), List.copyOf(waiting), p.forecastMethod(),
+                reasons.get(0).detail(), false, null, List.of());
+    }
+
+    /** Too little: out with pumps waiting, at or below the reorder point, or running out within the protection period. */
+    private static void addShortageReasons(List<ReorderAlert.Reason> reasons, StockPolicy p,
+                                           List<ReorderAlert.WaitingPump> waiting, StockPolicy breakdownsOnly) {
+        if (p.onHand() <= 0 && !waiting.isEmpty()) {
             ReorderAlert.WaitingPump longest = waiting.get(0);
             reasons.add(new ReorderAlert.Reason(AlertKind.OUT_WITH_PUMPS_WAITING, String.format(Locale.ROOT,
                     "none on hand; %d pump(s) broken and waiting for this part, the longest (%s, repair %s) for %d days",
@@ -50,6 +68,11 @@ final class AlertRules {
             reasons.add(new ReorderAlert.Reason(AlertKind.STOCKOUT_PROJECTED, String.format(Locale.ROOT,
                     "%.0f days of cover, replenishment takes %d days", shortageCover, p.protectionDays())));
         }
+    }
+
+    /** Too much or unknown: shelf life at risk, excess over order-up-to, or stock held with no forecast. */
+    private static void addHoldingReasons(List<ReorderAlert.Reason> reasons, StockPolicy p, Double cover) {
+        boolean forecast = !NO_FORECAST.equals(p.forecastMethod());
         if (forecast && p.shelfLifeDays() != null && p.onHand() > 0 && (p.dailyDemand() == 0 || cover > p.shelfLifeDays())) {
             double unused = p.onHand() - p.dailyDemand() * p.shelfLifeDays();
             reasons.add(new ReorderAlert.Reason(AlertKind.SHELF_LIFE_RISK, String.format(Locale.ROOT,
@@ -64,18 +87,6 @@ final class AlertRules {
             reasons.add(new ReorderAlert.Reason(AlertKind.NO_FORECAST, "stock is held but the latest forecast run has "
                     + "no forecast of this part here: demand unknown, so no reorder point, excess or shelf-life check"));
         }
-        if (reasons.isEmpty()) {
-            return null;
-        }
-        reasons.sort(Comparator.comparing(ReorderAlert.Reason::kind));
-        double risk = breakdownsOnly != null ? breakdownsOnly.pumpDaysAtRisk() : p.pumpDaysAtRisk();
-        if (out) {
-            risk += waiting.size() * (double) p.protectionDays();
-        }
-        return new ReorderAlert(p.partNumber(), p.locationCode(), p.level(), reasons.get(0).kind(), List.copyOf(reasons),
-                risk, p.onHand(), p.onOrder(), p.committed(), p.position(), p.reorderPoint(), p.orderUpTo(),
-                p.dailyDemand(), cover, waiting.size(), List.copyOf(waiting), p.forecastMethod(),
-                reasons.get(0).detail(), false, null, List.of());
     }
 
     static ReorderAlert withAction(ReorderAlert a, boolean acknowledged, LocalDate snoozedUntil, List<AlertKind> raisedAgainBy) {

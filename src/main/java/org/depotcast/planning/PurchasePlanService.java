@@ -69,13 +69,10 @@ public class PurchasePlanService {
         List<StockPolicy> priced = policies.stream().filter(p -> p.currency().equals(currency)
                 && !AlertRules.NO_FORECAST.equals(p.forecastMethod())).toList();
         List<MarginalAllocation.Item> items = new ArrayList<>();
-        long[] wanted = new long[priced.size()];
-        for (int i = 0; i < priced.size(); i++) {
-            StockPolicy p = priced.get(i);
+        for (StockPolicy p : priced) {
             int step = step(p);
-            wanted[i] = OrderQuantity.roundUpToPacks((long) Math.max(0, Math.ceil(p.orderUpTo() - p.position())), step);
             items.add(new MarginalAllocation.Item(PolicyCalculator.distribution(p.demandMean(), p.demandVariance()),
-                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0, wanted[i]));
+                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0, wanted(p)));
         }
         MarginalAllocation.Plan allocation = MarginalAllocation.allocate(items, budget.doubleValue());
         PurchasePlan plan = new PurchasePlan();
@@ -89,35 +86,48 @@ public class PurchasePlanService {
         plan.status = PurchasePlan.Status.PROPOSED;
         plan.horizonDaysMin = priced.stream().mapToInt(StockPolicy::protectionDays).min().orElse(0);
         plan.horizonDaysMax = priced.stream().mapToInt(StockPolicy::protectionDays).max().orElse(0);
+        plan.spent = addFundedLines(plan, priced, allocation.unitsPerItem());
+        addUnweighedLines(plan, policies, currency);
+        plans.persist(plan);
+        return PurchasePlanResponse.from(plan);
+    }
+
+    /** The priced parts' lines (skipping those bought nothing and above their reorder point); returns their cost. */
+    private BigDecimal addFundedLines(PurchasePlan plan, List<StockPolicy> priced, long[] unitsPerItem) {
         BigDecimal spent = BigDecimal.ZERO;
         for (int i = 0; i < priced.size(); i++) {
             StockPolicy p = priced.get(i);
-            long units = allocation.unitsPerItem()[i];
+            long units = unitsPerItem[i];
             if (units == 0 && p.position() > p.reorderPoint()) {
                 continue;
             }
             PurchasePlanLine line = line(plan, p, units);
             if (line.shortfallAfter > 0) {
-                line.unfundedQuantity = BigDecimal.valueOf(Math.max(0, wanted[i] - units));
+                line.unfundedQuantity = BigDecimal.valueOf(Math.max(0, wanted(p) - units));
                 line.leftOutReason = "BUDGET";
             }
             spent = spent.add(line.cost);
             plan.lines.add(line);
         }
-        // Parts the plan could not weigh: priced in another currency (no rate is set), or with no forecast.
+        return spent;
+    }
+
+    /** Parts the plan could not weigh: priced in another currency (no rate is set), or with no forecast. */
+    private void addUnweighedLines(PurchasePlan plan, List<StockPolicy> policies, String currency) {
         for (StockPolicy p : policies) {
             boolean noForecast = AlertRules.NO_FORECAST.equals(p.forecastMethod());
             if (noForecast || (!p.currency().equals(currency) && p.position() <= p.reorderPoint())) {
                 PurchasePlanLine line = line(plan, p, 0);
                 line.leftOutReason = noForecast ? "NO_FORECAST" : "OTHER_CURRENCY";
-                line.unfundedQuantity = noForecast ? BigDecimal.ZERO : BigDecimal.valueOf(
-                        OrderQuantity.roundUpToPacks((long) Math.max(0, Math.ceil(p.orderUpTo() - p.position())), step(p)));
+                line.unfundedQuantity = noForecast ? BigDecimal.ZERO : BigDecimal.valueOf(wanted(p));
                 plan.lines.add(line);
             }
         }
-        plan.spent = spent;
-        plans.persist(plan);
-        return PurchasePlanResponse.from(plan);
+    }
+
+    /** Units up to the order-up-to level, rounded up to whole purchase steps. */
+    private static long wanted(StockPolicy p) {
+        return OrderQuantity.roundUpToPacks((long) Math.max(0, Math.ceil(p.orderUpTo() - p.position())), step(p));
     }
 
     private static int step(StockPolicy p) {

@@ -79,8 +79,35 @@ public class TransferService {
     }
 
     private List<TransferResponses.Suggestion> suggestFor(String part, List<Location> depots, Map<String, StockPolicy> policies) {
-        List<Location> donors = new ArrayList<>(), receivers = new ArrayList<>();
-        List<Long> surplus = new ArrayList<>(), deficit = new ArrayList<>();
+        Sides sides = sides(depots, policies);
+        if (sides.donors().isEmpty() || sides.receivers().isEmpty()) {
+            return List.of();
+        }
+        LaneMatrix lanes = laneMatrix(sides);
+        Map<String, DemandDistribution> demand = trimToWorthwhileUnits(sides, policies, lanes);
+        // The LP's value of a unit short removed: its pump-days if it meets a breakdown (half the protection period).
+        double penalty = settings.pumpDayValue() * (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
+        List<TransferResponses.Suggestion> out = new ArrayList<>();
+        Map<String, Double> received = new HashMap<>();
+        for (TransferPlanner.Move move : TransferPlanner.plan(sides.surplus().stream().mapToLong(Long::longValue).toArray(),
+                sides.deficit().stream().mapToLong(Long::longValue).toArray(), lanes.cost(), penalty)) {
+            StockPolicy to = policies.get(sides.receivers().get(move.to()).code);
+            double before = to.position() + received.getOrDefault(to.locationCode(), 0.0);
+            received.merge(to.locationCode(), (double) move.units(), Double::sum);
+            out.add(new TransferResponses.Suggestion(part, sides.donors().get(move.from()).code, to.locationCode(),
+                    move.units(), lanes.km()[move.from()][move.to()], move.unitCost(),
+                    ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays())));
+        }
+        out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
+        return out;
+    }
+
+    /** Donors (units above their reorder point) and receivers (at or below it, with demand) of one part. */
+    private record Sides(List<Location> donors, List<Location> receivers, List<Long> surplus, List<Long> deficit) {
+    }
+
+    private static Sides sides(List<Location> depots, Map<String, StockPolicy> policies) {
+        Sides sides = new Sides(new ArrayList<>(), new ArrayList<>(), new ArrayList<>(), new ArrayList<>());
         for (Location depot : depots) {
             StockPolicy p = policies.get(depot.code);
             if (p == null) {
@@ -88,52 +115,51 @@ public class TransferService {
             }
             long spare = (long) Math.floor(p.onHand() - p.reorderPoint());
             if (spare > 0) {
-                donors.add(depot);
-                surplus.add(spare);
+                sides.donors().add(depot);
+                sides.surplus().add(spare);
             } else if (p.position() <= p.reorderPoint() && p.dailyDemand() > 0) {
-                receivers.add(depot);
-                deficit.add((long) Math.ceil(p.orderUpTo() - p.position()));
+                sides.receivers().add(depot);
+                sides.deficit().add((long) Math.ceil(p.orderUpTo() - p.position()));
             }
         }
-        if (donors.isEmpty() || receivers.isEmpty()) {
-            return List.of();
-        }
-        Map<Location, Double> cheapestIn = new HashMap<>();
-        double[][] cost = new double[donors.size()][receivers.size()];
-        double[][] km = new double[donors.size()][receivers.size()];
+        return sides;
+    }
+
+    /** Distance and cost per unit of every donor-receiver lane, and the cheapest trip to each receiver. */
+    private record LaneMatrix(double[][] km, double[][] cost, Map<Location, Double> cheapestIn) {
+    }
+
+    private LaneMatrix laneMatrix(Sides sides) {
+        List<Location> donors = sides.donors(), receivers = sides.receivers();
+        LaneMatrix matrix = new LaneMatrix(new double[donors.size()][receivers.size()],
+                new double[donors.size()][receivers.size()], new HashMap<>());
         Map<String, Double> lanes = laneCosts.costsSet();
         for (int i = 0; i < donors.size(); i++) {
             for (int j = 0; j < receivers.size(); j++) {
-                km[i][j] = distanceKm(donors.get(i), receivers.get(j));
+                matrix.km()[i][j] = distanceKm(donors.get(i), receivers.get(j));
                 Double set = lanes.get(LaneCostRepository.lane(donors.get(i).id, receivers.get(j).id));
-                cost[i][j] = set != null ? set : km[i][j] * settings.transferCostPerUnitKm();
-                cheapestIn.merge(receivers.get(j), cost[i][j], Math::min);
+                matrix.cost()[i][j] = set != null ? set : matrix.km()[i][j] * settings.transferCostPerUnitKm();
+                matrix.cheapestIn().merge(receivers.get(j), matrix.cost()[i][j], Math::min);
             }
         }
-        // A receiver asks only for the units whose pump-days removed are worth at least the cheapest trip to it.
+        return matrix;
+    }
+
+    /**
+     * A receiver asks only for the units whose pump-days removed are worth at least the cheapest trip to it: trims
+     * each deficit in place and returns each receiver's demand distribution by location code.
+     */
+    private Map<String, DemandDistribution> trimToWorthwhileUnits(Sides sides, Map<String, StockPolicy> policies,
+                                                                  LaneMatrix lanes) {
         Map<String, DemandDistribution> demand = new HashMap<>();
-        for (int j = 0; j < receivers.size(); j++) {
-            StockPolicy p = policies.get(receivers.get(j).code);
+        for (int j = 0; j < sides.receivers().size(); j++) {
+            StockPolicy p = policies.get(sides.receivers().get(j).code);
             DemandDistribution d = PolicyCalculator.distribution(p.demandMean(), p.demandVariance());
             demand.put(p.locationCode(), d);
-            deficit.set(j, ShortageReduction.worthwhileUnits(d, p.position(), deficit.get(j), p.protectionDays(),
-                    cheapestIn.get(receivers.get(j)) / settings.pumpDayValue()));
+            sides.deficit().set(j, ShortageReduction.worthwhileUnits(d, p.position(), sides.deficit().get(j),
+                    p.protectionDays(), lanes.cheapestIn().get(sides.receivers().get(j)) / settings.pumpDayValue()));
         }
-        // The LP's value of a unit short removed: its pump-days if it meets a breakdown (half the protection period).
-        double penalty = settings.pumpDayValue() * (settings.depotTransferLeadDays() + settings.depotReviewDays()) / 2.0;
-        List<TransferResponses.Suggestion> out = new ArrayList<>();
-        Map<String, Double> received = new HashMap<>();
-        for (TransferPlanner.Move move : TransferPlanner.plan(surplus.stream().mapToLong(Long::longValue).toArray(),
-                deficit.stream().mapToLong(Long::longValue).toArray(), cost, penalty)) {
-            StockPolicy to = policies.get(receivers.get(move.to()).code);
-            double before = to.position() + received.getOrDefault(to.locationCode(), 0.0);
-            received.merge(to.locationCode(), (double) move.units(), Double::sum);
-            out.add(new TransferResponses.Suggestion(part, donors.get(move.from()).code, to.locationCode(),
-                    move.units(), km[move.from()][move.to()], move.unitCost(),
-                    ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays())));
-        }
-        out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
-        return out;
+        return demand;
     }
 
     /** Every lane between two depots: its distance, the distance-based cost per unit, and the cost set for it, if any. */
