@@ -11,7 +11,7 @@ import org.depotcast.access.Roles;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.catalogue.PumpModelService;
-import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpCsv;
 import org.depotcast.fleet.UsageService;
 import org.depotcast.repairs.RepairHistoryCsv;
 import org.depotcast.stock.Location;
@@ -39,7 +39,7 @@ class DemoProgrammeLoader {
     private final PartService parts;
     private final PumpModelService models;
     private final LocationService locations;
-    private final PumpService pumps;
+    private final PumpCsv pumps;
     private final UsageService usage;
     private final RepairHistoryCsv repairs;
     private final StockCountService counts;
@@ -49,7 +49,7 @@ class DemoProgrammeLoader {
     private final String mode;
     private final Path seedDirectory;
 
-    DemoProgrammeLoader(PartService parts, PumpModelService models, LocationService locations, PumpService pumps,
+    DemoProgrammeLoader(PartService parts, PumpModelService models, LocationService locations, PumpCsv pumps,
                         UsageService usage, RepairHistoryCsv repairs, StockCountService counts,
                         PurchaseOrderService orders, AccountService accounts, SystemWork system,
                         @ConfigProperty(name = "depotcast.mode") String mode,

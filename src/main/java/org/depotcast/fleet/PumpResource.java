@@ -30,9 +30,11 @@ class PumpResource {
     private final PumpService pumps;
     private final PumpStatusService status;
     private final UsageService usage;
+    private final PumpCsv csv;
 
-    PumpResource(PumpService pumps, PumpStatusService status, UsageService usage) {
+    PumpResource(PumpService pumps, PumpStatusService status, UsageService usage, PumpCsv csv) {
         this.pumps = pumps;
+        this.csv = csv;
         this.status = status;
         this.usage = usage;
     }
@@ -111,14 +113,14 @@ class PumpResource {
     @Consumes({"text/csv", MediaType.TEXT_PLAIN})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public ImportResult importCsv(InputStream csv) {
-        return new ImportResult(pumps.importCsv(csv));
+        return new ImportResult(this.csv.importCsv(csv));
     }
 
     @GET
     @Path("export")
     @Produces("text/csv")
     public Response exportCsv() {
-        return pumps.exportCsv().response();
+        return csv.exportCsv().response();
     }
 
     @POST

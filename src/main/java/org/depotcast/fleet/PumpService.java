@@ -7,46 +7,29 @@ import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
-import org.depotcast.common.CsvExport;
-import org.depotcast.common.CsvImport;
-import org.depotcast.common.CsvImporter;
-import org.depotcast.common.CsvRow;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
-import java.io.InputStream;
-import java.math.BigDecimal;
 import java.time.Clock;
 import java.time.LocalDate;
-import java.util.HashMap;
-import java.util.HashSet;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
-import java.util.Set;
 
 /** The register of installed pumps and their usage readings. */
 @ApplicationScoped
 public class PumpService {
-    static final List<String> CSV_COLUMNS = List.of("asset_id", "model_code", "depth_m", "installed_on", "latitude",
-            "longitude", "depot_code", "assigned_mechanic", "status", "status_since", "usage_hours_per_day",
-            "usage_source");
-
     private final PumpRepository pumps;
     private final PumpModelService models;
     private final LocationService locations;
     private final AccessScope scope;
     private final org.depotcast.access.AuditService audit;
     private final RepairRecords repairs;
-    private final CsvImporter importer;
     private final Clock clock;
 
     PumpService(PumpRepository pumps, PumpModelService models, LocationService locations, AccessScope scope,
-                org.depotcast.access.AuditService audit, RepairRecords repairs, CsvImporter importer,
-                Clock clock) {
-        this.importer = importer;
+                org.depotcast.access.AuditService audit, RepairRecords repairs, Clock clock) {
         this.audit = audit;
         this.repairs = repairs;
         this.scope = scope;
@@ -129,7 +112,7 @@ public class PumpService {
     }
 
     /** Registers a new pump or replaces every field of a registered one; both of its depots must be the caller's. */
-    private Pump save(Pump pump, PumpRequest request, PumpModel model, Location depot) {
+    Pump save(Pump pump, PumpRequest request, PumpModel model, Location depot) {
         apply(pump, request, model, depot);
         if (pump.id == null) {
             pumps.persist(pump);
@@ -193,55 +176,7 @@ public class PumpService {
         pump.setStatus(status, since == null ? LocalDate.now(clock) : since, note);
     }
 
-    /**
-     * All or nothing. A new asset id is registered, a known one replaced, each as {@link #register} does (the same
-     * scope check on the depot the pump leaves and the one it goes to).
-     */
-    @Transactional
-    public int importCsv(InputStream csv) {
-        Map<String, Pump> registered = new HashMap<>();
-        Map<String, PumpModel> modelCache = new HashMap<>();
-        Map<String, Location> depotCache = new HashMap<>();
-        Set<String> seen = new HashSet<>();
-        List<Pump> updated = new java.util.ArrayList<>();
-        return importer.run(csv, CsvImport.of(CSV_COLUMNS.subList(0, 4), row -> read(row, seen))
-                .identifiers("asset_id", "model_code", "depot_code", "assigned_mechanic")
-                .scopeColumn("depot_code")
-                .applyEach(request -> {
-                    if (registered.isEmpty()) {
-                        all().forEach(p -> registered.put(p.assetId, p));
-                    }
-                    Pump pump = registered.getOrDefault(request.assetId(), new Pump());
-                    if (pump.id != null) {
-                        updated.add(pump);
-                    }
-                    save(pump, request, modelCache.computeIfAbsent(request.modelCode(), c -> models.require("modelCode", c)),
-                            depotCache.computeIfAbsent(request.depotCode(), c -> depot("depotCode", c)));
-                })
-                // A row cannot make a pump WORKING while one of its breakdown repairs is open: the repairs decide.
-                .afterAll(() -> followRepairs(updated)));
-    }
-
-    private static PumpRequest read(CsvRow row, Set<String> seen) {
-        String assetId = row.text("asset_id");
-        if (assetId != null && !seen.add(assetId)) {
-            row.reject("asset_id", "appears twice in the file");
-        }
-        return new PumpRequest(assetId, row.text("model_code"), row.decimal("depth_m"), row.date("installed_on"),
-                row.optionalDecimal("latitude"), row.optionalDecimal("longitude"), row.text("depot_code"),
-                row.optionalText("assigned_mechanic"), row.optionalChoice("status", PumpStatus.class),
-                row.optionalDate("status_since"), row.optionalDecimal("usage_hours_per_day"),
-                row.optionalChoice("usage_source", UsageSource.class));
-    }
-
-    public CsvExport exportCsv() {
-        return CsvExport.of("pumps.csv", CSV_COLUMNS, search(null, null), p -> java.util.Arrays.asList(p.assetId,
-                p.model.code, p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude),
-                p.depot.code, p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
-                p.statusSince == null ? "" : p.statusSince, p.usageHoursPerDay.toPlainString(), p.usageSource));
-    }
-
-    private Location depot(String field, String code) {
+    Location depot(String field, String code) {
         Location location = locations.require(field, code);
         if (location.kind != LocationKind.DEPOT) {
             throw new BusinessRuleException(field, "'" + code + "' is a " + location.kind + ", not a depot");
@@ -285,22 +220,5 @@ public class PumpService {
             pump.usageHoursPerDay = r.usageHoursPerDay();
             pump.usageSource = r.usageSource() == null ? UsageSource.SURVEYED : r.usageSource();
         }
-    }
-
-    /** Brings the pumps' status in line with their repairs (see {@link PumpStatusService}). */
-    int followRepairs(java.util.Collection<Pump> many) {
-        if (many.isEmpty()) {
-            return 0;
-        }
-        Map<Long, RepairFacts> facts = repairs.factsOfAll();
-        int changed = 0;
-        for (Pump pump : many) {
-            changed += PumpStatusService.follow(pump, facts.getOrDefault(pump.id, RepairFacts.NONE)) ? 1 : 0;
-        }
-        return changed;
-    }
-
-    private static String plain(BigDecimal value) {
-        return value == null ? "" : value.toPlainString();
     }
 }

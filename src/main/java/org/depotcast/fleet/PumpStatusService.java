@@ -8,6 +8,7 @@ import org.depotcast.common.ConflictException;
 
 import java.time.LocalDate;
 import java.util.Collection;
+import java.util.Map;
 
 /**
  * A pump's status follows its repairs: an open breakdown repair makes it BROKEN from the day it was reported; once
@@ -40,7 +41,15 @@ public class PumpStatusService {
     /** The same for many pumps at once (imports); returns how many changed. The import's own audit entry covers it. */
     @Transactional(Transactional.TxType.MANDATORY)
     public int followRepairs(Collection<Pump> many) {
-        return pumps.followRepairs(many);
+        if (many.isEmpty()) {
+            return 0;
+        }
+        Map<Long, RepairFacts> facts = repairs.factsOfAll();
+        int changed = 0;
+        for (Pump pump : many) {
+            changed += follow(pump, facts.getOrDefault(pump.id, RepairFacts.NONE)) ? 1 : 0;
+        }
+        return changed;
     }
 
     static boolean follow(Pump pump, RepairFacts facts) {

@@ -9,7 +9,7 @@ import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.EntityMissingException;
-import org.depotcast.repairs.RepairService;
+import org.depotcast.repairs.PartsWaitService;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
@@ -32,7 +32,7 @@ public class AlertService {
     private final PlanningService planning;
     private final PartService parts;
     private final LocationService locations;
-    private final RepairService repairs;
+    private final PartsWaitService partsWaits;
     private final AlertActionRepository actions;
     private final CurrentUser currentUser;
     private final PlanningSettings settings;
@@ -40,13 +40,13 @@ public class AlertService {
     private final AuditService audit;
     private final Clock clock;
 
-    AlertService(PlanningService planning, PartService parts, LocationService locations, RepairService repairs,
+    AlertService(PlanningService planning, PartService parts, LocationService locations, PartsWaitService partsWaits,
                  AlertActionRepository actions, CurrentUser currentUser, PlanningSettings settings, AccessScope scope,
                  AuditService audit, Clock clock) {
         this.planning = planning;
         this.parts = parts;
         this.locations = locations;
-        this.repairs = repairs;
+        this.partsWaits = partsWaits;
         this.actions = actions;
         this.currentUser = currentUser;
         this.settings = settings;
@@ -117,7 +117,7 @@ public class AlertService {
     /** Broken pumps waiting for parts today, keyed "depotCode|partNumber", longest wait first. */
     private Map<String, List<ReorderAlert.WaitingPump>> waitingPumps(LocalDate today) {
         Map<String, List<ReorderAlert.WaitingPump>> waiting = new HashMap<>();
-        for (RepairService.PumpWait w : repairs.waitingNow(today)) {
+        for (PartsWaitService.PumpWait w : partsWaits.waitingNow(today)) {
             waiting.computeIfAbsent(w.depotCode() + "|" + w.partNumber(), k -> new ArrayList<>())
                     .add(new ReorderAlert.WaitingPump(w.assetId(), w.daysWaiting(), w.repairRef()));
         }

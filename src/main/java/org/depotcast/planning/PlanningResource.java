@@ -29,15 +29,18 @@ class PlanningResource {
     private final PurchasePlanService purchasePlans;
     private final TransferService transfers;
     private final TransferOrderService transferOrders;
+    private final TransferReceiptService transferReceipts;
     private final Clock clock;
 
     PlanningResource(PlanningService planning, AlertService alerts, PurchasePlanService purchasePlans,
-                     TransferService transfers, TransferOrderService transferOrders, Clock clock) {
+                     TransferService transfers, TransferOrderService transferOrders,
+                     TransferReceiptService transferReceipts, Clock clock) {
         this.planning = planning;
         this.alerts = alerts;
         this.purchasePlans = purchasePlans;
         this.transfers = transfers;
         this.transferOrders = transferOrders;
+        this.transferReceipts = transferReceipts;
         this.clock = clock;
     }
 
@@ -184,7 +187,7 @@ class PlanningResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public TransferResponses.Order receive(@PathParam("id") long id, @Valid PlanningRequests.ReceiveRequest r) {
-        return transferOrders.receive(id, r);
+        return transferReceipts.receive(id, r);
     }
 
     /** Without a body: everything still outstanding arrived. */
@@ -192,6 +195,6 @@ class PlanningResource {
     @Path("transfers/{id}/receive")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public TransferResponses.Order receiveAll(@PathParam("id") long id) {
-        return transferOrders.receive(id, null);
+        return transferReceipts.receive(id, null);
     }
 }

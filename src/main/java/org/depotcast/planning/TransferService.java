@@ -25,7 +25,8 @@ import java.util.Map;
  * to their order-up-to level, but only the units whose pump-days removed are worth the cheapest trip to them; cost per
  * unit = distance × cost per unit-km; a unit short is worth the pump-days it would cost). A suggestion's benefit is
  * the receiver's reduction in expected pump-days without water over its protection period
- * ({@link ShortageReduction}), counted after the units earlier suggestions already bring it. Dispatching and receiving are {@link TransferOrderService}'s.
+ * ({@link ShortageReduction}), counted after the units earlier suggestions already bring it. Dispatching and receiving are
+ * {@link TransferOrderService}'s and {@link TransferReceiptService}'s.
  */
 @ApplicationScoped
 public class TransferService {

@@ -29,14 +29,6 @@ class RepairRepository implements PanacheRepository<Repair> {
                 .getResultList());
     }
 
-    /** Pumps broken and waiting for parts: rows depot code, part number, open repairs needing it. */
-    List<Object[]> openNeeds() {
-        return getEntityManager().createQuery("""
-                select r.pump.depot.code, l.part.partNumber, count(l) from RepairLine l join l.repair r
-                where r.fixedOn is null and r.partsAvailableOn is null
-                group by r.pump.depot.code, l.part.partNumber""", Object[].class).getResultList();
-    }
-
     /**
      * Parts that broken pumps wait for today: rows depot code, part number, asset id, repair ref, reported on,
      * diagnosed on, one per line of an open repair whose parts have not come.

@@ -24,10 +24,7 @@ import org.depotcast.stock.StockLedgerService;
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
-import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.List;
-import java.util.Map;
 import java.util.Optional;
 
 /** Repair records, and the consumption each fixed repair posts to the ledger from the mechanic's kit. */
@@ -82,47 +79,6 @@ public class RepairService {
         // Scoped callers page through their own pumps' repairs only.
         var visible = pumps.visibleFilter();
         return repairs.search(null, since, Integer.MAX_VALUE).stream().filter(r -> visible.test(r.pump)).limit(limit).toList();
-    }
-
-    /** Per depot code: {repairs that waited for parts, pump-days spent waiting}, for repairs reported since a date. */
-    public Map<String, long[]> waitingForPartsSince(LocalDate since) {
-        Map<String, long[]> waits = new HashMap<>();
-        for (Object[] row : repairs.waitsSince(since)) {
-            long[] cell = waits.computeIfAbsent((String) row[0], k -> new long[2]);
-            cell[0]++;
-            cell[1] += java.time.temporal.ChronoUnit.DAYS.between((LocalDate) row[1], (LocalDate) row[2]);
-        }
-        return waits;
-    }
-
-    /**
-     * A broken pump waiting for a part today: since it was diagnosed (or reported, when not yet diagnosed).
-     *
-     * @param daysWaiting whole days from {@code waitingSince} to {@code today}
-     */
-    public record PumpWait(String depotCode, String partNumber, String assetId, String repairRef, LocalDate waitingSince,
-                           long daysWaiting) {
-    }
-
-    /** Every part that broken pumps wait for today, longest wait first. */
-    public List<PumpWait> waitingNow(LocalDate today) {
-        List<PumpWait> waits = new ArrayList<>();
-        for (Object[] row : repairs.openWaits()) {
-            LocalDate since = row[5] != null ? (LocalDate) row[5] : (LocalDate) row[4];
-            waits.add(new PumpWait((String) row[0], (String) row[1], (String) row[2], (String) row[3], since,
-                    Math.max(0, java.time.temporal.ChronoUnit.DAYS.between(since, today))));
-        }
-        waits.sort(java.util.Comparator.comparingLong(PumpWait::daysWaiting).reversed().thenComparing(PumpWait::repairRef));
-        return waits;
-    }
-
-    /** Open repairs waiting for parts, keyed "depotCode|partNumber". */
-    public Map<String, Long> openNeeds() {
-        Map<String, Long> needs = new HashMap<>();
-        for (Object[] row : repairs.openNeeds()) {
-            needs.put(row[0] + "|" + row[1], (Long) row[2]);
-        }
-        return needs;
     }
 
     /** Consumption history rows for forecasting; see {@link RepairRepository#consumptionRows()}. */

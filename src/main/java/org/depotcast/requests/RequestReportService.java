@@ -3,7 +3,7 @@ package org.depotcast.requests;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.repairs.RepairService;
+import org.depotcast.repairs.PartsWaitService;
 import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
@@ -20,15 +20,15 @@ import java.util.Map;
 @ApplicationScoped
 public class RequestReportService {
     private final RequestService requests;
-    private final RepairService repairs;
+    private final PartsWaitService partsWaits;
     private final LocationService locations;
     private final AccessScope scope;
     private final Clock clock;
 
-    RequestReportService(RequestService requests, RepairService repairs, LocationService locations, AccessScope scope,
+    RequestReportService(RequestService requests, PartsWaitService partsWaits, LocationService locations, AccessScope scope,
                          Clock clock) {
         this.requests = requests;
-        this.repairs = repairs;
+        this.partsWaits = partsWaits;
         this.locations = locations;
         this.scope = scope;
         this.clock = clock;
@@ -38,10 +38,10 @@ public class RequestReportService {
     public List<RequestDtos.DepotReport> perDepot() {
         OffsetDateTime since = OffsetDateTime.now(clock).minusDays(365);
         LocalDate today = LocalDate.now(clock);
-        Map<String, long[]> waits = repairs.waitingForPartsSince(today.minusDays(365));
+        Map<String, long[]> waits = partsWaits.waitingForPartsSince(today.minusDays(365));
         // Today's waits: a pump counts once however many parts it waits for, at its longest wait.
         Map<String, Map<String, Long>> waitingNow = new java.util.HashMap<>();
-        for (RepairService.PumpWait w : repairs.waitingNow(today)) {
+        for (PartsWaitService.PumpWait w : partsWaits.waitingNow(today)) {
             waitingNow.computeIfAbsent(w.depotCode(), k -> new java.util.HashMap<>()).merge(w.assetId(), w.daysWaiting(), Math::max);
         }
         List<PartsRequest> issued = requests.issuedSince(since);

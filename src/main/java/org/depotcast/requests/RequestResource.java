@@ -23,9 +23,11 @@ import java.util.List;
 class RequestResource {
     private final RequestService service;
     private final RequestReportService reports;
+    private final RequestRaisingService raising;
 
-    RequestResource(RequestService service, RequestReportService reports) {
+    RequestResource(RequestService service, RequestReportService reports, RequestRaisingService raising) {
         this.service = service;
+        this.raising = raising;
         this.reports = reports;
     }
 
@@ -34,7 +36,7 @@ class RequestResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed(Roles.MECHANIC)
     public Response raise(@Valid @NotNull RequestDtos.Raise body, UriInfo uri) {
-        RequestService.Raised raised = service.raise(body);
+        RequestRaisingService.Raised raised = raising.raise(body);
         return raised.replayed() ? Response.ok(raised.request()).build()
                 : Response.created(uri.getAbsolutePathBuilder().path(Long.toString(raised.request().id())).build())
                 .entity(raised.request()).build();

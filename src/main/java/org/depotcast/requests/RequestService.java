@@ -13,13 +13,8 @@ import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
-import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
-import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
-import org.depotcast.fleet.PumpService;
-import org.depotcast.stock.Location;
-import org.depotcast.stock.LocationService;
 import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
@@ -37,14 +32,13 @@ import java.util.Optional;
  * The parts-request workflow: raised by a mechanic (offline-safe by client reference), approved in full or in part
  * (possibly as a compatible substitute) or refused by a stores officer of the depot, issued from the depot to the
  * kit through the ledger, then closed; cancellable until issued. Approved, unissued quantities are committed stock.
- * Every change takes a row lock on the request, so two officers acting at once cannot both succeed.
+ * Every change takes a row lock on the request, so two officers acting at once cannot both succeed. Raising is
+ * {@link RequestRaisingService}'s.
  */
 @ApplicationScoped
 public class RequestService {
     private final Requests requests;
     private final PartService parts;
-    private final PumpService pumps;
-    private final LocationService locations;
     private final StockLedgerService ledger;
     private final AccessScope scope;
     private final CurrentUser currentUser;
@@ -58,94 +52,15 @@ public class RequestService {
         }
     }
 
-    RequestService(Requests requests, PartService parts, PumpService pumps, LocationService locations,
-                   StockLedgerService ledger, AccessScope scope, CurrentUser currentUser, AuditService audit,
-                   Clock clock) {
+    RequestService(Requests requests, PartService parts, StockLedgerService ledger,
+                   AccessScope scope, CurrentUser currentUser, AuditService audit, Clock clock) {
         this.requests = requests;
         this.parts = parts;
-        this.pumps = pumps;
-        this.locations = locations;
         this.ledger = ledger;
         this.scope = scope;
         this.currentUser = currentUser;
         this.audit = audit;
         this.clock = clock;
-    }
-
-    public record Raised(RequestDtos.View request, boolean replayed) {
-    }
-
-    @Transactional
-    public Raised raise(RequestDtos.Raise body) {
-        String mechanic = currentUser.name();
-        Optional<PartsRequest> earlier = requests.byClientRef(body.clientRef());
-        if (earlier.isPresent()) {
-            if (!earlier.get().mechanic.equals(mechanic)) {
-                throw new ConflictException("clientRef", "reference '" + body.clientRef() + "' belongs to another request");
-            }
-            String differs = firstDifference(earlier.get(), body);
-            if (differs != null) {
-                throw new ConflictException(differs, "request '" + body.clientRef() + "' was raised with another "
-                        + differs + "; a new request needs a new client reference");
-            }
-            return new Raised(RequestDtos.View.from(earlier.get()), true);
-        }
-        Location kit = locations.kitOf(mechanic).orElseThrow(() ->
-                new BusinessRuleException("mechanic", "account '" + mechanic + "' carries no kit"));
-        PartsRequest request = new PartsRequest();
-        request.clientRef = body.clientRef();
-        request.mechanic = mechanic;
-        request.kit = kit;
-        request.depot = kit.parent;
-        request.pump = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId());
-        request.urgency = body.urgency();
-        request.fault = body.fault();
-        request.raisedAt = OffsetDateTime.now(clock);
-        request.status = RequestStatus.RAISED;
-        for (int i = 0; i < body.lines().size(); i++) {
-            RequestDtos.Line l = body.lines().get(i);
-            PartsRequestLine line = new PartsRequestLine();
-            line.request = request;
-            line.part = parts.require("lines[" + i + "].partNumber", l.partNumber());
-            Part part = line.part;
-            if (request.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
-                throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + l.partNumber() + "' is listed twice");
-            }
-            line.quantityRequested = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
-            request.lines.add(line);
-        }
-        request.moveTo(RequestStatus.RAISED, EnumSet.of(RequestStatus.RAISED), mechanic, body.fault(), OffsetDateTime.now(clock));
-        requests.persist(request);
-        audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
-        return new Raised(RequestDtos.View.from(request), false);
-    }
-
-    /** The first field in which a resent request differs from the one raised under its reference, or null. */
-    private static String firstDifference(PartsRequest stored, RequestDtos.Raise resend) {
-        if (!java.util.Objects.equals(stored.pump == null ? null : stored.pump.assetId, resend.assetId())) {
-            return "assetId";
-        }
-        if (stored.urgency != resend.urgency()) {
-            return "urgency";
-        }
-        if (!java.util.Objects.equals(stored.fault, resend.fault())) {
-            return "fault";
-        }
-        if (stored.lines.size() != resend.lines().size()) {
-            return "lines";
-        }
-        for (int i = 0; i < resend.lines().size(); i++) {
-            RequestDtos.Line sent = resend.lines().get(i);
-            PartsRequestLine kept = stored.lines.stream().filter(l -> l.part.partNumber.equals(sent.partNumber()))
-                    .findFirst().orElse(null);
-            if (kept == null) {
-                return "lines[" + i + "].partNumber";
-            }
-            if (sent.quantity() == null || kept.quantityRequested.compareTo(sent.quantity()) != 0) {
-                return "lines[" + i + "].quantity";
-            }
-        }
-        return null;
     }
 
     @Transactional

@@ -30,7 +30,7 @@ import java.util.Optional;
 public class StockLedgerService {
     private static final int ATTEMPTS = 3;
 
-    private final StockBalanceRepository balances;
+    private final StockBalanceWriter balanceWriter;
     private final StockMovementRepository movements;
     private final LocationService locations;
     private final PartService parts;
@@ -39,12 +39,12 @@ public class StockLedgerService {
     private final AuditService audit;
     private final Clock clock;
 
-    StockLedgerService(StockBalanceRepository balances, StockMovementRepository movements, LocationService locations,
+    StockLedgerService(StockBalanceWriter balanceWriter, StockMovementRepository movements, LocationService locations,
                        PartService parts, CurrentUser currentUser, AccessScope scope, AuditService audit,
                        Clock clock) {
         this.audit = audit;
         this.scope = scope;
-        this.balances = balances;
+        this.balanceWriter = balanceWriter;
         this.movements = movements;
         this.locations = locations;
         this.parts = parts;
@@ -142,7 +142,7 @@ public class StockLedgerService {
 
     private PostedMovement write(MovementCommand command, Part part, Location from, Location to, BigDecimal quantity,
                                  String actor) {
-        applyToBalances(part, from, to, quantity);
+        balanceWriter.move(part, from, to, quantity);
         if (command.idempotencyKey() != null) {
             // Same-key posts queue on the balance locks just taken; the one after the winner sees its movement.
             if (earlier(command, actor).isPresent()) {
@@ -207,43 +207,6 @@ public class StockLedgerService {
 
     private static boolean isTransit(Location location) {
         return location != null && location.kind == LocationKind.IN_TRANSIT;
-    }
-
-    private void applyToBalances(Part part, Location from, Location to, BigDecimal quantity) {
-        // Lock in location-id order: two opposite transfers of the same part must not wait on each other.
-        boolean fromFirst = to == null || (from != null && from.id < to.id);
-        if (fromFirst) {
-            take(part, from, quantity);
-            give(part, to, quantity);
-        } else {
-            give(part, to, quantity);
-            take(part, from, quantity);
-        }
-    }
-
-    private void take(Part part, Location from, BigDecimal quantity) {
-        if (from == null) {
-            return;
-        }
-        StockBalance balance = balances.lockedFor(part.id, from.id).orElseThrow(() -> new BusinessRuleException("quantity",
-                "no stock of part '" + part.partNumber + "' at '" + from.code + "'"));
-        balance.take(quantity, part.partNumber, from.code);
-    }
-
-    private void give(Part part, Location to, BigDecimal quantity) {
-        if (to == null) {
-            return;
-        }
-        StockBalance balance = balances.lockedFor(part.id, to.id).orElseGet(() -> {
-            StockBalance created = new StockBalance();
-            created.part = part;
-            created.location = to;
-            created.onHand = BigDecimal.ZERO.setScale(Quantities.SCALE);
-            balances.persist(created);
-            balances.flush();
-            return created;
-        });
-        balance.add(quantity);
     }
 
     private static PostedMovement replay(StockMovement earlier, MovementCommand command) {

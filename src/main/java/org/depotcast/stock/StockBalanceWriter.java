@@ -1,0 +1,61 @@
+package org.depotcast.stock;
+
+import jakarta.enterprise.context.ApplicationScoped;
+import jakarta.transaction.Transactional;
+import org.depotcast.catalogue.Part;
+import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.Quantities;
+
+import java.math.BigDecimal;
+
+/**
+ * The balance side of a movement, for {@link StockLedgerService} alone: each balance row is locked before it is read
+ * ({@code SELECT … FOR UPDATE}), in location-id order so two opposite transfers of one part cannot wait on each other;
+ * a balance never goes below zero, and a location's first stock of a part creates its row.
+ */
+@ApplicationScoped
+class StockBalanceWriter {
+    private final StockBalanceRepository balances;
+
+    StockBalanceWriter(StockBalanceRepository balances) {
+        this.balances = balances;
+    }
+
+    /** Takes {@code quantity} from {@code from} and gives it to {@code to}; either may be null (outside the programme). */
+    @Transactional(Transactional.TxType.MANDATORY)
+    void move(Part part, Location from, Location to, BigDecimal quantity) {
+        boolean fromFirst = to == null || (from != null && from.id < to.id);
+        if (fromFirst) {
+            take(part, from, quantity);
+            give(part, to, quantity);
+        } else {
+            give(part, to, quantity);
+            take(part, from, quantity);
+        }
+    }
+
+    private void take(Part part, Location from, BigDecimal quantity) {
+        if (from == null) {
+            return;
+        }
+        StockBalance balance = balances.lockedFor(part.id, from.id).orElseThrow(() -> new BusinessRuleException("quantity",
+                "no stock of part '" + part.partNumber + "' at '" + from.code + "'"));
+        balance.take(quantity, part.partNumber, from.code);
+    }
+
+    private void give(Part part, Location to, BigDecimal quantity) {
+        if (to == null) {
+            return;
+        }
+        StockBalance balance = balances.lockedFor(part.id, to.id).orElseGet(() -> {
+            StockBalance created = new StockBalance();
+            created.part = part;
+            created.location = to;
+            created.onHand = BigDecimal.ZERO.setScale(Quantities.SCALE);
+            balances.persist(created);
+            balances.flush();
+            return created;
+        });
+        balance.add(quantity);
+    }
+}
