@@ -82,15 +82,18 @@ public class ProblemMapper {
 
     @ServerExceptionMapper
     public Response missing(EntityMissingException e, UriInfo uri) {
-        // A missing thing named in the path is 404; named inside a body it is an unprocessable request.
-        int status = e.field() == null ? 404 : 422;
-        List<FieldError> errors = e.field() == null ? List.of() : List.of(new FieldError(e.field(), e.getMessage()));
-        return respond(status, "not-found", "Not found", e.getMessage(), uri, errors);
+        // A missing thing named in the path is 404; named inside a body or a query it is an unknown reference: the
+        // resource exists, the request points at nothing.
+        if (e.field() == null) {
+            return respond(404, "not-found", "Not found", e.getMessage(), uri, List.of());
+        }
+        return respond(422, "unknown-reference", "Unknown reference", e.getMessage(), uri,
+                List.of(new FieldError(e.field(), e.getMessage())));
     }
 
     @ServerExceptionMapper
     public Response businessRule(BusinessRuleException e, UriInfo uri) {
-        return respond(422, "rule-violated", "Request breaks a stock rule", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
+        return respond(422, "rule-violated", "Request breaks a business rule", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
     }
 
     @ServerExceptionMapper

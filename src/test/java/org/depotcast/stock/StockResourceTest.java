@@ -73,8 +73,8 @@ class StockResourceTest {
         String other = data.depot();
         data.stock(part, depot, 2);
         data.stock(metrePart, depot, 2);
-        expectProblem(move("TRANSFER", "NO-SUCH-PART", depot, other, 1), 422, "/problems/not-found", "partNumber");
-        expectProblem(move("TRANSFER", part, depot, "NO-SUCH-DEPOT", 1), 422, "/problems/not-found", "to");
+        expectProblem(move("TRANSFER", "NO-SUCH-PART", depot, other, 1), 422, "/problems/unknown-reference", "partNumber");
+        expectProblem(move("TRANSFER", part, depot, "NO-SUCH-DEPOT", 1), 422, "/problems/unknown-reference", "to");
         expectProblem(move("TRANSFER", part, depot, other, -1), 400, "/problems/invalid-input", "quantity");
         expectProblem(move("TRANSFER", part, depot, other, 1.5), 400, "/problems/invalid-input", "quantity");
         expectProblem(move("TRANSFER", part, depot, other, 3), 422, "/problems/rule-violated", "quantity");
