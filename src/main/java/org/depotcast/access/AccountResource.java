@@ -64,10 +64,8 @@ class AccountResource {
     @POST
     @Consumes(MediaType.APPLICATION_JSON)
     public Response create(@Valid @NotNull CreateAccount body, UriInfo uri) {
-        Long kitId = body.kitCode() == null || body.kitCode().isBlank() ? null : locations.requireId("kitCode", body.kitCode());
-        // Every named location is checked before the account is made, so a refused one leaves no account behind.
-        List<Long> locationIds = body.locationCodes() == null ? List.of() : ids("locationCodes", body.locationCodes());
-        UserAccount account = accounts.create(body.username(), body.password(), body.roles(), kitId, locationIds);
+        UserAccount account = accounts.create(new AccountService.NewAccount(body.username(), body.password(),
+                body.roles(), body.kitCode(), body.locationCodes()));
         return Response.created(uri.getAbsolutePathBuilder().path(account.username).build()).entity(view(account)).build();
     }
 

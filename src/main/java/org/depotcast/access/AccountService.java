@@ -131,6 +131,24 @@ public class AccountService {
         return create(username, password, roles, kitLocationId, java.util.List.of());
     }
 
+    /** A new account as an administrator names it: its kit and the locations it acts on by code. */
+    public record NewAccount(String username, String password, Set<String> roles, String kitCode,
+                             java.util.List<String> locationCodes) {
+    }
+
+    /**
+     * Creates an account from codes, in one transaction: an unknown kit or location code is a 422 naming its field
+     * ({@code kitCode}, {@code locationCodes}) and leaves no account behind.
+     */
+    @Transactional
+    public UserAccount create(NewAccount account) {
+        Long kitId = account.kitCode() == null || account.kitCode().isBlank() ? null
+                : locations.requireId("kitCode", account.kitCode());
+        java.util.List<Long> locationIds = account.locationCodes() == null ? java.util.List.of()
+                : account.locationCodes().stream().map(code -> locations.requireId("locationCodes", code)).toList();
+        return create(account.username(), account.password(), account.roles(), kitId, locationIds);
+    }
+
     /** Creates an account with the locations it acts on, in one transaction: a refusal leaves nothing behind. */
     @Transactional
     public UserAccount create(String username, String password, Set<String> roles, Long kitLocationId,
