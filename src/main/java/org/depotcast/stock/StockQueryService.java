@@ -5,6 +5,8 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.common.EntityMissingException;
+import io.quarkus.security.ForbiddenException;
 
 import java.math.BigDecimal;
 import java.time.OffsetDateTime;
@@ -79,6 +81,20 @@ public class StockQueryService {
         AccessScope.Scope visible = scope.current();
         return movements.search(partId, locationId, visible.locationIds(), since, limit).stream()
                 .map(MovementResponse::from).toList();
+    }
+
+    /** One movement, when it touches a location the caller sees: 404 when unknown, 403 when outside their locations. */
+    @Transactional
+    public MovementResponse movement(long id) {
+        StockMovement movement = movements.findByIdOptional(id)
+                .orElseThrow(() -> new EntityMissingException(null, "movement", id));
+        AccessScope.Scope visible = scope.current();
+        boolean seen = (movement.fromLocation != null && visible.sees(movement.fromLocation.id))
+                || (movement.toLocation != null && visible.sees(movement.toLocation.id));
+        if (!seen) {
+            throw new ForbiddenException("movement " + id + " touches no location assigned to you");
+        }
+        return MovementResponse.from(movement);
     }
 
     @Transactional

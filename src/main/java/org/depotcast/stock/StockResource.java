@@ -7,6 +7,7 @@ import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.POST;
 import jakarta.ws.rs.Path;
+import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
 import jakarta.ws.rs.QueryParam;
 import jakarta.ws.rs.core.MediaType;
@@ -41,7 +42,7 @@ class StockResource {
         PostedMovement posted = ledger.post(request.toCommand());
         MovementResponse body = posted.movement();
         return posted.replayed() ? Response.ok(body).build()
-                : Response.created(uri.getBaseUriBuilder().path("api/stock/movements").queryParam("id", body.id()).build())
+                : Response.created(uri.getBaseUriBuilder().path("api/stock/movements").path(Long.toString(body.id())).build())
                 .entity(body).build();
     }
 
@@ -51,6 +52,12 @@ class StockResource {
                                             @QueryParam("since") String since, @QueryParam("limit") String limit) {
         return queries.movements(part, location, QueryParams.optionalInstant("since", since),
                 QueryParams.intInRange("limit", limit, 200, 1, 10_000));
+    }
+
+    @GET
+    @Path("movements/{id}")
+    public MovementResponse movement(@PathParam("id") long id) {
+        return queries.movement(id);
     }
 
     @GET
