@@ -47,9 +47,9 @@ class ArchitectureTest {
     void commonKnowsNoFeature() {
         classes().that().resideInAPackage("org.depotcast.common..").should().onlyDependOnClassesThat()
                 .resideOutsideOfPackages("org.depotcast.access..", "org.depotcast.catalogue..", "org.depotcast.demo..",
-                        "org.depotcast.fleet..", "org.depotcast.forecasting..", "org.depotcast.planning..",
-                        "org.depotcast.repairs..", "org.depotcast.requests..", "org.depotcast.spend..",
-                        "org.depotcast.stock..")
+                        "org.depotcast.fleet..", "org.depotcast.forecasting..", "org.depotcast.jobs..",
+                        "org.depotcast.planning..", "org.depotcast.repairs..", "org.depotcast.requests..",
+                        "org.depotcast.sensors..", "org.depotcast.spend..", "org.depotcast.stock..")
                 .check(MAIN);
     }
 }

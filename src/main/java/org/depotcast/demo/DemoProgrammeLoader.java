@@ -14,7 +14,7 @@ import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.fleet.PumpCsv;
 import org.depotcast.fleet.UsageService;
 import org.depotcast.repairs.RepairHistoryCsv;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.PurchaseOrderService;
@@ -113,16 +113,16 @@ class DemoProgrammeLoader {
         }
         accounts.create("officer", "officer-demo", Set.of(Roles.STORES_OFFICER), null);
         accounts.assignLocations("officer", java.util.stream.Stream.concat(
-                locations.ofKind(LocationKind.CENTRAL_STORE).stream(), locations.ofKind(LocationKind.DEPOT).stream())
-                .map(l -> l.id).toList());
+                locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream(),
+                locations.summariesOfKind(LocationKind.DEPOT).stream()).map(LocationSummary::id).toList());
         // A second officer who runs one depot only: shows how stores officers are scoped.
         accounts.create("officer2", "officer2-demo", Set.of(Roles.STORES_OFFICER), null);
-        accounts.assignLocations("officer2", List.of(locations.require("location", "DEP-PELLOWDENE").id));
+        accounts.assignLocations("officer2", List.of(locations.requireSummary("location", "DEP-PELLOWDENE").id()));
         accounts.create("lead", "lead-demo", Set.of(Roles.PROGRAMME_LEAD), null);
         accounts.create("admin", "admin-demo", Set.of(Roles.ADMIN), null);
-        for (Location kit : locations.ofKind(LocationKind.KIT)) {
-            String name = kit.mechanicUsername;
-            accounts.create(name, name + "-demo", Set.of(Roles.MECHANIC), kit.id);
+        for (LocationSummary kit : locations.summariesOfKind(LocationKind.KIT)) {
+            String name = kit.mechanicUsername();
+            accounts.create(name, name + "-demo", Set.of(Roles.MECHANIC), kit.id());
         }
     }
 }

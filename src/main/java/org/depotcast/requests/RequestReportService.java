@@ -4,7 +4,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.repairs.PartsWaitService;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
@@ -47,15 +47,15 @@ public class RequestReportService {
         List<PartsRequest> issued = requests.issuedSince(since);
         AccessScope.Scope visible = scope.current();
         List<RequestDtos.DepotReport> out = new ArrayList<>();
-        for (Location depot : locations.ofKind(LocationKind.DEPOT)) {
-            if (!visible.sees(depot.id)) {
+        for (LocationSummary depot : locations.summariesOfKind(LocationKind.DEPOT)) {
+            if (!visible.sees(depot.id())) {
                 continue;
             }
-            double[] hours = issued.stream().filter(r -> r.depot.id.equals(depot.id))
+            double[] hours = issued.stream().filter(r -> r.depot.id.equals(depot.id()))
                     .mapToDouble(r -> Duration.between(r.raisedAt, r.issuedAt).toMinutes() / 60.0).sorted().toArray();
-            long[] wait = waits.getOrDefault(depot.code, new long[2]);
-            Map<String, Long> now = waitingNow.getOrDefault(depot.code, Map.of());
-            out.add(new RequestDtos.DepotReport(depot.code, hours.length,
+            long[] wait = waits.getOrDefault(depot.code(), new long[2]);
+            Map<String, Long> now = waitingNow.getOrDefault(depot.code(), Map.of());
+            out.add(new RequestDtos.DepotReport(depot.code(), hours.length,
                     hours.length == 0 ? null : java.util.Arrays.stream(hours).average().orElse(0),
                     hours.length == 0 ? null : median(hours), wait[0], wait[1], now.size(),
                     now.values().stream().mapToLong(Long::longValue).sum()));

@@ -12,7 +12,7 @@ import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
@@ -85,8 +85,8 @@ public class SpendScenarioService {
         for (int i = 0; i < installs.size(); i++) {
             ScenarioDefinition.Installation inst = installs.get(i);
             models.require("installations[" + i + "].modelCode", inst.modelCode());
-            Location depot = locations.require("installations[" + i + "].depotCode", inst.depotCode());
-            if (depot.kind != LocationKind.DEPOT) {
+            LocationSummary depot = locations.requireSummary("installations[" + i + "].depotCode", inst.depotCode());
+            if (depot.kind() != LocationKind.DEPOT) {
                 throw new BusinessRuleException("installations[" + i + "].depotCode", "'" + inst.depotCode() + "' is not a depot");
             }
             if (inst.year() > definition.horizonYears()) {

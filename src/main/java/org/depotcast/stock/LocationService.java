@@ -42,6 +42,18 @@ public class LocationService {
         return locations.ofKind(kind);
     }
 
+    /** The locations of a kind as records, in the same order as {@link #ofKind}. */
+    @Transactional
+    public List<LocationSummary> summariesOfKind(LocationKind kind) {
+        return locations.ofKind(kind).stream().map(LocationSummary::from).toList();
+    }
+
+    /** The location with this code as a record; a 422 naming {@code field} when there is none. */
+    @Transactional
+    public LocationSummary requireSummary(String field, String code) {
+        return LocationSummary.from(require(field, code));
+    }
+
     public Optional<Location> find(String code) {
         return locations.byCode(code);
     }

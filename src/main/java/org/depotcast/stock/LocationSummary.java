@@ -1,0 +1,13 @@
+package org.depotcast.stock;
+
+/**
+ * A stock location as other features see it: a record, not the entity, so they hold no managed object of this
+ * feature and no lazy parent. {@code parentCode} is the depot of a kit (null elsewhere); {@code mechanicUsername} is
+ * the mechanic who carries a kit.
+ */
+public record LocationSummary(long id, String code, LocationKind kind, String parentCode, String mechanicUsername) {
+    static LocationSummary from(Location location) {
+        return new LocationSummary(location.id, location.code, location.kind,
+                location.parent == null ? null : location.parent.code, location.mechanicUsername);
+    }
+}
