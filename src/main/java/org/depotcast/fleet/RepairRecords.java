@@ -1,5 +1,7 @@
 package org.depotcast.fleet;
 
+import java.time.LocalDate;
+import java.util.List;
 import java.util.Map;
 
 /**
@@ -11,4 +13,7 @@ public interface RepairRecords {
 
     /** Facts of every pump that has repairs, keyed by pump id. */
     Map<Long, RepairFacts> factsOfAll();
+
+    /** Per pump, its breakdown repairs reported up to {@code to} and not fixed before {@code from}, earliest first. */
+    Map<Long, List<RepairSpan>> breakdownsBetween(LocalDate from, LocalDate to);
 }

@@ -3,8 +3,10 @@ package org.depotcast.repairs;
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.fleet.RepairFacts;
 import org.depotcast.fleet.RepairRecords;
+import org.depotcast.fleet.RepairSpan;
 
 import java.time.LocalDate;
+import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
@@ -26,6 +28,16 @@ class RepairFactsSource implements RepairRecords {
     @Override
     public Map<Long, RepairFacts> factsOfAll() {
         return fold(repairs.openBreakdownsOf(null), repairs.fixesOf(null));
+    }
+
+    @Override
+    public Map<Long, List<RepairSpan>> breakdownsBetween(LocalDate from, LocalDate to) {
+        Map<Long, List<RepairSpan>> spans = new HashMap<>();
+        for (Object[] row : repairs.breakdownsBetween(from, to)) {
+            spans.computeIfAbsent((Long) row[0], k -> new ArrayList<>())
+                    .add(new RepairSpan((LocalDate) row[1], (LocalDate) row[2]));
+        }
+        return spans;
     }
 
     /** Rows (pump id, repair ref, date): open breakdowns earliest first, fixes latest first; the first per pump counts. */

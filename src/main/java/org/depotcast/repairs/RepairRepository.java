@@ -57,6 +57,15 @@ class RepairRepository implements PanacheRepository<Repair> {
                 group by r.pump.id""", Object[].class).getResultList();
     }
 
+    /** Breakdowns reported up to {@code to} and not fixed before {@code from}: rows pump id, reported on, fixed on. */
+    List<Object[]> breakdownsBetween(LocalDate from, LocalDate to) {
+        return getEntityManager().createQuery("""
+                select r.pump.id, r.reportedOn, r.fixedOn from Repair r
+                where r.kind = org.depotcast.repairs.RepairKind.BREAKDOWN and r.reportedOn <= :to
+                and (r.fixedOn is null or r.fixedOn >= :from) order by r.reportedOn, r.id""", Object[].class)
+                .setParameter("from", from).setParameter("to", to).getResultList();
+    }
+
     /** The day of the earliest repair on record, or null with none. */
     LocalDate firstReportedOn() {
         return getEntityManager().createQuery("select min(r.reportedOn) from Repair r", LocalDate.class).getSingleResult();

@@ -5,13 +5,17 @@ import io.quarkus.logging.Log;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AuditService;
+import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
 import org.depotcast.fleet.RepairFacts;
 import org.depotcast.fleet.RepairRecords;
+import org.depotcast.fleet.RepairSpan;
 
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.time.LocalDate;
+import java.time.temporal.ChronoUnit;
+import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
@@ -21,7 +25,8 @@ import java.util.Map;
  * Keeps the "probably down" flags in step with the sensors and the repairs: a pump the detector finds stopped
  * ({@link StopDetector}), with a probability of at least {@value #LEAST_PROBABILITY} and no repair reported since the
  * stop, is flagged; a flag closes when a repair is reported (REPAIR_REPORTED) or when use comes back without one
- * (FALSE_ALARM, counted in the report).
+ * (FALSE_ALARM, counted in the report). The detector judges the days read less the downtime of breakdowns already
+ * on record ({@link RecordedDowntime}), so an earlier repair's days are not taken for the pump idling.
  */
 @ApplicationScoped
 public class StopFlagService {
@@ -65,13 +70,18 @@ public class StopFlagService {
     /** Judges the given pumps as of {@code asOf}; returns the flags open afterwards among them. */
     @Transactional
     public int refresh(Collection<Long> pumpIds, LocalDate asOf) {
-        Map<Long, double[]> windows = usage.windows(pumpIds, asOf, StopDetector.Settings.DEFAULT.windowDays());
+        int days = StopDetector.Settings.DEFAULT.windowDays();
+        LocalDate firstDay = asOf.minusDays(days - 1L);
+        Map<Long, double[]> windows = usage.windows(pumpIds, asOf, days);
         Map<Long, RepairFacts> facts = repairs.factsOfAll();
+        Map<Long, List<RepairSpan>> breakdowns = repairs.breakdownsBetween(firstDay, asOf);
         Map<Long, StopFlag> open = new HashMap<>();
         flags.open().forEach(f -> open.put(f.pumpId, f));
         int opened = 0, stillOpen = 0;
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
-            StopDetector.Verdict verdict = detector.judge(pump.getValue());
+            StopDetector.Verdict verdict = detector.judge(RecordedDowntime.leaveOut(pump.getValue(),
+                    inWindow(breakdowns.getOrDefault(pump.getKey(), List.of()), firstDay, days),
+                    StopDetector.Settings.DEFAULT.stopFraction()));
             RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
@@ -85,6 +95,16 @@ public class StopFlagService {
             Log.infof("sensors: %d pumps newly probably down as of %s", opened, asOf);
         }
         return stillOpen;
+    }
+
+    /** Recorded breakdowns as days of the window from {@code firstDay}; one still open runs past its end. */
+    private static List<RecordedDowntime.Breakdown> inWindow(List<RepairSpan> spans, LocalDate firstDay, int days) {
+        List<RecordedDowntime.Breakdown> known = new ArrayList<>(spans.size());
+        for (RepairSpan span : spans) {
+            known.add(new RecordedDowntime.Breakdown((int) ChronoUnit.DAYS.between(firstDay, span.reportedOn()),
+                    span.fixedOn() == null ? days : (int) ChronoUnit.DAYS.between(firstDay, span.fixedOn())));
+        }
+        return known;
     }
 
     /** Closes a flag on a repair reported since the stop, or on use returning; true while it stays open. */

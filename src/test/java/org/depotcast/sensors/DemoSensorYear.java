@@ -2,6 +2,7 @@ package org.depotcast.sensors;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
 
 import java.io.IOException;
@@ -19,7 +20,8 @@ import java.util.Set;
 
 /**
  * The demo programme's sensor year (to 2026-11-30) replayed day by day with the detector and the service's flag
- * rules, for the evidence tests. Day t is judged on the readings up to and including day t. A flag opens as
+ * rules, for the evidence tests. Day t is judged on the readings up to and including day t, less the downtime of
+ * the breakdowns reported by day t ({@link RecordedDowntime}), as the service judges it. A flag opens as
  * {@link StopFlagService} opens one (stopped, probability ≥ 0.5, no repair open, the stop not begun on or before the
  * last fix), keeps the highest probability seen while open, and closes when a repair is open or use comes back.
  */
@@ -52,6 +54,15 @@ final class DemoSensorYear {
     }
 
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay) throws IOException {
+        return replay(seed, delay, true);
+    }
+
+    /**
+     * @param leaveOutRecorded false judges the days as read, recorded breakdowns included (the rule before
+     *                         {@link RecordedDowntime}), for comparison
+     */
+    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded)
+            throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
         StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
@@ -71,12 +82,13 @@ final class DemoSensorYear {
                 marks.add(new Planted(index(series.stoppedFrom().get(i)), index(s.reportedOn()),
                         s.fixedOn() == null ? DAYS : index(s.fixedOn())));
             }
-            year.add(judge(asset, series.hours(), marks, detector));
+            year.add(judge(asset, series.hours(), marks, detector, leaveOutRecorded));
         }
         return year;
     }
 
-    private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector) {
+    private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector,
+                                  boolean leaveOutRecorded) {
         int window = StopDetector.Settings.DEFAULT.windowDays();
         List<Flag> flags = new ArrayList<>();
         int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0;
@@ -84,7 +96,10 @@ final class DemoSensorYear {
         List<Double> probability = new ArrayList<>();
         for (int t = window - 1; t < DAYS; t++) {
             judged++;
-            StopDetector.Verdict v = detector.judge(Arrays.copyOfRange(hours, t - window + 1, t + 1));
+            StopDetector.Verdict v = detector.judge(RecordedDowntime.leaveOut(
+                    Arrays.copyOfRange(hours, t - window + 1, t + 1),
+                    leaveOutRecorded ? reportedBy(marks, t, t - window + 1) : List.of(),
+                    StopDetector.Settings.DEFAULT.stopFraction()));
             boolean repairOpen = false;
             for (Planted m : marks) {
                 repairOpen |= m.report() <= t && t < m.fix();
@@ -119,6 +134,17 @@ final class DemoSensorYear {
             flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering));
         }
         return new PumpYear(asset, marks, flags, judged);
+    }
+
+    /** The breakdowns reported by day {@code today}, as days of the window starting on day {@code first}. */
+    private static List<RecordedDowntime.Breakdown> reportedBy(List<Planted> marks, int today, int first) {
+        List<RecordedDowntime.Breakdown> known = new ArrayList<>();
+        for (Planted m : marks) {
+            if (m.report() <= today) {
+                known.add(new RecordedDowntime.Breakdown(m.report() - first, m.fix() - first));
+            }
+        }
+        return known;
     }
 
     private static Flag flag(int openDay, int closeDay, int stoppedFrom, List<Double> probability, double baseline,

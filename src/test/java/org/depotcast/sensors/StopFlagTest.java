@@ -89,4 +89,31 @@ class StopFlagTest {
         as("lead").queryParam("day", "31/12/2026").post("/api/sensors/stop-check").then().statusCode(400)
                 .body("errors[0].field", equalTo("day"));
     }
+
+    @Test
+    void daysABreakdownOnRecordStoodBrokenAreNotTakenForThePumpIdling() {
+        // 6 h a day from 2026-06-01; broken 06-06 to 06-13 (reported 06-09, fixed 06-14); stopped again 07-11 and 07-12.
+        LocalDate first = LocalDate.of(2026, 6, 1);
+        StringBuilder csv = new StringBuilder("asset_id,day,hours\n");
+        String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        for (int d = 0; d < 42; d++) {
+            double hours = (d >= 5 && d < 13) || d >= 40 ? 0 : 6;
+            csv.append(p).append(',').append(first.plusDays(d)).append(',').append(hours).append('\n');
+        }
+        Map<String, Object> repair = new HashMap<>();
+        repair.put("repairRef", "earlier-" + p);
+        repair.put("assetId", p);
+        repair.put("kind", "BREAKDOWN");
+        repair.put("reportedOn", "2026-06-09");
+        repair.put("fixedOn", "2026-06-14");
+        repair.put("lines", List.of());
+        as("officer").contentType("application/json").body(repair).post("/api/repairs").then().statusCode(201);
+        SensorIntakeTest.csv("officer", csv.toString()).then().statusCode(200).body("added", equalTo(42));
+        Map<String, Object> flagged = reportOf(p);
+        assertEquals("probably down", flagged.get("state"));
+        assertEquals("2026-07-11", flagged.get("stoppedFrom"));
+        // RecordedDowntimeTest's case: 20 days read in the baseline, none idle: 484 / 848. Counted as idle, the 8
+        // broken days would leave 0.0297, and no flag.
+        assertEquals(0.5708, ((Number) flagged.get("probabilityDown")).doubleValue(), 1e-4);
+    }
 }
