@@ -24,12 +24,14 @@ class ServiceDueResource {
 
     /**
      * Preventive services due on the caller's pumps (a mechanic: the pumps assigned to them), soonest first: hours
-     * since the last service at each pump's daily load against its model's interval.
+     * since the last service against the model's interval, counted as the sensor service plan counts them.
      */
     @GET
     @Operation(summary = "Preventive services due", description = "Per pump in service that the caller may see: hours "
-            + "since the last preventive service (or installation) at its recorded daily loads, the model's interval, "
-            + "hours left and the day it falls due at today's load; overdue first. Optional depot filter.")
+            + "since the last preventive service (or installation), at its recorded daily loads or, for a pump with a "
+            + "sensor, the hours read on the days read (the recorded estimate for the days not read), the model's "
+            + "interval, hours left and the day it falls due at today's load (the last 28 days read for a pump with a "
+            + "sensor); overdue first. Optional depot filter.")
     public List<ServiceDue> due(@QueryParam("depot") String depot) {
         return service.dueAt(LocalDate.now(clock), depot);
     }
