@@ -27,11 +27,9 @@ import java.util.Set;
 @RolesAllowed(Roles.ADMIN)
 class AccountResource {
     private final AccountService accounts;
-    private final LocationDirectory locations;
 
-    AccountResource(AccountService accounts, LocationDirectory locations) {
+    AccountResource(AccountService accounts) {
         this.accounts = accounts;
-        this.locations = locations;
     }
 
     record AccountView(String username, Set<String> roles, boolean enabled, List<String> locationCodes, String kitCode) {
@@ -79,7 +77,7 @@ class AccountResource {
     @Path("{username}/locations")
     @Consumes(MediaType.APPLICATION_JSON)
     public Response assign(@PathParam("username") String username, @Valid @NotNull LocationCodes body) {
-        accounts.assignLocations(username, ids("codes", body.codes()));
+        accounts.assignLocationCodes(username, body.codes());
         return Response.noContent().build();
     }
 
@@ -88,9 +86,5 @@ class AccountResource {
     @Consumes(MediaType.APPLICATION_JSON)
     public AccountView setRoles(@PathParam("username") String username, @Valid @NotNull RoleSet body) {
         return view(accounts.setRoles(username, body.roles()));
-    }
-
-    private List<Long> ids(String field, List<String> codes) {
-        return codes.stream().map(c -> locations.requireId(field, c)).toList();
     }
 }

@@ -87,6 +87,12 @@ public class AccountService {
         changed.fire(new AccountsChanged());
     }
 
+    /** As {@link #assignLocations}, naming the locations by code: an unknown code is a 422 naming {@code codes}. */
+    @Transactional
+    public void assignLocationCodes(String username, java.util.List<String> codes) {
+        assignLocations(username, codes.stream().map(code -> locations.requireId("codes", code)).toList());
+    }
+
     /** Adds one location to an account's assignments, keeping the others. */
     @Transactional
     public void addLocation(String username, long locationId) {

@@ -64,4 +64,15 @@ class AccountCreationTest {
         assertEquals(List.of("DEP-PELLOWDENE", "DEP-TESHVALE"), system.call("test",
                 () -> accounts.profile(username).locationCodes()));
     }
+
+    @Test
+    void anUnknownCodeInANewAssignmentKeepsTheAssignmentsBefore() {
+        String username = name();
+        system.call("test", () -> accounts.create(new AccountService.NewAccount(username, "long-enough-1",
+                Set.of(Roles.STORES_OFFICER), null, List.of("DEP-TESHVALE"))));
+        EntityMissingException refused = assertThrows(EntityMissingException.class, () -> system.run("test",
+                () -> accounts.assignLocationCodes(username, List.of("DEP-PELLOWDENE", "DEP-NOWHERE"))));
+        assertEquals("codes", refused.field());
+        assertEquals(List.of("DEP-TESHVALE"), system.call("test", () -> accounts.profile(username).locationCodes()));
+    }
 }
