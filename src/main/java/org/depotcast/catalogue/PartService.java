@@ -53,6 +53,18 @@ public class PartService {
         return parts.byPartNumber(partNumber).orElseThrow(() -> new EntityMissingException(field, "part", partNumber));
     }
 
+    /** Every part as a record, in part-number order. */
+    @Transactional
+    public List<PartSummary> summaries() {
+        return parts.allByNumber().stream().map(PartSummary::from).toList();
+    }
+
+    /** The part as a record, or a 422 naming {@code field} when there is no part of that number. */
+    @Transactional
+    public PartSummary requireSummary(String field, String partNumber) {
+        return PartSummary.from(require(field, partNumber));
+    }
+
     public Part byId(long id) {
         return parts.findById(id);
     }

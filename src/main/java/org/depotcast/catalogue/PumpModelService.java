@@ -50,6 +50,12 @@ public class PumpModelService {
         return models.byCode(code).orElseThrow(() -> new EntityMissingException(field, "pump model", code));
     }
 
+    /** The service kit of a pump of this model at this depth; a 422 naming {@code field} when the model is unknown. */
+    @Transactional
+    public ServiceKit serviceKit(String field, String code, double depthM) {
+        return ServiceKit.of(require(field, code), depthM);
+    }
+
     @Transactional
     public PumpModel create(PumpModelRequest request) {
         if (models.byCode(request.code()).isPresent()) {

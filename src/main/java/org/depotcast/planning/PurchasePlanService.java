@@ -165,7 +165,7 @@ public class PurchasePlanService {
         if (plan.status == PurchasePlan.Status.ACCEPTED) {
             throw new ConflictException("id", "purchase plan " + id + " was already accepted");
         }
-        String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+        String central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).get(0).code();
         Map<String, List<PurchasePlanLine>> bySupplier = new LinkedHashMap<>();
         plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> bySupplier.computeIfAbsent(l.part.supplier, k -> new ArrayList<>()).add(l));
         if (bySupplier.isEmpty()) {

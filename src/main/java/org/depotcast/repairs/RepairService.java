@@ -15,7 +15,7 @@ import org.depotcast.common.Quantities;
 import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.PumpStatusService;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
@@ -185,10 +185,10 @@ public class RepairService {
     }
 
     private void consumeFromKit(Repair repair) {
-        Location kit = locations.kitOf(repair.mechanic).orElseThrow(() -> new BusinessRuleException("mechanic",
-                "mechanic '" + repair.mechanic + "' carries no kit to consume parts from"));
+        LocationSummary kit = locations.kitSummaryOf(repair.mechanic).orElseThrow(() -> new BusinessRuleException(
+                "mechanic", "mechanic '" + repair.mechanic + "' carries no kit to consume parts from"));
         for (RepairLine line : repair.lines) {
-            MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, line.part.partNumber, kit.code, null,
+            MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, line.part.partNumber, kit.code(), null,
                     line.quantity, repair.fixedOn.atStartOfDay().atOffset(ZoneOffset.UTC),
                     repair.kind == RepairKind.BREAKDOWN ? "breakdown repair" : "preventive service",
                     repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + line.part.partNumber), null, repair.id);

@@ -3,7 +3,7 @@ package org.depotcast.spend;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.spend.SpendDraws;
 import org.depotcast.core.spend.SpendSimulation;
@@ -52,7 +52,7 @@ public class BackCheckService {
         if (years < 1 || years > 5) {
             throw new InvalidInputException("years", "must be between 1 and 5, was " + years);
         }
-        Map<Long, Part> partsById = lines.partsById();
+        Map<Long, PartSummary> partsById = lines.partsById();
         List<YearCheck> checks = new ArrayList<>();
         // A snapshot as of a year's start holds nothing dated after it: what was used comes from today's records.
         List<FleetSnapshot.Consumption> used = fleet.load(LocalDate.now(ZoneOffset.UTC), 36).consumption();
@@ -74,7 +74,7 @@ public class BackCheckService {
             double actualBreakdowns = 0, actualServices = 0;
             for (FleetSnapshot.Consumption c : used) {
                 if (!c.day().isBefore(period.startsOn()) && !c.day().isAfter(period.endsOn())) {
-                    double spent = c.quantity() * partsById.get(c.partId()).unitCost.doubleValue();
+                    double spent = c.quantity() * partsById.get(c.partId()).unitCost().doubleValue();
                     if (c.breakdown()) {
                         actualBreakdowns += spent;
                     } else {

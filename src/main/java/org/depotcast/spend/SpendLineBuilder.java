@@ -1,7 +1,7 @@
 package org.depotcast.spend;
 
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PumpMonths;
 import org.depotcast.core.spend.SpendLine;
@@ -34,7 +34,7 @@ final class SpendLineBuilder {
     private final Map<String, Integer> partIndex = new HashMap<>();
     private final Map<String, Integer> depotIndex = new HashMap<>();
     private final FleetOutlook outlook;
-    private final Map<Long, Part> partsById;
+    private final Map<Long, PartSummary> partsById;
     private final ScenarioDefinition scenario;
     private final List<FinancialYears.Period> periods;
     private final int[] periodOfMonth;
@@ -47,7 +47,7 @@ final class SpendLineBuilder {
     private record Cell(int period, long partId, String depot) {
     }
 
-    SpendLineBuilder(FleetOutlook outlook, Map<Long, Part> partsById, ScenarioDefinition scenario,
+    SpendLineBuilder(FleetOutlook outlook, Map<Long, PartSummary> partsById, ScenarioDefinition scenario,
                      List<FinancialYears.Period> periods) {
         this.outlook = outlook;
         this.partsById = partsById;
@@ -167,7 +167,7 @@ final class SpendLineBuilder {
     }
 
     private double[] cell(int period, long partId, String depot) {
-        partIndex.computeIfAbsent(partsById.get(partId).partNumber, k -> {
+        partIndex.computeIfAbsent(partsById.get(partId).partNumber(), k -> {
             partNumbers.add(k);
             return partNumbers.size() - 1;
         });
@@ -200,11 +200,11 @@ final class SpendLineBuilder {
         List<SpendLine> lines = new ArrayList<>();
         for (Map.Entry<Cell, double[]> e : cells.entrySet()) {
             Cell key = e.getKey();
-            Part part = partsById.get(key.partId());
+            PartSummary part = partsById.get(key.partId());
             // Prices rise from the second whole year; the rest of the year in progress is at today's prices.
-            double price = part.unitCost.doubleValue() * scenario.priceFactor(Math.max(0, key.period() - stubPeriods));
+            double price = part.unitCost().doubleValue() * scenario.priceFactor(Math.max(0, key.period() - stubPeriods));
             double[] v = e.getValue();
-            lines.add(new SpendLine(key.period(), part.family.ordinal(), partIndex.get(part.partNumber),
+            lines.add(new SpendLine(key.period(), part.family().ordinal(), partIndex.get(part.partNumber()),
                     depotIndex.get(key.depot()), v[0], v[2], v[1], price));
         }
         return lines.toArray(new SpendLine[0]);

@@ -2,11 +2,10 @@ package org.depotcast.spend;
 
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
-import org.depotcast.catalogue.BomLine;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
-import org.depotcast.catalogue.PumpModel;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.catalogue.ServiceKit;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.forecasting.FleetOutlook;
 import org.depotcast.forecasting.FleetOutlooks;
@@ -45,18 +44,18 @@ class SpendLineService {
     }
 
     /** Parts by id, checked to share one catalogue currency. */
-    Map<Long, Part> partsById() {
-        Map<Long, Part> partsById = new HashMap<>();
-        parts.all().forEach(p -> partsById.put(p.id, p));
+    Map<Long, PartSummary> partsById() {
+        Map<Long, PartSummary> partsById = new HashMap<>();
+        parts.summaries().forEach(p -> partsById.put(p.id(), p));
         return partsById;
     }
 
     /** Every part in one catalogue currency; the scenario converts it with its own rate. */
-    static String currency(ScenarioDefinition definition, Map<Long, Part> partsById) {
-        String catalogue = partsById.values().stream().map(p -> p.currency).findFirst().orElse("USD");
-        for (Part p : partsById.values()) {
-            if (!p.currency.equals(catalogue)) {
-                throw new BusinessRuleException("exchangeRate", "part " + p.partNumber + " is priced in " + p.currency
+    static String currency(ScenarioDefinition definition, Map<Long, PartSummary> partsById) {
+        String catalogue = partsById.values().stream().map(PartSummary::currency).findFirst().orElse("USD");
+        for (PartSummary p : partsById.values()) {
+            if (!p.currency().equals(catalogue)) {
+                throw new BusinessRuleException("exchangeRate", "part " + p.partNumber() + " is priced in " + p.currency()
                         + ", others in " + catalogue + ": one catalogue currency is needed");
             }
         }
@@ -67,7 +66,7 @@ class SpendLineService {
      * The fleet's lines over {@code periods} (the first starting at the origin), the scenario's installations and,
      * when {@code withTopUp}, the stock needed now to reach the policy levels.
      */
-    SpendLineBuilder build(ScenarioDefinition definition, List<FinancialYears.Period> periods, Map<Long, Part> partsById,
+    SpendLineBuilder build(ScenarioDefinition definition, List<FinancialYears.Period> periods, Map<Long, PartSummary> partsById,
                            boolean withTopUp) {
         int months = periods.stream().mapToInt(FinancialYears.Period::monthCount).sum();
         FleetOutlook outlook = outlooks.asOf(periods.get(0).startsOn(), months);
@@ -78,10 +77,10 @@ class SpendLineService {
             addInstallation(builder, inst);
         }
         if (withTopUp) {
-            String central = locations.ofKind(LocationKind.CENTRAL_STORE).get(0).code;
+            String central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).get(0).code();
             for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
-                Part part = parts.require("partNumber", p.partNumber());
-                builder.addTopUp(central, part.id, Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+                PartSummary part = parts.requireSummary("partNumber", p.partNumber());
+                builder.addTopUp(central, part.id(), Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
             }
         }
         return builder;
@@ -89,7 +88,7 @@ class SpendLineService {
 
     /** As {@link #build} from the first day of {@code origin}'s month over the scenario's financial years. */
     SpendLineBuilder build(ScenarioDefinition definition, FinancialYears financialYears, LocalDate origin,
-                           Map<Long, Part> partsById) {
+                           Map<Long, PartSummary> partsById) {
         return build(definition, financialYears.projection(origin.withDayOfMonth(1), definition.horizonYears()),
                 partsById, true);
     }
@@ -98,13 +97,13 @@ class SpendLineService {
         List<FleetSnapshot.BomPart> bom = new ArrayList<>();
         int[] interval = new int[1];
         QuarkusTransaction.requiringNew().run(() -> {
-            PumpModel model = models.require("modelCode", inst.modelCode());
-            interval[0] = model.serviceIntervalHours;
-            for (BomLine line : model.bom) {
-                bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(inst.depthM())));
+            ServiceKit kit = models.serviceKit("modelCode", inst.modelCode(), inst.depthM());
+            interval[0] = kit.serviceIntervalHours();
+            for (ServiceKit.Line line : kit.lines()) {
+                bom.add(new FleetSnapshot.BomPart(line.partId(), line.family(), line.units()));
             }
         });
-        long depotId = locations.require("depotCode", inst.depotCode()).id;
+        long depotId = locations.requireSummary("depotCode", inst.depotCode()).id();
         builder.addInstallation(inst, depotId, interval[0], bom);
     }
 }

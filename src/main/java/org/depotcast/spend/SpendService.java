@@ -6,7 +6,7 @@ import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
@@ -154,7 +154,7 @@ public class SpendService {
     private String execute(long runId, String name, ScenarioDefinition definition, FinancialYears financialYears,
                            LocalDate origin, JobProgress progress) {
         phase(runId, progress, "reading the fleet as of " + origin);
-        Map<Long, Part> partsById = lineService.partsById();
+        Map<Long, PartSummary> partsById = lineService.partsById();
         String currency = SpendLineService.currency(definition, partsById);
         SpendLineBuilder builder = lineService.build(definition, financialYears, origin, partsById);
         List<FinancialYears.Period> periods = financialYears.projection(origin, definition.horizonYears());

@@ -66,6 +66,12 @@ public class LocationService {
         return locations.findById(id);
     }
 
+    /** The kit the mechanic carries, as a record. */
+    @Transactional
+    public Optional<LocationSummary> kitSummaryOf(String mechanicUsername) {
+        return locations.kitOf(mechanicUsername).map(LocationSummary::from);
+    }
+
     public Optional<Location> kitOf(String mechanicUsername) {
         return locations.kitOf(mechanicUsername);
     }

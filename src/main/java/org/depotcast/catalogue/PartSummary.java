@@ -1,0 +1,16 @@
+package org.depotcast.catalogue;
+
+import java.math.BigDecimal;
+
+/**
+ * A catalogue part as other features read it: a record, not the entity, so they hold no managed object of the
+ * catalogue. {@code unitCost} is per unit of issue, in {@code currency}.
+ */
+public record PartSummary(long id, String partNumber, String description, ComponentFamily family,
+                          UnitOfIssue unitOfIssue, BigDecimal unitCost, String currency, String supplier,
+                          int leadTimeDays) {
+    static PartSummary from(Part part) {
+        return new PartSummary(part.id, part.partNumber, part.description, part.family, part.unitOfIssue, part.unitCost,
+                part.currency, part.supplier, part.leadTimeDays);
+    }
+}
