@@ -63,6 +63,11 @@ public class Pump {
     @Version
     public long version;
 
+    /** The code of the depot the pump belongs to, for features that report it without reading the location. */
+    public String depotCode() {
+        return depot.code;
+    }
+
     /** Keeps status and its dates consistent: a broken pump says since when, a decommissioned one when. */
     void setStatus(PumpStatus newStatus, LocalDate since, String note) {
         status = newStatus;

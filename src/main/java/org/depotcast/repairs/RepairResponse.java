@@ -12,7 +12,7 @@ public record RepairResponse(String repairRef, String assetId, String depotCode,
     }
 
     public static RepairResponse from(Repair r) {
-        return new RepairResponse(r.repairRef, r.pump.assetId, r.pump.depot.code, r.mechanic, r.kind, r.reportedOn,
+        return new RepairResponse(r.repairRef, r.pump.assetId, r.pump.depotCode(), r.mechanic, r.kind, r.reportedOn,
                 r.diagnosedOn, r.partsAvailableOn, r.fixedOn, r.fault, r.ledgerPosted, r.daysWaitingForParts(),
                 r.downtimeDays(), r.lines.stream().map(l -> new Line(l.part.partNumber, l.quantity)).toList());
     }
