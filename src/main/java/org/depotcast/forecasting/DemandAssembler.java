@@ -1,14 +1,10 @@
 package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.core.forecast.DemandProfile;
-import org.depotcast.core.forecast.ErrorScores;
+import org.depotcast.core.forecast.CredibilityWeight;
+import org.depotcast.core.forecast.DemandChoice;
 import org.depotcast.core.forecast.FleetRateModel;
-import org.depotcast.core.forecast.ForecastMethod;
 import org.depotcast.core.forecast.PumpMonths;
-import org.depotcast.core.forecast.SeriesFitter;
-import org.depotcast.core.forecast.SeriesForecast;
-import org.depotcast.core.forecast.SeriesForecaster;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -30,9 +26,7 @@ import java.util.function.IntConsumer;
 final class DemandAssembler {
     static final String PROGRAMME = "PROGRAMME";
     static final String FLEET = "FLEET";
-    private static final int HOLDOUT_MONTHS = 12;
-    private static final double DAYS_PER_MONTH = 365.25 / 12;
-    private static final ErrorScores UNSCORED = new ErrorScores(Double.NaN, Double.NaN, Double.NaN, 0);
+    private static final int HOLDOUT_MONTHS = DemandChoice.HOLDOUT_MONTHS;
 
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, ForecastModelDefinition> definitions;
@@ -46,7 +40,7 @@ final class DemandAssembler {
     private final Map<String, Integer> firstMonth = new java.util.HashMap<>();
     private final FleetCredibility credibility;
     private final HorizonDemand horizonDemand;
-    private Map<String, FleetCredibility.Weight> weights = Map.of();
+    private Map<String, CredibilityWeight> weights = Map.of();
 
     DemandAssembler(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
                     Map<ComponentFamily, FleetRateModel> models, Map<ComponentFamily, FleetRateModel> holdoutModels, int horizon) {
@@ -159,7 +153,7 @@ final class DemandAssembler {
     }
 
     /** The credibility of every series under policy "auto" that the fleet model covers, by series key. */
-    Map<String, FleetCredibility.Weight> weigh() {
+    Map<String, CredibilityWeight> weigh() {
         List<String> weighed = horizonDemand.fleetKeys().stream().filter(k -> policyOf(partOf(k)).equals("auto")).toList();
         java.util.Set<String> kits = new java.util.HashSet<>(snapshot.kitByMechanic().values());
         return credibility.weigh(weighed, history, this::seriesStart, k -> {
@@ -189,58 +183,26 @@ final class DemandAssembler {
         return definition == null ? "auto" : definition.methodPolicy();
     }
 
+    /** One series: its history and what the fleet expects of it, chosen between by the core ({@link DemandChoice}). */
     private PartForecastResult forecastOne(String key, double[] window) {
         int start = seriesStart(key);
         double[] series = Arrays.copyOfRange(window, start, months);
-        int bar = key.indexOf('|');
-        long partId = Long.parseLong(key.substring(0, bar));
-        String location = key.substring(bar + 1);
-        String policy = policyOf(partId);
-        ForecastMethod fixed = policy.equals("auto") || policy.equals("fleet") ? null
-                : ForecastMethod.valueOf(policy.toUpperCase(Locale.ROOT));
-        SeriesForecast fromHistory = SeriesForecaster.forecast(series, fixed, Double.NaN, Double.NaN, horizon);
-        int n = series.length;
-        ErrorScores historyScores = UNSCORED, fleetScores = null;
-        double[] fleetHold = fleetHoldout.get(key);
-        if (n >= HOLDOUT_MONTHS + 2) {
-            double[] training = Arrays.copyOf(series, n - HOLDOUT_MONTHS);
-            double[] actual = Arrays.copyOfRange(series, n - HOLDOUT_MONTHS, n);
-            double historyFlat = SeriesFitter.fitOptimised(training, fromHistory.method(), Double.NaN, Double.NaN).perPeriod();
-            double[] historyHoldout = new double[HOLDOUT_MONTHS];
-            Arrays.fill(historyHoldout, historyFlat);
-            historyScores = ErrorScores.of(training, historyHoldout, actual);
-            fleetScores = fleetHold == null ? null : ErrorScores.of(training, fleetHold, actual);
-        }
+        long partId = partOf(key);
+        String location = key.substring(key.indexOf('|') + 1);
         double[] fleet = horizonDemand.fleet(key);
-        // Under "auto" a series with a fleet expectation takes the fleet rate updated by its own history
-        // (credibility), never a choice on one window; the holdout scores stay as diagnostics.
-        boolean useFleet = fleet != null && (policy.equals("fleet") || policy.equals("auto"));
-        FleetCredibility.Weight weight = policy.equals("auto")
-                ? weights.getOrDefault(key, FleetCredibility.Weight.FLEET_ONLY) : FleetCredibility.Weight.FLEET_ONLY;
-        double[] pm = horizonDemand.preventive(key);
-        double breakdown = useFleet ? fleet[0] * weight.ratio() : fromHistory.forecast()[0];
-        double[] monthly = new double[horizon];
-        for (int m = 0; m < horizon; m++) {
-            monthly[m] = (useFleet ? fleet[m] * weight.ratio() : breakdown) + pm[m];
-        }
-        // Breakdowns' spread (process, the fitted rate's and the credibility ratio's) plus the services' timing.
-        FleetRateModel model = models.get(snapshot.partFamilies().get(partId));
         DemandSpread spread = horizonDemand.spread();
-        double[] fleetVariance = useFleet ? spread.fleetVariance(key, fleet, weight, model == null ? null : model.fit()) : null;
-        double[] serviceVariance = spread.serviceVariance(key);
-        double[] monthlyVariance = new double[horizon];
-        for (int m = 0; m < horizon; m++) {
-            monthlyVariance[m] = (useFleet ? fleetVariance[m] : fromHistory.perPeriodVariance()) + serviceVariance[m];
-        }
-        double yearVariance = (useFleet ? fleetVariance[horizon] : fromHistory.perPeriodVariance() * spread.yearMonths())
-                + serviceVariance[horizon];
-        double variance = useFleet ? fleetVariance[0] : fromHistory.perPeriodVariance();
-        return new PartForecastResult(partId, location, useFleet ? FLEET : fromHistory.method().name(),
-                useFleet ? Double.NaN : fromHistory.alpha(), useFleet ? Double.NaN : fromHistory.beta(),
-                DemandProfile.of(series), breakdown, variance, pm, monthly, series, snapshot.historyStart().plusMonths(start),
-                useFleet && fleetScores != null ? fleetScores : historyScores,
-                fleetScores == null ? Double.NaN : fleetScores.rmsse(), historyScores.rmsse(),
-                useFleet ? weight.describe(snapshot.historyStart().plusMonths(start)) : fromHistory.method().name().toLowerCase(Locale.ROOT)
-                        + " on the part's own history", monthlyVariance, yearVariance);
+        FleetRateModel model = models.get(snapshot.partFamilies().get(partId));
+        DemandChoice.Fleet expected = fleet == null ? null : new DemandChoice.Fleet(fleet, spread.process(key),
+                spread.gradient(key), model == null ? null : model.fit());
+        double[] pm = horizonDemand.preventive(key);
+        DemandChoice.Result r = DemandChoice.choose(new DemandChoice.Input(series,
+                DemandChoice.Rule.parse(policyOf(partId)), expected, fleetHoldout.get(key),
+                weights.getOrDefault(key, CredibilityWeight.FLEET_ONLY), pm, spread.serviceVariance(key)));
+        LocalDate from = snapshot.historyStart().plusMonths(start);
+        String method = r.historyMethod().name();
+        return new PartForecastResult(partId, location, r.fromFleet() ? FLEET : method, r.alpha(), r.beta(),
+                r.profile(), r.breakdownPerMonth(), r.variancePerMonth(), pm, r.monthly(), series, from,
+                r.chosenScores(), r.fleetRmsse(), r.historyRmsse(), r.fromFleet() ? r.weight().describe(from)
+                : method.toLowerCase(Locale.ROOT) + " on the part's own history", r.monthlyVariance(), r.yearVariance());
     }
 }

@@ -1,6 +1,6 @@
 package org.depotcast.forecasting;
 
-import org.depotcast.core.forecast.PoissonFit;
+import org.depotcast.core.forecast.FleetDemandVariance;
 import org.depotcast.core.forecast.ServiceTiming;
 
 import java.util.HashMap;
@@ -8,8 +8,9 @@ import java.util.List;
 import java.util.Map;
 
 /**
- * The spread of each series' forecast, gathered pump by pump beside the means, month by month and for the first 12
- * months together. Three sources, taken as independent of each other:
+ * The parts of each series' spread, gathered pump by pump beside the means, month by month and for the first 12
+ * months together; the breakdowns' variance is worked from them by {@link FleetDemandVariance} once the series'
+ * credibility is known. Three sources, taken as independent of each other:
  * <ul>
  * <li>Breakdowns given the rate: quasi-Poisson, variance = units per event × the fit's variance factor × mean.</li>
  * <li>The fitted rate's own uncertainty: the delta method on the coefficients' covariance, Var ≈ g'Σg with
@@ -24,7 +25,6 @@ import java.util.Map;
  */
 final class DemandSpread {
     private final int horizon;
-    private final int yearMonths;
     private final Map<String, double[]> process = new HashMap<>();
     /** Per series, month m's gradient at [m × p, (m + 1) × p): one flat array, as there are tens of thousands. */
     private final Map<String, double[]> gradient = new HashMap<>();
@@ -33,11 +33,6 @@ final class DemandSpread {
 
     DemandSpread(int horizon) {
         this.horizon = horizon;
-        this.yearMonths = Math.min(12, horizon);
-    }
-
-    int yearMonths() {
-        return yearMonths;
     }
 
     /**
@@ -71,33 +66,14 @@ final class DemandSpread {
         }
     }
 
-    /** Monthly variances (index 0..horizon−1) and the 12-month total's (index horizon) of breakdowns from the fleet. */
-    double[] fleetVariance(String key, double[] mean, FleetCredibility.Weight weight, PoissonFit fit) {
-        double[] out = new double[horizon + 1];
-        double[] proc = process.get(key);
-        double[] g = gradient.get(key);
-        if (proc == null) {
-            return out;
-        }
-        double theta = weight.ratio(), thetaVar = weight.ratioVariance();
-        int p = g.length / horizon;
-        double[] yearGradient = new double[p], month = new double[p];
-        double yearMean = 0, yearProcess = 0;
-        for (int m = 0; m < horizon; m++) {
-            System.arraycopy(g, m * p, month, 0, p);
-            double coefficients = fit == null ? 0 : fit.linearVariance(month);
-            out[m] = theta * proc[m] + thetaVar * mean[m] * mean[m] + (theta * theta + thetaVar) * coefficients;
-            if (m < yearMonths) {
-                yearMean += mean[m];
-                yearProcess += proc[m];
-                for (int j = 0; j < p; j++) {
-                    yearGradient[j] += month[j];
-                }
-            }
-        }
-        double coefficients = fit == null ? 0 : fit.linearVariance(yearGradient);
-        out[horizon] = theta * yearProcess + thetaVar * yearMean * yearMean + (theta * theta + thetaVar) * coefficients;
-        return out;
+    /** Per month, Σ units × φ over the series' pumps; null for a series with no fleet expectation. */
+    double[] process(String key) {
+        return process.get(key);
+    }
+
+    /** Per month m, Σ units × (1, x) over the series' pumps at [m × p, (m + 1) × p) ({@link FleetDemandVariance}). */
+    double[] gradient(String key) {
+        return gradient.get(key);
     }
 
     /** Monthly variances and the 12-month total's (index horizon) of scheduled-service demand. */

@@ -2,14 +2,13 @@ package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.CredibilityRate;
+import org.depotcast.core.forecast.CredibilityWeight;
 import org.depotcast.core.forecast.FleetRateModel;
 
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
-import java.util.Locale;
 import java.util.Map;
 import java.util.function.Function;
 
@@ -21,23 +20,6 @@ import java.util.function.Function;
  */
 final class FleetCredibility {
     private static final double DAYS_PER_YEAR = 365.25;
-
-    /**
-     * @param ratio         posterior mean of true rate / fleet rate
-     * @param credibility   weight Z given to the series' own history
-     * @param ratioVariance posterior variance of the ratio (the rate's own uncertainty)
-     */
-    record Weight(double ratio, double credibility, double ratioVariance, double observed, double expected) {
-        static final Weight FLEET_ONLY = new Weight(1, 0, 0, Double.NaN, Double.NaN);
-
-        String describe(LocalDate from) {
-            if (Double.isNaN(expected)) {
-                return "fleet model";
-            }
-            return String.format(Locale.ROOT, "fleet model x %.3f: credibility %.3f for %.1f units seen against %.1f "
-                    + "expected since %s", ratio, credibility, observed, expected, from);
-        }
-    }
 
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, FleetRateModel> models;
@@ -93,7 +75,7 @@ final class FleetCredibility {
      * months, grouped by {@code level}; {@code dispersion} gives φ of a series (units per event × the fit's variance
      * factor).
      */
-    Map<String, Weight> weigh(List<String> keys, Map<String, double[]> history, Function<String, Integer> start,
+    Map<String, CredibilityWeight> weigh(List<String> keys, Map<String, double[]> history, Function<String, Integer> start,
                               Function<String, String> level, Function<String, Double> dispersion) {
         Map<String, List<String>> groups = new HashMap<>();
         Map<String, double[]> sums = new HashMap<>();
@@ -112,7 +94,7 @@ final class FleetCredibility {
                 groups.computeIfAbsent(level.apply(key), g -> new ArrayList<>()).add(key);
             }
         }
-        Map<String, Weight> weights = new HashMap<>();
+        Map<String, CredibilityWeight> weights = new HashMap<>();
         for (List<String> group : groups.values()) {
             int n = group.size();
             double[] o = new double[n], e = new double[n], phi = new double[n];
@@ -128,7 +110,7 @@ final class FleetCredibility {
                 // Gamma posterior of the ratio: shape 1/τ² + O/φ, rate 1/τ² + E/φ.
                 double shape = inverse + o[i] / phi[i], rate = inverse + e[i] / phi[i];
                 double variance = Double.isInfinite(inverse) ? 0 : shape / (rate * rate);
-                weights.put(group.get(i), new Weight(r.ratio()[i], r.credibility()[i], variance, o[i], e[i]));
+                weights.put(group.get(i), new CredibilityWeight(r.ratio()[i], r.credibility()[i], variance, o[i], e[i]));
             }
         }
         return weights;

@@ -2,6 +2,7 @@ package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.forecast.CredibilityWeight;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 
@@ -41,7 +42,7 @@ public class FleetOutlooks {
     }
 
     /** The credibility ratio of each depot series (programme and kit series left out), by {@link FleetOutlook#seriesKey}. */
-    private static Map<String, Double> depotRatios(FleetSnapshot snapshot, Map<String, FleetCredibility.Weight> weights) {
+    private static Map<String, Double> depotRatios(FleetSnapshot snapshot, Map<String, CredibilityWeight> weights) {
         Map<String, Long> depotIds = new HashMap<>();
         snapshot.locationCodes().forEach((id, code) -> depotIds.put(code, id));
         Set<String> kits = new HashSet<>(snapshot.kitByMechanic().values());
