@@ -10,6 +10,8 @@ import org.depotcast.core.forecast.ErrorScores;
 import org.depotcast.core.forecast.ForecastMethod;
 import org.depotcast.core.forecast.SeriesForecaster;
 
+import org.depotcast.core.forecast.FleetRateModel;
+
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -95,13 +97,14 @@ public class ForecastExplorerService {
                     Math.exp(beta), adjusted == null ? null : Math.exp(beta - 1.96 * adjusted),
                     adjusted == null ? null : Math.exp(beta + 1.96 * adjusted)));
         });
+        FleetRateModel model = queries.rateModelOf(fit.runId(), fit.family());
         List<FleetModelView.RatePoint> byDepth = new ArrayList<>();
         for (double d : DEPTHS_M) {
-            byDepth.add(point(fit, d, d, reference.hoursPerDay(), reference.ageYears()));
+            byDepth.add(point(model, d, d, reference.hoursPerDay(), reference.ageYears()));
         }
         List<FleetModelView.RatePoint> byUse = new ArrayList<>();
         for (double h : HOURS_PER_DAY) {
-            byUse.add(point(fit, h, reference.depthM(), h, reference.ageYears()));
+            byUse.add(point(model, h, reference.depthM(), h, reference.ageYears()));
         }
         String note = "prior".equals(fit.source())
                 ? "Too few breakdowns to fit (fewer than 10): the declared prior rate is used, the same at every depth and use."
@@ -127,20 +130,11 @@ public class ForecastExplorerService {
                 + "(BIC): " + String.join("; ", dropped) + ".";
     }
 
-    private static FleetModelView.RatePoint point(FleetModelResponse fit, double value, double depthM, double hoursPerDay,
+    /** The fleet-wide rate at a reference pump (no depot ratio), per pump-year of its daily use. */
+    private static FleetModelView.RatePoint point(FleetRateModel model, double value, double depthM, double hoursPerDay,
                                                   double ageYears) {
-        double eta = 0;
-        for (Map.Entry<String, Double> c : fit.coefficients().entrySet()) {
-            eta += c.getValue() * switch (c.getKey()) {
-                case "intercept" -> 1;
-                case "log_depth" -> Math.log(depthM / 30.0);
-                case "age_years" -> ageYears;
-                case "usage_hours" -> hoursPerDay;
-                default -> 0;
-            };
-        }
-        double breakdowns = Math.exp(eta) * hoursPerDay * HOURS_PER_YEAR_FACTOR;
-        return new FleetModelView.RatePoint(value, breakdowns, breakdowns * fit.unitsPerEvent());
+        double breakdowns = model.ratePerHour(depthM, ageYears, hoursPerDay) * hoursPerDay * HOURS_PER_YEAR_FACTOR;
+        return new FleetModelView.RatePoint(value, breakdowns, breakdowns * model.unitsPerEvent());
     }
 
     private static String words(String term) {

@@ -151,6 +151,13 @@ public class ForecastQueryService {
         });
     }
 
+    /** One family's typed rate model as the run stored it (the explorer's rate points come from it). */
+    @Transactional
+    FleetRateModel rateModelOf(long runId, String family) {
+        return repository.fitOf(runId, family).map(FleetModelFitRecord::rateModel)
+                .orElseThrow(() -> new EntityMissingException(null, "fleet model", family));
+    }
+
     /** The whole programme for leads, admins and central-store officers; a depot or kit for those it is assigned to. */
     private void requireVisible(String locationCode) {
         if (DemandAssembler.PROGRAMME.equals(locationCode)) {
