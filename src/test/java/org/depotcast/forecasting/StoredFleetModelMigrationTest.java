@@ -2,23 +2,13 @@ package org.depotcast.forecasting;
 
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.RateCovariate;
-import org.flywaydb.core.Flyway;
-import org.flywaydb.core.api.MigrationInfo;
-import org.flywaydb.core.api.MigrationVersion;
-import org.flywaydb.core.api.configuration.FluentConfiguration;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 
-import javax.sql.DataSource;
-import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
-import java.util.UUID;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -33,68 +23,45 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * (ops/test-postgres.sh), in a schema of its own dropped afterwards.
  */
 class StoredFleetModelMigrationTest {
+    private static final MigrationReplay REPLAY = new MigrationReplay("23");
     private final FleetFitJson.Terms terms = new FleetFitJson.Terms();
     private final FleetFitJson.Numbers numbers = new FleetFitJson.Numbers();
 
     @Test
     void oldFitsBecomeJsonOnH2() throws SQLException {
-        migrateAndCheck("jdbc:h2:mem:fleet-fit-migration-" + UUID.randomUUID(), "sa", "", null);
+        REPLAY.onH2(StoredFleetModelMigrationTest::writeOldRows, this::check);
     }
 
     @Test
     void oldFitsBecomeJsonOnPostgreSql() throws SQLException {
-        String url = System.getenv().getOrDefault("DEPOTCAST_TEST_JDBC_URL", "");
-        Assumptions.assumeTrue(url.startsWith("jdbc:postgresql:"), "no PostgreSQL test database configured");
-        String user = System.getenv().getOrDefault("DEPOTCAST_TEST_DB_USER", "postgres");
-        String password = System.getenv().getOrDefault("DEPOTCAST_TEST_DB_PASSWORD", "");
-        String schema = "fleet_fit_migration_" + UUID.randomUUID().toString().substring(0, 8);
-        try {
-            migrateAndCheck(url, user, password, schema);
-        } finally {
-            try (Connection c = DriverManager.getConnection(url, user, password); Statement s = c.createStatement()) {
-                s.execute("drop schema if exists " + schema + " cascade");
-            }
-        }
+        REPLAY.onPostgreSql(StoredFleetModelMigrationTest::writeOldRows, this::check);
     }
 
-    /** One connection throughout, given to Flyway as well (see StoredSeriesMigrationTest). */
-    private void migrateAndCheck(String url, String user, String password, String schema) throws SQLException {
-        try (Connection c = DriverManager.getConnection(url, user, password); Statement s = c.createStatement()) {
-            DataSource one = OneConnection.of(c);
-            flyway(one, schema).target(versionBefore23(one, schema)).load().migrate();
-            if (schema != null) {
-                s.execute("set search_path to " + schema);
-            }
-            writeOldRows(s);
-            flyway(one, schema).load().migrate();
-            if (schema != null) {
-                s.execute("set search_path to " + schema);
-            }
-            try (ResultSet rows = s.executeQuery("select family, covariates, coefficients, standard_errors, covariance, "
-                    + "depot_ratios, source, deviance, df_residual, dispersion, units_per_event, events, exposure_hours "
-                    + "from fleet_model_fit order by family")) {
-                assertTrue(rows.next());
-                assertEquals("[\"log_depth\",\"age_years\"]", rows.getString(2));
-                assertEquals("[-7.25,0.4,0.05]", rows.getString(3));
-                assertEquals("[0.1,0.02,0.01]", rows.getString(4));
-                assertNull(rows.getString(5), "an old run kept no covariance");
-                assertNull(rows.getString(6), "an old run kept no depot ratios");
-                FleetRateModel fitted = read(rows).rateModel();
-                assertEquals(List.of(RateCovariate.LOG_DEPTH, RateCovariate.AGE_YEARS), fitted.covariates());
-                // Rate of a pump at 60 m, aged 4 years: exp(−7.25 + 0.4 ln 2 + 0.05 × 4), by hand 1.14455e-3 per hour.
-                assertEquals(Math.exp(-7.25 + 0.4 * Math.log(2) + 0.2), fitted.ratePerHour(60, 4, 6), 1e-15);
-                assertEquals(1.14455e-3, fitted.ratePerHour(60, 4, 6), 1e-7);
-                assertEquals(1.0, fitted.depotRatio(12), 0.0);
-                assertEquals(0.1, fitted.logRateStandardError(new double[]{0, 0}), 1e-12);
+    private void check(Statement s) throws SQLException {
+        try (ResultSet rows = s.executeQuery("select family, covariates, coefficients, standard_errors, covariance, "
+                + "depot_ratios, source, deviance, df_residual, dispersion, units_per_event, events, exposure_hours "
+                + "from fleet_model_fit order by family")) {
+            assertTrue(rows.next());
+            assertEquals("[\"log_depth\",\"age_years\"]", rows.getString(2));
+            assertEquals("[-7.25,0.4,0.05]", rows.getString(3));
+            assertEquals("[0.1,0.02,0.01]", rows.getString(4));
+            assertNull(rows.getString(5), "an old run kept no covariance");
+            assertNull(rows.getString(6), "an old run kept no depot ratios");
+            FleetRateModel fitted = read(rows).rateModel();
+            assertEquals(List.of(RateCovariate.LOG_DEPTH, RateCovariate.AGE_YEARS), fitted.covariates());
+            // Rate of a pump at 60 m, aged 4 years: exp(−7.25 + 0.4 ln 2 + 0.05 × 4), by hand 1.14455e-3 per hour.
+            assertEquals(Math.exp(-7.25 + 0.4 * Math.log(2) + 0.2), fitted.ratePerHour(60, 4, 6), 1e-15);
+            assertEquals(1.14455e-3, fitted.ratePerHour(60, 4, 6), 1e-7);
+            assertEquals(1.0, fitted.depotRatio(12), 0.0);
+            assertEquals(0.1, fitted.logRateStandardError(new double[]{0, 0}), 1e-12);
 
-                assertTrue(rows.next());
-                assertEquals("[]", rows.getString(2), "a prior has no terms");
-                assertEquals("[]", rows.getString(4), "nor standard errors");
-                FleetRateModel prior = read(rows).rateModel();
-                assertFalse(prior.fitted());
-                assertEquals(0.002, prior.ratePerHour(60, 4, 6), 1e-12);
-                assertFalse(rows.next());
-            }
+            assertTrue(rows.next());
+            assertEquals("[]", rows.getString(2), "a prior has no terms");
+            assertEquals("[]", rows.getString(4), "nor standard errors");
+            FleetRateModel prior = read(rows).rateModel();
+            assertFalse(prior.fitted());
+            assertEquals(0.002, prior.ratePerHour(60, 4, 6), 1e-12);
+            assertFalse(rows.next());
         }
     }
 
@@ -129,17 +96,5 @@ class StoredFleetModelMigrationTest {
                 + "overdispersed, events, exposure_hours, units_per_event) values "
                 + "((select max(id) from forecast_run), 'CUP_SEAL', 'prior', '', '" + Math.log(0.002) + "', '', false, 3, "
                 + "9000.0, 1.0)");
-    }
-
-    /** The last migration before V23, whatever number other work has given it. */
-    private static String versionBefore23(DataSource one, String schema) {
-        MigrationVersion v23 = MigrationVersion.fromVersion("23");
-        return Arrays.stream(flyway(one, schema).load().info().all()).map(MigrationInfo::getVersion)
-                .filter(v -> v != null && v.compareTo(v23) < 0).max(MigrationVersion::compareTo).orElseThrow().getVersion();
-    }
-
-    private static FluentConfiguration flyway(DataSource one, String schema) {
-        var config = Flyway.configure().dataSource(one).locations("classpath:db/migration");
-        return schema == null ? config : config.schemas(schema).createSchemas(true);
     }
 }

@@ -1,20 +1,10 @@
 package org.depotcast.forecasting;
 
-import org.flywaydb.core.Flyway;
-import org.flywaydb.core.api.MigrationInfo;
-import org.flywaydb.core.api.MigrationVersion;
-import org.flywaydb.core.api.configuration.FluentConfiguration;
-import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 
-import javax.sql.DataSource;
-import java.sql.Connection;
-import java.sql.DriverManager;
 import java.sql.ResultSet;
 import java.sql.SQLException;
 import java.sql.Statement;
-import java.util.Arrays;
-import java.util.UUID;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -27,57 +17,31 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * DEPOTCAST_TEST_JDBC_URL names one (ops/test-postgres.sh), in a schema of its own dropped afterwards.
  */
 class StoredSeriesMigrationTest {
+    private static final MigrationReplay REPLAY = new MigrationReplay("22");
     private final MonthlySeriesJson converter = new MonthlySeriesJson();
 
     @Test
     void oldRowsBecomeJsonOnH2() throws SQLException {
-        migrateAndCheck("jdbc:h2:mem:series-migration-" + UUID.randomUUID(), "sa", "", null);
+        REPLAY.onH2(StoredSeriesMigrationTest::writeOldRows, this::check);
     }
 
     @Test
     void oldRowsBecomeJsonOnPostgreSql() throws SQLException {
-        String url = System.getenv().getOrDefault("DEPOTCAST_TEST_JDBC_URL", "");
-        Assumptions.assumeTrue(url.startsWith("jdbc:postgresql:"), "no PostgreSQL test database configured");
-        String user = System.getenv().getOrDefault("DEPOTCAST_TEST_DB_USER", "postgres");
-        String password = System.getenv().getOrDefault("DEPOTCAST_TEST_DB_PASSWORD", "");
-        String schema = "series_migration_" + UUID.randomUUID().toString().substring(0, 8);
-        try {
-            migrateAndCheck(url, user, password, schema);
-        } finally {
-            try (Connection c = DriverManager.getConnection(url, user, password); Statement s = c.createStatement()) {
-                s.execute("drop schema if exists " + schema + " cascade");
-            }
-        }
+        REPLAY.onPostgreSql(StoredSeriesMigrationTest::writeOldRows, this::check);
     }
 
-    /**
-     * One connection throughout, given to Flyway as well: with Flyway's own connections, inserts on H2 2.4 after the
-     * migration were refused ("check constraint invalid", caused by "the database has been closed").
-     */
-    private void migrateAndCheck(String url, String user, String password, String schema) throws SQLException {
-        try (Connection c = DriverManager.getConnection(url, user, password); Statement s = c.createStatement()) {
-            DataSource one = OneConnection.of(c);
-            flyway(one, schema).target(versionBefore22(one, schema)).load().migrate();
-            if (schema != null) {
-                s.execute("set search_path to " + schema);
-            }
-            writeOldRows(s);
-            flyway(one, schema).load().migrate();
-            if (schema != null) {
-                s.execute("set search_path to " + schema);
-            }
-            try (ResultSet rows = s.executeQuery("select location_code, monthly_forecast, preventive_monthly, "
-                    + "monthly_history, monthly_variance from part_forecast order by location_code")) {
-                assertTrue(rows.next());
-                assertEquals("[0.5,1.25,1.0E-4]", rows.getString(2));
-                assertArrayEquals(new double[]{0.5, 1.25, 1.0e-4}, converter.convertToEntityAttribute(rows.getString(2)), 0.0);
-                assertArrayEquals(new double[]{0.0, 0.25, 0.0}, converter.convertToEntityAttribute(rows.getString(3)), 0.0);
-                assertEquals("[]", rows.getString(4), "an empty history stays empty");
-                assertArrayEquals(new double[]{0.6, Double.NaN, 0.7}, converter.convertToEntityAttribute(rows.getString(5)), 0.0);
-                assertTrue(rows.next());
-                assertArrayEquals(new double[]{0.0, 2.0, 0.0, 1.0}, converter.convertToEntityAttribute(rows.getString(4)), 0.0);
-                assertNull(rows.getString(5), "a run made before monthly variances were kept still has none");
-            }
+    private void check(Statement s) throws SQLException {
+        try (ResultSet rows = s.executeQuery("select location_code, monthly_forecast, preventive_monthly, "
+                + "monthly_history, monthly_variance from part_forecast order by location_code")) {
+            assertTrue(rows.next());
+            assertEquals("[0.5,1.25,1.0E-4]", rows.getString(2));
+            assertArrayEquals(new double[]{0.5, 1.25, 1.0e-4}, converter.convertToEntityAttribute(rows.getString(2)), 0.0);
+            assertArrayEquals(new double[]{0.0, 0.25, 0.0}, converter.convertToEntityAttribute(rows.getString(3)), 0.0);
+            assertEquals("[]", rows.getString(4), "an empty history stays empty");
+            assertArrayEquals(new double[]{0.6, Double.NaN, 0.7}, converter.convertToEntityAttribute(rows.getString(5)), 0.0);
+            assertTrue(rows.next());
+            assertArrayEquals(new double[]{0.0, 2.0, 0.0, 1.0}, converter.convertToEntityAttribute(rows.getString(4)), 0.0);
+            assertNull(rows.getString(5), "a run made before monthly variances were kept still has none");
         }
     }
 
@@ -97,17 +61,5 @@ class StoredSeriesMigrationTest {
                 + "breakdown_per_month, variance_per_month, monthly_forecast, preventive_monthly, monthly_history) "
                 + "values (" + ids + ", 'DEPOT-B', 'croston', 'INTERMITTENT', 0.1, 0.2, '0.1;0.1;0.1', '0.0;0.0;0.0', "
                 + "'0.0;2.0;0.0;1.0')");
-    }
-
-    /** The last migration before V22, whatever number other work has given it. */
-    private static String versionBefore22(DataSource one, String schema) {
-        MigrationVersion v22 = MigrationVersion.fromVersion("22");
-        return Arrays.stream(flyway(one, schema).load().info().all()).map(MigrationInfo::getVersion)
-                .filter(v -> v != null && v.compareTo(v22) < 0).max(MigrationVersion::compareTo).orElseThrow().getVersion();
-    }
-
-    private static FluentConfiguration flyway(DataSource one, String schema) {
-        var config = Flyway.configure().dataSource(one).locations("classpath:db/migration");
-        return schema == null ? config : config.schemas(schema).createSchemas(true);
     }
 }
