@@ -129,8 +129,7 @@ final class DemandAssembler {
                 double hours = pump.usage().hoursBetween(from, to);
                 if (hours > 0) {
                     double age = ((from + to) / 2.0 - pump.installedDay()) / 365.25;
-                    double[] x = holdout.covariateValues(pump.depthM(), age, hours / (to - from));
-                    expected[m] = holdout.ratePerHour(x) * hours * holdout.unitsPerEvent() * holdout.depotRatio(pump.depotId());
+                    expected[m] = holdout.expectedUnits(pump.depotId(), pump.depthM(), age, hours, to - from);
                 }
             }
             for (String location : locations) {

@@ -1,7 +1,6 @@
 package org.depotcast.forecasting;
 
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.core.forecast.CredibilityRate;
 import org.depotcast.core.forecast.CredibilityWeight;
 import org.depotcast.core.forecast.FleetRateModel;
 
@@ -14,7 +13,7 @@ import java.util.function.Function;
 
 /**
  * What the fleet model expected of each series over its own history, month by month, and the credibility its
- * observed history earns against that ({@link CredibilityRate}): the fleet rate is the prior, the part's history at
+ * observed history earns against that ({@link CredibilityWeight#ofGroup}): the fleet rate is the prior, the part's history at
  * the location updates it. Series are weighed in groups of one level (the programme, depots, kits), which share the
  * estimate of how far true rates stray from the fleet model's.
  */
@@ -54,10 +53,9 @@ final class FleetCredibility {
                     if (to <= from) {
                         continue;
                     }
-                    double hours = pump.usage().hoursBetween(from, to);
                     double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                    double[] x = model.covariateValues(pump.depthM(), age, hours / (to - from));
-                    units[m] = model.ratePerHour(x) * hours * model.unitsPerEvent() * model.depotRatio(pump.depotId());
+                    units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), age,
+                            pump.usage().hoursBetween(from, to), to - from);
                 }
                 return units;
             });
@@ -104,13 +102,9 @@ final class FleetCredibility {
                 e[i] = s[1];
                 phi[i] = s[2];
             }
-            CredibilityRate.Result r = CredibilityRate.combine(o, e, phi);
-            double inverse = r.priorVariance() == 0 ? Double.POSITIVE_INFINITY : 1 / r.priorVariance();
+            CredibilityWeight[] weighed = CredibilityWeight.ofGroup(o, e, phi);
             for (int i = 0; i < n; i++) {
-                // Gamma posterior of the ratio: shape 1/τ² + O/φ, rate 1/τ² + E/φ.
-                double shape = inverse + o[i] / phi[i], rate = inverse + e[i] / phi[i];
-                double variance = Double.isInfinite(inverse) ? 0 : shape / (rate * rate);
-                weights.put(group.get(i), new CredibilityWeight(r.ratio()[i], r.credibility()[i], variance, o[i], e[i]));
+                weights.put(group.get(i), weighed[i]);
             }
         }
         return weights;

@@ -26,6 +26,26 @@ public record CredibilityWeight(double ratio, double credibility, double ratioVa
         }
     }
 
+    /**
+     * The weights of one group of series sharing the estimate of how far true rates stray from the fleet's
+     * ({@link CredibilityRate#combine}): each series' ratio and credibility, and the ratio's gamma posterior variance
+     * shape / rate² with shape 1/τ² + O/φ and rate 1/τ² + E/φ (0 when τ² = 0: the fleet rate stands).
+     *
+     * @param observed   units seen per series; {@code expected} what the fleet model expected over the same months
+     * @param dispersion φ per series (units per event × the fit's variance factor)
+     */
+    public static CredibilityWeight[] ofGroup(double[] observed, double[] expected, double[] dispersion) {
+        CredibilityRate.Result r = CredibilityRate.combine(observed, expected, dispersion);
+        double inverse = r.priorVariance() == 0 ? Double.POSITIVE_INFINITY : 1 / r.priorVariance();
+        CredibilityWeight[] weights = new CredibilityWeight[observed.length];
+        for (int i = 0; i < weights.length; i++) {
+            double shape = inverse + observed[i] / dispersion[i], rate = inverse + expected[i] / dispersion[i];
+            double variance = Double.isInfinite(inverse) ? 0 : shape / (rate * rate);
+            weights[i] = new CredibilityWeight(r.ratio()[i], r.credibility()[i], variance, observed[i], expected[i]);
+        }
+        return weights;
+    }
+
     /** In words, for the forecast's method detail; {@code from} is the series' first month. */
     public String describe(LocalDate from) {
         if (Double.isNaN(expected)) {

@@ -82,6 +82,18 @@ public record FleetRateModel(List<RateCovariate> covariates, PoissonFit fit, dou
         return units;
     }
 
+    /**
+     * Expected breakdown units of a pump over one past period in which it ran {@code hours} operating hours across
+     * {@code days} days (its mean daily load hours / days), aged {@code ageYears} at the period's middle, its depot's
+     * ratio applied: what the fleet model expected of a history month.
+     */
+    public double expectedUnits(long depotId, double depthM, double ageYears, double hours, double days) {
+        if (!(days > 0) || !(hours >= 0)) {
+            throw new IllegalArgumentException("days must be > 0 and hours ≥ 0; were " + days + ", " + hours);
+        }
+        return ratePerHour(depthM, ageYears, hours / days) * hours * unitsPerEvent * depotRatio(depotId);
+    }
+
     /** The design rows of a pump's coming months, one per month. */
     public double[][] covariateRows(double depthM, PumpMonths months) {
         double[][] rows = new double[months.months()][];

@@ -93,6 +93,16 @@ class FleetRateModelTest {
     }
 
     @Test
+    void expectedUnitsOfAPastPeriodFromItsHoursWithTheDepotRatio() {
+        FleetRateModel model = twoDepths(Map.of(7L, 1.5));
+        // 0.002 per hour at 60 m × 180 hours × 2 units per breakdown × ratio 1.5 = 1.08; another depot: 0.72.
+        assertEquals(1.08, model.expectedUnits(7, 60, 3, 180, 30), 1e-12);
+        assertEquals(0.72, model.expectedUnits(8, 60, 3, 180, 30), 1e-12);
+        assertEquals(0, model.expectedUnits(7, 60, 3, 0, 30), 0.0);
+        assertThrows(IllegalArgumentException.class, () -> model.expectedUnits(7, 60, 3, 180, 0));
+    }
+
+    @Test
     void survivalThinsTheHoursFromInstallation() {
         long[] months = monthStarts(LocalDate.of(2025, 1, 1), 3);
         PumpMonths pump = PumpMonths.of(months, LocalDate.of(2025, 2, 10).toEpochDay(), Long.MAX_VALUE / 4, 4, 0.9);
