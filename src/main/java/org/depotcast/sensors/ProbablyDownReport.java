@@ -27,10 +27,14 @@ public record ProbablyDownReport(String depotCode, String mechanic, LocalDate as
     }
 
     /**
-     * A part the flagged pumps are expected to need, against stock; {@code onHandDepot} is null in a mechanic's report
-     * (the depot's shelves are outside a mechanic's scope), and {@code onHandKits} is then the mechanic's own kit.
+     * A part the flagged pumps are expected to need, against stock. {@code haveReady}: the whole units to set aside,
+     * the smallest k with P(N ≤ k) ≥ {@code coverLevel} for N ~ Poisson({@code expectedUnits}), the cover level being
+     * the programme's service level for the part's class (critical or standard); 0 means the chance of needing none
+     * already reaches that level. {@code enoughInStock}: the depot and kits (or the mechanic's kit) hold
+     * {@code haveReady}. {@code onHandDepot} is null in a mechanic's report (the depot's shelves are outside a
+     * mechanic's scope), and {@code onHandKits} is then the mechanic's own kit.
      */
-    public record PartNeed(String partNumber, double expectedUnits, BigDecimal onHandDepot, BigDecimal onHandKits,
-                           boolean enoughInStock) {
+    public record PartNeed(String partNumber, double expectedUnits, int haveReady, double coverLevel,
+                           BigDecimal onHandDepot, BigDecimal onHandKits, boolean enoughInStock) {
     }
 }

@@ -5,12 +5,14 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.BomLine;
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.core.sensors.PartsToHaveReady;
 import org.depotcast.core.sensors.StoppedPumpParts;
 import org.depotcast.fleet.Pump;
 import org.depotcast.fleet.RepairRecords;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.forecasting.FleetRates;
 import org.depotcast.forecasting.ForecastQueryService;
+import org.depotcast.planning.PlanningService;
 
 import java.math.BigDecimal;
 import java.time.LocalDate;
@@ -34,16 +36,20 @@ public class ProbablyDownService {
             + "(k = 0.5σ, h = 4σ). Probability down: Bayes' rule over the days of near-nothing use, against the pump's "
             + "own share of idle days and a prior of one breakdown a pump-year. Parts: the probability times each "
             + "family's share of the pump's fleet-model breakdown rate (depth, age, load, its depot's ratio where the "
-            + "forecast run kept one) times units per repair.";
+            + "forecast run kept one) times units per repair. To have ready: the smallest whole number of each part that "
+            + "covers the flagged pumps' need (Poisson with the summed expected units) at the programme's service "
+            + "level for the part's class, as its reorder points use.";
 
     private final StopFlagService flags;
     private final SensorAreas areas;
     private final RepairRecords repairRecords;
     private final ForecastQueryService forecasts;
     private final SystemWork system;
+    private final PlanningService planning;
 
     ProbablyDownService(StopFlagService flags, SensorAreas areas, RepairRecords repairRecords,
-                        ForecastQueryService forecasts, SystemWork system) {
+                        ForecastQueryService forecasts, SystemWork system, PlanningService planning) {
+        this.planning = planning;
         this.flags = flags;
         this.areas = areas;
         this.repairRecords = repairRecords;
@@ -66,11 +72,13 @@ public class ProbablyDownService {
         Map<ComponentFamily, FleetRateModel> models = rates.map(FleetRates::models).orElse(Map.of());
         List<ProbablyDownReport.Pump> shown = new ArrayList<>();
         Map<String, Double> needed = new TreeMap<>();
+        Map<String, Boolean> critical = new HashMap<>();
         for (StopFlag flag : all) {
             if (flag.state != StopFlag.State.OPEN) {
                 continue;
             }
             Pump pump = byId.get(flag.pumpId);
+            pump.model.bom.forEach(line -> critical.put(line.part.partNumber, line.part.critical));
             StoppedPumpParts.Expectation expectation = expect(pump, flag, models);
             expectation.unitsByPart().forEach((part, units) -> needed.merge(part, units, Double::sum));
             shown.add(new ProbablyDownReport.Pump(pump.assetId, pump.assignedMechanic, StopFlag.State.OPEN.words,
@@ -86,7 +94,7 @@ public class ProbablyDownService {
         long falseAlarms = all.stream().filter(f -> f.state == StopFlag.State.FALSE_ALARM).count();
         Long runId = rates.map(FleetRates::runId).orElse(null);
         return new ProbablyDownReport(area.depotCode(), area.mechanic(), today, METHOD, runId, shown,
-                against(area, needed), area.stockWords(), repaired, falseAlarms);
+                against(area, needed, coverLevels(critical)), area.stockWords(), repaired, falseAlarms);
     }
 
     private static StoppedPumpParts.Expectation expect(Pump pump, StopFlag flag,
@@ -116,14 +124,25 @@ public class ProbablyDownService {
         return rates;
     }
 
-    private static List<ProbablyDownReport.PartNeed> against(SensorArea area, Map<String, Double> needed) {
+    /** Each part's cover level: the service level in force for its class, as planning's reorder points use. */
+    private Map<String, Double> coverLevels(Map<String, Boolean> critical) {
+        PlanningService.ServiceLevelsInForce levels = planning.serviceLevelsInForce();
+        Map<String, Double> cover = new HashMap<>();
+        critical.forEach((part, isCritical) -> cover.put(part, isCritical ? levels.critical() : levels.standard()));
+        return cover;
+    }
+
+    private static List<ProbablyDownReport.PartNeed> against(SensorArea area, Map<String, Double> needed,
+                                                             Map<String, Double> coverLevels) {
         List<ProbablyDownReport.PartNeed> parts = new ArrayList<>();
         needed.forEach((part, units) -> {
+            double cover = coverLevels.get(part);
+            int haveReady = PartsToHaveReady.units(units, cover);
             BigDecimal depotUnits = area.atDepot() == null ? null : area.atDepot().getOrDefault(part, BigDecimal.ZERO);
             BigDecimal kitUnits = area.inKits().getOrDefault(part, BigDecimal.ZERO);
             BigDecimal held = depotUnits == null ? kitUnits : depotUnits.add(kitUnits);
-            parts.add(new ProbablyDownReport.PartNeed(part, units, depotUnits, kitUnits,
-                    held.doubleValue() >= Math.ceil(units - 1e-9)));
+            parts.add(new ProbablyDownReport.PartNeed(part, units, haveReady, cover, depotUnits, kitUnits,
+                    held.compareTo(BigDecimal.valueOf(haveReady)) >= 0));
         });
         return parts;
     }

@@ -15,7 +15,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * The officer's "Pump sensors" page on a desk and a phone: a pump of the demo probably down with its state in words,
- * the parts to have ready against stock, and the service kits due week by week for 90 days.
+ * the parts to have ready against stock (those not worth setting aside named apart), and the service kits due week
+ * by week for 90 days.
  */
 @QuarkusTest
 class OfficerSensorsBrowserTest extends BrowserSession {
@@ -33,8 +34,11 @@ class OfficerSensorsBrowserTest extends BrowserSession {
                 .statusCode(200).extract().jsonPath();
         List<String> demoPumps = report.getList("pumps.findAll { it.assetId.startsWith('OB-') }.assetId");
         assertFalse(demoPumps.isEmpty(), "the demo has a pump probably down at " + DEPOT);
-        List<String> partNumbers = report.getList("parts.partNumber");
-        assertFalse(partNumbers.isEmpty(), "the flagged pumps are expected to need parts");
+        assertFalse(report.getList("parts").isEmpty(), "the flagged pumps are expected to need parts");
+        // The table lists the parts worth setting aside; the rest are named on a line of their own.
+        List<String> partNumbers = report.getList("parts.findAll { it.haveReady > 0 }.partNumber");
+        List<String> notSetAside = report.getList("parts.findAll { it.haveReady == 0 }.partNumber");
+        assertFalse(partNumbers.isEmpty(), "a pump probably down has some part worth having ready");
         String asset = demoPumps.get(0);
         long percent = Math.round(100 * report.getDouble("pumps.find { it.assetId == '" + asset + "' }.probabilityDown"));
 
@@ -58,6 +62,11 @@ class OfficerSensorsBrowserTest extends BrowserSession {
             for (String part : partNumbers) {
                 assertTrue(partRows.stream().anyMatch(t -> t.contains(part)
                         && (t.contains("Enough in stock") || t.contains("Short by"))), part + " with its stock in words");
+            }
+            String aside = notSetAside.isEmpty() ? "" : driver.findElement(By.id("down-parts-aside")).getText();
+            for (String part : notSetAside) {
+                assertTrue(aside.contains(part), part + " named as not worth setting aside: " + aside);
+                assertTrue(partRows.stream().noneMatch(t -> t.contains(part)), part + " is not in the table");
             }
             assertTrue(driver.findElement(By.cssSelector(".sensor-caution")).getText().startsWith("Probably down, not known to be"));
             List<String> weeks = texts("#service-weeks tbody tr");

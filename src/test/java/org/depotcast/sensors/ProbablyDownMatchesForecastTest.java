@@ -4,6 +4,7 @@ import io.quarkus.test.junit.QuarkusTest;
 import io.restassured.path.json.JsonPath;
 import io.restassured.path.json.config.JsonPathConfig;
 import jakarta.inject.Inject;
+import org.apache.commons.math3.distribution.PoissonDistribution;
 import org.depotcast.access.SystemWork;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.FleetRateModel;
@@ -23,10 +24,12 @@ import java.util.Map;
 import static org.depotcast.TestData.as;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * A demo pump probably down: the breakdowns per family its report expects are the probability shared out by the
- * forecast run's family rates for that pump, worked here from the stored coefficients as the API gives them.
+ * forecast run's family rates for that pump, worked here from the stored coefficients as the API gives them; the
+ * units to have ready are the Poisson quantile of each part's expected units at its class's service level in force.
  */
 @QuarkusTest
 class ProbablyDownMatchesForecastTest {
@@ -99,5 +102,33 @@ class ProbablyDownMatchesForecastTest {
             sum += repairs;
         }
         assertEquals(probability, sum, 1e-9, "one breakdown, shared out among the families");
+    }
+
+    @Test
+    void unitsToHaveReadyCoverEachPartsNeedAtItsClassServiceLevel() {
+        JsonPath levels = as("lead").get("/api/planning/service-levels").then().statusCode(200).extract().jsonPath()
+                .using(DOUBLES);
+        JsonPath report = as("lead").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down").then()
+                .statusCode(200).extract().jsonPath().using(DOUBLES);
+        List<Map<String, Object>> parts = report.getList("parts");
+        assertFalse(parts.isEmpty(), "the demo's pump probably down at DEP-TESHVALE is expected to need parts");
+        for (Map<String, Object> part : parts) {
+            String number = (String) part.get("partNumber");
+            boolean critical = as("lead").get("/api/parts/" + number).then().statusCode(200).extract().jsonPath()
+                    .getBoolean("critical");
+            double cover = ((Number) part.get("coverLevel")).doubleValue();
+            assertEquals(levels.getDouble(critical ? "critical" : "standard"), cover, 1e-12, number);
+            double expected = ((Number) part.get("expectedUnits")).doubleValue();
+            int k = ((Number) part.get("haveReady")).intValue();
+            if (expected == 0) {
+                assertEquals(0, k, number + ": nothing expected, nothing to have ready");
+                continue;
+            }
+            PoissonDistribution need = new PoissonDistribution(expected);
+            assertTrue(need.cumulativeProbability(k) >= cover, number + ": " + k + " cover " + expected);
+            assertTrue(k == 0 || need.cumulativeProbability(k - 1) < cover, number + ": " + k + " is the fewest");
+            double held = ((Number) part.get("onHandDepot")).doubleValue() + ((Number) part.get("onHandKits")).doubleValue();
+            assertEquals(held >= k, part.get("enoughInStock"), number + ": enough in stock is against the units to have ready");
+        }
     }
 }

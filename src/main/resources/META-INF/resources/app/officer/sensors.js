@@ -1,7 +1,8 @@
 /*
  * Pump sensors at a store: the pumps that have probably stopped (most likely first) with the parts to have ready
- * summed against the depot's and its kits' stock, and the service kits falling due week by week for 90 days from
- * operating hours (measured where a pump has a sensor), against the same stock. Shortfalls are said in words.
+ * (the server's number: enough to cover the pumps' need at the part's service level) against the depot's and its
+ * kits' stock, the parts not worth setting aside named apart, and the service kits falling due week by week for 90
+ * days from operating hours (measured where a pump has a sensor), against the same stock. Shortfalls are in words.
  */
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
@@ -12,8 +13,6 @@ import {startOfficer, describe, ready} from './officer.js';
 const {store, parts, run} = await startOfficer({page: 'sensors', title: 'Pump sensors'});
 const main = document.getElementById('content');
 const unit = p => (parts.get(p) || {}).unitOfIssue;
-// Whole units for parts issued by the piece: a part expected 0.4 times still means one to have ready.
-const toHaveReady = (expected, p) => fmt.wholeUnits(unit(p)) ? Math.ceil(expected - 1e-9) : Math.round(expected * 100) / 100;
 
 function sensorProvenance(down, plan) {
     const fleet = down.forecastRunId
@@ -40,7 +39,7 @@ function downTable(down) {
 
 function shortWords(need) {
     const held = Number(need.onHandDepot || 0) + Number(need.onHandKits || 0);
-    const wanted = toHaveReady(need.expectedUnits, need.partNumber);
+    const wanted = need.haveReady;
     return need.enoughInStock ? state('Enough in stock', 'ok')
         : state(`Short by ${fmt.qty(wanted - held, unit(need.partNumber))}`, 'warn');
 }
@@ -50,18 +49,38 @@ function expectedWords(units) {
     return units < 0.05 ? 'less than 0.05 expected' : `${fmt.num(units, 1)} expected`;
 }
 
+function coverWords(need) {
+    return `${expectedWords(need.expectedUnits)}; covers the need ${fmt.percent(need.coverLevel, 0)} of the time`;
+}
+
 function partsTable(down) {
     // The parts most likely needed first.
-    const rows = [...down.parts].sort((a, b) => b.expectedUnits - a.expectedUnits || a.partNumber.localeCompare(b.partNumber));
+    const rows = [...down.parts].filter(n => n.haveReady > 0)
+        .sort((a, b) => b.expectedUnits - a.expectedUnits || a.partNumber.localeCompare(b.partNumber));
+    const empty = !down.pumps.length ? 'No parts to have ready.'
+        : !down.parts.length ? 'No parts expected: no forecast run has fitted the fleet models yet.'
+            : 'None worth setting aside: each part these pumps might need is unlikely enough to be needed.';
     return table({caption: `Parts to have ready at ${store.code} for these pumps, against stock ${down.stockCounted}`,
-        id: 'down-parts', rows, empty: down.pumps.length ? 'No parts expected: no forecast run has fitted '
-            + 'the fleet models yet.' : 'No parts to have ready.', columns: [
+        id: 'down-parts', rows, empty, columns: [
             {label: 'Part', value: n => describe(parts, n.partNumber)},
-            {label: 'Have ready', value: n => h('span', {}, fmt.qty(toHaveReady(n.expectedUnits, n.partNumber), unit(n.partNumber)),
-                h('span', {class: 'hint'}, expectedWords(n.expectedUnits))), num: true},
+            {label: 'Have ready', value: n => h('span', {}, fmt.qty(n.haveReady, unit(n.partNumber)),
+                h('span', {class: 'hint'}, coverWords(n))), num: true},
             {label: 'On hand at the depot', value: n => fmt.qty(n.onHandDepot, unit(n.partNumber)), num: true},
             {label: 'In the kits', value: n => fmt.qty(n.onHandKits, unit(n.partNumber)), num: true},
             {label: 'State', value: n => shortWords(n)}]});
+}
+
+/** The parts with nothing to set aside: the chance of needing none already reaches their service level. */
+function notWorthSettingAside(down) {
+    const rows = down.parts.filter(n => n.haveReady === 0)
+        .sort((a, b) => b.expectedUnits - a.expectedUnits || a.partNumber.localeCompare(b.partNumber));
+    if (!rows.length) {
+        return null;
+    }
+    return h('p', {class: 'small', id: 'down-parts-aside'}, 'Also possible, not worth setting aside (the chance of '
+        + 'needing none already meets the service level): ',
+        rows.map((n, i) => h('span', {}, i ? ', ' : '', h('strong', {}, n.partNumber),
+            ` ${(parts.get(n.partNumber) || {}).description || ''} (${expectedWords(n.expectedUnits)})`)), '.');
 }
 
 function downSection(down) {
@@ -69,7 +88,7 @@ function downSection(down) {
         h('div', {class: 'card'}, figures([['Probably down now', fmt.num(down.pumps.length)],
             ['Earlier flags closed by a repair', fmt.num(down.closedByRepair)],
             ['Earlier flags that were false alarms', fmt.num(down.falseAlarms)]])),
-        stopCaution(), downTable(down), partsTable(down),
+        stopCaution(), downTable(down), partsTable(down), notWorthSettingAside(down),
         h('details', {class: 'small'}, h('summary', {}, 'How a pump is judged probably down'), h('p', {}, down.method)));
 }
 
