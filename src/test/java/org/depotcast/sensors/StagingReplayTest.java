@@ -1,6 +1,7 @@
 package org.depotcast.sensors;
 
 import org.apache.commons.csv.CSVRecord;
+import org.depotcast.core.sensors.PartsToHaveReady;
 import org.depotcast.core.sensors.StoppedPumpParts;
 import org.junit.jupiter.api.Test;
 
@@ -34,8 +35,11 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  *   <li>Without staging, parts are ordered only when repairs are reported.</li>
  *   <li>With staging, each morning the officer sets, per depot and part, the expected units of the pumps flagged
  *   by the previous evening and still open ({@link DemoSensorYear}: the service's flag rules and probability), summed
- *   and rounded up to whole pieces as the officer's page shows them ({@link StoppedPumpParts}), and the depot orders
- *   up to that many when it holds less (on hand and on the way, less what waiting repairs are owed).</li>
+ *   ({@link StoppedPumpParts}) and turned into whole units to have ready by one of two rules, and the depot orders up
+ *   to that many when it holds less (on hand and on the way, less what waiting repairs are owed). The rules
+ *   ({@link Rule}): the sum rounded up to whole pieces, as the officer's page showed it before, and the service's
+ *   rule ({@link PartsToHaveReady}: the Poisson quantile of the sum at the part's class's service level, the
+ *   configured defaults, as the demo sets none).</li>
  * </ul>
  * Simplifications: the stock counts are those of 2026-12-01 (the demo has none for the year's start) used as each
  * depot's base stock all year; the central store always has the part (its purchasing is outside the replay), so no
@@ -54,6 +58,21 @@ class StagingReplayTest {
     private record Repair(String asset, boolean breakdown, DepotStockReplay.Demand demand) {
     }
 
+    /** How the summed expected units of a part at a depot become whole units to have ready. */
+    enum Rule {
+        ROUNDED_UP("expected units rounded up"), COVER_LEVEL("Poisson cover at the part's service level");
+
+        final String words;
+
+        Rule(String words) {
+            this.words = words;
+        }
+
+        double units(double expected, double coverLevel) {
+            return this == ROUNDED_UP ? Math.ceil(expected - 1e-9) : PartsToHaveReady.units(expected, coverLevel);
+        }
+    }
+
     @Test
     void stagingPartsForProbablyDownPumpsNeverDelaysARepairAndShortensTheWaitsOfFlaggedOnes() throws IOException {
         int leadDays = depotTransferLeadDays();
@@ -61,50 +80,87 @@ class StagingReplayTest {
         List<Repair> repairs = repairsInYear(pumps);
         List<DepotStockReplay.Demand> demands = repairs.stream().map(Repair::demand).toList();
         Map<String, Map<String, Double>> base = baseStock();
+        Map<String, Double> cover = coverLevels();
         DepotStockReplay.Result without = DepotStockReplay.run(demands, base, leadDays, DAYS, (d, p, t) -> 0);
         for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
             List<DemoSensorYear.PumpYear> year = DemoSensorYear.replay(seed,
                     DemoSensorSeries.ReportDelay.CARETAKER_TO_MECHANIC);
             Map<String, Map<String, double[]>> ready = readyUnits(year, pumps);
-            DepotStockReplay.Result with = DepotStockReplay.run(demands, base, leadDays, DAYS, (depot, part, t) ->
-                    Math.ceil(ready.getOrDefault(depot, Map.of()).getOrDefault(part, new double[DAYS])[t] - 1e-9));
             Set<String> flaggedFirst = flaggedBeforeReport(year);
             Set<String> sensorPumps = new HashSet<>();
             year.forEach(p -> sensorPumps.add(p.assetId()));
-            // {breakdowns, days without, days with} for: all, sensor pumps, flagged before the report
-            long[][] sums = new long[3][3];
-            int shortened = 0;
-            for (int i = 0; i < repairs.size(); i++) {
-                Repair r = repairs.get(i);
-                if (!r.breakdown()) {
-                    continue;
-                }
-                int before = without.atHandDay()[i] - r.demand().day();
-                int after = with.atHandDay()[i] - r.demand().day();
-                assertTrue(before >= 0 && before <= leadDays && after >= 0, r + ": waits " + before + ", " + after);
-                assertTrue(after <= before, "staging never delays a repair: " + r + " " + before + " → " + after);
-                shortened += after < before ? 1 : 0;
-                boolean[] in = {true, sensorPumps.contains(r.asset()),
-                        flaggedFirst.contains(r.asset() + "|" + r.demand().day())};
-                for (int g = 0; g < 3; g++) {
-                    if (in[g]) {
-                        sums[g][0]++;
-                        sums[g][1] += before;
-                        sums[g][2] += after;
-                    }
+            for (Rule rule : Rule.values()) {
+                DepotStockReplay.Result with = DepotStockReplay.run(demands, base, leadDays, DAYS, (depot, part, t) ->
+                        rule.units(ready.getOrDefault(depot, Map.of()).getOrDefault(part, new double[DAYS])[t],
+                                cover.get(part)));
+                long[][] sums = new long[3][3];
+                int shortened = waits(repairs, without, with, leadDays, sensorPumps, flaggedFirst, sums);
+                double[] list = listRead(ready, rule, cover);
+                System.out.printf("EVIDENCE staging, seed %d, %s: %d breakdowns reported, pump-days waiting for "
+                                + "parts %d without staging, %d with (%+.1f %%); %d breakdowns at sensor pumps %d → %d; "
+                                + "%d flagged before the report %d → %d; %d breakdowns waited less; %.0f more units "
+                                + "sent to depots (%.0f without staging); on %.0f depot-days with a flag the officer "
+                                + "reads %.2f parts and %.2f units to have ready a day%n",
+                        seed, rule.words, sums[0][0], sums[0][1], sums[0][2], change(sums[0]), sums[1][0], sums[1][1],
+                        sums[1][2], sums[2][0], sums[2][1], sums[2][2], shortened,
+                        with.unitsSent() - without.unitsSent(), without.unitsSent(), list[0], list[1] / list[0],
+                        list[2] / list[0]);
+                assertTrue(sums[2][0] >= 30, "flagged breakdowns to judge: " + sums[2][0]);
+                assertTrue(sums[0][1] > 0, "some breakdowns wait without staging");
+                assertEquals(sums[0][1] - sums[0][2] > 0, shortened > 0, "the totals follow the repairs' waits");
+            }
+        }
+    }
+
+    /**
+     * Checks each breakdown's waits without and with staging and adds them up in {@code sums}: {breakdowns, days
+     * without, days with} for all, those at sensor pumps and those flagged before the report; returns how many
+     * breakdowns waited less.
+     */
+    private static int waits(List<Repair> repairs, DepotStockReplay.Result without, DepotStockReplay.Result with,
+                             int leadDays, Set<String> sensorPumps, Set<String> flaggedFirst, long[][] sums) {
+        int shortened = 0;
+        for (int i = 0; i < repairs.size(); i++) {
+            Repair r = repairs.get(i);
+            if (!r.breakdown()) {
+                continue;
+            }
+            int before = without.atHandDay()[i] - r.demand().day();
+            int after = with.atHandDay()[i] - r.demand().day();
+            assertTrue(before >= 0 && before <= leadDays && after >= 0, r + ": waits " + before + ", " + after);
+            assertTrue(after <= before, "staging never delays a repair: " + r + " " + before + " → " + after);
+            shortened += after < before ? 1 : 0;
+            boolean[] in = {true, sensorPumps.contains(r.asset()), flaggedFirst.contains(r.asset() + "|" + r.demand().day())};
+            for (int g = 0; g < 3; g++) {
+                if (in[g]) {
+                    sums[g][0]++;
+                    sums[g][1] += before;
+                    sums[g][2] += after;
                 }
             }
-            System.out.printf("EVIDENCE staging, seed %d: %d breakdowns reported, pump-days waiting for parts %d "
-                            + "without staging, %d with (%+.1f %%); %d breakdowns at sensor pumps %d → %d; %d flagged "
-                            + "before the report %d → %d; %d breakdowns waited less; %.0f more units sent to depots "
-                            + "(%.0f without staging)%n",
-                    seed, sums[0][0], sums[0][1], sums[0][2], change(sums[0]), sums[1][0], sums[1][1], sums[1][2],
-                    sums[2][0], sums[2][1], sums[2][2], shortened, with.unitsSent() - without.unitsSent(),
-                    without.unitsSent());
-            assertTrue(sums[2][0] >= 30, "flagged breakdowns to judge: " + sums[2][0]);
-            assertTrue(sums[0][1] > 0, "some breakdowns wait without staging");
-            assertEquals(sums[0][1] - sums[0][2] > 0, shortened > 0, "the totals follow the repairs' waits");
         }
+        return shortened;
+    }
+
+    /**
+     * What the officer is asked to set aside: {depot-days with some part expected, part lines with at least one unit
+     * to have ready, units to have ready}, summed over the year.
+     */
+    private static double[] listRead(Map<String, Map<String, double[]>> ready, Rule rule, Map<String, Double> cover) {
+        double[] totals = new double[3];
+        for (Map<String, double[]> depot : ready.values()) {
+            for (int t = 0; t < DAYS; t++) {
+                boolean flagged = false;
+                for (Map.Entry<String, double[]> part : depot.entrySet()) {
+                    double units = rule.units(part.getValue()[t], cover.get(part.getKey()));
+                    flagged |= part.getValue()[t] > 0;
+                    totals[1] += units > 0 ? 1 : 0;
+                    totals[2] += units;
+                }
+                totals[0] += flagged ? 1 : 0;
+            }
+        }
+        return totals;
     }
 
     private static double change(long[] sums) {
@@ -197,9 +253,24 @@ class StagingReplayTest {
 
     /** The service's setting, read from its configuration so the replay follows it. */
     private static int depotTransferLeadDays() throws IOException {
-        String key = "depotcast.planning.depot-transfer-lead-days=";
+        return (int) planningSetting("depot-transfer-lead-days");
+    }
+
+    /** Per part, the configured service level of its class (critical or standard) in the demo's catalogue. */
+    private static Map<String, Double> coverLevels() throws IOException {
+        double critical = planningSetting("service-level-critical");
+        double standard = planningSetting("service-level-standard");
+        Map<String, Double> cover = new HashMap<>();
+        for (CSVRecord r : DemoSensorYear.csv("parts.csv")) {
+            cover.put(r.get("part_number"), Boolean.parseBoolean(r.get("critical")) ? critical : standard);
+        }
+        return cover;
+    }
+
+    private static double planningSetting(String name) throws IOException {
+        String key = "depotcast.planning." + name + "=";
         return Files.readAllLines(Path.of("src/main/resources/application.properties")).stream()
-                .filter(l -> l.startsWith(key)).map(l -> Integer.parseInt(l.substring(key.length()).trim()))
+                .filter(l -> l.startsWith(key)).map(l -> Double.parseDouble(l.substring(key.length()).trim()))
                 .findFirst().orElseThrow();
     }
 }
