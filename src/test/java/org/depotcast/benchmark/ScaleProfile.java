@@ -12,6 +12,8 @@ public class ScaleProfile implements QuarkusTestProfile {
                 "quarkus.datasource.jdbc.url", "jdbc:h2:file:./target/scale-benchmark/db-" + System.nanoTime()
                         + ";DB_CLOSE_ON_EXIT=FALSE",
                 "depotcast.mode", "production",
+                // Production mode refuses to start without a session key; this one signs only the benchmark's cookies.
+                "depotcast.session.key", "scale-benchmark-only-session-key-0123456789",
                 "quarkus.log.category.\"org.depotcast\".level", "INFO");
     }
 }
