@@ -1,5 +1,7 @@
 package org.depotcast.forecasting;
 
+import org.depotcast.PlantedRate;
+
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.depotcast.catalogue.ComponentFamily;
@@ -149,11 +151,10 @@ class HeldOutYearTest {
             double hours = pump.usage().hoursPerDayOn(origin) * 365.25;
             double age = (origin + 365.25 / 2 - pump.installedDay()) / 365.25;
             for (FleetSnapshot.BomPart part : pump.bom()) {
-                double[] rate = p.planted.get(part.family());
+                PlantedRate rate = p.planted.get(part.family());
                 if (rate != null) {
-                    double perHour = rate[0] / 1000 * Math.pow(pump.depthM() / 30.0, rate[1]) * Math.exp(rate[2] * age);
                     planted.merge(part.partId() + "|" + p.rows.locationCodes().get(pump.depotId()),
-                            perHour * hours * rate[3], Double::sum);
+                            rate.perHour(pump.depthM(), age) * hours * rate.unitsPerEvent(), Double::sum);
                 }
             }
         }
@@ -197,7 +198,7 @@ class HeldOutYearTest {
     }
 
     /** The generated CSV files as the loader's plain rows, and the planted rates per family. */
-    record Programme(FleetSnapshotLoader.Rows rows, Map<ComponentFamily, double[]> planted) {
+    record Programme(FleetSnapshotLoader.Rows rows, Map<ComponentFamily, PlantedRate> planted) {
         static Programme read(Path dir) throws IOException {
             Map<String, Long> locationIds = new HashMap<>();
             Map<Long, String> codes = new HashMap<>();
@@ -258,12 +259,9 @@ class HeldOutYearTest {
                         r.get("mechanic"), r.get("kind").equals("BREAKDOWN"),
                         LocalDate.parse(fixed.isEmpty() ? r.get("reported_on") : fixed), Double.parseDouble(r.get("quantity"))));
             }
-            Map<ComponentFamily, double[]> planted = new EnumMap<>(ComponentFamily.class);
-            for (CSVRecord r : csv(dir.resolve("planted-rates.csv"))) {
-                planted.put(ComponentFamily.valueOf(r.get("family")), new double[]{
-                        Double.parseDouble(r.get("events_per_1000h_at_30m_new")), Double.parseDouble(r.get("depth_exponent")),
-                        Double.parseDouble(r.get("age_coefficient_per_year")), Double.parseDouble(r.get("units_per_event"))});
-            }
+            Map<ComponentFamily, PlantedRate> planted = new EnumMap<>(ComponentFamily.class);
+            PlantedRate.read(dir.resolve("planted-rates.csv")).forEach((family, rate) ->
+                    planted.put(ComponentFamily.valueOf(family), rate));
             return new Programme(new FleetSnapshotLoader.Rows(readings, consumption, register, kits, codes, numbers, families),
                     planted);
         }

@@ -1,6 +1,7 @@
 package org.depotcast.sensors;
 
 import org.apache.commons.csv.CSVRecord;
+import org.depotcast.PlantedRate;
 import org.depotcast.core.sensors.StoppedPumpParts;
 
 import java.io.IOException;
@@ -18,18 +19,10 @@ final class PartsExpectation {
     private record Line(String part, String family, boolean perMetre, double quantity) {
     }
 
-    private record Rate(String family, double r30, double depthExponent, double agePerYear, double units) {
-    }
-
-    private final List<Rate> rates = new ArrayList<>();
+    private final Map<String, PlantedRate> rates = PlantedRate.read(java.nio.file.Path.of("seed-data", "planted-rates.csv"));
     private final Map<String, List<Line>> bomByModel = new HashMap<>();
 
     PartsExpectation() throws IOException {
-        for (CSVRecord r : DemoSensorYear.csv("planted-rates.csv")) {
-            rates.add(new Rate(r.get("family"), Double.parseDouble(r.get("events_per_1000h_at_30m_new")),
-                    Double.parseDouble(r.get("depth_exponent")), Double.parseDouble(r.get("age_coefficient_per_year")),
-                    Double.parseDouble(r.get("units_per_event"))));
-        }
         Map<String, String> familyOf = new HashMap<>();
         for (CSVRecord r : DemoSensorYear.csv("parts.csv")) {
             familyOf.put(r.get("part_number"), r.get("family"));
@@ -43,9 +36,8 @@ final class PartsExpectation {
 
     Map<String, Double> unitsByPart(String model, double depthM, double ageYears) {
         List<StoppedPumpParts.FamilyRate> familyRates = new ArrayList<>();
-        for (Rate r : rates) {
-            double perHour = r.r30() / 1000 * Math.pow(depthM / 30, r.depthExponent()) * Math.exp(r.agePerYear() * ageYears);
-            familyRates.add(new StoppedPumpParts.FamilyRate(r.family(), perHour, r.units()));
+        for (PlantedRate r : rates.values()) {
+            familyRates.add(new StoppedPumpParts.FamilyRate(r.family(), r.perHour(depthM, ageYears), r.unitsPerEvent()));
         }
         List<StoppedPumpParts.BomPart> bom = new ArrayList<>();
         for (Line line : bomByModel.get(model)) {
