@@ -60,7 +60,7 @@ public class ForecastExplorerService {
         double[] history = f.history().stream().mapToDouble(StoredForecastResponse.HistoryMonth::quantity).toArray();
         List<ForecastExplorerResponse.MethodScore> methods = new ArrayList<>();
         if (history.length > 0) {
-            Map<ForecastMethod, ErrorScores> scores = SeriesForecaster.forecast(history, null, Double.NaN, Double.NaN, 1).backtest();
+            Map<ForecastMethod, ErrorScores> scores = SeriesForecaster.forecastScored(history, null, Double.NaN, Double.NaN, 1).backtest();
             scores.forEach((method, s) -> methods.add(new ForecastExplorerResponse.MethodScore(method.name(),
                     ForecastRecords.finite(s.mase()), ForecastRecords.finite(s.rmsse()), ForecastRecords.finite(s.scaledBias()),
                     method.name().equals(f.method()))));

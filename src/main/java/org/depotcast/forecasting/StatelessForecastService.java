@@ -59,7 +59,7 @@ public class StatelessForecastService {
     public SeriesResponse series(SeriesRequest request) {
         Settings settings = Settings.of(request.method(), request.alpha(), request.beta(), request.horizon());
         double[] history = request.history().stream().mapToDouble(Double::doubleValue).toArray();
-        SeriesForecast f = SeriesForecaster.forecast(history, settings.method(), settings.alpha(), settings.beta(),
+        SeriesForecast f = SeriesForecaster.forecastScored(history, settings.method(), settings.alpha(), settings.beta(),
                 settings.horizon());
         Map<String, SeriesResponse.Scores> scores = new LinkedHashMap<>();
         f.backtest().forEach((m, s) -> scores.put(m.name().toLowerCase(Locale.ROOT), scores(s)));

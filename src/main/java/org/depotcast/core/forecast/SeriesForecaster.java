@@ -31,12 +31,31 @@ public final class SeriesForecaster {
     }
 
     /**
+     * The forecast alone, without the candidates' backtest scores ({@link SeriesForecast#backtest()} empty). Auto
+     * forecasts with the combination whatever the scores say, so a forecast run that does not report them does not
+     * pay for them: scoring seven candidates over 12 rolling origins costs several times the forecast itself (the
+     * combination re-tunes its parts at every origin).
+     *
      * @param method  the method, or null for auto
      * @param alpha   smoothing constant, NaN to optimise
      * @param beta    TSB's probability constant, NaN to optimise
      * @param horizon periods to forecast, 1..60
      */
     public static SeriesForecast forecast(double[] history, ForecastMethod method, double alpha, double beta, int horizon) {
+        return forecast(history, method, alpha, beta, horizon, false);
+    }
+
+    /**
+     * The forecast with, under auto, every candidate's rolling-origin backtest scores (for the pages and endpoints
+     * that show them beside the method used).
+     */
+    public static SeriesForecast forecastScored(double[] history, ForecastMethod method, double alpha, double beta,
+                                                int horizon) {
+        return forecast(history, method, alpha, beta, horizon, true);
+    }
+
+    private static SeriesForecast forecast(double[] history, ForecastMethod method, double alpha, double beta,
+                                           int horizon, boolean scored) {
         Series.requireValid(history);
         if (horizon < 1 || horizon > 60) {
             throw new IllegalArgumentException("horizon must be between 1 and 60, was " + horizon);
@@ -51,7 +70,7 @@ public final class SeriesForecaster {
         Map<ForecastMethod, ErrorScores> scores = new EnumMap<>(ForecastMethod.class);
         ForecastMethod chosen = method;
         if (chosen == null) {
-            chosen = choose(history, profile, alpha, beta, scores);
+            chosen = choose(history, profile, alpha, beta, scored ? scores : null);
         }
         FittedSeries fit = SeriesFitter.fitOptimised(history, chosen, alpha, beta);
         double[] forecast = new double[horizon];
@@ -60,12 +79,13 @@ public final class SeriesForecaster {
         return new SeriesForecast(chosen, fit.alpha(), fit.beta(), forecast, profile, scores, variance);
     }
 
+    /** @param scores filled with each candidate's backtest scores; null not to score them */
     private static ForecastMethod choose(double[] history, DemandProfile profile, double alpha, double beta,
                                          Map<ForecastMethod, ErrorScores> scores) {
         if (history.length < 2) {
             return profile.demandClass() == DemandClass.SMOOTH ? ForecastMethod.SES : ForecastMethod.SBA;
         }
-        if (history.length >= BACKTEST_ORIGINS + 6 && profile.demands() >= 2) {
+        if (scores != null && history.length >= BACKTEST_ORIGINS + 6 && profile.demands() >= 2) {
             for (ForecastMethod candidate : CANDIDATES) {
                 scores.put(candidate, Backtest.method(history, BACKTEST_ORIGINS, BACKTEST_HORIZON, candidate, alpha, beta));
             }

@@ -25,9 +25,15 @@ class SeriesForecasterTest {
 
     @Test
     void autoBacktestsEveryCandidateAndReportsScores() {
-        SeriesForecast f = SeriesForecaster.forecast(poissonSeries(0.4, 72, 3), null, Double.NaN, Double.NaN, 6);
+        SeriesForecast f = SeriesForecaster.forecastScored(poissonSeries(0.4, 72, 3), null, Double.NaN, Double.NaN, 6);
         double[] y = poissonSeries(0.4, 72, 3);
         assertEquals(7, f.backtest().size());
+        // Unscored: the same forecast, method and spread, and no scores.
+        SeriesForecast unscored = SeriesForecaster.forecast(y, null, Double.NaN, Double.NaN, 6);
+        assertTrue(unscored.backtest().isEmpty());
+        assertEquals(f.method(), unscored.method());
+        assertEquals(f.forecast()[0], unscored.forecast()[0], 0.0);
+        assertEquals(f.perPeriodVariance(), unscored.perPeriodVariance(), 0.0);
         assertEquals(6, f.forecast().length);
         assertEquals(ForecastMethod.COMBINED, f.method());
         // The combination is the plain mean of its parts' forecasts.
