@@ -23,12 +23,45 @@ public final class SpendDraws {
         byDepot = new double[years][depots][draws];
     }
 
-    void add(int draw, SpendLine line, double spend) {
-        int y = line.year();
-        total[y][draw] += spend;
-        byGroup[y][line.group()][draw] += spend;
-        byPart[y][line.part()][draw] += spend;
-        byDepot[y][line.depot()][draw] += spend;
+    /** A buffer for one draw's sums at a time, for one thread. */
+    Column column() {
+        return new Column();
+    }
+
+    /**
+     * One draw's aggregates, added up line by line in the order given (so every sum is the same to the last bit as
+     * when added straight into the draw columns), then written to a draw's column and cleared.
+     */
+    final class Column {
+        private final double[] total = new double[years()];
+        private final double[][] byGroup = new double[years()][groups];
+        private final double[][] byPart = new double[years()][parts];
+        private final double[][] byDepot = new double[years()][depots];
+
+        void add(SpendLine line, double spend) {
+            int y = line.year();
+            total[y] += spend;
+            byGroup[y][line.group()] += spend;
+            byPart[y][line.part()] += spend;
+            byDepot[y][line.depot()] += spend;
+        }
+
+        void writeTo(int draw) {
+            for (int y = 0; y < total.length; y++) {
+                SpendDraws.this.total[y][draw] = total[y];
+                total[y] = 0;
+                copyAndClear(byGroup[y], SpendDraws.this.byGroup[y], draw);
+                copyAndClear(byPart[y], SpendDraws.this.byPart[y], draw);
+                copyAndClear(byDepot[y], SpendDraws.this.byDepot[y], draw);
+            }
+        }
+
+        private static void copyAndClear(double[] sums, double[][] columns, int draw) {
+            for (int i = 0; i < sums.length; i++) {
+                columns[i][draw] = sums[i];
+                sums[i] = 0;
+            }
+        }
     }
 
     public int years() {
