@@ -37,13 +37,11 @@ public class BomLine {
 
     /** Units installed in one pump at this depth: per-metre lines round up to whole lengths. */
     public double installedQuantity(double depthM) {
-        double q = quantity.doubleValue();
-        return basis == BomBasis.PER_PUMP ? q : Math.ceil(q * depthM - 1e-9);
+        return basis.unitsAt(quantity, depthM);
     }
 
     /** Units a preventive service replaces in a pump at this depth; per-metre kit lines scale with depth. */
     public double serviceKitQuantity(double depthM) {
-        double q = serviceKitQuantity.doubleValue();
-        return basis == BomBasis.PER_PUMP ? q : Math.ceil(q * depthM - 1e-9);
+        return basis.unitsAt(serviceKitQuantity, depthM);
     }
 }

@@ -12,8 +12,10 @@ import org.depotcast.common.EntityMissingException;
 import java.io.InputStream;
 import java.math.BigDecimal;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -48,6 +50,20 @@ public class PumpModelService {
 
     public PumpModel require(String field, String code) {
         return models.byCode(code).orElseThrow(() -> new EntityMissingException(field, "pump model", code));
+    }
+
+    /** Every pump model with its bill of materials, as records keyed by model id. */
+    @Transactional
+    public Map<Long, PumpModelSummary> summariesById() {
+        Map<Long, PumpModelSummary> byId = new HashMap<>();
+        models.allByCode().forEach(model -> byId.put(model.id, PumpModelSummary.from(model)));
+        return byId;
+    }
+
+    /** The model with this code as a record; a 422 naming {@code field} when there is none. */
+    @Transactional
+    public PumpModelSummary requireSummary(String field, String code) {
+        return PumpModelSummary.from(require(field, code));
     }
 
     /** The service kit of a pump of this model at this depth; a 422 naming {@code field} when the model is unknown. */

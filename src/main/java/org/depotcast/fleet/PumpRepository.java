@@ -21,6 +21,25 @@ class PumpRepository implements PanacheRepository<Pump> {
                 PumpPlanningRow.class).getResultList();
     }
 
+    private static final String SUMMARY = """
+            select new org.depotcast.fleet.PumpSummary(p.id, p.assetId, p.model.id, p.depot.id, p.depot.code,
+                   p.assignedMechanic, p.depthM, p.installedOn, p.status, p.usageHoursPerDay) from Pump p
+            """;
+
+    /** The pumps at one depot, or (null) every pump, as records by asset id. See {@link PumpQueryService}. */
+    List<PumpSummary> summaries(Long depotId) {
+        if (depotId == null) {
+            return getEntityManager().createQuery(SUMMARY + "order by p.assetId", PumpSummary.class).getResultList();
+        }
+        return getEntityManager().createQuery(SUMMARY + "where p.depot.id = :depotId order by p.assetId",
+                PumpSummary.class).setParameter("depotId", depotId).getResultList();
+    }
+
+    PumpSummary summaryOf(long id) {
+        return getEntityManager().createQuery(SUMMARY + "where p.id = :id", PumpSummary.class).setParameter("id", id)
+                .getSingleResult();
+    }
+
     /** One row per pump for sensor intake. See {@link PumpService#intakeRows()}. */
     List<Object[]> intakeRows() {
         return getEntityManager().createQuery("""

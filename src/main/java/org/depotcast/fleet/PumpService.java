@@ -62,10 +62,15 @@ public class PumpService {
     }
 
     private static boolean visible(AccessScope.Scope scope, Pump pump) {
+        return scope.everything() || visible(scope, pump.assignedMechanic, pump.depot.id);
+    }
+
+    /** Whether a pump assigned to this mechanic at this depot is the caller's to see. */
+    static boolean visible(AccessScope.Scope scope, String assignedMechanic, long depotId) {
         if (scope.everything()) {
             return true;
         }
-        return scope.mechanic() != null ? scope.mechanic().equals(pump.assignedMechanic) : scope.sees(pump.depot.id);
+        return scope.mechanic() != null ? scope.mechanic().equals(assignedMechanic) : scope.sees(depotId);
     }
 
     /** The pump, or 404 when unknown, 403 when outside the caller's depots or assignments. */

@@ -16,4 +16,7 @@ public interface RepairRecords {
 
     /** Per pump, its breakdown repairs reported up to {@code to} and not fixed before {@code from}, earliest first. */
     Map<Long, List<RepairSpan>> breakdownsBetween(LocalDate from, LocalDate to);
+
+    /** Per pump, its breakdown repairs reported on or after {@code since}, the latest reported first. */
+    Map<Long, List<RepairSpan>> breakdownsReportedSince(LocalDate since);
 }

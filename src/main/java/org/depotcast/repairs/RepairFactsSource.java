@@ -32,8 +32,18 @@ class RepairFactsSource implements RepairRecords {
 
     @Override
     public Map<Long, List<RepairSpan>> breakdownsBetween(LocalDate from, LocalDate to) {
+        return byPump(repairs.breakdownsBetween(from, to));
+    }
+
+    @Override
+    public Map<Long, List<RepairSpan>> breakdownsReportedSince(LocalDate since) {
+        return byPump(repairs.breakdownsReportedSince(since));
+    }
+
+    /** Rows (pump id, reported on, fixed on) as spans per pump, in the rows' order. */
+    private static Map<Long, List<RepairSpan>> byPump(List<Object[]> rows) {
         Map<Long, List<RepairSpan>> spans = new HashMap<>();
-        for (Object[] row : repairs.breakdownsBetween(from, to)) {
+        for (Object[] row : rows) {
             spans.computeIfAbsent((Long) row[0], k -> new ArrayList<>())
                     .add(new RepairSpan((LocalDate) row[1], (LocalDate) row[2]));
         }

@@ -66,6 +66,15 @@ class RepairRepository implements PanacheRepository<Repair> {
                 .setParameter("from", from).setParameter("to", to).getResultList();
     }
 
+    /** Rows (pump id, reported on, fixed on) of breakdown repairs reported on or after {@code since}, latest first. */
+    List<Object[]> breakdownsReportedSince(LocalDate since) {
+        return getEntityManager().createQuery("""
+                select r.pump.id, r.reportedOn, r.fixedOn from Repair r
+                where r.kind = org.depotcast.repairs.RepairKind.BREAKDOWN and r.reportedOn >= :since
+                order by r.reportedOn desc, r.id desc""", Object[].class)
+                .setParameter("since", since).getResultList();
+    }
+
     /** The day of the earliest repair on record, or null with none. */
     LocalDate firstReportedOn() {
         return getEntityManager().createQuery("select min(r.reportedOn) from Repair r", LocalDate.class).getSingleResult();

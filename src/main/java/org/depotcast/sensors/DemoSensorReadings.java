@@ -8,18 +8,16 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.enterprise.event.Observes;
 import org.depotcast.access.SystemWork;
 import org.depotcast.common.DateBounds;
-import org.depotcast.fleet.Pump;
-import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.fleet.PumpStatus;
-import org.depotcast.repairs.Repair;
-import org.depotcast.repairs.RepairKind;
-import org.depotcast.repairs.RepairService;
+import org.depotcast.fleet.PumpSummary;
+import org.depotcast.fleet.RepairRecords;
+import org.depotcast.fleet.RepairSpan;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 
 import java.sql.SQLException;
 import java.time.LocalDate;
 import java.util.ArrayList;
-import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -38,15 +36,15 @@ class DemoSensorReadings {
     /** Days of near-nothing use at the end of the year for the one pump per depot whose stop nobody reported yet. */
     static final int UNREPORTED_STOP_DAYS = 3;
 
-    private final PumpService pumps;
-    private final RepairService repairs;
+    private final PumpQueryService pumps;
+    private final RepairRecords repairs;
     private final SensorReadingStore store;
     private final SensorUsageQuery usage;
     private final StopFlagService flags;
     private final SystemWork system;
     private final String mode;
 
-    DemoSensorReadings(PumpService pumps, RepairService repairs, SensorReadingStore store, SensorUsageQuery usage,
+    DemoSensorReadings(PumpQueryService pumps, RepairRecords repairs, SensorReadingStore store, SensorUsageQuery usage,
                        StopFlagService flags, SystemWork system, @ConfigProperty(name = "depotcast.mode") String mode) {
         this.pumps = pumps;
         this.repairs = repairs;
@@ -80,37 +78,32 @@ class DemoSensorReadings {
 
     private int write(LocalDate lastDay) throws SQLException {
         LocalDate firstDay = lastDay.minusDays(DAYS - 1L);
-        Map<Long, List<Repair>> breakdowns = new HashMap<>();
-        for (Repair r : repairs.search(null, firstDay.minusDays(60), Integer.MAX_VALUE)) {
-            if (r.kind == RepairKind.BREAKDOWN) {
-                breakdowns.computeIfAbsent(r.pump.id, k -> new ArrayList<>()).add(r);
-            }
-        }
+        Map<Long, List<RepairSpan>> breakdowns = repairs.breakdownsReportedSince(firstDay.minusDays(60));
         Map<Long, MonthDays> months = new LinkedHashMap<>();
         java.util.Set<String> depotsWithUnreportedStop = new java.util.HashSet<>();
-        List<Pump> all = new ArrayList<>(pumps.all());
-        all.sort(java.util.Comparator.comparing(p -> p.assetId));
-        for (Pump pump : all) {
-            if (pump.status == PumpStatus.DECOMMISSIONED || !DemoSensorSeries.hasSensor(pump.assetId, SEED)) {
+        List<PumpSummary> all = new ArrayList<>(pumps.all());
+        all.sort(java.util.Comparator.comparing(PumpSummary::assetId));
+        for (PumpSummary pump : all) {
+            if (pump.status() == PumpStatus.DECOMMISSIONED || !DemoSensorSeries.hasSensor(pump.assetId(), SEED)) {
                 continue;
             }
+            List<RepairSpan> spans = breakdowns.getOrDefault(pump.id(), List.of());
             List<DemoSensorSeries.Stop> stops = new ArrayList<>();
-            for (Repair r : breakdowns.getOrDefault(pump.id, List.of())) {
-                stops.add(new DemoSensorSeries.Stop(r.reportedOn, r.fixedOn));
+            for (RepairSpan r : spans) {
+                stops.add(new DemoSensorSeries.Stop(r.reportedOn(), r.fixedOn()));
             }
-            double[] hours = DemoSensorSeries.of(pump.assetId, SEED, pump.usageHoursPerDay.doubleValue(), firstDay,
-                    DAYS, stops).hours();
-            if (quietLately(pump, breakdowns.getOrDefault(pump.id, List.of()), lastDay, firstDay)
-                    && depotsWithUnreportedStop.add(pump.depot.code)) {
+            double[] hours = DemoSensorSeries.of(pump.assetId(), SEED, pump.usageHoursPerDay().doubleValue(),
+                    firstDay, DAYS, stops).hours();
+            if (quietLately(pump, spans, lastDay, firstDay) && depotsWithUnreportedStop.add(pump.depotCode())) {
                 stopUnreported(hours);
             }
             for (int d = 0; d < DAYS; d++) {
                 LocalDate day = firstDay.plusDays(d);
-                if (Double.isNaN(hours[d]) || day.isBefore(pump.installedOn)) {
+                if (Double.isNaN(hours[d]) || day.isBefore(pump.installedOn())) {
                     continue;
                 }
                 LocalDate month = day.withDayOfMonth(1);
-                months.computeIfAbsent(SensorReadingStore.key(pump.id, month), k -> MonthDays.empty(month))
+                months.computeIfAbsent(SensorReadingStore.key(pump.id(), month), k -> MonthDays.empty(month))
                         .set(day, (int) Math.round(hours[d] * 100));
             }
         }
@@ -122,11 +115,12 @@ class DemoSensorReadings {
      * Every recorded breakdown is reported, so without this the demo would show no pump probably down: a working
      * pump in steady use for the whole year, with no breakdown in its last 60 days, is one that may stop unseen.
      */
-    private static boolean quietLately(Pump pump, List<Repair> breakdowns, LocalDate lastDay, LocalDate firstDay) {
+    private static boolean quietLately(PumpSummary pump, List<RepairSpan> breakdowns, LocalDate lastDay,
+                                       LocalDate firstDay) {
         LocalDate recent = lastDay.minusDays(60);
-        return pump.status == PumpStatus.WORKING && pump.installedOn.isBefore(firstDay)
-                && pump.usageHoursPerDay.doubleValue() >= 4
-                && breakdowns.stream().noneMatch(r -> r.fixedOn == null || r.fixedOn.isAfter(recent));
+        return pump.status() == PumpStatus.WORKING && pump.installedOn().isBefore(firstDay)
+                && pump.usageHoursPerDay().doubleValue() >= 4
+                && breakdowns.stream().noneMatch(r -> r.fixedOn() == null || r.fixedOn().isAfter(recent));
     }
 
     /** Use near nothing on the last days, as the planted breakdowns look, with no repair reported. */

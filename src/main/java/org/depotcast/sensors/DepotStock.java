@@ -2,9 +2,9 @@ package org.depotcast.sensors;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.stock.BalanceView;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.StockQueryService;
 
 import java.math.BigDecimal;
@@ -22,11 +22,12 @@ class DepotStock {
         this.stock = stock;
     }
 
-    Map<String, BigDecimal> kitsOf(Location depot) {
+    /** The depot's mechanics' kits together (each kit's parent is the depot). */
+    Map<String, BigDecimal> kitsOf(String depotCode) {
         Map<String, BigDecimal> units = new HashMap<>();
-        for (Location kit : locations.ofKind(LocationKind.KIT)) {
-            if (kit.parent != null && kit.parent.id.equals(depot.id)) {
-                add(units, kit.code);
+        for (LocationSummary kit : locations.summariesOfKind(LocationKind.KIT)) {
+            if (depotCode.equals(kit.parentCode())) {
+                add(units, kit.code());
             }
         }
         return units;

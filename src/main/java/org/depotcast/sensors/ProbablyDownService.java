@@ -3,11 +3,12 @@ package org.depotcast.sensors;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.SystemWork;
-import org.depotcast.catalogue.BomLine;
 import org.depotcast.catalogue.ComponentFamily;
+import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.catalogue.PumpModelSummary;
 import org.depotcast.core.sensors.PartsToHaveReady;
 import org.depotcast.core.sensors.StoppedPumpParts;
-import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpSummary;
 import org.depotcast.fleet.RepairRecords;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.forecasting.FleetRates;
@@ -46,10 +47,13 @@ public class ProbablyDownService {
     private final ForecastQueryService forecasts;
     private final SystemWork system;
     private final PlanningService planning;
+    private final PumpModelService models;
 
     ProbablyDownService(StopFlagService flags, SensorAreas areas, RepairRecords repairRecords,
-                        ForecastQueryService forecasts, SystemWork system, PlanningService planning) {
+                        ForecastQueryService forecasts, SystemWork system, PlanningService planning,
+                        PumpModelService models) {
         this.planning = planning;
+        this.models = models;
         this.flags = flags;
         this.areas = areas;
         this.repairRecords = repairRecords;
@@ -64,12 +68,13 @@ public class ProbablyDownService {
     @Transactional
     public ProbablyDownReport report(String depotCode, LocalDate today) {
         SensorArea area = areas.resolve(depotCode);
-        Map<Long, Pump> byId = new HashMap<>();
-        area.pumps().forEach(p -> byId.put(p.id, p));
+        Map<Long, PumpSummary> byId = new HashMap<>();
+        area.pumps().forEach(p -> byId.put(p.id(), p));
+        Map<Long, PumpModelSummary> boms = models.summariesById();
         List<StopFlag> all = flags.flagsOf(byId.keySet());
         // Fleet models are programme-wide; only the area's pumps are shown.
         Optional<FleetRates> rates = system.call("sensor-parts", forecasts::fleetRates);
-        Map<ComponentFamily, FleetRateModel> models = rates.map(FleetRates::models).orElse(Map.of());
+        Map<ComponentFamily, FleetRateModel> rateModels = rates.map(FleetRates::models).orElse(Map.of());
         List<ProbablyDownReport.Pump> shown = new ArrayList<>();
         Map<String, Double> needed = new TreeMap<>();
         Map<String, Boolean> critical = new HashMap<>();
@@ -77,14 +82,15 @@ public class ProbablyDownService {
             if (flag.state != StopFlag.State.OPEN) {
                 continue;
             }
-            Pump pump = byId.get(flag.pumpId);
-            pump.model.bom.forEach(line -> critical.put(line.part.partNumber, line.part.critical));
-            StoppedPumpParts.Expectation expectation = expect(pump, flag, models);
+            PumpSummary pump = byId.get(flag.pumpId);
+            PumpModelSummary model = boms.get(pump.modelId());
+            model.bom().forEach(line -> critical.put(line.partNumber(), line.critical()));
+            StoppedPumpParts.Expectation expectation = expect(pump, model, flag, rateModels);
             expectation.unitsByPart().forEach((part, units) -> needed.merge(part, units, Double::sum));
-            shown.add(new ProbablyDownReport.Pump(pump.assetId, pump.assignedMechanic, StopFlag.State.OPEN.words,
+            shown.add(new ProbablyDownReport.Pump(pump.assetId(), pump.assignedMechanic(), StopFlag.State.OPEN.words,
                     flag.stoppedFrom, flag.flaggedOn, Math.max(0, ChronoUnit.DAYS.between(flag.stoppedFrom, today)),
                     flag.probability.doubleValue(), flag.baselineHours.doubleValue(),
-                    repairRecords.factsOf(pump.id).openRepairRef(),
+                    repairRecords.factsOf(pump.id()).openRepairRef(),
                     expectation.repairsByFamily(), expectation.unitsByPart()));
         }
         // Most likely down first, so the parts for the surest cases are read first.
@@ -97,12 +103,12 @@ public class ProbablyDownService {
                 against(area, needed, coverLevels(critical)), area.stockWords(), repaired, falseAlarms);
     }
 
-    private static StoppedPumpParts.Expectation expect(Pump pump, StopFlag flag,
+    private static StoppedPumpParts.Expectation expect(PumpSummary pump, PumpModelSummary model, StopFlag flag,
                                                        Map<ComponentFamily, FleetRateModel> models) {
-        double depthM = pump.depthM.doubleValue();
+        double depthM = pump.depthM().doubleValue();
         List<StoppedPumpParts.BomPart> bom = new ArrayList<>();
-        for (BomLine line : pump.model.bom) {
-            bom.add(new StoppedPumpParts.BomPart(line.part.partNumber, line.part.family.name(),
+        for (PumpModelSummary.Line line : model.bom()) {
+            bom.add(new StoppedPumpParts.BomPart(line.partNumber(), line.family().name(),
                     line.installedQuantity(depthM)));
         }
         return StoppedPumpParts.expect(flag.probability.doubleValue(), familyRates(pump, flag, models), bom);
@@ -112,14 +118,14 @@ public class ProbablyDownService {
      * Each family's breakdown rate for this pump as the forecast run's model gives it: the pump's depth, its age when
      * use fell and its usual daily hours, times its depot's ratio where the run kept one.
      */
-    static List<StoppedPumpParts.FamilyRate> familyRates(Pump pump, StopFlag flag,
+    static List<StoppedPumpParts.FamilyRate> familyRates(PumpSummary pump, StopFlag flag,
                                                          Map<ComponentFamily, FleetRateModel> models) {
-        double depthM = pump.depthM.doubleValue();
-        double ageYears = Math.max(0, ChronoUnit.DAYS.between(pump.installedOn, flag.stoppedFrom) / 365.25);
+        double depthM = pump.depthM().doubleValue();
+        double ageYears = Math.max(0, ChronoUnit.DAYS.between(pump.installedOn(), flag.stoppedFrom) / 365.25);
         double hoursPerDay = flag.baselineHours.doubleValue();
         List<StoppedPumpParts.FamilyRate> rates = new ArrayList<>();
         models.forEach((family, model) -> rates.add(new StoppedPumpParts.FamilyRate(family.name(),
-                model.ratePerHour(depthM, ageYears, hoursPerDay) * model.depotRatio(pump.depot.id),
+                model.ratePerHour(depthM, ageYears, hoursPerDay) * model.depotRatio(pump.depotId()),
                 model.unitsPerEvent())));
         return rates;
     }

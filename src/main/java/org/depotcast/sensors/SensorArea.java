@@ -1,6 +1,6 @@
 package org.depotcast.sensors;
 
-import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpSummary;
 
 import java.math.BigDecimal;
 import java.util.List;
@@ -18,7 +18,7 @@ import java.util.Map;
  * @param inKits      units on hand per part in the kits counted (the depot's mechanics', or the mechanic's own)
  * @param stockWords  where the stock counted is, in words
  */
-record SensorArea(String depotCode, String mechanic, List<Pump> pumps, Map<String, BigDecimal> atDepot,
+record SensorArea(String depotCode, String mechanic, List<PumpSummary> pumps, Map<String, BigDecimal> atDepot,
                   Map<String, BigDecimal> inKits, String stockWords) {
     /** Depot and kits together, per part. */
     Map<String, BigDecimal> held() {

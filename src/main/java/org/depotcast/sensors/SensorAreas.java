@@ -3,9 +3,9 @@ package org.depotcast.sensors;
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.access.AccessScope;
 import org.depotcast.common.InvalidInputException;
-import org.depotcast.fleet.PumpService;
-import org.depotcast.stock.Location;
+import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.math.BigDecimal;
 import java.util.HashMap;
@@ -21,10 +21,10 @@ import java.util.Optional;
 class SensorAreas {
     private final AccessScope scope;
     private final LocationService locations;
-    private final PumpService pumps;
+    private final PumpQueryService pumps;
     private final DepotStock stock;
 
-    SensorAreas(AccessScope scope, LocationService locations, PumpService pumps, DepotStock stock) {
+    SensorAreas(AccessScope scope, LocationService locations, PumpQueryService pumps, DepotStock stock) {
         this.scope = scope;
         this.locations = locations;
         this.pumps = pumps;
@@ -39,19 +39,19 @@ class SensorAreas {
             }
             return ofMechanic(mechanic);
         }
-        Location depot = locations.require("depot", depotCode);
-        scope.require(depot.id, depot.code);
-        Map<String, BigDecimal> atDepot = stock.atLocation(depot.code);
-        Map<String, BigDecimal> inKits = stock.kitsOf(depot);
-        return new SensorArea(depot.code, null, pumps.search(depot.code, null), atDepot, inKits,
-                "at " + depot.code + " and in its mechanics' kits");
+        LocationSummary depot = locations.requireSummary("depot", depotCode);
+        scope.require(depot.id(), depot.code());
+        Map<String, BigDecimal> atDepot = stock.atLocation(depot.code());
+        Map<String, BigDecimal> inKits = stock.kitsOf(depot.code());
+        return new SensorArea(depot.code(), null, pumps.visible(depot.code()), atDepot, inKits,
+                "at " + depot.code() + " and in its mechanics' kits");
     }
 
     private SensorArea ofMechanic(String mechanic) {
-        Optional<Location> kit = locations.kitOf(mechanic);
-        Location depot = kit.map(Location::depot).orElse(null);
-        Map<String, BigDecimal> inKit = kit.map(k -> stock.atLocation(k.code)).orElseGet(HashMap::new);
-        return new SensorArea(depot == null ? null : depot.code, mechanic, pumps.search(null, null), null, inKit,
-                kit.map(k -> "in your kit " + k.code).orElse("in no kit: your account carries none"));
+        Optional<LocationSummary> kit = locations.kitSummaryOf(mechanic);
+        String depotCode = kit.map(LocationSummary::parentCode).orElse(null);
+        Map<String, BigDecimal> inKit = kit.map(k -> stock.atLocation(k.code())).orElseGet(HashMap::new);
+        return new SensorArea(depotCode, mechanic, pumps.visible(null), null, inKit,
+                kit.map(k -> "in your kit " + k.code()).orElse("in no kit: your account carries none"));
     }
 }

@@ -5,8 +5,8 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
-import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.catalogue.PumpModelSummary;
 
 import java.util.HashMap;
 import java.util.List;
@@ -34,7 +34,7 @@ public class SensorConversionService {
     @Transactional
     public List<SensorConversionResponse> all() {
         Map<Long, String> codes = new HashMap<>();
-        models.all().forEach(m -> codes.put(m.id, m.code));
+        models.summariesById().forEach((id, model) -> codes.put(id, model.code()));
         return conversions.listAll().stream().map(c -> new SensorConversionResponse(codes.get(c.pumpModelId),
                 c.strokesPerHour, c.litresPerHour)).toList();
     }
@@ -42,20 +42,20 @@ public class SensorConversionService {
     @Transactional
     public SensorConversionResponse set(String modelCode, SensorConversionRequest request) {
         scope.requireCatalogue();
-        PumpModel model = models.require("modelCode", modelCode);
-        SensorConversion conversion = conversions.findByIdOptional(model.id).orElseGet(() -> {
+        PumpModelSummary model = models.requireSummary("modelCode", modelCode);
+        SensorConversion conversion = conversions.findByIdOptional(model.id()).orElseGet(() -> {
             SensorConversion fresh = new SensorConversion();
-            fresh.pumpModelId = model.id;
+            fresh.pumpModelId = model.id();
             return fresh;
         });
         SensorConversionResponse before = conversion.strokesPerHour == null && conversion.litresPerHour == null ? null
-                : new SensorConversionResponse(model.code, conversion.strokesPerHour, conversion.litresPerHour);
+                : new SensorConversionResponse(model.code(), conversion.strokesPerHour, conversion.litresPerHour);
         conversion.strokesPerHour = request.strokesPerHour();
         conversion.litresPerHour = request.litresPerHour();
         conversions.persist(conversion);
-        SensorConversionResponse after = new SensorConversionResponse(model.code, request.strokesPerHour(),
+        SensorConversionResponse after = new SensorConversionResponse(model.code(), request.strokesPerHour(),
                 request.litresPerHour());
-        audit.record("SENSOR_CONVERSION_SET", "pump_model", model.code, before, after);
+        audit.record("SENSOR_CONVERSION_SET", "pump_model", model.code(), before, after);
         return after;
     }
 

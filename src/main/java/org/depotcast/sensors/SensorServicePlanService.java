@@ -2,8 +2,9 @@ package org.depotcast.sensors;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.catalogue.BomLine;
-import org.depotcast.fleet.Pump;
+import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.catalogue.PumpModelSummary;
+import org.depotcast.fleet.PumpSummary;
 import org.depotcast.repairs.ServiceDue;
 import org.depotcast.repairs.ServiceDueService;
 
@@ -29,35 +30,39 @@ public class SensorServicePlanService {
 
     private final ServiceDueService schedule;
     private final SensorAreas areas;
+    private final PumpModelService models;
 
-    SensorServicePlanService(ServiceDueService schedule, SensorAreas areas) {
+    SensorServicePlanService(ServiceDueService schedule, SensorAreas areas, PumpModelService models) {
         this.schedule = schedule;
         this.areas = areas;
+        this.models = models;
     }
 
     /** For a depot the caller may see, or for a mechanic naming none, their own pumps and kit ({@link SensorAreas}). */
     @Transactional
     public ServicePlanReport planAt(String depotCode, LocalDate today) {
         SensorArea area = areas.resolve(depotCode);
-        Map<String, Pump> byAsset = new HashMap<>();
-        area.pumps().forEach(p -> byAsset.put(p.assetId, p));
+        Map<String, PumpSummary> byAsset = new HashMap<>();
+        area.pumps().forEach(p -> byAsset.put(p.assetId(), p));
         List<ServicePlanReport.PumpDue> rows = new ArrayList<>();
         for (ServiceDueService.Counted c : schedule.countedAt(today, area.mechanic() == null ? area.depotCode() : null)) {
             ServiceDue d = c.due();
             UsageBasis basis = c.measured() == null ? UsageBasis.QUARTERLY_ESTIMATE : UsageBasis.MEASURED_BY_SENSOR;
-            rows.add(new ServicePlanReport.PumpDue(d.assetId(), byAsset.get(d.assetId()).assignedMechanic,
+            rows.add(new ServicePlanReport.PumpDue(d.assetId(), byAsset.get(d.assetId()).assignedMechanic(),
                     basis.words(), d.serviceIntervalHours(), d.hoursSinceService(),
                     c.measured() == null ? 0 : c.measured().hoursRead(), d.hoursPerDay(), d.hoursLeft(), d.dueOn()));
         }
         rows.sort(Comparator.comparing(ServicePlanReport.PumpDue::dueOn, Comparator.nullsLast(Comparator.naturalOrder()))
                 .thenComparing(ServicePlanReport.PumpDue::assetId));
         return new ServicePlanReport(area.depotCode(), area.mechanic(), today, rows,
-                weeks(area.held(), today, rows, byAsset), area.stockWords());
+                weeks(area.held(), today, rows, byAsset, models.summariesById()), area.stockWords());
     }
 
     /** Week k covers today + 7k … today + 7k + 6; a pump already overdue counts in the first week. */
     private static List<ServicePlanReport.Week> weeks(Map<String, BigDecimal> inStock, LocalDate today,
-                                                      List<ServicePlanReport.PumpDue> rows, Map<String, Pump> byAsset) {
+                                                      List<ServicePlanReport.PumpDue> rows,
+                                                      Map<String, PumpSummary> byAsset,
+                                                      Map<Long, PumpModelSummary> boms) {
         int weekCount = (HORIZON_DAYS + 6) / 7;
         List<List<String>> pumpsDue = new ArrayList<>();
         List<Map<String, Double>> units = new ArrayList<>();
@@ -71,11 +76,11 @@ public class SensorServicePlanService {
             }
             int week = (int) Math.max(0, ChronoUnit.DAYS.between(today, row.dueOn()) / 7);
             pumpsDue.get(week).add(row.assetId());
-            Pump pump = byAsset.get(row.assetId());
-            for (BomLine line : pump.model.bom) {
-                double kit = line.serviceKitQuantity(pump.depthM.doubleValue());
+            PumpSummary pump = byAsset.get(row.assetId());
+            for (PumpModelSummary.Line line : boms.get(pump.modelId()).bom()) {
+                double kit = line.serviceKitQuantity(pump.depthM().doubleValue());
                 if (kit > 0) {
-                    units.get(week).merge(line.part.partNumber, kit, Double::sum);
+                    units.get(week).merge(line.partNumber(), kit, Double::sum);
                 }
             }
         }

@@ -5,8 +5,8 @@ import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PoissonFit;
 import org.depotcast.core.forecast.RateCovariate;
 import org.depotcast.core.sensors.StoppedPumpParts;
-import org.depotcast.fleet.Pump;
-import org.depotcast.stock.Location;
+import org.depotcast.fleet.PumpStatus;
+import org.depotcast.fleet.PumpSummary;
 import org.junit.jupiter.api.Test;
 
 import java.math.BigDecimal;
@@ -31,11 +31,7 @@ class ProbablyDownRatesTest {
         models.put(ComponentFamily.CUP_SEAL, seals);
         models.put(ComponentFamily.HANDLE, handles);
 
-        Pump pump = new Pump();
-        pump.depthM = new BigDecimal("60");
-        pump.installedOn = LocalDate.of(2022, 3, 1);
-        pump.depot = new Location();
-        pump.depot.id = 5L;
+        PumpSummary pump = atDepot(5L);
         StopFlag flag = new StopFlag();
         flag.stoppedFrom = LocalDate.of(2026, 3, 1); // 1461 days: exactly 4.0 years of 365.25 days
         flag.baselineHours = new BigDecimal("6.5");
@@ -51,8 +47,13 @@ class ProbablyDownRatesTest {
         assertEquals("HANDLE", rates.get(1).family());
         assertEquals(4e-4, rates.get(1).eventsPerHour(), 0.0);
 
-        pump.depot.id = 6L;
         assertEquals(Math.exp(-7 + 0.5 * Math.log(2) + 0.4),
-                ProbablyDownService.familyRates(pump, flag, models).get(0).eventsPerHour(), 1e-15, "another depot: ratio 1");
+                ProbablyDownService.familyRates(atDepot(6L), flag, models).get(0).eventsPerHour(), 1e-15, "another depot: ratio 1");
+    }
+
+    /** A pump 60 m deep installed on 1 March 2022 at the given depot. */
+    private static PumpSummary atDepot(long depotId) {
+        return new PumpSummary(1L, "P-1", 1L, depotId, "D-" + depotId, null, new BigDecimal("60"),
+                LocalDate.of(2022, 3, 1), PumpStatus.WORKING, new BigDecimal("6.5"));
     }
 }
