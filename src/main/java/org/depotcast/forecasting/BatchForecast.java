@@ -9,43 +9,32 @@ import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvProblems;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.QueryParams;
-import org.depotcast.core.forecast.SeriesForecast;
 import org.depotcast.core.forecast.SeriesForecaster;
 
-import java.io.BufferedWriter;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
-import java.io.Writer;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.Path;
 import java.util.Arrays;
 import java.util.Iterator;
 import java.util.List;
-import java.util.Locale;
 
 /**
  * The CSV batch forecast in bounded memory: long-format rows (series_id, period, quantity) are read as they arrive,
  * each series is forecast as soon as its last row has been read, and its forecast rows are written to a temporary
- * file. Only when the whole body has been read without a problem is that file sent (and then deleted); any problem
- * is a 400 listing rows and columns, and nothing is sent. Memory holds one series (at most
+ * file ({@link BatchOutput}). Only when the whole body has been read without a problem is that file sent (and then
+ * deleted); any problem is a 400 listing rows and columns, and nothing is sent. Memory holds one series (at most
  * {@link Bounds#SERIES_PERIODS_MAX} periods) and 16 bytes per series read, to refuse a series whose rows are not
- * together; the body is bounded by {@code depotcast.http.bulk-max-body-size}.
+ * together; the body is bounded by {@code depotcast.http.bulk-max-body-size}. Plain records are read from the bytes
+ * ({@link PlainCsvRows}); from the first record that is not plain, FastCSV reads the rest ({@link BatchRowReader}).
  */
 final class BatchForecast {
-    static final List<String> OUTPUT_HEADER = List.of("series_id", "step", "forecast", "method", "alpha", "beta",
-            "demand_class");
     private static final int SERIES_ID_MAX = 200;
 
     private final StatelessForecastService.Settings settings;
     private final CsvProblems problems = new CsvProblems();
     private final SeriesIdSet seen = new SeriesIdSet();
-    private final Path output;
-    private final Writer out;
-    private final FixedDecimals forecastText = new FixedDecimals(6);
-    private final FixedDecimals alphaText = new FixedDecimals(2);
-    private final FixedDecimals betaText = new FixedDecimals(2);
+    private final BatchOutput out;
+    private int[] columns;
     private String currentId;
     private int[] lines = new int[64];
     private int[] periods = new int[64];
@@ -57,9 +46,7 @@ final class BatchForecast {
 
     private BatchForecast(StatelessForecastService.Settings settings) throws IOException {
         this.settings = settings;
-        this.output = Files.createTempFile("depotcast-batch-", ".csv");
-        this.out = new BufferedWriter(new java.io.OutputStreamWriter(Files.newOutputStream(output), StandardCharsets.UTF_8),
-                1 << 16);
+        this.out = new BatchOutput();
     }
 
     /** Reads the whole body and answers with the forecasts, or throws a 400 naming every problem found. */
@@ -75,9 +62,9 @@ final class BatchForecast {
         }
         try {
             batch.read(BodySizeLimit.countedBulk(body));
-            return CsvExport.fileResponse("forecasts.csv", batch.output);
+            return CsvExport.fileResponse("forecasts.csv", batch.out.file());
         } catch (RuntimeException | IOException e) {
-            batch.discard();
+            batch.out.discard();
             if (e instanceof RuntimeException runtime) {
                 throw runtime;
             }
@@ -86,19 +73,24 @@ final class BatchForecast {
     }
 
     private void read(InputStream body) throws IOException {
-        CsvExport.writeRow(out, OUTPUT_HEADER.toArray());
-        BatchRowReader handler = new BatchRowReader();
-        try (CsvReader<BatchRowReader.Row> reader = CsvReader.builder().skipEmptyLines(true).detectBomHeader(true)
-                .allowMissingFields(true).allowExtraFields(true).build(handler, body)) {
-            Iterator<BatchRowReader.Row> records = reader.iterator();
-            if (!records.hasNext()) {
-                throw new InvalidInputException("body", "CSV body is empty");
+        PlainCsvRows plain = new PlainCsvRows(body);
+        try {
+            List<String> header = plain.header();
+            if (header != null) {
+                columns = BatchCells.columns(header);
+                BatchRowReader.Row row = new BatchRowReader.Row();
+                while (plain.next(row, columns)) {
+                    rows++;
+                    readRow(row);
+                }
             }
-            handler.useColumns(BatchCells.columns(records.next().header));
-            while (records.hasNext()) {
-                BatchRowReader.Row row = records.next();
-                rows++;
-                readRow(row);
+            if (plain.stopped()) {
+                readRest(plain);
+            } else if (header == null && plain.linesBefore() > 0) {
+                // Only empty lines: FastCSV reads them as a header without cells.
+                BatchCells.columns(List.of());
+            } else if (header == null) {
+                throw new InvalidInputException("body", "CSV body is empty");
             }
         } catch (CsvParseException | UncheckedIOException e) {
             rethrowIfTooLarge(e);
@@ -113,6 +105,28 @@ final class BatchForecast {
         out.close();
     }
 
+    /** FastCSV reads the body from the first record that is not plain (the header too, if that was not plain). */
+    private void readRest(PlainCsvRows plain) throws IOException {
+        BatchRowReader handler = new BatchRowReader(plain.linesBefore());
+        CsvReader.CsvReaderBuilder builder = CsvReader.builder().skipEmptyLines(true).allowMissingFields(true)
+                .allowExtraFields(true).detectBomHeader(plain.restIsWholeBody());
+        try (CsvReader<BatchRowReader.Row> reader = builder.build(handler, plain.rest())) {
+            Iterator<BatchRowReader.Row> records = reader.iterator();
+            if (columns == null) {
+                if (!records.hasNext()) {
+                    throw new InvalidInputException("body", "CSV body is empty");
+                }
+                columns = BatchCells.columns(records.next().header);
+            }
+            handler.useColumns(columns);
+            while (records.hasNext()) {
+                BatchRowReader.Row row = records.next();
+                rows++;
+                readRow(row);
+            }
+        }
+    }
+
     private void readRow(BatchRowReader.Row row) throws IOException {
         int line = (int) Math.min(Integer.MAX_VALUE, row.line);
         String id = row.id;
@@ -120,6 +134,13 @@ final class BatchForecast {
                 : BatchCells.period(problems, line, row.periodText);
         double quantity = row.quantityText == null ? BatchCells.quantity(problems, line, row.quantity)
                 : BatchCells.quantity(problems, line, row.quantityText);
+        if (id == currentId) {
+            // The same id as the row before (the readers keep its string): checked already.
+            if (period >= 0 && !Double.isNaN(quantity)) {
+                add(line, period, quantity);
+            }
+            return;
+        }
         if (id.isEmpty()) {
             problems.add(line, "series_id", "is required");
             return;
@@ -183,24 +204,8 @@ final class BatchForecast {
         if (!problems.isEmpty()) {
             return;
         }
-        SeriesForecast f = SeriesForecaster.forecast(history, settings.method(), settings.alpha(), settings.beta(),
-                settings.horizon());
-        String method = f.method().name().toLowerCase(Locale.ROOT);
-        String demandClass = f.profile().demandClass().name().toLowerCase(Locale.ROOT);
-        String alpha = blank(alphaText, f.alpha()), beta = blank(betaText, f.beta());
-        // The id cell (made spreadsheet-safe and quoted by the export writer) and the cells after the forecast are
-        // the same on every step of the series, so each is formatted once.
-        String idCell = CsvExport.formatCell(id);
-        String after = "," + method + "," + alpha + "," + beta + "," + demandClass + "\n";
-        for (int h = 0; h < settings.horizon(); h++) {
-            String value = forecastText.format(f.forecast()[h]);
-            out.write(idCell);
-            out.write(',');
-            out.write(Integer.toString(h + 1));
-            out.write(',');
-            out.write(value);
-            out.write(after);
-        }
+        out.series(id, SeriesForecaster.forecast(history, settings.method(), settings.alpha(), settings.beta(),
+                settings.horizon()));
     }
 
     private static void rethrowIfTooLarge(Throwable e) {
@@ -211,20 +216,4 @@ final class BatchForecast {
         }
     }
 
-    private void discard() {
-        try {
-            out.close();
-        } catch (IOException ignored) {
-            // the file is deleted next
-        }
-        try {
-            Files.deleteIfExists(output);
-        } catch (IOException ignored) {
-            // a temporary file left behind is removed with the temporary directory
-        }
-    }
-
-    private static String blank(FixedDecimals text, double value) {
-        return Double.isFinite(value) ? text.format(value) : "";
-    }
 }

@@ -25,10 +25,16 @@ final class BatchRowReader extends AbstractBaseCsvCallbackHandler<BatchRowReader
     }
 
     private final Row row = new Row();
+    /** Lines of the body before the part this reader reads (read by {@link PlainCsvRows}). */
+    private final long linesBefore;
     /** The id cell of the row before, as chars, to tell a new series without making a string for every row. */
     private char[] idChars = new char[0];
     private int[] columns;
     private List<String> header;
+
+    BatchRowReader(long linesBefore) {
+        this.linesBefore = linesBefore;
+    }
 
     void useColumns(int[] columns) {
         this.columns = columns;
@@ -36,7 +42,7 @@ final class BatchRowReader extends AbstractBaseCsvCallbackHandler<BatchRowReader
 
     @Override
     protected void handleBegin(long startingLineNumber) {
-        row.line = startingLineNumber;
+        row.line = linesBefore + startingLineNumber;
         row.periodText = "";
         row.quantityText = "";
         if (columns == null) {
