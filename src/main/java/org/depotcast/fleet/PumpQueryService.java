@@ -6,7 +6,10 @@ import org.depotcast.access.AccessScope;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.LocationSummary;
 
+import java.util.Collection;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 
 /**
  * The pump register as other features read it: {@link PumpSummary} records read by query, scoped as
@@ -47,6 +50,16 @@ public class PumpQueryService {
     @Transactional
     public PumpSummary requireVisible(String field, String assetId) {
         return repository.summaryOf(pumps.requireVisible(field, assetId).id);
+    }
+
+    /** The asset ids of these pumps, keyed by pump id (whoever the caller is: the ids come from records they see). */
+    @Transactional
+    public Map<Long, String> assetIdsOf(Collection<Long> pumpIds) {
+        Map<Long, String> assetIds = new HashMap<>();
+        if (!pumpIds.isEmpty()) {
+            repository.summariesOf(pumpIds).forEach(p -> assetIds.put(p.id(), p.assetId()));
+        }
+        return assetIds;
     }
 
     /** Every pump, for work the system does for the whole programme, by asset id. */

@@ -35,6 +35,11 @@ class PumpRepository implements PanacheRepository<Pump> {
                 PumpSummary.class).setParameter("depotId", depotId).getResultList();
     }
 
+    List<PumpSummary> summariesOf(java.util.Collection<Long> ids) {
+        return getEntityManager().createQuery(SUMMARY + "where p.id in :ids", PumpSummary.class)
+                .setParameter("ids", ids).getResultList();
+    }
+
     PumpSummary summaryOf(long id) {
         return getEntityManager().createQuery(SUMMARY + "where p.id = :id", PumpSummary.class).setParameter("id", id)
                 .getSingleResult();

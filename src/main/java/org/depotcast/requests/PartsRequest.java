@@ -8,15 +8,11 @@ import jakarta.persistence.Enumerated;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
-import jakarta.persistence.JoinColumn;
-import jakarta.persistence.ManyToOne;
 import jakarta.persistence.OneToMany;
 import jakarta.persistence.OrderBy;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 import org.depotcast.common.ConflictException;
-import org.depotcast.fleet.Pump;
-import org.depotcast.stock.Location;
 
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
@@ -36,15 +32,15 @@ public class PartsRequest {
     public String clientRef;
     @Column(nullable = false)
     public String mechanic;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "kit_id")
-    public Location kit;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "depot_id")
-    public Location depot;
-    @ManyToOne
-    @JoinColumn(name = "pump_id")
-    public Pump pump;
+    /** The mechanic's kit (a stock location). */
+    @Column(name = "kit_id", nullable = false)
+    public Long kitId;
+    /** The kit's depot (a stock location), which issues the parts. */
+    @Column(name = "depot_id", nullable = false)
+    public Long depotId;
+    /** The pump the parts are for (fleet), or null to top up the kit. */
+    @Column(name = "pump_id")
+    public Long pumpId;
     @Enumerated(EnumType.STRING)
     @Column(nullable = false)
     public Urgency urgency;

@@ -9,7 +9,6 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
-import org.depotcast.catalogue.Part;
 
 import java.math.BigDecimal;
 
@@ -23,20 +22,20 @@ public class PartsRequestLine {
     @ManyToOne(fetch = FetchType.LAZY, optional = false)
     @JoinColumn(name = "parts_request_id")
     public PartsRequest request;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue part asked for. */
+    @Column(name = "part_id", nullable = false)
+    public Long partId;
     @Column(name = "quantity_requested", nullable = false)
     public BigDecimal quantityRequested;
-    @ManyToOne
-    @JoinColumn(name = "approved_part_id")
-    public Part approvedPart;
+    /** The substitute approved in its place, or null when the part itself is approved. */
+    @Column(name = "approved_part_id")
+    public Long approvedPartId;
     @Column(name = "quantity_approved", nullable = false)
     public BigDecimal quantityApproved = BigDecimal.ZERO;
     @Column(name = "quantity_issued", nullable = false)
     public BigDecimal quantityIssued = BigDecimal.ZERO;
 
-    Part partToIssue() {
-        return approvedPart == null ? part : approvedPart;
+    long partIdToIssue() {
+        return approvedPartId == null ? partId : approvedPartId;
     }
 }

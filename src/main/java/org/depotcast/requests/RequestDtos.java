@@ -56,17 +56,19 @@ public final class RequestDtos {
                        PartsRequest.Urgency urgency, String fault, RequestStatus status, OffsetDateTime raisedAt,
                        OffsetDateTime issuedAt, long version, List<LineView> lines, List<EventView> history,
                        List<String> cautions) {
-        static View from(PartsRequest r) {
-            return new View(r.id, r.clientRef, r.mechanic, r.kit.code, r.depot.code,
-                    r.pump == null ? null : r.pump.assetId, r.urgency, r.fault, r.status, r.raisedAt, r.issuedAt,
-                    r.version, r.lines.stream().map(l -> new LineView(l.part.partNumber, l.quantityRequested,
-                    l.approvedPart == null ? null : l.approvedPart.partNumber,
+        static View from(PartsRequest r, RequestNames names) {
+            return new View(r.id, r.clientRef, r.mechanic, names.locationCode(r.kitId), names.locationCode(r.depotId),
+                    names.assetId(r.pumpId), r.urgency, r.fault, r.status, r.raisedAt, r.issuedAt,
+                    r.version, r.lines.stream().map(l -> new LineView(names.partNumber(l.partId), l.quantityRequested,
+                    l.approvedPartId == null ? null : names.partNumber(l.approvedPartId),
                     l.quantityApproved,
                     l.quantityIssued)).toList(),
                     r.events.stream().map(e -> new EventView(e.status, e.actor, e.at, e.reason)).toList(),
-                    r.lines.stream().filter(l -> l.approvedPart != null && (l.part.family.touchesDrinkingWater()
-                            || l.approvedPart.family.touchesDrinkingWater())).map(l -> substituteCaution(
-                            l.approvedPart.partNumber, l.part.partNumber)).toList());
+                    r.lines.stream().filter(l -> l.approvedPartId != null
+                            && (names.part(l.partId).family().touchesDrinkingWater()
+                            || names.part(l.approvedPartId).family().touchesDrinkingWater()))
+                            .map(l -> substituteCaution(names.partNumber(l.approvedPartId), names.partNumber(l.partId)))
+                            .toList());
         }
     }
 

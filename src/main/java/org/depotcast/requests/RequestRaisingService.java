@@ -4,19 +4,20 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
-import org.depotcast.fleet.PumpService;
-import org.depotcast.stock.Location;
+import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.time.Clock;
 import java.time.OffsetDateTime;
 import java.util.EnumSet;
+import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
 
@@ -29,14 +30,17 @@ import java.util.Optional;
 public class RequestRaisingService {
     private final RequestService.Requests requests;
     private final PartService parts;
-    private final PumpService pumps;
+    private final PumpQueryService pumps;
     private final LocationService locations;
+    private final RequestDirectory directory;
     private final CurrentUser currentUser;
     private final AuditService audit;
     private final Clock clock;
 
-    RequestRaisingService(RequestService.Requests requests, PartService parts, PumpService pumps,
-                          LocationService locations, CurrentUser currentUser, AuditService audit, Clock clock) {
+    RequestRaisingService(RequestService.Requests requests, PartService parts, PumpQueryService pumps,
+                          LocationService locations, RequestDirectory directory, CurrentUser currentUser,
+                          AuditService audit, Clock clock) {
+        this.directory = directory;
         this.requests = requests;
         this.parts = parts;
         this.pumps = pumps;
@@ -57,21 +61,22 @@ public class RequestRaisingService {
             if (!earlier.get().mechanic.equals(mechanic)) {
                 throw new ConflictException("clientRef", "reference '" + body.clientRef() + "' belongs to another request");
             }
-            String differs = firstDifference(earlier.get(), body);
+            RequestNames names = directory.of(List.of(earlier.get()));
+            String differs = firstDifference(earlier.get(), body, names);
             if (differs != null) {
                 throw new ConflictException(differs, "request '" + body.clientRef() + "' was raised with another "
                         + differs + "; a new request needs a new client reference");
             }
-            return new Raised(RequestDtos.View.from(earlier.get()), true);
+            return new Raised(RequestDtos.View.from(earlier.get(), names), true);
         }
-        Location kit = locations.kitOf(mechanic).orElseThrow(() ->
+        LocationSummary kit = locations.kitSummaryOf(mechanic).orElseThrow(() ->
                 new BusinessRuleException("mechanic", "account '" + mechanic + "' carries no kit"));
         PartsRequest request = new PartsRequest();
         request.clientRef = body.clientRef();
         request.mechanic = mechanic;
-        request.kit = kit;
-        request.depot = kit.parent;
-        request.pump = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId());
+        request.kitId = kit.id();
+        request.depotId = locations.requireSummary("mechanic", kit.parentCode()).id();
+        request.pumpId = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId()).id();
         request.urgency = body.urgency();
         request.fault = body.fault();
         request.raisedAt = OffsetDateTime.now(clock);
@@ -80,23 +85,24 @@ public class RequestRaisingService {
             RequestDtos.Line l = body.lines().get(i);
             PartsRequestLine line = new PartsRequestLine();
             line.request = request;
-            line.part = parts.require("lines[" + i + "].partNumber", l.partNumber());
-            Part part = line.part;
-            if (request.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
+            PartSummary part = parts.requireSummary("lines[" + i + "].partNumber", l.partNumber());
+            line.partId = part.id();
+            if (request.lines.stream().anyMatch(existing -> existing.partId == part.id())) {
                 throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + l.partNumber() + "' is listed twice");
             }
-            line.quantityRequested = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
+            line.quantityRequested = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(),
+                    part.unitOfIssue().wholeUnits());
             request.lines.add(line);
         }
         request.moveTo(RequestStatus.RAISED, EnumSet.of(RequestStatus.RAISED), mechanic, body.fault(), OffsetDateTime.now(clock));
         requests.persist(request);
         audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
-        return new Raised(RequestDtos.View.from(request), false);
+        return new Raised(RequestDtos.View.from(request, directory.of(List.of(request))), false);
     }
 
     /** The first field in which a resent request differs from the one raised under its reference, or null. */
-    private static String firstDifference(PartsRequest stored, RequestDtos.Raise resend) {
-        if (!Objects.equals(stored.pump == null ? null : stored.pump.assetId, resend.assetId())) {
+    private static String firstDifference(PartsRequest stored, RequestDtos.Raise resend, RequestNames names) {
+        if (!Objects.equals(names.assetId(stored.pumpId), resend.assetId())) {
             return "assetId";
         }
         if (stored.urgency != resend.urgency()) {
@@ -110,7 +116,8 @@ public class RequestRaisingService {
         }
         for (int i = 0; i < resend.lines().size(); i++) {
             RequestDtos.Line sent = resend.lines().get(i);
-            PartsRequestLine kept = stored.lines.stream().filter(l -> l.part.partNumber.equals(sent.partNumber()))
+            PartsRequestLine kept = stored.lines.stream()
+                    .filter(l -> names.partNumber(l.partId).equals(sent.partNumber()))
                     .findFirst().orElse(null);
             if (kept == null) {
                 return "lines[" + i + "].partNumber";

@@ -51,7 +51,7 @@ public class RequestReportService {
             if (!visible.sees(depot.id())) {
                 continue;
             }
-            double[] hours = issued.stream().filter(r -> r.depot.id.equals(depot.id()))
+            double[] hours = issued.stream().filter(r -> r.depotId == depot.id())
                     .mapToDouble(r -> Duration.between(r.raisedAt, r.issuedAt).toMinutes() / 60.0).sorted().toArray();
             long[] wait = waits.getOrDefault(depot.code(), new long[2]);
             Map<String, Long> now = waitingNow.getOrDefault(depot.code(), Map.of());

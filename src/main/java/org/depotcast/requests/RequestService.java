@@ -10,8 +10,8 @@ import org.depotcast.common.IdempotencyKey;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.Quantities;
@@ -39,6 +39,7 @@ import java.util.Optional;
 public class RequestService {
     private final Requests requests;
     private final PartService parts;
+    private final RequestDirectory directory;
     private final StockLedgerService ledger;
     private final AccessScope scope;
     private final CurrentUser currentUser;
@@ -52,10 +53,11 @@ public class RequestService {
         }
     }
 
-    RequestService(Requests requests, PartService parts, StockLedgerService ledger,
+    RequestService(Requests requests, PartService parts, RequestDirectory directory, StockLedgerService ledger,
                    AccessScope scope, CurrentUser currentUser, AuditService audit, Clock clock) {
         this.requests = requests;
         this.parts = parts;
+        this.directory = directory;
         this.ledger = ledger;
         this.scope = scope;
         this.currentUser = currentUser;
@@ -66,29 +68,32 @@ public class RequestService {
     @Transactional
     public RequestDtos.View approve(long id, RequestDtos.Approve body) {
         PartsRequest request = lockedForDepot(id);
-        RequestDtos.View before = RequestDtos.View.from(request);
+        RequestNames names = directory.of(List.of(request));
+        RequestDtos.View before = RequestDtos.View.from(request, names);
         boolean full = true;
         boolean any = false;
         for (int i = 0; i < body.lines().size(); i++) {
             RequestDtos.ApprovedLine a = body.lines().get(i);
             String field = "lines[" + i + "]";
-            PartsRequestLine line = request.lines.stream().filter(l -> l.part.partNumber.equals(a.partNumber())).findFirst()
-                    .orElseThrow(() -> new BusinessRuleException(field + ".partNumber", "part '" + a.partNumber() + "' was not requested"));
-            Part issue = line.part;
+            PartsRequestLine line = request.lines.stream()
+                    .filter(l -> names.partNumber(l.partId).equals(a.partNumber())).findFirst().orElseThrow(() -> new BusinessRuleException(field + ".partNumber",
+                            "part '" + a.partNumber() + "' was not requested"));
+            PartSummary requested = names.part(line.partId);
+            PartSummary issue = requested;
             if (a.substitutePartNumber() != null) {
-                if (!parts.substitutesOf(line.part.partNumber).contains(a.substitutePartNumber())) {
+                if (!parts.substitutesOf(requested.partNumber()).contains(a.substitutePartNumber())) {
                     throw new BusinessRuleException(field + ".substitutePartNumber", "'" + a.substitutePartNumber()
-                            + "' is not on the compatibility list of '" + line.part.partNumber + "'");
+                            + "' is not on the compatibility list of '" + requested.partNumber() + "'");
                 }
-                issue = parts.require(field + ".substitutePartNumber", a.substitutePartNumber());
+                issue = parts.requireSummary(field + ".substitutePartNumber", a.substitutePartNumber());
             }
             BigDecimal quantity = a.quantity().signum() == 0 ? BigDecimal.ZERO
-                    : Quantities.requirePositive(field + ".quantity", a.quantity(), issue.wholeUnits());
+                    : Quantities.requirePositive(field + ".quantity", a.quantity(), issue.unitOfIssue().wholeUnits());
             if (quantity.compareTo(line.quantityRequested) > 0) {
                 throw new BusinessRuleException(field + ".quantity", "cannot approve more than the " 
                         + line.quantityRequested.stripTrailingZeros().toPlainString() + " requested");
             }
-            line.approvedPart = issue == line.part ? null : issue;
+            line.approvedPartId = issue.id() == requested.id() ? null : issue.id();
             line.quantityApproved = quantity;
         }
         for (PartsRequestLine line : request.lines) {
@@ -100,8 +105,9 @@ public class RequestService {
         }
         request.moveTo(full ? RequestStatus.APPROVED : RequestStatus.PARTLY_APPROVED, EnumSet.of(RequestStatus.RAISED),
                 currentUser.name(), body.note(), OffsetDateTime.now(clock));
-        audit.record("REQUEST_APPROVED", "parts_request", request.clientRef, before, RequestDtos.View.from(request));
-        return RequestDtos.View.from(request);
+        RequestDtos.View after = RequestDtos.View.from(request, names);
+        audit.record("REQUEST_APPROVED", "parts_request", request.clientRef, before, after);
+        return after;
     }
 
     @Transactional
@@ -110,7 +116,7 @@ public class RequestService {
         request.moveTo(RequestStatus.REFUSED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
                 RequestStatus.PARTLY_APPROVED), currentUser.name(), reason, OffsetDateTime.now(clock));
         audit.record("REQUEST_REFUSED", "parts_request", request.clientRef, null, reason);
-        return RequestDtos.View.from(request);
+        return view(request);
     }
 
     /** Issues the approved parts from the depot to the mechanic's kit, all lines in one transaction. */
@@ -119,17 +125,20 @@ public class RequestService {
         PartsRequest request = lockedForDepot(id);
         request.moveTo(RequestStatus.ISSUED, EnumSet.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED),
                 currentUser.name(), null, OffsetDateTime.now(clock));
+        RequestNames names = directory.of(List.of(request));
         for (PartsRequestLine line : request.lines) {
             if (line.quantityApproved.signum() > 0) {
-                ledger.postWithin(new MovementCommand(MovementKind.ISSUE_TO_KIT, line.partToIssue().partNumber,
-                        request.depot.code, request.kit.code, line.quantityApproved, null, "parts request",
+                ledger.postWithin(new MovementCommand(MovementKind.ISSUE_TO_KIT, names.partNumber(line.partIdToIssue()),
+                        names.locationCode(request.depotId), names.locationCode(request.kitId), line.quantityApproved,
+                        null, "parts request",
                         request.clientRef, IdempotencyKey.internal("request", request.id + ":" + line.id), null, null));
                 line.quantityIssued = line.quantityApproved;
             }
         }
         request.issuedAt = OffsetDateTime.now(clock);
-        audit.record("REQUEST_ISSUED", "parts_request", request.clientRef, null, RequestDtos.View.from(request));
-        return RequestDtos.View.from(request);
+        RequestDtos.View after = RequestDtos.View.from(request, names);
+        audit.record("REQUEST_ISSUED", "parts_request", request.clientRef, null, after);
+        return after;
     }
 
     /** The mechanic withdraws a request that has not been issued; its committed quantities are released. */
@@ -142,7 +151,7 @@ public class RequestService {
         request.moveTo(RequestStatus.CANCELLED, EnumSet.of(RequestStatus.RAISED, RequestStatus.APPROVED,
                 RequestStatus.PARTLY_APPROVED), currentUser.name(), reason, OffsetDateTime.now(clock));
         audit.record("REQUEST_CANCELLED", "parts_request", request.clientRef, null, reason);
-        return RequestDtos.View.from(request);
+        return view(request);
     }
 
     @Transactional
@@ -151,14 +160,14 @@ public class RequestService {
         requireParty(request);
         request.moveTo(RequestStatus.CLOSED, EnumSet.of(RequestStatus.ISSUED), currentUser.name(), null, OffsetDateTime.now(clock));
         audit.record("REQUEST_CLOSED", "parts_request", request.clientRef, null, null);
-        return RequestDtos.View.from(request);
+        return view(request);
     }
 
     @Transactional
     public RequestDtos.View get(long id) {
         PartsRequest request = requests.findByIdOptional(id).orElseThrow(() -> new EntityMissingException(null, "request", id));
         requireParty(request);
-        return RequestDtos.View.from(request);
+        return view(request);
     }
 
     /** Mechanics see their own requests; officers their depots'; leads and admins all. */
@@ -167,18 +176,23 @@ public class RequestService {
         AccessScope.Scope visible = scope.current();
         List<PartsRequest> all = status == null ? requests.listAll(Sort.descending("id"))
                 : requests.list("status", Sort.descending("id"), status);
-        return all.stream().filter(r -> visible.mechanic() != null ? r.mechanic.equals(visible.mechanic())
-                : visible.sees(r.depot.id)).map(RequestDtos.View::from).toList();
+        List<PartsRequest> seen = all.stream().filter(r -> visible.mechanic() != null
+                ? r.mechanic.equals(visible.mechanic()) : visible.sees(r.depotId)).toList();
+        RequestNames names = directory.of(seen);
+        return seen.stream().map(r -> RequestDtos.View.from(r, names)).toList();
     }
 
     /** Approved but not yet issued, keyed "depotCode|partNumber": stock promised to mechanics. */
     @Transactional
     public Map<String, BigDecimal> committed() {
         Map<String, BigDecimal> committed = new HashMap<>();
-        for (PartsRequest r : requests.list("status in ?1", List.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED))) {
+        List<PartsRequest> open = requests.list("status in ?1",
+                List.of(RequestStatus.APPROVED, RequestStatus.PARTLY_APPROVED));
+        RequestNames names = directory.of(open);
+        for (PartsRequest r : open) {
             for (PartsRequestLine l : r.lines) {
-                committed.merge(r.depot.code + "|" + l.partToIssue().partNumber, l.quantityApproved.subtract(l.quantityIssued),
-                        BigDecimal::add);
+                committed.merge(names.locationCode(r.depotId) + "|" + names.partNumber(l.partIdToIssue()),
+                        l.quantityApproved.subtract(l.quantityIssued), BigDecimal::add);
             }
         }
         return committed;
@@ -186,6 +200,10 @@ public class RequestService {
 
     List<PartsRequest> issuedSince(OffsetDateTime since) {
         return requests.list("issuedAt >= ?1", since);
+    }
+
+    private RequestDtos.View view(PartsRequest request) {
+        return RequestDtos.View.from(request, directory.of(List.of(request)));
     }
 
     private PartsRequest locked(long id) {
@@ -202,13 +220,13 @@ public class RequestService {
         if (scope.current().mechanic() != null) {
             throw new ForbiddenException("mechanics cannot approve, refuse or issue requests");
         }
-        scope.require(request.depot.id, request.depot.code);
+        scope.require(request.depotId, directory.locationCode(request.depotId));
         return request;
     }
 
     private void requireParty(PartsRequest request) {
         AccessScope.Scope visible = scope.current();
-        boolean party = visible.mechanic() != null ? request.mechanic.equals(visible.mechanic()) : visible.sees(request.depot.id);
+        boolean party = visible.mechanic() != null ? request.mechanic.equals(visible.mechanic()) : visible.sees(request.depotId);
         if (!party) {
             throw new ForbiddenException("request " + request.clientRef + " belongs to another mechanic or depot");
         }

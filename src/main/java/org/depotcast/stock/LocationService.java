@@ -15,6 +15,7 @@ import java.io.InputStream;
 import java.math.BigDecimal;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -46,6 +47,14 @@ public class LocationService {
     @Transactional
     public List<LocationSummary> summariesOfKind(LocationKind kind) {
         return locations.ofKind(kind).stream().map(LocationSummary::from).toList();
+    }
+
+    /** Every location as a record, keyed by id. */
+    @Transactional
+    public Map<Long, LocationSummary> summariesById() {
+        Map<Long, LocationSummary> byId = new java.util.HashMap<>();
+        locations.allByCode().forEach(location -> byId.put(location.id, LocationSummary.from(location)));
+        return byId;
     }
 
     /** The location with this code as a record; a 422 naming {@code field} when there is none. */
