@@ -2,11 +2,10 @@ package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.catalogue.BomLine;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.PartService;
-import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
+import org.depotcast.catalogue.PumpModelSummary;
 import org.depotcast.core.forecast.UsageTimeline;
 import org.depotcast.fleet.PumpPlanningRow;
 import org.depotcast.fleet.PumpService;
@@ -16,9 +15,9 @@ import org.depotcast.fleet.UsageService;
 import org.depotcast.repairs.ConsumptionRow;
 import org.depotcast.repairs.RepairKind;
 import org.depotcast.repairs.RepairService;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -79,33 +78,32 @@ public class FleetSnapshotLoader {
             consumption.add(new FleetSnapshot.Consumption(row.partId(), row.pumpId(), row.depotId(), row.mechanic(),
                     row.kind() == RepairKind.BREAKDOWN, row.on(), row.quantity().doubleValue()));
         }
-        Map<Long, PumpModel> modelsById = new HashMap<>();
-        models.all().forEach(m -> modelsById.put(m.id, m));
+        Map<Long, PumpModelSummary> modelsById = models.summariesById();
         List<Pump> register = new ArrayList<>();
         for (PumpPlanningRow row : pumps.planningRows()) {
             double depth = row.depthM().doubleValue();
-            PumpModel model = modelsById.get(row.modelId());
-            List<FleetSnapshot.BomPart> bom = new ArrayList<>(model.bom.size());
-            for (BomLine line : model.bom) {
-                bom.add(new FleetSnapshot.BomPart(line.part.id, line.part.family, line.serviceKitQuantity(depth)));
+            PumpModelSummary model = modelsById.get(row.modelId());
+            List<FleetSnapshot.BomPart> bom = new ArrayList<>(model.bom().size());
+            for (PumpModelSummary.Line line : model.bom()) {
+                bom.add(new FleetSnapshot.BomPart(line.partId(), line.family(), line.serviceKitQuantity(depth)));
             }
             register.add(new Pump(row.pumpId(), row.depotId(), row.mechanic(), depth, row.installedOn(),
-                    row.status() == PumpStatus.DECOMMISSIONED ? row.decommissionedOn() : null, model.serviceIntervalHours,
-                    row.usageHoursPerDay().doubleValue(), List.copyOf(bom)));
+                    row.status() == PumpStatus.DECOMMISSIONED ? row.decommissionedOn() : null,
+                    model.serviceIntervalHours(), row.usageHoursPerDay().doubleValue(), List.copyOf(bom)));
         }
         Map<String, String> kits = new HashMap<>();
         Map<Long, String> codes = new HashMap<>();
-        for (Location location : locations.all()) {
-            codes.put(location.id, location.code);
-            if (location.kind == LocationKind.KIT) {
-                kits.put(location.mechanicUsername, location.code);
+        for (LocationSummary location : locations.summaries()) {
+            codes.put(location.id(), location.code());
+            if (location.kind() == LocationKind.KIT) {
+                kits.put(location.mechanicUsername(), location.code());
             }
         }
         Map<Long, String> partNumbers = new HashMap<>();
         Map<Long, ComponentFamily> families = new HashMap<>();
-        parts.all().forEach(p -> {
-            partNumbers.put(p.id, p.partNumber);
-            families.put(p.id, p.family);
+        parts.summaries().forEach(p -> {
+            partNumbers.put(p.id(), p.partNumber());
+            families.put(p.id(), p.family());
         });
         return new Rows(readings, consumption, register, kits, codes, partNumbers, families);
     }

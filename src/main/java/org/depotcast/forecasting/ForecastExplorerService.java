@@ -2,8 +2,8 @@ package org.depotcast.forecasting;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.core.forecast.ErrorScores;
@@ -50,7 +50,7 @@ public class ForecastExplorerService {
 
     public ForecastExplorerResponse part(String partNumber, String location) {
         StoredForecastResponse f = queries.forPart(partNumber, location);
-        Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
+        PartSummary part = parts.requireSummary(null, partNumber);
         List<ForecastExplorerResponse.MonthRange> ranges = new ArrayList<>();
         for (StoredForecastResponse.Month m : f.forecast()) {
             ForecastRange r = m.range();
@@ -66,7 +66,7 @@ public class ForecastExplorerService {
                     method.name().equals(f.method()))));
         }
         String chosen = DemandAssembler.FLEET.equals(f.method()) ? "fleet model" : "history";
-        return new ForecastExplorerResponse(part.partNumber, part.description, part.unitOfIssue.name(), f.location(), f,
+        return new ForecastExplorerResponse(part.partNumber(), part.description(), part.unitOfIssue().name(), f.location(), f,
                 ranges, INTERVAL_MODEL, new ForecastExplorerResponse.Holdout(chosen, f.fleetRmsse(), f.historyRmsse(), HOLDOUT_BASIS),
                 methods, BACKTEST_BASIS);
     }

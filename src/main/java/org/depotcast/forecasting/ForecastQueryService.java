@@ -3,8 +3,8 @@ package org.depotcast.forecasting;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.ComponentFamily;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.QueryParams;
 import org.depotcast.core.forecast.FleetRateModel;
@@ -36,9 +36,9 @@ public class ForecastQueryService {
     /** Planning's view: the latest stored forecast of a part at a location, if any run has finished. */
     @Transactional
     public Optional<StoredForecastResponse> latest(String partNumber, String locationCode) {
-        Part part = parts.require("part", partNumber);
-        return repository.latestFinishedRun().flatMap(run -> repository.forecastOf(run.id, part.id, locationCode)
-                .map(f -> response(run, part.partNumber, f)));
+        PartSummary part = parts.requireSummary("part", partNumber);
+        return repository.latestFinishedRun().flatMap(run -> repository.forecastOf(run.id, part.id(), locationCode)
+                .map(f -> response(run, part.partNumber(), f)));
     }
 
     /** Expected demand of one part at a location, per month, as planning uses it. */
@@ -57,7 +57,7 @@ public class ForecastQueryService {
             return rates;
         }
         Map<Long, String> numbers = new java.util.HashMap<>();
-        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
         for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
             double[] monthly = f.monthlyForecast;
             int n = Math.max(1, Math.min(months, monthly.length));
@@ -88,7 +88,7 @@ public class ForecastQueryService {
             return rates;
         }
         Map<Long, String> numbers = new java.util.HashMap<>();
-        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
         for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
             rates.put(numbers.get(f.partId), new DemandRate(f.breakdownPerMonth, f.variancePerMonth, f.method));
         }
@@ -100,10 +100,10 @@ public class ForecastQueryService {
         String location = locationCode == null ? DemandAssembler.PROGRAMME : locationCode;
         requireVisible(location);
         ForecastRun run = latestRun();
-        Part part = parts.find(partNumber).orElseThrow(() -> new EntityMissingException(null, "part", partNumber));
-        PartForecast f = repository.forecastOf(run.id, part.id, location).orElseThrow(() ->
+        PartSummary part = parts.requireSummary(null, partNumber);
+        PartForecast f = repository.forecastOf(run.id, part.id(), location).orElseThrow(() ->
                 new EntityMissingException(null, "forecast of part at location", partNumber + " @ " + location));
-        return response(run, part.partNumber, f);
+        return response(run, part.partNumber(), f);
     }
 
     @Transactional
@@ -111,7 +111,7 @@ public class ForecastQueryService {
         requireVisible(locationCode);
         ForecastRun run = latestRun();
         Map<Long, String> numbers = new LinkedHashMap<>();
-        parts.all().forEach(p -> numbers.put(p.id, p.partNumber));
+        parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
         List<StoredForecastResponse> out = new ArrayList<>();
         for (PartForecast f : repository.forecastsAt(run.id, locationCode)) {
             out.add(response(run, numbers.get(f.partId), f));
@@ -164,8 +164,8 @@ public class ForecastQueryService {
             scope.requireProgramme();
             return;
         }
-        org.depotcast.stock.Location location = locations.require("location", locationCode);
-        scope.require(location.id, location.code);
+        org.depotcast.stock.LocationSummary location = locations.requireSummary("location", locationCode);
+        scope.require(location.id(), location.code());
     }
 
     private ForecastRun latestRun() {

@@ -49,6 +49,12 @@ public class LocationService {
         return locations.ofKind(kind).stream().map(LocationSummary::from).toList();
     }
 
+    /** Every location as a record, in code order. */
+    @Transactional
+    public List<LocationSummary> summaries() {
+        return locations.allByCode().stream().map(LocationSummary::from).toList();
+    }
+
     /** Every location as a record, keyed by id. */
     @Transactional
     public Map<Long, LocationSummary> summariesById() {
