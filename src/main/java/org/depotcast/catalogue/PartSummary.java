@@ -8,9 +8,9 @@ import java.math.BigDecimal;
  */
 public record PartSummary(long id, String partNumber, String description, ComponentFamily family,
                           UnitOfIssue unitOfIssue, BigDecimal unitCost, String currency, String supplier,
-                          int leadTimeDays) {
+                          int leadTimeDays, int packSize, int minOrderQty) {
     static PartSummary from(Part part) {
         return new PartSummary(part.id, part.partNumber, part.description, part.family, part.unitOfIssue, part.unitCost,
-                part.currency, part.supplier, part.leadTimeDays);
+                part.currency, part.supplier, part.leadTimeDays, part.packSize, part.minOrderQty);
     }
 }

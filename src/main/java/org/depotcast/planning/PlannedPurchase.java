@@ -2,16 +2,11 @@ package org.depotcast.planning;
 
 import jakarta.persistence.Column;
 import jakarta.persistence.Entity;
-import jakarta.persistence.FetchType;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
-import jakarta.persistence.JoinColumn;
-import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
-import org.depotcast.catalogue.Part;
-import org.depotcast.stock.Location;
 
 import java.math.BigDecimal;
 import java.time.OffsetDateTime;
@@ -23,12 +18,12 @@ public class PlannedPurchase {
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
     public Long id;
-    @ManyToOne(fetch = FetchType.EAGER, optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
-    @ManyToOne(fetch = FetchType.EAGER, optional = false)
-    @JoinColumn(name = "location_id")
-    public Location location;
+    /** The catalogue part to buy. */
+    @Column(name = "part_id", nullable = false)
+    public Long partId;
+    /** The store (a stock location: the central store or a depot) whose plan it is. */
+    @Column(name = "location_id", nullable = false)
+    public Long locationId;
     @Column(nullable = false)
     public BigDecimal quantity;
     public String note;

@@ -9,14 +9,10 @@ import java.util.Optional;
 @ApplicationScoped
 class PlannedPurchaseRepository implements PanacheRepository<PlannedPurchase> {
     List<PlannedPurchase> at(long locationId) {
-        return list("location.id = ?1 order by part.supplier, part.partNumber", locationId);
-    }
-
-    List<PlannedPurchase> everywhere() {
-        return list("order by location.code, part.supplier, part.partNumber");
+        return list("locationId", locationId);
     }
 
     Optional<PlannedPurchase> of(long partId, long locationId) {
-        return find("part.id = ?1 and location.id = ?2", partId, locationId).firstResultOptional();
+        return find("partId = ?1 and locationId = ?2", partId, locationId).firstResultOptional();
     }
 }

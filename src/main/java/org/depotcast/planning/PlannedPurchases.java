@@ -2,6 +2,7 @@ package org.depotcast.planning;
 
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.Digits;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.Bounds;
 import org.depotcast.common.PlanDate;
 import jakarta.validation.constraints.NotBlank;
@@ -33,9 +34,9 @@ public final class PlannedPurchases {
     public record Line(String partNumber, String description, String location, BigDecimal quantity, String supplier,
                        BigDecimal unitCost, String currency, int packSize, int minOrderQty, int leadTimeDays,
                        String note, String addedBy, OffsetDateTime addedAt) {
-        static Line from(PlannedPurchase p) {
-            return new Line(p.part.partNumber, p.part.description, p.location.code, p.quantity, p.part.supplier,
-                    p.part.unitCost, p.part.currency, p.part.packSize, p.part.minOrderQty, p.part.leadTimeDays, p.note,
+        static Line from(PlannedPurchase p, PartSummary part, String locationCode) {
+            return new Line(part.partNumber(), part.description(), locationCode, p.quantity, part.supplier(),
+                    part.unitCost(), part.currency(), part.packSize(), part.minOrderQty(), part.leadTimeDays(), p.note,
                     p.addedBy, p.addedAt);
         }
     }
