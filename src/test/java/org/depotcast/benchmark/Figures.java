@@ -21,6 +21,15 @@ final class Figures {
         return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
     }
 
+    /**
+     * Processor time this JVM has used, every thread, in seconds: beside the clock, a figure that other programs
+     * on a shared machine do not stretch (they still compete for caches, so it is not free of them either).
+     */
+    static double processCpuSeconds() {
+        return ((com.sun.management.OperatingSystemMXBean) java.lang.management.ManagementFactory
+                .getOperatingSystemMXBean()).getProcessCpuTime() / 1e9;
+    }
+
     static void report(String line) {
         System.out.println("BENCHMARK " + line);
         try {
