@@ -38,6 +38,7 @@ final class DemandAssembler {
     private final Map<String, double[]> fleetHoldout = new LinkedHashMap<>();
     /** First history month index of each series: its real start, see {@link #seriesStart}. */
     private final Map<String, Integer> firstMonth = new java.util.HashMap<>();
+    private final Map<Long, Map<String, String>> keys = new java.util.HashMap<>();
     private final FleetCredibility credibility;
     private final HorizonDemand horizonDemand;
     private Map<String, CredibilityWeight> weights = Map.of();
@@ -55,12 +56,17 @@ final class DemandAssembler {
         collect();
     }
 
-    /** Series keys are "partId|locationCode". */
-    private static String key(long partId, String location) {
-        return partId + "|" + location;
+    /**
+     * Series keys are "partId|locationCode", one String each: every pump adds to its parts' series a dozen times, and
+     * a key made afresh each time was hashed afresh (string hashing and map searches were most of assembling in a
+     * profile at 40 times the demo).
+     */
+    private String key(long partId, String location) {
+        return keys.computeIfAbsent(partId, p -> new java.util.HashMap<>())
+                .computeIfAbsent(location, l -> partId + "|" + l);
     }
 
-    private static List<String> keysOf(long partId, List<String> locations) {
+    private List<String> keysOf(long partId, List<String> locations) {
         return locations.stream().map(location -> key(partId, location)).toList();
     }
 
@@ -94,7 +100,7 @@ final class DemandAssembler {
         for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
             List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
             int installedMonth = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(pump.installedDay())));
-            credibility.addPump(pump, locations, part -> Long.toString(part.partId()));
+            credibility.addPump(pump, locations, (part, location) -> key(part.partId(), location));
             PumpMonths ahead = pump.endDay() > origin ? horizonDemand.monthsOf(pump) : null;
             for (FleetSnapshot.BomPart part : pump.bom()) {
                 addFleet(pump, part, locations, ahead);

@@ -22,7 +22,7 @@ public final class FleetOutlook {
     private final UsageOutlook usage;
     private final int yearMonths;
     /** Credibility ratio of each depot series, keyed part id|depot id (1 where absent). */
-    private final Map<String, Double> depotSeriesRatios;
+    private final Map<Long, Double> depotSeriesRatios;
 
     FleetOutlook(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
                  Map<ComponentFamily, FleetRateModel> models, int months) {
@@ -30,7 +30,7 @@ public final class FleetOutlook {
     }
 
     FleetOutlook(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
-                 Map<ComponentFamily, FleetRateModel> models, int months, Map<String, Double> depotSeriesRatios) {
+                 Map<ComponentFamily, FleetRateModel> models, int months, Map<Long, Double> depotSeriesRatios) {
         if (months < 1) {
             throw new IllegalArgumentException("months must be ≥ 1, was " + months);
         }
@@ -43,11 +43,12 @@ public final class FleetOutlook {
         }
         this.usage = new UsageOutlook(snapshot);
         this.yearMonths = Math.min(12, months);
-        this.depotSeriesRatios = Map.copyOf(depotSeriesRatios);
+        this.depotSeriesRatios = new java.util.HashMap<>(depotSeriesRatios);
     }
 
-    static String seriesKey(long partId, long depotId) {
-        return partId + "|" + depotId;
+    /** A depot series as one number (ids are positive and far below 2³²): read once per pump and part. */
+    static long seriesKey(long partId, long depotId) {
+        return partId << 32 | depotId;
     }
 
     /** The first day of the first month ahead: nothing on or after it was known. */

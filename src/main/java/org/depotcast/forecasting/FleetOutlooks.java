@@ -42,11 +42,11 @@ public class FleetOutlooks {
     }
 
     /** The credibility ratio of each depot series (programme and kit series left out), by {@link FleetOutlook#seriesKey}. */
-    private static Map<String, Double> depotRatios(FleetSnapshot snapshot, Map<String, CredibilityWeight> weights) {
+    private static Map<Long, Double> depotRatios(FleetSnapshot snapshot, Map<String, CredibilityWeight> weights) {
         Map<String, Long> depotIds = new HashMap<>();
         snapshot.locationCodes().forEach((id, code) -> depotIds.put(code, id));
         Set<String> kits = new HashSet<>(snapshot.kitByMechanic().values());
-        Map<String, Double> ratios = new HashMap<>();
+        Map<Long, Double> ratios = new HashMap<>();
         weights.forEach((key, weight) -> {
             int bar = key.indexOf('|');
             String location = key.substring(bar + 1);

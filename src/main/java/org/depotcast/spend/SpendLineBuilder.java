@@ -45,6 +45,16 @@ final class SpendLineBuilder {
     private final double[] familyUnits = new double[ComponentFamily.values().length];
 
     private record Cell(int period, long partId, String depot) {
+        /**
+         * Mixed, not the record's default sum of 31-multiples: periods, part ids and depot codes are small runs of
+         * numbers whose plain sums collide (period + 1 and part − 31 land together), which turned the cell map's
+         * buckets into trees and every lookup into a search.
+         */
+        @Override
+        public int hashCode() {
+            long h = (depot.hashCode() * 0x9E3779B97F4A7C15L + partId) * 0x9E3779B97F4A7C15L + period;
+            return (int) (h ^ (h >>> 32));
+        }
     }
 
     SpendLineBuilder(FleetOutlook outlook, Map<Long, PartSummary> partsById, ScenarioDefinition scenario,
