@@ -5,14 +5,14 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.repairs.PartsWaitService;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.time.Clock;
 import java.time.LocalDate;
@@ -67,10 +67,10 @@ public class AlertService {
         Map<String, AlertAction> latest = latestActions(locationCode);
         Map<String, List<ReorderAlert.WaitingPump>> waiting = waitingPumps(today);
         List<ReorderAlert> alerts = new ArrayList<>();
-        for (Location location : alertLocations(locationCode)) {
+        for (LocationSummary location : alertLocations(locationCode)) {
             for (ReorderAlert raised : raiseAt(location, waiting)) {
-                ReorderAlert alert = AlertActionFold.apply(raised, latest.get(raised.partNumber() + "|" + location.code),
-                        today, reviewDays(location));
+                ReorderAlert alert = AlertActionFold.apply(raised,
+                        latest.get(raised.partNumber() + "|" + location.code()), today, reviewDays(location));
                 if ((onlyKind == null || alert.has(onlyKind)) && (includeSnoozed || alert.snoozedUntil() == null)) {
                     alerts.add(alert);
                 }
@@ -81,32 +81,33 @@ public class AlertService {
         return alerts;
     }
 
-    private List<Location> alertLocations(String locationCode) {
+    private List<LocationSummary> alertLocations(String locationCode) {
         if (locationCode != null) {
-            Location location = locations.require("location", locationCode);
-            scope.require(location.id, location.code);
+            LocationSummary location = locations.requireSummary("location", locationCode);
+            scope.require(location.id(), location.code());
             return List.of(location);
         }
         var visible = scope.current();
-        List<Location> where = new ArrayList<>();
-        locations.ofKind(LocationKind.CENTRAL_STORE).stream().filter(l -> visible.sees(l.id)).forEach(where::add);
-        locations.ofKind(LocationKind.DEPOT).stream().filter(l -> visible.sees(l.id)).forEach(where::add);
+        List<LocationSummary> where = new ArrayList<>();
+        locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream().filter(l -> visible.sees(l.id()))
+                .forEach(where::add);
+        locations.summariesOfKind(LocationKind.DEPOT).stream().filter(l -> visible.sees(l.id())).forEach(where::add);
         if (visible.mechanic() != null) {
-            locations.kitOf(visible.mechanic()).ifPresent(where::add);
+            locations.kitSummaryOf(visible.mechanic()).ifPresent(where::add);
         }
         return where;
     }
 
     /** The alerts raised at one location; a kit's are ranked by breakdown risk alone. */
-    private List<ReorderAlert> raiseAt(Location location, Map<String, List<ReorderAlert.WaitingPump>> waiting) {
+    private List<ReorderAlert> raiseAt(LocationSummary location, Map<String, List<ReorderAlert.WaitingPump>> waiting) {
         Map<String, StockPolicy> breakdowns = new HashMap<>();
-        if (location.kind == LocationKind.KIT) {
+        if (location.kind() == LocationKind.KIT) {
             planning.policiesAt(location, true).forEach(p -> breakdowns.put(p.partNumber(), p));
         }
         List<ReorderAlert> raised = new ArrayList<>();
         for (StockPolicy p : planning.policiesAt(location, false)) {
-            ReorderAlert alert = AlertRules.raise(p, waiting.getOrDefault(location.code + "|" + p.partNumber(), List.of()),
-                    breakdowns.get(p.partNumber()));
+            ReorderAlert alert = AlertRules.raise(p,
+                    waiting.getOrDefault(location.code() + "|" + p.partNumber(), List.of()), breakdowns.get(p.partNumber()));
             if (alert != null) {
                 raised.add(alert);
             }
@@ -127,7 +128,7 @@ public class AlertService {
     /** The latest action per "partNumber|locationCode". */
     private Map<String, AlertAction> latestActions(String locationCode) {
         Map<Long, String> partNumbers = new HashMap<>();
-        parts.all().forEach(p -> partNumbers.put(p.id, p.partNumber));
+        parts.summaries().forEach(p -> partNumbers.put(p.id(), p.partNumber()));
         Map<String, AlertAction> latest = new HashMap<>();
         for (AlertAction a : actions.at(locationCode)) {
             latest.put(partNumbers.get(a.partId) + "|" + a.locationCode, a);
@@ -136,8 +137,8 @@ public class AlertService {
     }
 
     /** An acknowledgement holds until the location's next review. */
-    private int reviewDays(Location location) {
-        return location.kind == LocationKind.CENTRAL_STORE ? settings.centralReviewDays() : settings.depotReviewDays();
+    private int reviewDays(LocationSummary location) {
+        return location.kind() == LocationKind.CENTRAL_STORE ? settings.centralReviewDays() : settings.depotReviewDays();
     }
 
     /** One recorded acknowledgement or snooze; 404 when there is none, 403 when its location is out of scope. */
@@ -145,8 +146,8 @@ public class AlertService {
     public AlertAction action(long id) {
         AlertAction action = actions.findByIdOptional(id)
                 .orElseThrow(() -> new EntityMissingException(null, "alert action", id));
-        Location location = locations.require(null, action.locationCode);
-        scope.require(location.id, location.code);
+        LocationSummary location = locations.requireSummary(null, action.locationCode);
+        scope.require(location.id(), location.code());
         return action;
     }
 
@@ -158,19 +159,19 @@ public class AlertService {
     public AlertAction act(String partNumber, String locationCode, AlertKind kind, AlertAction.Action action,
                            LocalDate snoozeUntil, String note) {
         planning.requireForecasts();
-        Part part = parts.require("partNumber", partNumber);
-        Location location = locations.require("location", locationCode);
-        scope.require(location.id, location.code);
+        PartSummary part = parts.requireSummary("partNumber", partNumber);
+        LocationSummary location = locations.requireSummary("location", locationCode);
+        scope.require(location.id(), location.code());
         if (action == AlertAction.Action.SNOOZE && (snoozeUntil == null || !snoozeUntil.isAfter(LocalDate.now(clock)))) {
             throw new BusinessRuleException("snoozeUntil", "a snooze needs a date after today");
         }
         ReorderAlert alert = raiseAt(location, waitingPumps(LocalDate.now(clock))).stream()
-                .filter(a -> a.partNumber().equals(part.partNumber)).findFirst()
+                .filter(a -> a.partNumber().equals(part.partNumber())).findFirst()
                 .filter(a -> kind == null || a.has(kind))
-                .orElseThrow(() -> new EntityMissingException(null, "alert", part.partNumber + " at " + locationCode
+                .orElseThrow(() -> new EntityMissingException(null, "alert", part.partNumber() + " at " + locationCode
                         + (kind == null ? "" : " (" + kind + ")")));
         AlertAction record = new AlertAction();
-        record.partId = part.id;
+        record.partId = part.id();
         record.locationCode = locationCode;
         record.alertKind = alert.kind();
         record.reasons = AlertActionFold.join(alert.reasons());

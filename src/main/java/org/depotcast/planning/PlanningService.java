@@ -3,14 +3,14 @@ package org.depotcast.planning;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.NoForecastYetException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.forecasting.ForecastQueryService;
 import org.depotcast.stock.BalanceView;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.StockQueryService;
@@ -71,8 +71,8 @@ public class PlanningService {
     @Transactional
     public List<StockPolicy> policies(String locationCode) {
         requireForecasts();
-        Location location = locations.require("location", locationCode);
-        scope.require(location.id, location.code);
+        LocationSummary location = locations.requireSummary("location", locationCode);
+        scope.require(location.id(), location.code());
         return policiesAt(location, false);
     }
 
@@ -84,32 +84,32 @@ public class PlanningService {
     }
 
     /** Policies at a location in scope; with {@code breakdownsOnly}, from breakdown demand alone (no services). */
-    List<StockPolicy> policiesAt(Location location, boolean breakdownsOnly) {
-        if (location.kind == LocationKind.IN_TRANSIT) {
+    List<StockPolicy> policiesAt(LocationSummary location, boolean breakdownsOnly) {
+        if (location.kind() == LocationKind.IN_TRANSIT) {
             throw new InvalidInputException("location", "stock in transit has no reorder policy");
         }
-        String forecastKey = location.kind == LocationKind.CENTRAL_STORE ? PROGRAMME : location.code;
-        int horizonMonths = location.kind == LocationKind.KIT ? 2 : 3;
+        String forecastKey = location.kind() == LocationKind.CENTRAL_STORE ? PROGRAMME : location.code();
+        int horizonMonths = location.kind() == LocationKind.KIT ? 2 : 3;
         Map<String, ForecastQueryService.DemandRate> demand = breakdownsOnly ? forecasts.breakdownsAt(forecastKey)
                 : forecasts.demandAt(forecastKey, horizonMonths);
         Map<String, double[]> onHandOnOrder = new HashMap<>();
-        for (BalanceView b : stock.balances(location.code)) {
+        for (BalanceView b : stock.balances(location.code())) {
             onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
         }
         Map<String, java.math.BigDecimal> committed = requests.committed();
         PolicyCalculator.ServiceLevels levels = serviceLevels(null);
         List<StockPolicy> policies = new ArrayList<>();
-        for (Part part : parts.all()) {
-            ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
-            double[] held = onHandOnOrder.get(part.partNumber);
+        for (PartSummary part : parts.summaries()) {
+            ForecastQueryService.DemandRate rate = demand.get(part.partNumber());
+            double[] held = onHandOnOrder.get(part.partNumber());
             if (rate == null && held == null) {
                 continue;
             }
-            policies.add(calculator.policy(part, location.code, location.kind, rate == null ? 0 : rate.monthlyMean(),
-                    rate == null ? 0 : rate.monthlyVariance(), rate == null ? AlertRules.NO_FORECAST : rate.method(),
-                    held == null ? 0 : held[0], held == null ? 0 : held[1],
-                    committed.getOrDefault(location.code + "|" + part.partNumber, java.math.BigDecimal.ZERO).doubleValue(),
-                    levels));
+            policies.add(calculator.policy(part, location.code(), location.kind(),
+                    rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
+                    rate == null ? AlertRules.NO_FORECAST : rate.method(), held == null ? 0 : held[0],
+                    held == null ? 0 : held[1], committed.getOrDefault(location.code() + "|" + part.partNumber(),
+                            java.math.BigDecimal.ZERO).doubleValue(), levels));
         }
         return policies;
     }
@@ -129,7 +129,7 @@ public class PlanningService {
         scope.requireProgramme();
         requireForecasts();
         PolicyCalculator.ServiceLevels levels = serviceLevels(serviceLevel);
-        Location central = locations.ofKind(LocationKind.CENTRAL_STORE).stream().findFirst()
+        LocationSummary central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream().findFirst()
                 .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
         Map<String, double[]> echelon = new HashMap<>();
@@ -140,10 +140,10 @@ public class PlanningService {
         }
         // Committed stock stays inside the programme (depot to kit), so the echelon position does not change.
         List<StockPolicy> policies = new ArrayList<>();
-        for (Part part : parts.all()) {
-            ForecastQueryService.DemandRate rate = demand.get(part.partNumber);
-            double[] held = echelon.getOrDefault(part.partNumber, new double[3]);
-            policies.add(calculator.policy(part, central.code, LocationKind.CENTRAL_STORE,
+        for (PartSummary part : parts.summaries()) {
+            ForecastQueryService.DemandRate rate = demand.get(part.partNumber());
+            double[] held = echelon.getOrDefault(part.partNumber(), new double[3]);
+            policies.add(calculator.policy(part, central.code(), LocationKind.CENTRAL_STORE,
                     rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
                     rate == null ? AlertRules.NO_FORECAST : rate.method(), held[0], held[1], 0, levels));
         }

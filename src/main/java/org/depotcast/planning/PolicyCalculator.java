@@ -1,6 +1,6 @@
 package org.depotcast.planning;
 
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.core.policy.DemandDistribution;
 import org.depotcast.core.policy.ReplenishmentPolicy;
 import org.depotcast.stock.LocationKind;
@@ -26,13 +26,13 @@ final class PolicyCalculator {
 
     /** Service levels in force: for critical parts and the rest. */
     record ServiceLevels(double critical, double standard) {
-        double of(Part part) {
-            return part.critical ? critical : standard;
+        double of(PartSummary part) {
+            return part.critical() ? critical : standard;
         }
     }
 
-    StockPolicy policy(Part part, String locationCode, LocationKind level, double monthlyMean, double monthlyVariance,
-                       String method, double onHand, double onOrder, double committed, ServiceLevels levels) {
+    StockPolicy policy(PartSummary part, String locationCode, LocationKind level, double monthlyMean,
+                       double monthlyVariance, String method, double onHand, double onOrder, double committed, ServiceLevels levels) {
         ReplenishmentPolicy.Level planned = switch (level) {
             case CENTRAL_STORE -> ReplenishmentPolicy.Level.CENTRAL_STORE;
             case DEPOT -> ReplenishmentPolicy.Level.DEPOT;
@@ -40,15 +40,15 @@ final class PolicyCalculator {
             // Refused before it gets here (PlanningService): stock on the road is not replenished.
             case IN_TRANSIT -> throw new IllegalArgumentException("stock in transit has no reorder policy");
         };
-        ReplenishmentPolicy.Item item = new ReplenishmentPolicy.Item(part.leadTimeDays, part.unitCost.doubleValue(),
-                part.packSize, part.minOrderQty, part.shelfLifeDays);
+        ReplenishmentPolicy.Item item = new ReplenishmentPolicy.Item(part.leadTimeDays(), part.unitCost().doubleValue(),
+                part.packSize(), part.minOrderQty(), part.shelfLifeDays());
         double serviceLevel = levels.of(part);
         ReplenishmentPolicy.Result r = ReplenishmentPolicy.of(planned, item, monthlyMean, monthlyVariance, serviceLevel,
                 onHand, onOrder, committed, settings);
-        return new StockPolicy(part.partNumber, locationCode, level.name(), part.critical, serviceLevel,
+        return new StockPolicy(part.partNumber(), locationCode, level.name(), part.critical(), serviceLevel,
                 r.protectionDays(), r.dailyDemand(), r.demandMean(), r.demandVariance(), r.distribution(),
                 r.reorderPoint(), r.orderQuantity(), r.orderUpTo(), onHand, onOrder, committed, r.position(),
-                r.expectedShortUnits(), r.pumpDaysAtRisk(), method, part.shelfLifeDays, part.unitCost.doubleValue(),
-                part.currency, part.packSize, part.minOrderQty, part.supplier, r.orderUpToRule());
+                r.expectedShortUnits(), r.pumpDaysAtRisk(), method, part.shelfLifeDays(), part.unitCost().doubleValue(),
+                part.currency(), part.packSize(), part.minOrderQty(), part.supplier(), r.orderUpToRule());
     }
 }
