@@ -44,15 +44,17 @@ class BatchThroughputBenchmark {
     void batchThroughputAgainstRAndAMillionSeriesInBoundedMemory() throws Exception {
         Path small = write(SERIES, 11);
         Path forR = write(R_SERIES, 11); // the same seed: R's series are the first 5,000 of the service's
-        double[] ours = new double[ROUNDS], theirs = new double[ROUNDS];
+        double[][] ours = new double[2][ROUNDS], theirs = new double[2][ROUNDS];
         try (RCrostonRounds r = RCrostonRounds.start(forR)) {
-            seriesPerSecond(small); // warm-up: the JIT compiles the path first
+            post(small, ours, 0); // warm-up: the JIT compiles the path first
             if (r != null) {
                 r.round(); // and R compiles croston2 to byte code
             }
             for (int round = 0; round < ROUNDS; round++) {
-                ours[round] = seriesPerSecond(small);
-                theirs[round] = r == null ? Double.NaN : r.round();
+                post(small, ours, round);
+                RCrostonRounds.Round their = r == null ? new RCrostonRounds.Round(Double.NaN, Double.NaN) : r.round();
+                theirs[0][round] = their.perSecond();
+                theirs[1][round] = their.perCpuSecond();
             }
         }
         Figures.report(throughputLine(Files.size(small), ours, theirs));
@@ -70,28 +72,41 @@ class BatchThroughputBenchmark {
         Files.delete(million);
     }
 
-    private double seriesPerSecond(Path csv) throws IOException {
-        long start = System.nanoTime();
+    /**
+     * Posts the file and keeps its series per second of elapsed time and of the JVM's processor time (every thread:
+     * the service, its HTTP layer, the garbage collector and this benchmark's client).
+     */
+    private void post(Path csv, double[][] rates, int round) throws IOException {
+        com.sun.management.OperatingSystemMXBean os = (com.sun.management.OperatingSystemMXBean)
+                ManagementFactory.getOperatingSystemMXBean();
+        long start = System.nanoTime(), cpu = os.getProcessCpuTime();
         assertEquals((long) SERIES * 12 + 1, post(csv));
-        return SERIES / ((System.nanoTime() - start) / 1e9);
+        rates[0][round] = SERIES / ((System.nanoTime() - start) / 1e9);
+        rates[1][round] = SERIES / ((os.getProcessCpuTime() - cpu) / 1e9);
     }
 
-    private static String throughputLine(long bytes, double[] ours, double[] theirs) {
+    private static String throughputLine(long bytes, double[][] ours, double[][] theirs) {
+        String against = Double.isNaN(theirs[0][0]) ? "R not measured (no Rscript)" : String.format("R forecast 8.20 "
+                + "point-only Croston on %,d of the same series %s; per second of processor time (the JVM's every "
+                + "thread against R's user + system time): %s", R_SERIES, compared(ours[0], theirs[0]),
+                compared(ours[1], theirs[1]));
+        return String.format("Batch Croston through HTTP, %,d series × %d months (%.0f MB), %d rounds timed alternately "
+                + "with R after one warm-up each: median %,.0f series/s (%.2f s); %s", SERIES, MONTHS, bytes / 1e6, ROUNDS,
+                Figures.median(ours[0]), SERIES / Figures.median(ours[0]), against);
+    }
+
+    /** Both medians, the ratio of the medians, the range of the rounds' own ratios and every round's pair. */
+    private static String compared(double[] ours, double[] theirs) {
         StringBuilder rounds = new StringBuilder();
         double[] ratios = new double[ROUNDS];
         for (int i = 0; i < ROUNDS; i++) {
             ratios[i] = ours[i] / theirs[i];
             rounds.append(String.format("%s%,.0f / %,.0f", i == 0 ? "" : "; ", ours[i], theirs[i]));
         }
-        double[] sorted = ratios.clone();
-        java.util.Arrays.sort(sorted);
-        String against = Double.isNaN(theirs[0]) ? "R not measured (no Rscript)" : String.format("R forecast 8.20 "
-                + "point-only Croston on %,d of the same series median %,.0f series/s; ratio of medians %.0f× (rounds' "
-                + "own ratios %.0f–%.0f×); rounds, ours / R's series per second: %s", R_SERIES, Figures.median(theirs),
-                Figures.median(ours) / Figures.median(theirs), sorted[0], sorted[ROUNDS - 1], rounds);
-        return String.format("Batch Croston through HTTP, %,d series × %d months (%.0f MB), %d rounds timed alternately "
-                + "with R after one warm-up each: median %,.0f series/s (%.2f s); %s", SERIES, MONTHS, bytes / 1e6, ROUNDS,
-                Figures.median(ours), SERIES / Figures.median(ours), against);
+        java.util.Arrays.sort(ratios);
+        return String.format("median %,.0f series/s against ours %,.0f: ratio of medians %.0f× (rounds' own ratios "
+                + "%.0f–%.0f×; ours / R's: %s)", Figures.median(theirs), Figures.median(ours),
+                Figures.median(ours) / Figures.median(theirs), ratios[0], ratios[ROUNDS - 1], rounds);
     }
 
     /**

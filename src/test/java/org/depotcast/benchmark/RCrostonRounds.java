@@ -11,7 +11,7 @@ import java.nio.file.Path;
 /**
  * R forecast 8.20's point-only Croston ({@code croston-throughput.R}) kept running between rounds: it reads the series
  * once, then times one pass over all of them each time {@link #round()} asks, while the caller times its own rounds
- * in between. R's figure is R's own (the elapsed time of its loop, reading the file not counted).
+ * in between. R's figures are R's own (the elapsed and processor time of its loop, reading the file not counted).
  */
 final class RCrostonRounds implements AutoCloseable {
     private final Process r;
@@ -42,16 +42,21 @@ final class RCrostonRounds implements AutoCloseable {
         return rounds;
     }
 
-    /** One timed pass of R over every series: its series per second. */
-    double round() throws IOException {
+    /** R's series per second of elapsed time and per second of its own processor time (user + system). */
+    record Round(double perSecond, double perCpuSecond) {
+    }
+
+    /** One timed pass of R over every series. */
+    Round round() throws IOException {
         in.write("go\n");
         in.flush();
         String line = out.readLine();
         String[] parts = line == null ? new String[0] : line.strip().split("\\s+");
-        if (parts.length != 2) {
+        if (parts.length != 3) {
             throw new IllegalStateException("Rscript answered: " + line);
         }
-        return Double.parseDouble(parts[0]) / Double.parseDouble(parts[1]);
+        double series = Double.parseDouble(parts[0]);
+        return new Round(series / Double.parseDouble(parts[1]), series / Double.parseDouble(parts[2]));
     }
 
     @Override
