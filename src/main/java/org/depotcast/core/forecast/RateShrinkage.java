@@ -18,14 +18,14 @@ public final class RateShrinkage {
      * @return the shrunk rate ratio of each group (multiply the fleet model's rate by it)
      */
     /**
-     * Whether the groups differ by more than chance, judged like the covariates ({@link CovariateSelection}): a
-     * multiplier per group (its maximum-likelihood value O_i/E_i) lowers the Poisson deviance by
-     * 2 Σ [O_i ln(O_i/E_i) − (O_i − E_i)], and is kept only when that drop exceeds BIC's penalty (groups − 1)·ln(rows)
-     * (Schwarz 1978). With three depots, the moment estimate of the spread alone comes out positive for about one
+     * Whether the groups differ by more than chance, judged by BIC as the covariates are ({@link CovariateSelection}),
+     * but with n the rows fitted (the covariates' n, the number of events, was not measured here): a multiplier per
+     * group (its maximum-likelihood value O_i/E_i) lowers the Poisson deviance by 2 Σ [O_i ln(O_i/E_i) − (O_i − E_i)],
+     * and is kept only when that drop exceeds BIC's penalty (groups − 1)·ln(rows) (Schwarz 1978). With three depots, the moment estimate of the spread alone comes out positive for about one
      * family in five that has no depot effect, and a large family then takes its noise almost unshrunk into every
      * depot's forecast.
      *
-     * @param rows       the rows the fleet model was fitted on (the n of its BIC)
+     * @param rows       the rows the fleet model was fitted on
      * @param dispersion the fit's variance factor (1, or the quasi-Poisson dispersion): the drop is scaled by it
      */
     public static boolean groupsDiffer(double[] observed, double[] expected, int rows, double dispersion) {
