@@ -2,8 +2,8 @@ package org.depotcast.planning;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import org.depotcast.forecasting.ForecastQueryService;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.StockedParts;
 
 import java.util.Set;
@@ -19,12 +19,12 @@ class PolicyStockedParts implements StockedParts {
     }
 
     @Override
-    public Set<String> stockedAt(Location location) {
-        if (location.kind == LocationKind.IN_TRANSIT) {
+    public Set<String> stockedAt(LocationSummary location) {
+        if (location.kind() == LocationKind.IN_TRANSIT) {
             return Set.of();
         }
-        String key = location.kind == LocationKind.CENTRAL_STORE ? PlanningService.PROGRAMME : location.code;
-        return forecasts.demandAt(key, location.kind == LocationKind.KIT ? 2 : 3).entrySet().stream()
+        String key = location.kind() == LocationKind.CENTRAL_STORE ? PlanningService.PROGRAMME : location.code();
+        return forecasts.demandAt(key, location.kind() == LocationKind.KIT ? 2 : 3).entrySet().stream()
                 .filter(e -> e.getKey() != null && e.getValue().monthlyMean() > 0).map(java.util.Map.Entry::getKey)
                 .collect(Collectors.toSet());
     }

@@ -9,7 +9,6 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
-import org.depotcast.catalogue.Part;
 
 import java.math.BigDecimal;
 
@@ -23,9 +22,9 @@ public class PurchasePlanLine {
     @ManyToOne(fetch = FetchType.LAZY, optional = false)
     @JoinColumn(name = "purchase_plan_id")
     public PurchasePlan plan;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue part bought. */
+    @Column(name = "part_id", nullable = false)
+    public Long partId;
     @Column(nullable = false)
     public int packs;
     @Column(nullable = false)

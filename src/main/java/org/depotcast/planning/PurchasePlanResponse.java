@@ -1,9 +1,12 @@
 package org.depotcast.planning;
 
+import org.depotcast.catalogue.PartSummary;
+
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Map;
 
 /**
  * A purchase plan: {@code lines} to buy; {@code leftOut}, what the plan did not buy of parts that stay below their
@@ -21,8 +24,8 @@ public record PurchasePlanResponse(long id, String status, LocalDate planningDat
     public record Line(String partNumber, String description, String supplier, int packs, BigDecimal quantity,
                        BigDecimal cost, double positionBefore, double reorderPoint, double orderUpTo,
                        double shortfallAfter) {
-        static Line from(PurchasePlanLine l) {
-            return new Line(l.part.partNumber, l.part.description, l.part.supplier, l.packs, l.quantity, l.cost,
+        static Line from(PurchasePlanLine l, PartSummary part) {
+            return new Line(part.partNumber(), part.description(), part.supplier(), l.packs, l.quantity, l.cost,
                     l.positionBefore, l.reorderPoint, l.orderUpTo, l.shortfallAfter);
         }
     }
@@ -33,9 +36,9 @@ public record PurchasePlanResponse(long id, String status, LocalDate planningDat
      */
     public record LeftOut(String partNumber, String description, String supplier, BigDecimal quantity, BigDecimal cost,
                           String currency, String reason, double positionAfter, double reorderPoint) {
-        static LeftOut from(PurchasePlanLine l) {
-            return new LeftOut(l.part.partNumber, l.part.description, l.part.supplier, l.unfundedQuantity,
-                    l.part.unitCost.multiply(l.unfundedQuantity).setScale(2, RoundingMode.HALF_UP), l.part.currency,
+        static LeftOut from(PurchasePlanLine l, PartSummary part) {
+            return new LeftOut(part.partNumber(), part.description(), part.supplier(), l.unfundedQuantity,
+                    part.unitCost().multiply(l.unfundedQuantity).setScale(2, RoundingMode.HALF_UP), part.currency(),
                     l.leftOutReason, l.positionBefore + l.quantity.doubleValue(), l.reorderPoint);
         }
     }
@@ -45,13 +48,15 @@ public record PurchasePlanResponse(long id, String status, LocalDate planningDat
                             double after, String statement) {
     }
 
-    static PurchasePlanResponse from(PurchasePlan p) {
+    /** The plan with its lines' parts, read as records by part id. */
+    static PurchasePlanResponse from(PurchasePlan p, Map<Long, PartSummary> parts) {
         return new PurchasePlanResponse(p.id, p.status.name(), p.planningDate, p.budget, p.currency, p.spent,
                 objective(p), p.pumpDaysBefore, p.pumpDaysAfter,
-                p.lines.stream().filter(l -> l.packs > 0).map(Line::from).toList(),
+                p.lines.stream().filter(l -> l.packs > 0).map(l -> Line.from(l, parts.get(l.partId))).toList(),
                 p.lines.stream().filter(l -> l.leftOutReason != null && !"NO_FORECAST".equals(l.leftOutReason)
-                        && l.unfundedQuantity.signum() > 0).map(LeftOut::from).toList(),
-                p.lines.stream().filter(l -> "NO_FORECAST".equals(l.leftOutReason)).map(l -> l.part.partNumber).toList(),
+                        && l.unfundedQuantity.signum() > 0).map(l -> LeftOut.from(l, parts.get(l.partId))).toList(),
+                p.lines.stream().filter(l -> "NO_FORECAST".equals(l.leftOutReason)).map(l -> parts.get(l.partId).partNumber())
+                        .toList(),
                 CAUTION);
     }
 

@@ -5,6 +5,7 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.CsvExport;
@@ -22,6 +23,7 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -89,7 +91,7 @@ public class PurchasePlanService {
         plan.spent = addFundedLines(plan, priced, allocation.unitsPerItem());
         addUnweighedLines(plan, policies, currency);
         plans.persist(plan);
-        return PurchasePlanResponse.from(plan);
+        return PurchasePlanResponse.from(plan, partsById());
     }
 
     /** The priced parts' lines (skipping those bought nothing and above their reorder point); returns their cost. */
@@ -137,7 +139,7 @@ public class PurchasePlanService {
     private PurchasePlanLine line(PurchasePlan plan, StockPolicy p, long units) {
         PurchasePlanLine line = new PurchasePlanLine();
         line.plan = plan;
-        line.part = parts.require("partNumber", p.partNumber());
+        line.partId = parts.requireSummary("partNumber", p.partNumber()).id();
         line.packs = (int) (units / p.packSize());
         line.quantity = BigDecimal.valueOf(units);
         line.cost = BigDecimal.valueOf(p.unitCost()).multiply(line.quantity).setScale(2, RoundingMode.HALF_UP);
@@ -151,7 +153,7 @@ public class PurchasePlanService {
     @Transactional
     public PurchasePlanResponse get(long id) {
         scope.requireProgramme();
-        return PurchasePlanResponse.from(require(id));
+        return PurchasePlanResponse.from(require(id), partsById());
     }
 
     /** Places one purchase order per supplier for the plan's lines, in one transaction; a plan is accepted once. */
@@ -166,20 +168,23 @@ public class PurchasePlanService {
             throw new ConflictException("id", "purchase plan " + id + " was already accepted");
         }
         String central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).get(0).code();
+        Map<Long, PartSummary> parts = partsById();
         Map<String, List<PurchasePlanLine>> bySupplier = new LinkedHashMap<>();
-        plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> bySupplier.computeIfAbsent(l.part.supplier, k -> new ArrayList<>()).add(l));
+        plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> bySupplier
+                .computeIfAbsent(parts.get(l.partId).supplier(), k -> new ArrayList<>()).add(l));
         if (bySupplier.isEmpty()) {
             throw new BusinessRuleException("id", "purchase plan " + id + " buys nothing");
         }
         int n = 0;
         for (Map.Entry<String, List<PurchasePlanLine>> supplier : bySupplier.entrySet()) {
-            int leadDays = supplier.getValue().stream().mapToInt(l -> l.part.leadTimeDays).max().orElse(0);
+            int leadDays = supplier.getValue().stream().mapToInt(l -> parts.get(l.partId).leadTimeDays()).max()
+                    .orElse(0);
             orders.place(new PurchaseOrderRequest("PP" + id + "-" + (++n), supplier.getKey(), central, plan.planningDate,
                     plan.planningDate.plusDays(leadDays), supplier.getValue().stream()
-                    .map(l -> new PurchaseOrderRequest.Line(l.part.partNumber, l.quantity)).toList()));
+                    .map(l -> new PurchaseOrderRequest.Line(parts.get(l.partId).partNumber(), l.quantity)).toList()));
         }
         plan.status = PurchasePlan.Status.ACCEPTED;
-        PurchasePlanResponse accepted = PurchasePlanResponse.from(plan);
+        PurchasePlanResponse accepted = PurchasePlanResponse.from(plan, parts);
         audit.record("PURCHASE_PLAN_ACCEPTED", "purchase_plan", Long.toString(id), null, accepted);
         return accepted;
     }
@@ -189,16 +194,27 @@ public class PurchasePlanService {
     public CsvExport exportCsv(long id) {
         scope.requireProgramme();
         PurchasePlan plan = require(id);
-        PurchasePlanResponse response = PurchasePlanResponse.from(plan);
+        Map<Long, PartSummary> parts = partsById();
+        PurchasePlanResponse response = PurchasePlanResponse.from(plan, parts);
         List<String> columns = List.of("part_number", "description", "supplier", "packs", "quantity", "unit_cost", "cost",
                 "currency");
         List<List<?>> rows = new ArrayList<>();
-        plan.lines.stream().filter(l -> l.packs > 0).forEach(l -> rows.add(List.of(l.part.partNumber,
-                l.part.description, l.part.supplier, l.packs, l.quantity.toPlainString(), l.part.unitCost.toPlainString(),
-                l.cost.toPlainString(), plan.currency)));
+        for (PurchasePlanLine l : plan.lines) {
+            PartSummary part = parts.get(l.partId);
+            if (l.packs > 0) {
+                rows.add(List.of(part.partNumber(), part.description(), part.supplier(), l.packs,
+                        l.quantity.toPlainString(), part.unitCost().toPlainString(), l.cost.toPlainString(), plan.currency));
+            }
+        }
         rows.add(List.of("objective", response.objective().statement(), "", "", "", "", "", ""));
         rows.add(List.of("caution", response.caution(), "", "", "", "", "", ""));
         return new CsvExport("purchase-plan-" + id + ".csv", columns, rows);
+    }
+
+    private Map<Long, PartSummary> partsById() {
+        Map<Long, PartSummary> byId = new HashMap<>();
+        parts.summaries().forEach(p -> byId.put(p.id(), p));
+        return byId;
     }
 
     private PurchasePlan require(long id) {

@@ -114,7 +114,7 @@ public class StockCountService {
             locations.all().stream().filter(l -> visible.sees(l.id)).forEach(sheetLocations::add);
         }
         for (Location location : sheetLocations) {
-            for (String partNumber : stocked.stockedAt(location)) {
+            for (String partNumber : stocked.stockedAt(LocationSummary.from(location))) {
                 rows.putIfAbsent(location.code + "\u0000" + partNumber, List.of(location.code, partNumber, "0", today,
                         descriptions.getOrDefault(partNumber, "")));
             }

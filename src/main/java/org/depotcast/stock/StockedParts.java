@@ -7,5 +7,5 @@ import java.util.Set;
  * Planning implements it (stock does not depend on planning).
  */
 public interface StockedParts {
-    Set<String> stockedAt(Location location);
+    Set<String> stockedAt(LocationSummary location);
 }
