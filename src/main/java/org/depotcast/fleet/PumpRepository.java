@@ -46,10 +46,10 @@ class PumpRepository implements PanacheRepository<Pump> {
     }
 
     /** One row per pump for sensor intake. See {@link PumpService#intakeRows()}. */
-    List<Object[]> intakeRows() {
+    List<PumpIntakeRow> intakeRows() {
         return getEntityManager().createQuery("""
-                select p.id, p.assetId, p.installedOn, p.model.id, p.depot.id, p.assignedMechanic from Pump p""",
-                Object[].class).getResultList();
+                select new org.depotcast.fleet.PumpIntakeRow(p.id, p.assetId, p.installedOn, p.model.id, p.depot.id,
+                       p.assignedMechanic) from Pump p""", PumpIntakeRow.class).getResultList();
     }
 
     List<Pump> search(Long depotId, PumpStatus status) {

@@ -87,11 +87,8 @@ public class PumpService {
         return pumps.planningRows();
     }
 
-    /**
-     * Every pump as a plain row, for sensor intake (tens of thousands of pumps, no entities): id, asset id, installed
-     * on, pump model id, depot id, assigned mechanic.
-     */
-    public List<Object[]> intakeRows() {
+    /** Every pump as a record, for sensor intake (tens of thousands of pumps, no entities). */
+    public List<PumpIntakeRow> intakeRows() {
         return pumps.intakeRows();
     }
 

@@ -1,6 +1,7 @@
 package org.depotcast.sensors;
 
 import org.depotcast.access.AccessScope;
+import org.depotcast.fleet.PumpIntakeRow;
 
 import java.time.LocalDate;
 import java.util.HashMap;
@@ -21,16 +22,11 @@ final class PumpIndex {
         this.byAssetId = byAssetId;
     }
 
-    /** @param rows id, asset id, installed on, pump model id, depot id, assigned mechanic (fleet's intake rows) */
-    static PumpIndex of(List<Object[]> rows, AccessScope.Scope scope) {
+    static PumpIndex of(List<PumpIntakeRow> rows, AccessScope.Scope scope) {
         Map<String, PumpFacts> index = new HashMap<>(rows.size() * 2);
-        for (Object[] r : rows) {
-            long depotId = (Long) r[4];
-            String mechanic = (String) r[5];
-            boolean visible = scope.everything()
-                    || (scope.mechanic() != null ? scope.mechanic().equals(mechanic) : scope.sees(depotId));
-            index.put((String) r[1], new PumpFacts((Long) r[0], (String) r[1], (LocalDate) r[2], (Long) r[3], depotId,
-                    visible));
+        for (PumpIntakeRow r : rows) {
+            index.put(r.assetId(), new PumpFacts(r.id(), r.assetId(), r.installedOn(), r.modelId(), r.depotId(),
+                    r.visibleTo(scope)));
         }
         return new PumpIndex(index);
     }
