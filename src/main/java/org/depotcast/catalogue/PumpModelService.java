@@ -60,6 +60,12 @@ public class PumpModelService {
         return byId;
     }
 
+    /** Every model's code keyed by its id (one light query, no bills of materials). */
+    @Transactional
+    public Map<Long, String> codesById() {
+        return models.codesById();
+    }
+
     /** The model with this code as a record; a 422 naming {@code field} when there is none. */
     @Transactional
     public PumpModelSummary requireSummary(String field, String code) {

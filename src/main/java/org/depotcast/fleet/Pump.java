@@ -7,12 +7,8 @@ import jakarta.persistence.Enumerated;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
-import jakarta.persistence.JoinColumn;
-import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
-import org.depotcast.catalogue.PumpModel;
-import org.depotcast.stock.Location;
 
 import java.math.BigDecimal;
 import java.time.LocalDate;
@@ -29,18 +25,18 @@ public class Pump {
     public Long id;
     @Column(name = "asset_id", nullable = false, unique = true)
     public String assetId;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "pump_model_id")
-    public PumpModel model;
+    /** The catalogue's pump model (its id: the catalogue's entity stays in the catalogue). */
+    @Column(name = "pump_model_id", nullable = false)
+    public long modelId;
     @Column(name = "depth_m", nullable = false)
     public BigDecimal depthM;
     @Column(name = "installed_on", nullable = false)
     public LocalDate installedOn;
     public BigDecimal latitude;
     public BigDecimal longitude;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "depot_id")
-    public Location depot;
+    /** The stock location of the depot the pump belongs to (its id, read as a record through stock). */
+    @Column(name = "depot_id", nullable = false)
+    public long depotId;
     @Column(name = "assigned_mechanic")
     public String assignedMechanic;
     @Enumerated(EnumType.STRING)
@@ -62,11 +58,6 @@ public class Pump {
     public UsageSource usageSource;
     @Version
     public long version;
-
-    /** The code of the depot the pump belongs to, for features that report it without reading the location. */
-    public String depotCode() {
-        return depot.code;
-    }
 
     /** Keeps status and its dates consistent: a broken pump says since when, a decommissioned one when. */
     void setStatus(PumpStatus newStatus, LocalDate since, String note) {

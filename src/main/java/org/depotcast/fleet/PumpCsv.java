@@ -2,13 +2,11 @@ package org.depotcast.fleet;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.catalogue.PumpModel;
-import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvImport;
 import org.depotcast.common.CsvImporter;
 import org.depotcast.common.CsvRow;
-import org.depotcast.stock.Location;
+import org.depotcast.stock.LocationSummary;
 
 import java.io.InputStream;
 import java.math.BigDecimal;
@@ -28,13 +26,11 @@ public class PumpCsv {
             "usage_source");
 
     private final PumpService pumps;
-    private final PumpModelService models;
     private final PumpStatusService status;
     private final CsvImporter importer;
 
-    PumpCsv(PumpService pumps, PumpModelService models, PumpStatusService status, CsvImporter importer) {
+    PumpCsv(PumpService pumps, PumpStatusService status, CsvImporter importer) {
         this.pumps = pumps;
-        this.models = models;
         this.status = status;
         this.importer = importer;
     }
@@ -46,8 +42,8 @@ public class PumpCsv {
     @Transactional
     public int importCsv(InputStream csv) {
         Map<String, Pump> registered = new HashMap<>();
-        Map<String, PumpModel> modelCache = new HashMap<>();
-        Map<String, Location> depotCache = new HashMap<>();
+        Map<String, Long> modelCache = new HashMap<>();
+        Map<String, LocationSummary> depotCache = new HashMap<>();
         Set<String> seen = new HashSet<>();
         List<Pump> updated = new ArrayList<>();
         return importer.run(csv, CsvImport.of(COLUMNS.subList(0, 4), row -> read(row, seen))
@@ -62,7 +58,7 @@ public class PumpCsv {
                         updated.add(pump);
                     }
                     pumps.save(pump, request, modelCache.computeIfAbsent(request.modelCode(),
-                                    c -> models.require("modelCode", c)),
+                                    c -> pumps.modelId("modelCode", c)),
                             depotCache.computeIfAbsent(request.depotCode(), c -> pumps.depot("depotCode", c)));
                 })
                 // A row cannot make a pump WORKING while one of its breakdown repairs is open: the repairs decide.
@@ -82,10 +78,11 @@ public class PumpCsv {
     }
 
     public CsvExport exportCsv() {
+        PumpCodes codes = pumps.codes();
         return CsvExport.of("pumps.csv", COLUMNS, pumps.search(null, null), p -> Arrays.asList(p.assetId,
-                p.model.code, p.depthM.toPlainString(), p.installedOn, plain(p.latitude), plain(p.longitude),
-                p.depot.code, p.assignedMechanic == null ? "" : p.assignedMechanic, p.status,
-                p.statusSince == null ? "" : p.statusSince, p.usageHoursPerDay.toPlainString(), p.usageSource));
+                codes.modelCode(p.modelId), p.depthM.toPlainString(), p.installedOn, plain(p.latitude),
+                plain(p.longitude), codes.depotCode(p.depotId), p.assignedMechanic == null ? "" : p.assignedMechanic,
+                p.status, p.statusSince == null ? "" : p.statusSince, p.usageHoursPerDay.toPlainString(), p.usageSource));
     }
 
     private static String plain(BigDecimal value) {

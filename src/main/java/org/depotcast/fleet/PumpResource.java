@@ -47,13 +47,13 @@ class PumpResource {
 
     @GET
     public List<PumpResponse> list(@QueryParam("depot") String depot, @QueryParam("status") String status) {
-        return pumps.search(depot, QueryParams.optionalEnum("status", status, PumpStatus.class)).stream().map(PumpResponse::from).toList();
+        return pumps.responses(pumps.search(depot, QueryParams.optionalEnum("status", status, PumpStatus.class)));
     }
 
     @GET
     @Path("{assetId}")
     public PumpResponse get(@PathParam("assetId") String assetId) {
-        return PumpResponse.from(pumps.requireVisible(null, assetId));
+        return pumps.response(pumps.requireVisible(null, assetId));
     }
 
     @POST
@@ -62,7 +62,7 @@ class PumpResource {
     public Response register(@Valid @NotNull PumpRequest request, UriInfo uri) {
         Pump pump = pumps.register(request);
         return Response.created(uri.getAbsolutePathBuilder().path(pump.assetId).build())
-                .entity(PumpResponse.from(pump)).build();
+                .entity(pumps.response(pump)).build();
     }
 
     /** Changes only the fields sent; fields left out keep their values (PUT and PATCH alike). */
@@ -71,7 +71,7 @@ class PumpResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public PumpResponse update(@PathParam("assetId") String assetId, @Valid @NotNull PumpUpdate request) {
-        return PumpResponse.from(pumps.update(assetId, request));
+        return pumps.response(pumps.update(assetId, request));
     }
 
     @PATCH
@@ -79,7 +79,7 @@ class PumpResource {
     @Consumes({MediaType.APPLICATION_JSON, "application/merge-patch+json"})
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public PumpResponse patch(@PathParam("assetId") String assetId, @Valid @NotNull PumpUpdate request) {
-        return PumpResponse.from(pumps.update(assetId, request));
+        return pumps.response(pumps.update(assetId, request));
     }
 
     /** A mechanic's report that an assigned pump is broken or working again, without the whole pump record. */
@@ -88,7 +88,7 @@ class PumpResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.MECHANIC, Roles.STORES_OFFICER, Roles.ADMIN})
     public PumpResponse reportStatus(@PathParam("assetId") String assetId, @Valid @NotNull StatusReport report) {
-        return PumpResponse.from(status.report(assetId, report));
+        return pumps.response(status.report(assetId, report));
     }
 
     @GET

@@ -9,9 +9,10 @@ public record PumpResponse(String assetId, String modelCode, BigDecimal depthM, 
                            PumpStatus status, LocalDate statusSince, String statusNote, LocalDate brokenSince,
                            LocalDate decommissionedOn, BigDecimal usageHoursPerDay, UsageSource usageSource,
                            long version) {
-    static PumpResponse from(Pump p) {
-        return new PumpResponse(p.assetId, p.model.code, p.depthM, p.installedOn, p.latitude, p.longitude,
-                p.depot.code, p.assignedMechanic, p.status, p.statusSince, p.statusNote, p.brokenSince,
+    /** The pump with its model's and depot's codes, as {@link PumpCodes} reads them. */
+    static PumpResponse from(Pump p, PumpCodes codes) {
+        return new PumpResponse(p.assetId, codes.modelCode(p.modelId), p.depthM, p.installedOn, p.latitude, p.longitude,
+                codes.depotCode(p.depotId), p.assignedMechanic, p.status, p.statusSince, p.statusNote, p.brokenSince,
                 p.decommissionedOn, p.usageHoursPerDay, p.usageSource, p.version);
     }
 }

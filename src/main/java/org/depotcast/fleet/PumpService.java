@@ -3,14 +3,13 @@ package org.depotcast.fleet;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.PumpModel;
 import org.depotcast.catalogue.PumpModelService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.time.Clock;
 import java.time.LocalDate;
@@ -43,12 +42,27 @@ public class PumpService {
     public List<Pump> search(String depotCode, PumpStatus status) {
         Long depotId = null;
         if (depotCode != null) {
-            Location depot = locations.require("depot", depotCode);
-            scope.require(depot.id, depot.code);
-            depotId = depot.id;
+            LocationSummary depot = locations.requireSummary("depot", depotCode);
+            scope.require(depot.id(), depot.code());
+            depotId = depot.id();
         }
         AccessScope.Scope visible = scope.current();
         return pumps.search(depotId, status).stream().filter(p -> visible(visible, p)).toList();
+    }
+
+    /** The codes of every pump model and depot by id, read once for the answers about one pump or a list. */
+    PumpCodes codes() {
+        return new PumpCodes(models.codesById(), locations.codesById());
+    }
+
+    /** Pumps as the API shows them, the model and depot codes read once for the whole list. */
+    List<PumpResponse> responses(List<Pump> list) {
+        PumpCodes codes = codes();
+        return list.stream().map(codes::response).toList();
+    }
+
+    PumpResponse response(Pump pump) {
+        return codes().response(pump);
     }
 
     public boolean visible(Pump pump) {
@@ -62,7 +76,7 @@ public class PumpService {
     }
 
     private static boolean visible(AccessScope.Scope scope, Pump pump) {
-        return scope.everything() || visible(scope, pump.assignedMechanic, pump.depot.id);
+        return scope.everything() || visible(scope, pump.assignedMechanic, pump.depotId);
     }
 
     /** Whether a pump assigned to this mechanic at this depot is the caller's to see. */
@@ -96,6 +110,10 @@ public class PumpService {
         return pumps.search(null, null);
     }
 
+    Pump byId(long id) {
+        return pumps.findById(id);
+    }
+
     public Optional<Pump> find(String assetId) {
         return pumps.byAssetId(assetId);
     }
@@ -109,13 +127,13 @@ public class PumpService {
         if (pumps.byAssetId(request.assetId()).isPresent()) {
             throw new ConflictException("assetId", "pump '" + request.assetId() + "' is already registered");
         }
-        return save(new Pump(), request, models.require("modelCode", request.modelCode()),
+        return save(new Pump(), request, modelId("modelCode", request.modelCode()),
                 depot("depotCode", request.depotCode()));
     }
 
     /** Registers a new pump or replaces every field of a registered one; both of its depots must be the caller's. */
-    Pump save(Pump pump, PumpRequest request, PumpModel model, Location depot) {
-        apply(pump, request, model, depot);
+    Pump save(Pump pump, PumpRequest request, long modelId, LocationSummary depot) {
+        apply(pump, request, modelId, depot);
         if (pump.id == null) {
             pumps.persist(pump);
         }
@@ -129,14 +147,14 @@ public class PumpService {
         if (u.assetId() != null && !assetId.equals(u.assetId())) {
             throw new ConflictException("assetId", "the asset id in the body must match the one in the path");
         }
-        PumpResponse before = PumpResponse.from(pump);
+        PumpResponse before = response(pump);
         if (u.modelCode() != null) {
-            pump.model = models.require("modelCode", u.modelCode());
+            pump.modelId = modelId("modelCode", u.modelCode());
         }
         if (u.depotCode() != null) {
-            Location depot = depot("depotCode", u.depotCode());
-            scope.require(depot.id, depot.code);
-            pump.depot = depot;
+            LocationSummary depot = depot("depotCode", u.depotCode());
+            scope.require(depot.id(), depot.code());
+            pump.depotId = depot.id();
         }
         pump.depthM = u.depthM() != null ? u.depthM() : pump.depthM;
         pump.installedOn = u.installedOn() != null ? u.installedOn() : pump.installedOn;
@@ -178,10 +196,15 @@ public class PumpService {
         pump.setStatus(status, since == null ? LocalDate.now(clock) : since, note);
     }
 
-    Location depot(String field, String code) {
-        Location location = locations.require(field, code);
-        if (location.kind != LocationKind.DEPOT) {
-            throw new BusinessRuleException(field, "'" + code + "' is a " + location.kind + ", not a depot");
+    /** The id of the pump model with this code; a 422 naming {@code field} when there is none. */
+    long modelId(String field, String code) {
+        return models.requireSummary(field, code).id();
+    }
+
+    LocationSummary depot(String field, String code) {
+        LocationSummary location = locations.requireSummary(field, code);
+        if (location.kind() != LocationKind.DEPOT) {
+            throw new BusinessRuleException(field, "'" + code + "' is a " + location.kind() + ", not a depot");
         }
         return location;
     }
@@ -190,25 +213,25 @@ public class PumpService {
      * The depot a pump leaves and the depot it goes to must both be the caller's, on every path that places a pump
      * (registration, a JSON update, an import row): reading another depot's pump is refused, so is moving it.
      */
-    private void requireMayPlace(Pump pump, Location depot) {
+    private void requireMayPlace(Pump pump, LocationSummary depot) {
         if (pump.id != null && !visible(pump)) {
-            throw new io.quarkus.security.ForbiddenException("pump '" + pump.assetId + "' is at depot '" + pump.depot.code
-                    + "', outside the locations assigned to you");
+            throw new io.quarkus.security.ForbiddenException("pump '" + pump.assetId + "' is at depot '"
+                    + locations.codesById().get(pump.depotId) + "', outside the locations assigned to you");
         }
-        scope.require(depot.id, depot.code);
+        scope.require(depot.id(), depot.code());
     }
 
-    private void apply(Pump pump, PumpRequest r, PumpModel model, Location depot) {
+    private void apply(Pump pump, PumpRequest r, long modelId, LocationSummary depot) {
         requireMayPlace(pump, depot);
         audit.record(pump.id == null ? "PUMP_REGISTERED" : "PUMP_UPDATED", "pump", r.assetId(),
-                pump.id == null ? null : PumpResponse.from(pump), r);
+                pump.id == null ? null : response(pump), r);
         pump.assetId = r.assetId();
-        pump.model = model;
+        pump.modelId = modelId;
         pump.depthM = r.depthM();
         pump.installedOn = r.installedOn();
         pump.latitude = r.latitude();
         pump.longitude = r.longitude();
-        pump.depot = depot;
+        pump.depotId = depot.id();
         pump.assignedMechanic = r.assignedMechanic();
         PumpStatus status = r.status() == null ? PumpStatus.WORKING : r.status();
         if (status != PumpStatus.WORKING && r.statusSince() == null) {

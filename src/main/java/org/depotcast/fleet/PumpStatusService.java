@@ -8,6 +8,8 @@ import org.depotcast.common.ConflictException;
 
 import java.time.LocalDate;
 import java.util.Collection;
+import java.util.HashSet;
+import java.util.Set;
 import java.util.Map;
 
 /**
@@ -32,10 +34,24 @@ public class PumpStatusService {
     /** Brings one pump's status in line with its repairs, after a repair was recorded or changed. */
     @Transactional(Transactional.TxType.MANDATORY)
     public void followRepairs(Pump pump) {
-        PumpResponse before = PumpResponse.from(pump);
+        PumpCodes codes = pumps.codes();
+        PumpResponse before = codes.response(pump);
         if (follow(pump, repairs.factsOf(pump.id))) {
-            audit.record("PUMP_STATUS_FOLLOWED_REPAIR", "pump", pump.assetId, before, PumpResponse.from(pump));
+            audit.record("PUMP_STATUS_FOLLOWED_REPAIR", "pump", pump.assetId, before, codes.response(pump));
         }
+    }
+
+    /** {@link #followRepairs(Pump)} for the pump with this id (a repair holds its pump's id). */
+    @Transactional(Transactional.TxType.MANDATORY)
+    public void followRepairsOf(long pumpId) {
+        followRepairs(pumps.byId(pumpId));
+    }
+
+    /** {@link #followRepairs(Collection)} for the pumps with these ids (a repair import's pumps). */
+    @Transactional(Transactional.TxType.MANDATORY)
+    public int followRepairsOf(Collection<Long> pumpIds) {
+        Set<Long> wanted = new HashSet<>(pumpIds);
+        return followRepairs(pumps.all().stream().filter(p -> wanted.contains(p.id)).toList());
     }
 
     /** The same for many pumps at once (imports); returns how many changed. The import's own audit entry covers it. */
@@ -91,11 +107,12 @@ public class PumpStatusService {
         if (report.since().isBefore(pump.installedOn)) {
             throw new BusinessRuleException("since", "is before the pump was installed on " + pump.installedOn);
         }
-        PumpResponse before = PumpResponse.from(pump);
+        PumpCodes codes = pumps.codes();
+        PumpResponse before = codes.response(pump);
         if (report.status() == pump.status) {
             if (pump.statusSince == null || report.since().isBefore(pump.statusSince)) {
                 pump.setStatus(pump.status, report.since(), report.note() == null ? pump.statusNote : report.note());
-                audit.record("PUMP_STATUS_REPORTED", "pump", assetId, before, PumpResponse.from(pump));
+                audit.record("PUMP_STATUS_REPORTED", "pump", assetId, before, codes.response(pump));
             }
             return pump;
         }
@@ -104,7 +121,7 @@ public class PumpStatusService {
                     + pump.statusSince + "; a report dated " + report.since() + " is older and cannot change it");
         }
         pumps.change(pump, report.status(), report.since(), report.note());
-        audit.record("PUMP_STATUS_REPORTED", "pump", assetId, before, PumpResponse.from(pump));
+        audit.record("PUMP_STATUS_REPORTED", "pump", assetId, before, codes.response(pump));
         return pump;
     }
 }

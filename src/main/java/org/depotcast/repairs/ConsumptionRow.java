@@ -10,4 +10,12 @@ import java.time.LocalDate;
  */
 public record ConsumptionRow(long partId, long pumpId, long depotId, String mechanic, RepairKind kind, LocalDate on,
                              BigDecimal quantity) {
+    /** As the repair tables hold it, before the pump's depot is read from fleet (the repository's query). */
+    ConsumptionRow(long partId, long pumpId, String mechanic, RepairKind kind, LocalDate on, BigDecimal quantity) {
+        this(partId, pumpId, 0, mechanic, kind, on, quantity);
+    }
+
+    ConsumptionRow atDepot(long depotId) {
+        return new ConsumptionRow(partId, pumpId, depotId, mechanic, kind, on, quantity);
+    }
 }

@@ -8,12 +8,9 @@ import jakarta.persistence.Enumerated;
 import jakarta.persistence.GeneratedValue;
 import jakarta.persistence.GenerationType;
 import jakarta.persistence.Id;
-import jakarta.persistence.JoinColumn;
-import jakarta.persistence.ManyToOne;
 import jakarta.persistence.OneToMany;
 import jakarta.persistence.OrderBy;
 import jakarta.persistence.Table;
-import org.depotcast.fleet.Pump;
 
 import java.time.LocalDate;
 import java.time.temporal.ChronoUnit;
@@ -33,9 +30,9 @@ public class Repair {
     public Long id;
     @Column(name = "repair_ref", nullable = false, unique = true)
     public String repairRef;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "pump_id")
-    public Pump pump;
+    /** The fleet's pump (its id: the pump entity stays in fleet, read as a record through PumpQueryService). */
+    @Column(name = "pump_id", nullable = false)
+    public long pumpId;
     @Column(nullable = false)
     public String mechanic;
     @Enumerated(EnumType.STRING)

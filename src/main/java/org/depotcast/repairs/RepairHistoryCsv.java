@@ -3,8 +3,8 @@ package org.depotcast.repairs;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AuditService;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvImport;
@@ -13,9 +13,9 @@ import org.depotcast.common.CsvRow;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
-import org.depotcast.fleet.Pump;
-import org.depotcast.fleet.PumpService;
+import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.fleet.PumpStatusService;
+import org.depotcast.fleet.PumpSummary;
 
 import java.io.InputStream;
 import java.math.BigDecimal;
@@ -36,13 +36,13 @@ public class RepairHistoryCsv {
             "diagnosed_on", "parts_available_on", "fixed_on", "fault", "part_number", "quantity");
 
     private final RepairRepository repairs;
-    private final PumpService pumps;
+    private final PumpQueryService pumps;
     private final PartService parts;
     private final AuditService audit;
     private final PumpStatusService pumpStatus;
     private final CsvImporter importer;
 
-    RepairHistoryCsv(RepairRepository repairs, PumpService pumps, PartService parts, AuditService audit,
+    RepairHistoryCsv(RepairRepository repairs, PumpQueryService pumps, PartService parts, AuditService audit,
                      PumpStatusService pumpStatus, CsvImporter importer) {
         this.repairs = repairs;
         this.pumps = pumps;
@@ -93,21 +93,21 @@ public class RepairHistoryCsv {
 
     /** One history import: pumps, parts and stored references read once, so thousands of repairs cost no lookups. */
     private final class HistoryImport {
-        private final Map<String, Pump> pumpsById = new HashMap<>();
-        private final Map<String, Part> partsByNumber = new HashMap<>();
-        private final java.util.Set<String> touched = new java.util.HashSet<>();
+        private final Map<String, PumpSummary> pumpsById = new HashMap<>();
+        private final Map<String, PartSummary> partsByNumber = new HashMap<>();
+        private final java.util.Set<Long> touched = new java.util.HashSet<>();
         private java.util.Set<String> storedRefs;
-        private java.util.function.Predicate<Pump> visible;
+        private java.util.function.Predicate<PumpSummary> visible;
         private int written;
 
         void add(RepairRequest request) {
             if (storedRefs == null) {
-                pumps.all().forEach(p -> pumpsById.put(p.assetId, p));
-                parts.all().forEach(p -> partsByNumber.put(p.partNumber, p));
+                pumps.all().forEach(p -> pumpsById.put(p.assetId(), p));
+                parts.summaries().forEach(p -> partsByNumber.put(p.partNumber(), p));
                 storedRefs = repairs.allRefs();
                 visible = pumps.visibleFilter();
             }
-            Pump pump = pumpsById.get(request.assetId());
+            PumpSummary pump = pumpsById.get(request.assetId());
             if (pump == null) {
                 throw new EntityMissingException("assetId", "pump", request.assetId());
             }
@@ -123,22 +123,23 @@ public class RepairHistoryCsv {
             if (dateProblem != null) {
                 throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
             }
-            Repair repair = newRepair(request, pump, request.mechanic());
+            Repair repair = newRepair(request, pump.id(), request.mechanic());
             repair.ledgerPosted = false;
             for (int i = 0; i < request.lines().size(); i++) {
                 RepairRequest.Line l = request.lines().get(i);
-                Part part = partsByNumber.get(l.partNumber());
+                PartSummary part = partsByNumber.get(l.partNumber());
                 if (part == null) {
                     throw new EntityMissingException("lines[" + i + "].partNumber", "part", l.partNumber());
                 }
-                BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(), part.wholeUnits());
-                if (repair.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
-                    throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber
+                BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", l.quantity(),
+                        part.unitOfIssue().wholeUnits());
+                if (repair.lines.stream().anyMatch(existing -> existing.partId == part.id())) {
+                    throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber()
                             + "' appears twice in repair '" + request.repairRef() + "'");
                 }
-                repair.addLine(line(part, quantity));
+                repair.addLine(line(part.id(), quantity));
             }
-            touched.add(pump.assetId);
+            touched.add(pump.id());
             repairs.persist(repair);
             if (++written % 500 == 0) {
                 repairs.flush();
@@ -150,19 +151,23 @@ public class RepairHistoryCsv {
             repairs.flush();
             audit.record("REPAIRS_IMPORTED", "repair", written + " repairs", null, Map.of("repairs", written));
             // Each pump takes the status its repairs imply (an open breakdown: broken; else working since the last fix).
-            pumpStatus.followRepairs(pumps.all().stream().filter(p -> touched.contains(p.assetId)).toList());
+            pumpStatus.followRepairsOf(touched);
         }
     }
 
     public CsvExport exportCsv() {
         List<List<?>> rows = new ArrayList<>();
         var visible = pumps.visibleFilter();
-        for (Repair r : repairs.allInOrder().stream().filter(r -> visible.test(r.pump)).toList()) {
+        Map<Long, PumpSummary> pumpsById = new HashMap<>();
+        pumps.all().forEach(p -> pumpsById.put(p.id(), p));
+        Map<Long, String> partNumbers = new HashMap<>();
+        parts.summaries().forEach(p -> partNumbers.put(p.id(), p.partNumber()));
+        for (Repair r : repairs.allInOrder().stream().filter(r -> visible.test(pumpsById.get(r.pumpId))).toList()) {
             List<RepairLine> lines = r.lines.isEmpty() ? java.util.Collections.singletonList(null) : r.lines;
             for (RepairLine l : lines) {
-                rows.add(java.util.Arrays.asList(r.repairRef, r.pump.assetId, r.mechanic, r.kind, r.reportedOn,
+                rows.add(java.util.Arrays.asList(r.repairRef, pumpsById.get(r.pumpId).assetId(), r.mechanic, r.kind, r.reportedOn,
                         blank(r.diagnosedOn), blank(r.partsAvailableOn), blank(r.fixedOn), r.fault == null ? "" : r.fault,
-                        l == null ? "" : l.part.partNumber, l == null ? "" : l.quantity.stripTrailingZeros().toPlainString()));
+                        l == null ? "" : partNumbers.get(l.partId), l == null ? "" : l.quantity.stripTrailingZeros().toPlainString()));
             }
         }
         return new CsvExport("repairs.csv", CSV_COLUMNS, rows);

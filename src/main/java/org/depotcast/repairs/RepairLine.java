@@ -9,7 +9,6 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
-import org.depotcast.catalogue.Part;
 
 import java.math.BigDecimal;
 
@@ -23,9 +22,9 @@ public class RepairLine {
     @ManyToOne(fetch = FetchType.LAZY, optional = false)
     @JoinColumn(name = "repair_id")
     public Repair repair;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue's part (its id, read as a record through PartService). */
+    @Column(name = "part_id", nullable = false)
+    public long partId;
     @Column(nullable = false)
     public BigDecimal quantity;
 }

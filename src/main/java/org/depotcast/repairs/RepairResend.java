@@ -16,9 +16,14 @@ final class RepairResend {
     private RepairResend() {
     }
 
-    /** The first field that differs, or null when the resend is the stored repair. */
-    static String firstDifference(Repair stored, RepairRequest resend) {
-        if (!stored.pump.assetId.equals(resend.assetId())) {
+    /**
+     * The first field that differs, or null when the resend is the stored repair.
+     *
+     * @param assetId     the stored repair's pump
+     * @param partNumbers part numbers by part id (the stored lines hold ids)
+     */
+    static String firstDifference(Repair stored, String assetId, RepairRequest resend, Map<Long, String> partNumbers) {
+        if (!assetId.equals(resend.assetId())) {
             return "assetId";
         }
         if (stored.kind != resend.kind()) {
@@ -39,15 +44,15 @@ final class RepairResend {
             return "fault";
         }
         List<RepairRequest.Line> lines = resend.lines() == null ? List.of() : resend.lines();
-        if (!lines.isEmpty() && !sameLines(stored.lines, lines)) {
+        if (!lines.isEmpty() && !sameLines(stored.lines, lines, partNumbers)) {
             return "lines";
         }
         return null;
     }
 
-    static boolean sameLines(List<RepairLine> stored, List<RepairRequest.Line> sent) {
+    static boolean sameLines(List<RepairLine> stored, List<RepairRequest.Line> sent, Map<Long, String> partNumbers) {
         Map<String, BigDecimal> kept = new HashMap<>();
-        stored.forEach(l -> kept.put(l.part.partNumber, l.quantity));
+        stored.forEach(l -> kept.put(partNumbers.get(l.partId), l.quantity));
         if (kept.size() != sent.size()) {
             return false;
         }

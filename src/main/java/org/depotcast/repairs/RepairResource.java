@@ -37,14 +37,13 @@ class RepairResource {
     public List<RepairResponse> list(@QueryParam("asset") String asset, @QueryParam("since") String since,
                                      @QueryParam("limit") String limit, @QueryParam("open") String open) {
         return service.search(asset, QueryParams.optionalDate("since", since),
-                        QueryParams.intInRange("limit", limit, 200, 1, 10_000), QueryParams.optionalBoolean("open", open))
-                .stream().map(RepairResponse::from).toList();
+                QueryParams.intInRange("limit", limit, 200, 1, 10_000), QueryParams.optionalBoolean("open", open));
     }
 
     @GET
     @Path("{repairRef}")
     public RepairResponse get(@PathParam("repairRef") String repairRef) {
-        return RepairResponse.from(service.get(repairRef));
+        return service.get(repairRef);
     }
 
     /** 201 for a new repair; 200 with the stored one when the phone resends the same reference. */

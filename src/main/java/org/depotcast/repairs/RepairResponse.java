@@ -1,8 +1,11 @@
 package org.depotcast.repairs;
 
+import org.depotcast.fleet.PumpSummary;
+
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Map;
 
 public record RepairResponse(String repairRef, String assetId, String depotCode, String mechanic, RepairKind kind,
                              LocalDate reportedOn, LocalDate diagnosedOn, LocalDate partsAvailableOn,
@@ -11,9 +14,10 @@ public record RepairResponse(String repairRef, String assetId, String depotCode,
     public record Line(String partNumber, BigDecimal quantity) {
     }
 
-    public static RepairResponse from(Repair r) {
-        return new RepairResponse(r.repairRef, r.pump.assetId, r.pump.depotCode(), r.mechanic, r.kind, r.reportedOn,
+    /** The repair with its pump's asset id and depot code as fleet's record gives them, its parts' numbers by id. */
+    static RepairResponse from(Repair r, PumpSummary pump, Map<Long, String> partNumbers) {
+        return new RepairResponse(r.repairRef, pump.assetId(), pump.depotCode(), r.mechanic, r.kind, r.reportedOn,
                 r.diagnosedOn, r.partsAvailableOn, r.fixedOn, r.fault, r.ledgerPosted, r.daysWaitingForParts(),
-                r.downtimeDays(), r.lines.stream().map(l -> new Line(l.part.partNumber, l.quantity)).toList());
+                r.downtimeDays(), r.lines.stream().map(l -> new Line(partNumbers.get(l.partId), l.quantity)).toList());
     }
 }

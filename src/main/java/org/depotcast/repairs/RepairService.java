@@ -5,16 +5,17 @@ import jakarta.transaction.Transactional;
 import org.depotcast.common.IdempotencyKey;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.access.Roles;
-import org.depotcast.catalogue.Part;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
 import org.depotcast.common.Quantities;
-import org.depotcast.fleet.Pump;
+import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.fleet.PumpService;
 import org.depotcast.fleet.PumpStatusService;
+import org.depotcast.fleet.PumpSummary;
 import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.MovementCommand;
@@ -24,14 +25,20 @@ import org.depotcast.stock.StockLedgerService;
 import java.math.BigDecimal;
 import java.time.LocalDate;
 import java.time.ZoneOffset;
+import java.util.ArrayList;
+import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
+import java.util.Set;
 
 /** Repair records, and the consumption each fixed repair posts to the ledger from the mechanic's kit. */
 @ApplicationScoped
 public class RepairService {
     private final RepairRepository repairs;
-    private final PumpService pumps;
+    private final PumpQueryService pumps;
+    private final PumpService pumpRegister;
     private final PartService parts;
     private final LocationService locations;
     private final StockLedgerService ledger;
@@ -39,13 +46,14 @@ public class RepairService {
     private final org.depotcast.access.AuditService audit;
     private final PumpStatusService pumpStatus;
 
-    RepairService(RepairRepository repairs, PumpService pumps, PartService parts, LocationService locations,
-                  StockLedgerService ledger, CurrentUser currentUser, org.depotcast.access.AuditService audit,
-                  PumpStatusService pumpStatus) {
+    RepairService(RepairRepository repairs, PumpQueryService pumps, PumpService pumpRegister, PartService parts,
+                  LocationService locations, StockLedgerService ledger, CurrentUser currentUser,
+                  org.depotcast.access.AuditService audit, PumpStatusService pumpStatus) {
         this.audit = audit;
         this.pumpStatus = pumpStatus;
         this.repairs = repairs;
         this.pumps = pumps;
+        this.pumpRegister = pumpRegister;
         this.parts = parts;
         this.locations = locations;
         this.ledger = ledger;
@@ -55,35 +63,69 @@ public class RepairService {
     public record Recorded(RepairResponse repair, boolean replayed) {
     }
 
-    public Repair get(String repairRef) {
+    @Transactional
+    public RepairResponse get(String repairRef) {
         Repair repair = repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
-        pumps.requireVisible(null, repair.pump.assetId);
-        return repair;
+        return RepairResponse.from(repair, pumps.requireVisible(repair.pumpId), partNumbers());
     }
 
-    public List<Repair> search(String assetId, LocalDate since, int limit) {
-        return search(assetId, since, limit, false);
-    }
-
-    /** As {@link #search(String, LocalDate, int)}; {@code openOnly} keeps the repairs not fixed yet. */
-    public List<Repair> search(String assetId, LocalDate since, int limit, boolean openOnly) {
-        if (openOnly) {
-            var visible = pumps.visibleFilter();
-            Long pumpId = assetId == null ? null : pumps.requireVisible("asset", assetId).id;
-            return repairs.open().stream().filter(r -> pumpId == null ? visible.test(r.pump) : pumpId.equals(r.pump.id))
-                    .filter(r -> since == null || !r.reportedOn.isBefore(since)).limit(limit).toList();
-        }
+    /** Newest report first; {@code openOnly} keeps the repairs not fixed yet. */
+    @Transactional
+    public List<RepairResponse> search(String assetId, LocalDate since, int limit, boolean openOnly) {
         if (assetId != null) {
-            return repairs.search(pumps.requireVisible("asset", assetId).id, since, limit);
+            PumpSummary pump = pumps.requireVisible("asset", assetId);
+            List<Repair> found = openOnly ? repairs.open().stream().filter(r -> r.pumpId == pump.id())
+                    .filter(r -> since == null || !r.reportedOn.isBefore(since)).limit(limit).toList()
+                    : repairs.search(pump.id(), since, limit);
+            return responses(found, Map.of(pump.id(), pump));
         }
         // Scoped callers page through their own pumps' repairs only.
+        List<Repair> candidates = openOnly ? repairs.open() : repairs.search(null, since, Integer.MAX_VALUE);
+        Map<Long, PumpSummary> pumpsById = pumps.summariesById(pumpIdsOf(candidates));
         var visible = pumps.visibleFilter();
-        return repairs.search(null, since, Integer.MAX_VALUE).stream().filter(r -> visible.test(r.pump)).limit(limit).toList();
+        List<Repair> found = candidates.stream().filter(r -> visible.test(pumpsById.get(r.pumpId)))
+                .filter(r -> !openOnly || since == null || !r.reportedOn.isBefore(since)).limit(limit).toList();
+        return responses(found, pumpsById);
     }
 
-    /** Consumption history rows for forecasting; see {@link RepairRepository#consumptionRows()}. */
+    /** Repairs as the API shows them, with their pumps' records (by pump id) and the parts' numbers read once. */
+    private List<RepairResponse> responses(List<Repair> list, Map<Long, PumpSummary> pumpsById) {
+        Map<Long, String> partNumbers = partNumbers();
+        return list.stream().map(r -> RepairResponse.from(r, pumpsById.get(r.pumpId), partNumbers)).toList();
+    }
+
+    private RepairResponse response(Repair repair) {
+        return RepairResponse.from(repair, pumps.summariesById(List.of(repair.pumpId)).get(repair.pumpId),
+                partNumbers());
+    }
+
+    private static Set<Long> pumpIdsOf(List<Repair> list) {
+        Set<Long> ids = new HashSet<>();
+        list.forEach(r -> ids.add(r.pumpId));
+        return ids;
+    }
+
+    /** Every part's number by id (the catalogue's records; a repair line holds the part's id). */
+    private Map<Long, String> partNumbers() {
+        Map<Long, String> numbers = new HashMap<>();
+        parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
+        return numbers;
+    }
+
+    /**
+     * Consumption history rows for forecasting (see {@link RepairRepository#consumptionRows()}), each at its pump's
+     * depot as fleet's register gives it (one query for every pump).
+     */
+    @Transactional
     public List<ConsumptionRow> consumptionRows() {
-        return repairs.consumptionRows();
+        Map<Long, Long> depotOfPump = new HashMap<>();
+        pumpRegister.planningRows().forEach(p -> depotOfPump.put(p.pumpId(), p.depotId()));
+        List<ConsumptionRow> read = repairs.consumptionRows();
+        List<ConsumptionRow> rows = new ArrayList<>(read.size());
+        for (ConsumptionRow row : read) {
+            rows.add(row.atDepot(depotOfPump.get(row.pumpId())));
+        }
+        return rows;
     }
 
     /** Records a repair; a fixed one consumes its parts from the mechanic's kit, all in one transaction. */
@@ -91,15 +133,17 @@ public class RepairService {
     public Recorded record(RepairRequest request) {
         Optional<Repair> earlier = repairs.byRef(request.repairRef());
         if (earlier.isPresent()) {
-            if (!pumps.visible(earlier.get().pump)) {
+            PumpSummary pump = pumps.summariesById(List.of(earlier.get().pumpId)).get(earlier.get().pumpId);
+            if (!pumps.visibleFilter().test(pump)) {
                 throw new ConflictException("repairRef", "repair '" + request.repairRef() + "' was recorded for another pump");
             }
-            String differs = RepairResend.firstDifference(earlier.get(), request);
+            Map<Long, String> partNumbers = partNumbers();
+            String differs = RepairResend.firstDifference(earlier.get(), pump.assetId(), request, partNumbers);
             if (differs != null) {
                 throw new ConflictException(differs, "repair '" + request.repairRef() + "' was recorded with another "
                         + differs + "; a new repair needs a new reference");
             }
-            return new Recorded(RepairResponse.from(earlier.get()), true);
+            return new Recorded(RepairResponse.from(earlier.get(), pump, partNumbers), true);
         }
         String mechanic = request.mechanic() == null || currentUser.hasRole(Roles.MECHANIC)
                 ? currentUser.name() : request.mechanic();
@@ -108,7 +152,7 @@ public class RepairService {
         if (dateProblem != null) {
             throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
         }
-        Repair repair = newRepair(request, pumps.requireVisible("assetId", request.assetId()), mechanic);
+        Repair repair = newRepair(request, pumps.requireVisible("assetId", request.assetId()).id(), mechanic);
         addLines(repair, request.lines() == null ? List.of() : request.lines());
         repair.ledgerPosted = repair.fixedOn != null && !repair.lines.isEmpty();
         repairs.persist(repair);
@@ -116,8 +160,8 @@ public class RepairService {
         if (repair.ledgerPosted) {
             consumeFromKit(repair);
         }
-        pumpStatus.followRepairs(repair.pump);
-        RepairResponse recorded = RepairResponse.from(repair);
+        pumpStatus.followRepairsOf(repair.pumpId);
+        RepairResponse recorded = response(repair);
         audit.record("REPAIR_RECORDED", "repair", repair.repairRef, null, recorded);
         return new Recorded(recorded, false);
     }
@@ -129,8 +173,9 @@ public class RepairService {
     @Transactional
     public RepairResponse progress(String repairRef, RepairProgress p) {
         Repair repair = repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
-        pumps.requireVisible(null, repair.pump.assetId);
-        RepairResponse before = RepairResponse.from(repair);
+        PumpSummary pump = pumps.requireVisible(repair.pumpId);
+        Map<Long, String> partNumbers = partNumbers();
+        RepairResponse before = RepairResponse.from(repair, pump, partNumbers);
         repair.diagnosedOn = keepOrSet("diagnosedOn", repair.diagnosedOn, p.diagnosedOn());
         repair.partsAvailableOn = keepOrSet("partsAvailableOn", repair.partsAvailableOn, p.partsAvailableOn());
         boolean fixesNow = repair.fixedOn == null && p.fixedOn() != null;
@@ -142,7 +187,7 @@ public class RepairService {
         if (p.fault() != null) {
             repair.fault = p.fault();
         }
-        if (p.lines() != null && !RepairResend.sameLines(repair.lines, p.lines())) {
+        if (p.lines() != null && !RepairResend.sameLines(repair.lines, p.lines(), partNumbers)) {
             if (!fixesNow && repair.fixedOn != null) {
                 throw new ConflictException("lines", "repair '" + repairRef + "' is fixed; its parts can no longer change");
             }
@@ -155,8 +200,8 @@ public class RepairService {
             repairs.flush();
             consumeFromKit(repair);
         }
-        pumpStatus.followRepairs(repair.pump);
-        RepairResponse after = RepairResponse.from(repair);
+        pumpStatus.followRepairsOf(repair.pumpId);
+        RepairResponse after = response(repair);
         if (!after.equals(before)) {
             audit.record("REPAIR_PROGRESSED", "repair", repairRef, before, after);
         }
@@ -175,31 +220,34 @@ public class RepairService {
 
     private void addLines(Repair repair, List<RepairRequest.Line> lines) {
         for (int i = 0; i < lines.size(); i++) {
-            Part part = parts.require("lines[" + i + "].partNumber", lines.get(i).partNumber());
-            BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", lines.get(i).quantity(), part.wholeUnits());
-            if (repair.lines.stream().anyMatch(l -> l.part.id.equals(part.id))) {
-                throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber + "' is listed twice");
+            PartSummary part = parts.requireSummary("lines[" + i + "].partNumber", lines.get(i).partNumber());
+            BigDecimal quantity = Quantities.requirePositive("lines[" + i + "].quantity", lines.get(i).quantity(),
+                    part.unitOfIssue().wholeUnits());
+            if (repair.lines.stream().anyMatch(l -> l.partId == part.id())) {
+                throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber() + "' is listed twice");
             }
-            repair.addLine(line(part, quantity));
+            repair.addLine(line(part.id(), quantity));
         }
     }
 
     private void consumeFromKit(Repair repair) {
         LocationSummary kit = locations.kitSummaryOf(repair.mechanic).orElseThrow(() -> new BusinessRuleException(
                 "mechanic", "mechanic '" + repair.mechanic + "' carries no kit to consume parts from"));
+        Map<Long, String> partNumbers = partNumbers();
         for (RepairLine line : repair.lines) {
-            MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, line.part.partNumber, kit.code(), null,
+            String partNumber = partNumbers.get(line.partId);
+            MovementCommand command = new MovementCommand(MovementKind.CONSUMPTION, partNumber, kit.code(), null,
                     line.quantity, repair.fixedOn.atStartOfDay().atOffset(ZoneOffset.UTC),
                     repair.kind == RepairKind.BREAKDOWN ? "breakdown repair" : "preventive service",
-                    repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + line.part.partNumber), null, repair.id);
+                    repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + partNumber), null, repair.id);
             ledger.postWithin(command);
         }
     }
 
-    static Repair newRepair(RepairRequest r, Pump pump, String mechanic) {
+    static Repair newRepair(RepairRequest r, long pumpId, String mechanic) {
         Repair repair = new Repair();
         repair.repairRef = r.repairRef();
-        repair.pump = pump;
+        repair.pumpId = pumpId;
         repair.mechanic = mechanic;
         repair.kind = r.kind();
         repair.reportedOn = r.reportedOn();
@@ -210,9 +258,9 @@ public class RepairService {
         return repair;
     }
 
-    static RepairLine line(Part part, BigDecimal quantity) {
+    static RepairLine line(long partId, BigDecimal quantity) {
         RepairLine line = new RepairLine();
-        line.part = part;
+        line.partId = partId;
         line.quantity = quantity;
         return line;
     }

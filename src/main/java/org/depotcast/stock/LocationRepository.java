@@ -4,7 +4,9 @@ import io.quarkus.hibernate.orm.panache.PanacheRepository;
 import io.quarkus.panache.common.Sort;
 import jakarta.enterprise.context.ApplicationScoped;
 
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 @ApplicationScoped
@@ -19,6 +21,14 @@ class LocationRepository implements PanacheRepository<Location> {
 
     List<Location> ofKind(LocationKind kind) {
         return list("kind", Sort.by("code"), kind);
+    }
+
+    /** Every location's code keyed by id, without loading entities. */
+    Map<Long, String> codesById() {
+        Map<Long, String> codes = new HashMap<>();
+        getEntityManager().createQuery("select l.id, l.code from Location l", Object[].class).getResultList()
+                .forEach(row -> codes.put((Long) row[0], (String) row[1]));
+        return codes;
     }
 
     Optional<Location> kitOf(String mechanicUsername) {

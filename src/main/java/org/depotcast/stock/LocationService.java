@@ -63,6 +63,12 @@ public class LocationService {
         return byId;
     }
 
+    /** Every location's code keyed by its id (one light query: no entities, no parents). */
+    @Transactional
+    public Map<Long, String> codesById() {
+        return locations.codesById();
+    }
+
     /** The location with this code as a record; a 422 naming {@code field} when there is none. */
     @Transactional
     public LocationSummary requireSummary(String field, String code) {
