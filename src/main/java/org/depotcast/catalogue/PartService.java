@@ -12,8 +12,10 @@ import org.depotcast.common.CsvRow;
 import org.depotcast.common.EntityMissingException;
 
 import java.io.InputStream;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import java.util.Set;
 
@@ -57,6 +59,14 @@ public class PartService {
     @Transactional
     public List<PartSummary> summaries() {
         return parts.allByNumber().stream().map(PartSummary::from).toList();
+    }
+
+    /** Every part as a record, keyed by id (for records that hold a part's id). */
+    @Transactional
+    public Map<Long, PartSummary> summariesById() {
+        Map<Long, PartSummary> byId = new HashMap<>();
+        parts.allByNumber().forEach(p -> byId.put(p.id, PartSummary.from(p)));
+        return byId;
     }
 
     /** The part as a record, or a 422 naming {@code field} when there is no part of that number. */

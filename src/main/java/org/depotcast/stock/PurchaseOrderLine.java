@@ -9,7 +9,6 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
-import org.depotcast.catalogue.Part;
 import org.depotcast.common.BusinessRuleException;
 
 import java.math.BigDecimal;
@@ -23,9 +22,9 @@ public class PurchaseOrderLine {
     @ManyToOne(fetch = FetchType.LAZY, optional = false)
     @JoinColumn(name = "purchase_order_id")
     public PurchaseOrder purchaseOrder;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue's part (its id, read as a record through PartService). */
+    @Column(name = "part_id", nullable = false)
+    public long partId;
     @Column(name = "quantity_ordered", nullable = false)
     public BigDecimal quantityOrdered;
     @Column(name = "quantity_received", nullable = false)
@@ -39,10 +38,10 @@ public class PurchaseOrderLine {
         return outstanding().signum() == 0;
     }
 
-    void receive(BigDecimal quantity) {
+    void receive(BigDecimal quantity, String partNumber) {
         if (quantity.compareTo(outstanding()) > 0) {
             throw new BusinessRuleException("quantity", "only " + outstanding().stripTrailingZeros().toPlainString()
-                    + " of part '" + part.partNumber + "' is still outstanding on this order");
+                    + " of part '" + partNumber + "' is still outstanding on this order");
         }
         quantityReceived = quantityReceived.add(quantity);
     }

@@ -26,9 +26,9 @@ class PurchaseOrderRepository implements PanacheRepository<PurchaseOrder> {
     List<Object[]> onOrder(Long destinationId) {
         String where = destinationId == null ? "" : " and o.destination.id = :destination";
         var query = getEntityManager().createQuery("""
-                select l.part.id, o.destination.id, sum(l.quantityOrdered - l.quantityReceived)
+                select l.partId, o.destination.id, sum(l.quantityOrdered - l.quantityReceived)
                 from PurchaseOrderLine l join l.purchaseOrder o
-                where o.status = :open""" + where + " group by l.part.id, o.destination.id", Object[].class)
+                where o.status = :open""" + where + " group by l.partId, o.destination.id", Object[].class)
                 .setParameter("open", PurchaseOrderStatus.OPEN);
         if (destinationId != null) {
             query.setParameter("destination", destinationId);

@@ -31,13 +31,13 @@ class PurchaseOrderResource {
 
     @GET
     public List<PurchaseOrderResponse> list(@QueryParam("status") String status) {
-        return service.list(QueryParams.optionalEnum("status", status, PurchaseOrderStatus.class)).stream().map(PurchaseOrderResponse::from).toList();
+        return service.responses(service.list(QueryParams.optionalEnum("status", status, PurchaseOrderStatus.class)));
     }
 
     @GET
     @Path("{orderNumber}")
     public PurchaseOrderResponse get(@PathParam("orderNumber") String orderNumber) {
-        return PurchaseOrderResponse.from(service.get(orderNumber));
+        return service.response(service.get(orderNumber));
     }
 
     @POST
@@ -46,7 +46,7 @@ class PurchaseOrderResource {
     public Response place(@Valid @NotNull PurchaseOrderRequest request, UriInfo uri) {
         PurchaseOrder order = service.place(request);
         return Response.created(uri.getAbsolutePathBuilder().path(order.orderNumber).build())
-                .entity(PurchaseOrderResponse.from(order)).build();
+                .entity(service.response(order)).build();
     }
 
     @POST

@@ -3,7 +3,7 @@ package org.depotcast.stock;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.common.IdempotencyKey;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
@@ -63,6 +63,23 @@ public class PurchaseOrderService {
         return order;
     }
 
+    /** Orders as the API shows them, the parts' numbers read once for the whole list. */
+    public List<PurchaseOrderResponse> responses(List<PurchaseOrder> list) {
+        Map<Long, String> partNumbers = partNumbers();
+        return list.stream().map(o -> PurchaseOrderResponse.from(o, partNumbers)).toList();
+    }
+
+    public PurchaseOrderResponse response(PurchaseOrder order) {
+        return PurchaseOrderResponse.from(order, partNumbers());
+    }
+
+    /** Every part's number by id (the catalogue's records; an order line holds the part's id). */
+    private Map<Long, String> partNumbers() {
+        Map<Long, String> numbers = new HashMap<>();
+        parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
+        return numbers;
+    }
+
     /** Outstanding on open orders, keyed by part id then destination id. */
     public Map<Long, Map<Long, BigDecimal>> onOrder(Long destinationId) {
         Map<Long, Map<Long, BigDecimal>> result = new HashMap<>();
@@ -94,13 +111,14 @@ public class PurchaseOrderService {
         for (int i = 0; i < request.lines().size(); i++) {
             PurchaseOrderRequest.Line l = request.lines().get(i);
             String field = "lines[" + i + "]";
-            Part part = parts.require(field + ".partNumber", l.partNumber());
-            if (order.lines.stream().anyMatch(existing -> existing.part.id.equals(part.id))) {
+            PartSummary part = parts.requireSummary(field + ".partNumber", l.partNumber());
+            if (order.lines.stream().anyMatch(existing -> existing.partId == part.id())) {
                 throw new InvalidInputException(field + ".partNumber", "part '" + l.partNumber() + "' is listed twice");
             }
             PurchaseOrderLine line = new PurchaseOrderLine();
-            line.part = part;
-            line.quantityOrdered = Quantities.requirePositive(field + ".quantity", l.quantity(), part.wholeUnits());
+            line.partId = part.id();
+            line.quantityOrdered = Quantities.requirePositive(field + ".quantity", l.quantity(),
+                    part.unitOfIssue().wholeUnits());
             line.quantityReceived = BigDecimal.ZERO;
             order.addLine(line);
         }
@@ -118,7 +136,8 @@ public class PurchaseOrderService {
         if (order.status != PurchaseOrderStatus.OPEN && receipt.idempotencyKey() == null) {
             throw new BusinessRuleException("orderNumber", "purchase order '" + orderNumber + "' is " + order.status);
         }
-        PurchaseOrderLine line = order.lines.stream().filter(l -> l.part.partNumber.equals(receipt.partNumber()))
+        Map<Long, String> partNumbers = partNumbers();
+        PurchaseOrderLine line = order.lines.stream().filter(l -> receipt.partNumber().equals(partNumbers.get(l.partId)))
                 .findFirst().orElseThrow(() -> new BusinessRuleException("partNumber",
                         "part '" + receipt.partNumber() + "' is not on order '" + orderNumber + "'"));
         MovementCommand command = new MovementCommand(MovementKind.RECEIPT, receipt.partNumber(), null,
@@ -126,7 +145,7 @@ public class PurchaseOrderService {
                 IdempotencyKey.client("receipt", receipt.idempotencyKey()), line.id, null);
         PostedMovement posted = ledger.postWithin(command);
         if (!posted.replayed()) {
-            line.receive(posted.movement().quantity());
+            line.receive(posted.movement().quantity(), receipt.partNumber());
             order.closeIfComplete();
         }
         return posted;
@@ -144,7 +163,7 @@ public class PurchaseOrderService {
         order.status = PurchaseOrderStatus.CANCELLED;
         audit.record("PURCHASE_ORDER_CANCELLED", "purchase_order", order.orderNumber, PurchaseOrderStatus.OPEN,
                 PurchaseOrderStatus.CANCELLED);
-        return PurchaseOrderResponse.from(order);
+        return response(order);
     }
 
     /**
@@ -179,10 +198,11 @@ public class PurchaseOrderService {
     @Transactional
     public CsvExport exportCsv() {
         List<List<?>> rows = new ArrayList<>();
+        Map<Long, String> partNumbers = partNumbers();
         for (PurchaseOrder o : list(PurchaseOrderStatus.OPEN)) {
             for (PurchaseOrderLine l : o.lines) {
                 rows.add(List.of(o.orderNumber, o.supplier, o.destination.code, o.orderedOn,
-                        o.expectedOn == null ? "" : o.expectedOn, l.part.partNumber, plain(l.quantityOrdered),
+                        o.expectedOn == null ? "" : o.expectedOn, partNumbers.get(l.partId), plain(l.quantityOrdered),
                         plain(l.quantityReceived), plain(l.outstanding())));
             }
         }

@@ -10,7 +10,6 @@ import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
-import org.depotcast.catalogue.Part;
 import org.depotcast.common.Bounds;
 import org.depotcast.common.BusinessRuleException;
 
@@ -23,9 +22,9 @@ public class StockBalance {
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
     public Long id;
-    @ManyToOne(fetch = FetchType.LAZY, optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue's part (its id, read as a record through PartService). */
+    @Column(name = "part_id", nullable = false)
+    public long partId;
     @ManyToOne(fetch = FetchType.LAZY, optional = false)
     @JoinColumn(name = "location_id")
     public Location location;

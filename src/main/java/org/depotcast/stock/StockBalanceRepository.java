@@ -10,7 +10,7 @@ import java.util.Optional;
 @ApplicationScoped
 class StockBalanceRepository implements PanacheRepository<StockBalance> {
     Optional<StockBalance> lockedFor(long partId, long locationId) {
-        return find("part.id = ?1 and location.id = ?2", partId, locationId)
+        return find("partId = ?1 and location.id = ?2", partId, locationId)
                 .withLock(LockModeType.PESSIMISTIC_WRITE).firstResultOptional();
     }
 
@@ -18,7 +18,7 @@ class StockBalanceRepository implements PanacheRepository<StockBalance> {
     List<Object[]> onHand(Long locationId) {
         String where = locationId == null ? "" : " where b.location.id = :location";
         var query = getEntityManager().createQuery(
-                "select b.part.id, b.location.id, b.onHand from StockBalance b" + where, Object[].class);
+                "select b.partId, b.location.id, b.onHand from StockBalance b" + where, Object[].class);
         if (locationId != null) {
             query.setParameter("location", locationId);
         }

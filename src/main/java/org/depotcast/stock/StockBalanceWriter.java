@@ -2,7 +2,7 @@ package org.depotcast.stock;
 
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.Quantities;
 
@@ -23,7 +23,7 @@ class StockBalanceWriter {
 
     /** Takes {@code quantity} from {@code from} and gives it to {@code to}; either may be null (outside the programme). */
     @Transactional(Transactional.TxType.MANDATORY)
-    void move(Part part, Location from, Location to, BigDecimal quantity) {
+    void move(PartSummary part, Location from, Location to, BigDecimal quantity) {
         boolean fromFirst = to == null || (from != null && from.id < to.id);
         if (fromFirst) {
             take(part, from, quantity);
@@ -34,22 +34,22 @@ class StockBalanceWriter {
         }
     }
 
-    private void take(Part part, Location from, BigDecimal quantity) {
+    private void take(PartSummary part, Location from, BigDecimal quantity) {
         if (from == null) {
             return;
         }
-        StockBalance balance = balances.lockedFor(part.id, from.id).orElseThrow(() -> new BusinessRuleException("quantity",
-                "no stock of part '" + part.partNumber + "' at '" + from.code + "'"));
-        balance.take(quantity, part.partNumber, from.code);
+        StockBalance balance = balances.lockedFor(part.id(), from.id).orElseThrow(() -> new BusinessRuleException("quantity",
+                "no stock of part '" + part.partNumber() + "' at '" + from.code + "'"));
+        balance.take(quantity, part.partNumber(), from.code);
     }
 
-    private void give(Part part, Location to, BigDecimal quantity) {
+    private void give(PartSummary part, Location to, BigDecimal quantity) {
         if (to == null) {
             return;
         }
-        StockBalance balance = balances.lockedFor(part.id, to.id).orElseGet(() -> {
+        StockBalance balance = balances.lockedFor(part.id(), to.id).orElseGet(() -> {
             StockBalance created = new StockBalance();
-            created.part = part;
+            created.partId = part.id();
             created.location = to;
             created.onHand = BigDecimal.ZERO.setScale(Quantities.SCALE);
             balances.persist(created);

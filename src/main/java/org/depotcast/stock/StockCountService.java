@@ -3,7 +3,7 @@ package org.depotcast.stock;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.CsvExport;
 import org.depotcast.common.CsvImport;
@@ -60,16 +60,16 @@ public class StockCountService {
     public void count(StockCountLine line) {
         Location location = locations.require("locationCode", line.locationCode());
         scope.require(location.id, location.code);
-        Part part = parts.require("partNumber", line.partNumber());
-        if (part.wholeUnits() && !Quantities.isWhole(line.quantity())) {
-            throw new InvalidInputException("quantity", "must be a whole number for part '" + part.partNumber + "'");
+        PartSummary part = parts.requireSummary("partNumber", line.partNumber());
+        if (part.unitOfIssue().wholeUnits() && !Quantities.isWhole(line.quantity())) {
+            throw new InvalidInputException("quantity", "must be a whole number for part '" + part.partNumber() + "'");
         }
-        BigDecimal difference = line.quantity().subtract(queries.onHand(part.partNumber, location.code));
+        BigDecimal difference = line.quantity().subtract(queries.onHand(part.partNumber(), location.code));
         if (difference.signum() == 0) {
             return;
         }
         boolean found = difference.signum() > 0;
-        ledger.postWithin(new MovementCommand(MovementKind.COUNT_ADJUSTMENT, part.partNumber,
+        ledger.postWithin(new MovementCommand(MovementKind.COUNT_ADJUSTMENT, part.partNumber(),
                 found ? null : location.code, found ? location.code : null, difference.abs(),
                 line.countedOn() == null ? null : line.countedOn().atStartOfDay().atOffset(ZoneOffset.UTC),
                 "stock count", "count import", null, null, null));
@@ -101,7 +101,7 @@ public class StockCountService {
         String today = LocalDate.now(clock).toString();
         Map<String, List<?>> rows = new TreeMap<>();
         Map<String, String> descriptions = new java.util.HashMap<>();
-        parts.all().forEach(p -> descriptions.put(p.partNumber, p.description));
+        parts.summaries().forEach(p -> descriptions.put(p.partNumber(), p.description()));
         for (BalanceView b : queries.balances(locationCode)) {
             rows.put(b.locationCode() + "\u0000" + b.partNumber(), List.of(b.locationCode(), b.partNumber(),
                     b.onHand().stripTrailingZeros().toPlainString(), today, b.description()));

@@ -7,7 +7,7 @@ import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
@@ -100,8 +100,8 @@ public class StockLedgerService {
         if (command.kind() == null) {
             throw new InvalidInputException("kind", "is required");
         }
-        Part part = parts.require("partNumber", command.partNumber());
-        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.wholeUnits());
+        PartSummary part = parts.requireSummary("partNumber", command.partNumber());
+        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.unitOfIssue().wholeUnits());
         Location from = command.fromCode() == null ? null : locations.require("from", command.fromCode());
         Location to = command.toCode() == null ? null : locations.require("to", command.toCode());
         String endsProblem = command.kind().endsProblem(from == null ? null : from.kind, to == null ? null : to.kind,
@@ -135,12 +135,12 @@ public class StockLedgerService {
         if (command.kind() != MovementKind.WRITE_OFF || command.toCode() != null || from.kind != LocationKind.IN_TRANSIT) {
             throw new IllegalArgumentException("a write-off from transit leaves the in-transit location for nowhere");
         }
-        Part part = parts.require("partNumber", command.partNumber());
-        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.wholeUnits());
+        PartSummary part = parts.requireSummary("partNumber", command.partNumber());
+        BigDecimal quantity = Quantities.requirePositive("quantity", command.quantity(), part.unitOfIssue().wholeUnits());
         return write(command, part, from, null, quantity, currentUser.name());
     }
 
-    private PostedMovement write(MovementCommand command, Part part, Location from, Location to, BigDecimal quantity,
+    private PostedMovement write(MovementCommand command, PartSummary part, Location from, Location to, BigDecimal quantity,
                                  String actor) {
         balanceWriter.move(part, from, to, quantity);
         if (command.idempotencyKey() != null) {
@@ -151,7 +151,7 @@ public class StockLedgerService {
         }
         StockMovement movement = new StockMovement();
         movement.kind = command.kind();
-        movement.part = part;
+        movement.partId = part.id();
         movement.fromLocation = from;
         movement.toLocation = to;
         movement.quantity = quantity;
@@ -168,7 +168,7 @@ public class StockLedgerService {
         movement.repairId = command.repairId();
         movements.persist(movement);
         movements.flush();
-        MovementResponse posted = MovementResponse.from(movement);
+        MovementResponse posted = MovementResponse.from(movement, part.partNumber());
         audit.record("MOVEMENT_POSTED", "stock_movement", Long.toString(movement.id), null, posted);
         return new PostedMovement(posted, false);
     }
@@ -186,7 +186,8 @@ public class StockLedgerService {
         if (key == null) {
             return Optional.empty();
         }
-        return movements.byIdempotencyKey(key.ownerFor(actor), key.key()).map(m -> replay(m, command));
+        return movements.byIdempotencyKey(key.ownerFor(actor), key.key())
+                .map(m -> replay(m, parts.summariesById().get(m.partId).partNumber(), command));
     }
 
     /**
@@ -209,9 +210,9 @@ public class StockLedgerService {
         return location != null && location.kind == LocationKind.IN_TRANSIT;
     }
 
-    private static PostedMovement replay(StockMovement earlier, MovementCommand command) {
+    private static PostedMovement replay(StockMovement earlier, String partNumber, MovementCommand command) {
         boolean same = earlier.kind == command.kind()
-                && Objects.equals(earlier.part.partNumber, command.partNumber())
+                && Objects.equals(partNumber, command.partNumber())
                 && command.quantity() != null && earlier.quantity.compareTo(command.quantity()) == 0
                 && Objects.equals(earlier.fromLocation == null ? null : earlier.fromLocation.code, command.fromCode())
                 && Objects.equals(earlier.toLocation == null ? null : earlier.toLocation.code, command.toCode());
@@ -219,6 +220,6 @@ public class StockLedgerService {
             throw new ConflictException("idempotencyKey", "key '" + command.idempotencyKey().key()
                     + "' was already used for a different movement");
         }
-        return new PostedMovement(MovementResponse.from(earlier), true);
+        return new PostedMovement(MovementResponse.from(earlier, partNumber), true);
     }
 }

@@ -11,7 +11,6 @@ import jakarta.persistence.Id;
 import jakarta.persistence.JoinColumn;
 import jakarta.persistence.ManyToOne;
 import jakarta.persistence.Table;
-import org.depotcast.catalogue.Part;
 import org.hibernate.annotations.Immutable;
 
 import java.math.BigDecimal;
@@ -28,9 +27,9 @@ public class StockMovement {
     @Enumerated(EnumType.STRING)
     @Column(nullable = false)
     public MovementKind kind;
-    @ManyToOne(fetch = FetchType.LAZY, optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
+    /** The catalogue's part (its id, read as a record through PartService). */
+    @Column(name = "part_id", nullable = false)
+    public long partId;
     @ManyToOne(fetch = FetchType.LAZY)
     @JoinColumn(name = "from_location_id")
     public Location fromLocation;

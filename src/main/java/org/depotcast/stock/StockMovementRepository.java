@@ -21,7 +21,7 @@ class StockMovementRepository implements PanacheRepository<StockMovement> {
         List<String> clauses = new ArrayList<>();
         Parameters params = new Parameters();
         if (partId != null) {
-            clauses.add("part.id = :part");
+            clauses.add("partId = :part");
             params.and("part", partId);
         }
         if (locationId != null) {

@@ -3,7 +3,7 @@ package org.depotcast.stock;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
-import org.depotcast.catalogue.Part;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.common.EntityMissingException;
 import io.quarkus.security.ForbiddenException;
@@ -42,8 +42,7 @@ public class StockQueryService {
     public List<BalanceView> balances(String locationCode) {
         Long locationId = locationCode == null ? null : visibleLocation(locationCode).id;
         AccessScope.Scope visible = scope.current();
-        Map<Long, Part> partsById = new HashMap<>();
-        parts.all().forEach(p -> partsById.put(p.id, p));
+        Map<Long, PartSummary> partsById = parts.summariesById();
         Map<Long, String> codes = new HashMap<>();
         locations.all().forEach(l -> codes.put(l.id, l.code));
         Map<Long, Map<Long, BigDecimal>> onOrder = orders.onOrder(locationId);
@@ -58,8 +57,8 @@ public class StockQueryService {
             if (!visible.sees(key.get(1))) {
                 return;
             }
-            Part part = partsById.get(key.get(0));
-            views.add(new BalanceView(part.partNumber, part.description, codes.get(key.get(1)), value[0], value[1]));
+            PartSummary part = partsById.get(key.get(0));
+            views.add(new BalanceView(part.partNumber(), part.description(), codes.get(key.get(1)), value[0], value[1]));
         });
         views.sort(Comparator.comparing(BalanceView::locationCode).thenComparing(BalanceView::partNumber));
         return views;
@@ -68,19 +67,20 @@ public class StockQueryService {
     /** On hand of one part at one location; zero when it never had any. */
     @Transactional
     public BigDecimal onHand(String partNumber, String locationCode) {
-        Part part = parts.require("partNumber", partNumber);
+        PartSummary part = parts.requireSummary("partNumber", partNumber);
         Location location = locations.require("location", locationCode);
-        return balances.find("part.id = ?1 and location.id = ?2", part.id, location.id).firstResultOptional()
+        return balances.find("partId = ?1 and location.id = ?2", part.id(), location.id).firstResultOptional()
                 .map(b -> b.onHand).orElse(BigDecimal.ZERO);
     }
 
     @Transactional
     public List<MovementResponse> movements(String partNumber, String locationCode, OffsetDateTime since, int limit) {
-        Long partId = partNumber == null ? null : parts.require("part", partNumber).id;
+        Long partId = partNumber == null ? null : parts.requireSummary("part", partNumber).id();
         Long locationId = locationCode == null ? null : visibleLocation(locationCode).id;
         AccessScope.Scope visible = scope.current();
+        Map<Long, PartSummary> partsById = parts.summariesById();
         return movements.search(partId, locationId, visible.locationIds(), since, limit).stream()
-                .map(MovementResponse::from).toList();
+                .map(m -> MovementResponse.from(m, partsById.get(m.partId).partNumber())).toList();
     }
 
     /** One movement, when it touches a location the caller sees: 404 when unknown, 403 when outside their locations. */
@@ -94,7 +94,7 @@ public class StockQueryService {
         if (!seen) {
             throw new ForbiddenException("movement " + id + " touches no location assigned to you");
         }
-        return MovementResponse.from(movement);
+        return MovementResponse.from(movement, parts.summariesById().get(movement.partId).partNumber());
     }
 
     @Transactional
@@ -130,7 +130,8 @@ public class StockQueryService {
     }
 
     private ReconcileReport.Mismatch mismatch(List<Long> key, BigDecimal balance, BigDecimal sum) {
-        return new ReconcileReport.Mismatch(parts.byId(key.get(0)).partNumber, locations.byId(key.get(1)).code, balance, sum);
+        return new ReconcileReport.Mismatch(parts.summariesById().get(key.get(0)).partNumber(),
+                locations.byId(key.get(1)).code, balance, sum);
     }
 
     private static BigDecimal toDecimal(Object value) {
