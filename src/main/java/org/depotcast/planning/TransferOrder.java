@@ -14,8 +14,6 @@ import jakarta.persistence.OneToMany;
 import jakarta.persistence.OrderBy;
 import jakarta.persistence.Table;
 import jakarta.persistence.Version;
-import org.depotcast.catalogue.Part;
-import org.depotcast.stock.Location;
 
 import java.math.BigDecimal;
 import java.time.OffsetDateTime;
@@ -35,15 +33,15 @@ public class TransferOrder {
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
     public Long id;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "part_id")
-    public Part part;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "from_id")
-    public Location from;
-    @ManyToOne(optional = false)
-    @JoinColumn(name = "to_id")
-    public Location to;
+    /** The catalogue's part (its id, read as a record through PartService). */
+    @Column(name = "part_id", nullable = false)
+    public long partId;
+    /** The stock location sending (its id; codes through LocationService). */
+    @Column(name = "from_id", nullable = false)
+    public long fromId;
+    /** The stock location receiving. */
+    @Column(name = "to_id", nullable = false)
+    public long toId;
     @Column(nullable = false)
     public BigDecimal quantity;
     @Column(name = "received_quantity", nullable = false)

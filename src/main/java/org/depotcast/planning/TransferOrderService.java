@@ -9,14 +9,15 @@ import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.catalogue.PartService;
+import org.depotcast.catalogue.PartSummary;
 import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.IdempotencyKey;
 import org.depotcast.common.Quantities;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
@@ -44,6 +45,7 @@ public class TransferOrderService {
     private final AccessScope scope;
     private final AuditService audit;
     private final Clock clock;
+    private final TransferNames.Reader names;
 
     @ApplicationScoped
     static class Orders implements PanacheRepository<TransferOrder> {
@@ -56,11 +58,11 @@ public class TransferOrderService {
             StringBuilder where = new StringBuilder("1 = 1");
             io.quarkus.panache.common.Parameters params = new io.quarkus.panache.common.Parameters();
             if (fromId != null) {
-                where.append(" and from.id = :from");
+                where.append(" and fromId = :from");
                 params = params.and("from", fromId);
             }
             if (toId != null) {
-                where.append(" and to.id = :to");
+                where.append(" and toId = :to");
                 params = params.and("to", toId);
             }
             if (state != null) {
@@ -73,7 +75,9 @@ public class TransferOrderService {
     }
 
     TransferOrderService(Orders orders, LocationService locations, PartService parts, StockLedgerService ledger,
-                         CurrentUser currentUser, AccessScope scope, AuditService audit, Clock clock) {
+                         CurrentUser currentUser, AccessScope scope, AuditService audit, Clock clock,
+                         TransferNames.Reader names) {
+        this.names = names;
         this.orders = orders;
         this.locations = locations;
         this.parts = parts;
@@ -115,22 +119,23 @@ public class TransferOrderService {
                 return replay(earlier.get(), r);
             }
         }
-        Location from = locations.require("from", r.from());
-        Location to = locations.require("to", r.to());
-        scope.require(from.id, from.code);
-        for (Location l : List.of(from, to)) {
-            if (l.kind != LocationKind.DEPOT && l.kind != LocationKind.CENTRAL_STORE) {
+        LocationSummary from = locations.requireSummary("from", r.from());
+        LocationSummary to = locations.requireSummary("to", r.to());
+        scope.require(from.id(), from.code());
+        for (LocationSummary l : List.of(from, to)) {
+            if (l.kind() != LocationKind.DEPOT && l.kind() != LocationKind.CENTRAL_STORE) {
                 throw new BusinessRuleException(l == from ? "from" : "to", "transfers run between the central store and depots");
             }
         }
-        if (from.id.equals(to.id)) {
+        if (from.id() == to.id()) {
             throw new BusinessRuleException("to", "from and to must be different locations");
         }
         TransferOrder order = new TransferOrder();
-        order.part = parts.require("partNumber", r.partNumber());
-        order.quantity = Quantities.requirePositive("quantity", r.quantity(), order.part.wholeUnits());
-        order.from = from;
-        order.to = to;
+        PartSummary part = parts.requireSummary("partNumber", r.partNumber());
+        order.partId = part.id();
+        order.quantity = Quantities.requirePositive("quantity", r.quantity(), part.unitOfIssue().wholeUnits());
+        order.fromId = from.id();
+        order.toId = to.id();
         order.status = TransferOrder.Status.IN_TRANSIT;
         order.dispatchedAt = OffsetDateTime.now(clock);
         order.actor = actor;
@@ -140,43 +145,46 @@ public class TransferOrderService {
         }
         orders.persist(order);
         orders.flush();
-        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, r.partNumber(), from.code, IN_TRANSIT, order.quantity,
-                order.dispatchedAt, "transfer dispatched to " + to.code, "transfer " + order.id, null, null, null));
-        TransferResponses.Order dispatched = TransferResponses.Order.from(order);
+        ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, r.partNumber(), from.code(), IN_TRANSIT,
+                order.quantity, order.dispatchedAt, "transfer dispatched to " + to.code(), "transfer " + order.id, null,
+                null, null));
+        TransferResponses.Order dispatched = TransferResponses.Order.from(order, names.read());
         audit.record("TRANSFER_DISPATCHED", "transfer_order", Long.toString(order.id), null, dispatched);
         return new Dispatched(dispatched, false);
     }
 
-    private static Dispatched replay(TransferOrder earlier, PlanningRequests.TransferRequest r) {
-        String differs = !earlier.part.partNumber.equals(r.partNumber()) ? "partNumber"
-                : !earlier.from.code.equals(r.from()) ? "from"
-                : !earlier.to.code.equals(r.to()) ? "to"
+    private Dispatched replay(TransferOrder earlier, PlanningRequests.TransferRequest r) {
+        TransferNames known = names.read();
+        String differs = !known.partNumber(earlier).equals(r.partNumber()) ? "partNumber"
+                : !known.fromCode(earlier).equals(r.from()) ? "from"
+                : !known.toCode(earlier).equals(r.to()) ? "to"
                 : r.quantity() == null || earlier.quantity.compareTo(r.quantity()) != 0 ? "quantity" : null;
         if (differs != null) {
             throw new ConflictException(differs, "key '" + r.idempotencyKey() + "' was already used for transfer "
                     + earlier.id + " with another " + differs);
         }
-        return new Dispatched(TransferResponses.Order.from(earlier), true);
+        return new Dispatched(TransferResponses.Order.from(earlier, known), true);
     }
 
     /** Transfers touching the caller's locations, in transit first, newest first within each state. */
     @Transactional
     public List<TransferResponses.Order> list(String fromCode, String toCode, TransferOrder.Status state) {
-        Long fromId = fromCode == null ? null : locations.require("from", fromCode).id;
-        Long toId = toCode == null ? null : locations.require("to", toCode).id;
+        Long fromId = fromCode == null ? null : locations.requireSummary("from", fromCode).id();
+        Long toId = toCode == null ? null : locations.requireSummary("to", toCode).id();
         var visible = scope.current();
+        TransferNames known = names.read();
         return orders.search(fromId, toId, state).stream()
-                .filter(t -> visible.sees(t.from.id) || visible.sees(t.to.id))
-                .map(TransferResponses.Order::from).toList();
+                .filter(t -> visible.sees(t.fromId) || visible.sees(t.toId))
+                .map(t -> TransferResponses.Order.from(t, known)).toList();
     }
 
     @Transactional
     public TransferResponses.Order get(long id) {
         TransferOrder order = orders.findByIdOptional(id).orElseThrow(() -> new EntityMissingException(null, "transfer", id));
         var visible = scope.current();
-        if (!visible.sees(order.from.id) && !visible.sees(order.to.id)) {
+        if (!visible.sees(order.fromId) && !visible.sees(order.toId)) {
             throw new io.quarkus.security.ForbiddenException("transfer " + id + " runs between locations not assigned to you");
         }
-        return TransferResponses.Order.from(order);
+        return TransferResponses.Order.from(order, names.read());
     }
 }

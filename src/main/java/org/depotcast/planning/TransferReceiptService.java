@@ -37,9 +37,11 @@ public class TransferReceiptService {
     private final AccessScope scope;
     private final AuditService audit;
     private final Clock clock;
+    private final TransferNames.Reader names;
 
     TransferReceiptService(TransferOrderService.Orders orders, StockLedgerService ledger, CurrentUser currentUser,
-                           AccessScope scope, AuditService audit, Clock clock) {
+                           AccessScope scope, AuditService audit, Clock clock, TransferNames.Reader names) {
+        this.names = names;
         this.orders = orders;
         this.ledger = ledger;
         this.currentUser = currentUser;
@@ -59,7 +61,8 @@ public class TransferReceiptService {
         if (order == null) {
             throw new EntityMissingException(null, "transfer", id);
         }
-        scope.require(order.to.id, order.to.code);
+        TransferNames known = names.read();
+        scope.require(order.toId, known.toCode(order));
         PlanningRequests.ReceiveRequest body = r == null ? new PlanningRequests.ReceiveRequest(null, null, null, null) : r;
         IdempotencyKey key = IdempotencyKey.client("transfer-receipt", body.idempotencyKey());
         if (key != null) {
@@ -68,28 +71,27 @@ public class TransferReceiptService {
                     .filter(x -> owner.equals(x.idempotencyOwner) && key.key().equals(x.idempotencyKey)).findFirst();
             if (earlier.isPresent()) {
                 requireSame(earlier.get(), body);
-                return TransferResponses.Order.from(order);
+                return TransferResponses.Order.from(order, known);
             }
         }
         if (order.status == TransferOrder.Status.RECEIVED) {
-            return TransferResponses.Order.from(order);
+            return TransferResponses.Order.from(order, known);
         }
-        TransferReceipt receipt = receipt(order, body);
+        TransferReceipt receipt = receipt(order, body, known.part(order).unitOfIssue().wholeUnits());
         if (key != null) {
             receipt.idempotencyOwner = key.ownerFor(currentUser.name());
             receipt.idempotencyKey = key.key();
         }
-        TransferResponses.Order before = TransferResponses.Order.from(order);
+        TransferResponses.Order before = TransferResponses.Order.from(order, known);
         order.book(receipt);
         orders.flush();
-        post(order, receipt);
-        TransferResponses.Order after = TransferResponses.Order.from(order);
+        post(order, receipt, known);
+        TransferResponses.Order after = TransferResponses.Order.from(order, known);
         audit.record("TRANSFER_RECEIVED", "transfer_order", Long.toString(order.id), before, after);
         return after;
     }
 
-    private TransferReceipt receipt(TransferOrder order, PlanningRequests.ReceiveRequest body) {
-        boolean wholeUnits = order.part.wholeUnits();
+    private TransferReceipt receipt(TransferOrder order, PlanningRequests.ReceiveRequest body, boolean wholeUnits) {
         BigDecimal writtenOff = body.writtenOffQuantity() == null || body.writtenOffQuantity().signum() == 0 ? BigDecimal.ZERO
                 : Quantities.requirePositive("writtenOffQuantity", body.writtenOffQuantity(), wholeUnits);
         BigDecimal received = body.receivedQuantity() == null
@@ -116,17 +118,18 @@ public class TransferReceiptService {
         return receipt;
     }
 
-    private void post(TransferOrder order, TransferReceipt receipt) {
+    private void post(TransferOrder order, TransferReceipt receipt, TransferNames known) {
         String reference = "transfer " + order.id;
         if (receipt.receivedQuantity.signum() > 0) {
-            ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, order.part.partNumber, IN_TRANSIT, order.to.code,
-                    receipt.receivedQuantity, receipt.recordedAt, "transfer received from " + order.from.code, reference,
-                    null, null, null));
+            ledger.postWithin(new MovementCommand(MovementKind.TRANSFER, known.partNumber(order), IN_TRANSIT,
+                    known.toCode(order), receipt.receivedQuantity, receipt.recordedAt,
+                    "transfer received from " + known.fromCode(order), reference, null, null, null));
         }
         if (receipt.writtenOffQuantity.signum() > 0) {
-            ledger.writeOffFromTransitWithin(new MovementCommand(MovementKind.WRITE_OFF, order.part.partNumber,
+            ledger.writeOffFromTransitWithin(new MovementCommand(MovementKind.WRITE_OFF, known.partNumber(order),
                     IN_TRANSIT, null, receipt.writtenOffQuantity, receipt.recordedAt,
-                    "in transit from " + order.from.code + " to " + order.to.code + ": " + receipt.writeOffReason,
+                    "in transit from " + known.fromCode(order) + " to " + known.toCode(order) + ": "
+                            + receipt.writeOffReason,
                     reference, null, null, null));
         }
     }

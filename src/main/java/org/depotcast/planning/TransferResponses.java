@@ -25,8 +25,8 @@ public final class TransferResponses {
                         BigDecimal receivedQuantity, BigDecimal writtenOffQuantity, BigDecimal outstanding,
                         String status, OffsetDateTime dispatchedAt, OffsetDateTime receivedAt, String actor,
                         String idempotencyKey, List<Receipt> receipts) {
-        static Order from(TransferOrder t) {
-            return new Order(t.id, t.part.partNumber, t.from.code, t.to.code, t.quantity, t.receivedQuantity,
+        static Order from(TransferOrder t, TransferNames names) {
+            return new Order(t.id, names.partNumber(t), names.fromCode(t), names.toCode(t), t.quantity, t.receivedQuantity,
                     t.writtenOffQuantity, t.outstanding(), t.status.name(), t.dispatchedAt, t.receivedAt, t.actor,
                     t.idempotencyKey, t.receipts.stream().map(Receipt::from).toList());
         }

@@ -8,9 +8,9 @@ import org.depotcast.common.BusinessRuleException;
 import org.depotcast.core.policy.DemandDistribution;
 import org.depotcast.core.policy.ShortageReduction;
 import org.depotcast.core.policy.TransferPlanner;
-import org.depotcast.stock.Location;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
+import org.depotcast.stock.LocationSummary;
 
 import java.math.BigDecimal;
 import java.util.ArrayList;
@@ -57,16 +57,16 @@ public class TransferService {
         if (partNumber != null) {
             parts.require("part", partNumber);
         }
-        List<Location> depots = locations.ofKind(LocationKind.DEPOT);
+        List<LocationSummary> depots = locations.summariesOfKind(LocationKind.DEPOT);
         var visible = scope.current();
         // The plan balances every depot against every other, so it is made over all of them, as the system; an
         // officer then sees the moves that touch the depots assigned to them.
         List<TransferResponses.Suggestion> suggestions = system.call("transfer-suggestions", () -> {
             Map<String, Map<String, StockPolicy>> byPart = new HashMap<>();
-            for (Location depot : depots) {
-                for (StockPolicy p : planning.policies(depot.code)) {
+            for (LocationSummary depot : depots) {
+                for (StockPolicy p : planning.policies(depot.code())) {
                     if (partNumber == null || partNumber.equals(p.partNumber())) {
-                        byPart.computeIfAbsent(p.partNumber(), k -> new HashMap<>()).put(depot.code, p);
+                        byPart.computeIfAbsent(p.partNumber(), k -> new HashMap<>()).put(depot.code(), p);
                     }
                 }
             }
@@ -75,11 +75,12 @@ public class TransferService {
             return all;
         });
         Map<String, Long> ids = new HashMap<>();
-        depots.forEach(d -> ids.put(d.code, d.id));
+        depots.forEach(d -> ids.put(d.code(), d.id()));
         return suggestions.stream().filter(s -> visible.sees(ids.get(s.from())) || visible.sees(ids.get(s.to()))).toList();
     }
 
-    private List<TransferResponses.Suggestion> suggestFor(String part, List<Location> depots, Map<String, StockPolicy> policies) {
+    private List<TransferResponses.Suggestion> suggestFor(String part, List<LocationSummary> depots,
+                                                          Map<String, StockPolicy> policies) {
         Sides sides = sides(depots, policies);
         if (sides.donors().isEmpty() || sides.receivers().isEmpty()) {
             return List.of();
@@ -92,10 +93,10 @@ public class TransferService {
         Map<String, Double> received = new HashMap<>();
         for (TransferPlanner.Move move : TransferPlanner.plan(sides.surplus().stream().mapToLong(Long::longValue).toArray(),
                 sides.deficit().stream().mapToLong(Long::longValue).toArray(), lanes.cost(), penalty)) {
-            StockPolicy to = policies.get(sides.receivers().get(move.to()).code);
+            StockPolicy to = policies.get(sides.receivers().get(move.to()).code());
             double before = to.position() + received.getOrDefault(to.locationCode(), 0.0);
             received.merge(to.locationCode(), (double) move.units(), Double::sum);
-            out.add(new TransferResponses.Suggestion(part, sides.donors().get(move.from()).code, to.locationCode(),
+            out.add(new TransferResponses.Suggestion(part, sides.donors().get(move.from()).code(), to.locationCode(),
                     move.units(), lanes.km()[move.from()][move.to()], move.unitCost(),
                     ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays())));
         }
@@ -104,13 +105,14 @@ public class TransferService {
     }
 
     /** Donors (units above their reorder point) and receivers (at or below it, with demand) of one part. */
-    private record Sides(List<Location> donors, List<Location> receivers, List<Long> surplus, List<Long> deficit) {
+    private record Sides(List<LocationSummary> donors, List<LocationSummary> receivers, List<Long> surplus,
+                         List<Long> deficit) {
     }
 
-    private static Sides sides(List<Location> depots, Map<String, StockPolicy> policies) {
+    private static Sides sides(List<LocationSummary> depots, Map<String, StockPolicy> policies) {
         Sides sides = new Sides(new ArrayList<>(), new ArrayList<>(), new ArrayList<>(), new ArrayList<>());
-        for (Location depot : depots) {
-            StockPolicy p = policies.get(depot.code);
+        for (LocationSummary depot : depots) {
+            StockPolicy p = policies.get(depot.code());
             if (p == null) {
                 continue;
             }
@@ -127,18 +129,18 @@ public class TransferService {
     }
 
     /** Distance and cost per unit of every donor-receiver lane, and the cheapest trip to each receiver. */
-    private record LaneMatrix(double[][] km, double[][] cost, Map<Location, Double> cheapestIn) {
+    private record LaneMatrix(double[][] km, double[][] cost, Map<LocationSummary, Double> cheapestIn) {
     }
 
     private LaneMatrix laneMatrix(Sides sides) {
-        List<Location> donors = sides.donors(), receivers = sides.receivers();
+        List<LocationSummary> donors = sides.donors(), receivers = sides.receivers();
         LaneMatrix matrix = new LaneMatrix(new double[donors.size()][receivers.size()],
                 new double[donors.size()][receivers.size()], new HashMap<>());
         Map<String, Double> lanes = laneCosts.costsSet();
         for (int i = 0; i < donors.size(); i++) {
             for (int j = 0; j < receivers.size(); j++) {
                 matrix.km()[i][j] = distanceKm(donors.get(i), receivers.get(j));
-                Double set = lanes.get(LaneCostRepository.lane(donors.get(i).id, receivers.get(j).id));
+                Double set = lanes.get(LaneCostRepository.lane(donors.get(i).id(), receivers.get(j).id()));
                 matrix.cost()[i][j] = set != null ? set : matrix.km()[i][j] * settings.transferCostPerUnitKm();
                 matrix.cheapestIn().merge(receivers.get(j), matrix.cost()[i][j], Math::min);
             }
@@ -154,7 +156,7 @@ public class TransferService {
                                                                   LaneMatrix lanes) {
         Map<String, DemandDistribution> demand = new HashMap<>();
         for (int j = 0; j < sides.receivers().size(); j++) {
-            StockPolicy p = policies.get(sides.receivers().get(j).code);
+            StockPolicy p = policies.get(sides.receivers().get(j).code());
             DemandDistribution d = PolicyCalculator.distribution(p.demandMean(), p.demandVariance());
             demand.put(p.locationCode(), d);
             sides.deficit().set(j, ShortageReduction.worthwhileUnits(d, p.position(), sides.deficit().get(j),
@@ -166,15 +168,16 @@ public class TransferService {
     /** Every lane between two depots: its distance, the distance-based cost per unit, and the cost set for it, if any. */
     @Transactional
     public List<TransferResponses.Lane> lanes() {
-        List<Location> depots = locations.ofKind(LocationKind.DEPOT);
+        List<LocationSummary> depots = locations.summariesOfKind(LocationKind.DEPOT);
         Map<String, Double> set = laneCosts.costsSet();
         List<TransferResponses.Lane> out = new ArrayList<>();
-        for (Location from : depots) {
-            for (Location to : depots) {
-                if (!from.id.equals(to.id)) {
+        for (LocationSummary from : depots) {
+            for (LocationSummary to : depots) {
+                if (from.id() != to.id()) {
                     double km = distanceKm(from, to);
-                    out.add(new TransferResponses.Lane(from.code, to.code, km, km * settings.transferCostPerUnitKm(),
-                            set.get(LaneCostRepository.lane(from.id, to.id))));
+                    out.add(new TransferResponses.Lane(from.code(), to.code(), km,
+                            km * settings.transferCostPerUnitKm(),
+                            set.get(LaneCostRepository.lane(from.id(), to.id()))));
                 }
             }
         }
@@ -185,20 +188,20 @@ public class TransferService {
     /** Sets the per-unit transport cost of one lane (programme lead or admin). */
     @Transactional
     public void setLaneCost(String fromCode, String toCode, BigDecimal unitCost) {
-        Location from = locations.require("from", fromCode);
-        Location to = locations.require("to", toCode);
-        if (from.id.equals(to.id)) {
+        LocationSummary from = locations.requireSummary("from", fromCode);
+        LocationSummary to = locations.requireSummary("to", toCode);
+        if (from.id() == to.id()) {
             throw new BusinessRuleException("to", "a lane joins two different stores");
         }
-        laneCosts.set(from.id, to.id, unitCost);
+        laneCosts.set(from.id(), to.id(), unitCost);
         audit.record("LANE_COST_SET", "transfer_lane", fromCode + ">" + toCode, null, java.util.Map.of("unitCost", unitCost));
     }
 
-    private static double distanceKm(Location a, Location b) {
-        if (a.latitude == null || a.longitude == null || b.latitude == null || b.longitude == null) {
+    private static double distanceKm(LocationSummary a, LocationSummary b) {
+        if (a.latitude() == null || a.longitude() == null || b.latitude() == null || b.longitude() == null) {
             return 0;
         }
-        return TransferPlanner.distanceKm(a.latitude.doubleValue(), a.longitude.doubleValue(),
-                b.latitude.doubleValue(), b.longitude.doubleValue());
+        return TransferPlanner.distanceKm(a.latitude().doubleValue(), a.longitude().doubleValue(),
+                b.latitude().doubleValue(), b.longitude().doubleValue());
     }
 }
