@@ -200,14 +200,16 @@ final class DemandAssembler {
         DemandChoice.Fleet expected = fleet == null ? null : new DemandChoice.Fleet(fleet, spread.process(key),
                 spread.gradient(key), model == null ? null : model.fit());
         double[] pm = horizonDemand.preventive(key);
+        CredibilityWeight weight = weights.getOrDefault(key, CredibilityWeight.FLEET_ONLY);
         DemandChoice.Result r = DemandChoice.choose(new DemandChoice.Input(series,
-                DemandChoice.Rule.parse(policyOf(partId)), expected, fleetHoldout.get(key),
-                weights.getOrDefault(key, CredibilityWeight.FLEET_ONLY), pm, spread.serviceVariance(key)));
+                DemandChoice.Rule.parse(policyOf(partId)), expected, fleetHoldout.get(key), weight, pm,
+                spread.serviceVariance(key)));
         LocalDate from = snapshot.historyStart().plusMonths(start);
         String method = r.historyMethod().name();
         return new PartForecastResult(partId, location, r.fromFleet() ? FLEET : method, r.alpha(), r.beta(),
                 r.profile(), r.breakdownPerMonth(), r.variancePerMonth(), pm, r.monthly(), series, from,
                 r.chosenScores(), r.fleetRmsse(), r.historyRmsse(), r.fromFleet() ? r.weight().describe(from)
-                : method.toLowerCase(Locale.ROOT) + " on the part's own history", r.monthlyVariance(), r.yearVariance());
+                : method.toLowerCase(Locale.ROOT) + " on the part's own history", r.monthlyVariance(), r.yearVariance(),
+                fleet == null ? Double.NaN : weight.ratio());
     }
 }

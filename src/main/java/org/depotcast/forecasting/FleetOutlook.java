@@ -23,14 +23,16 @@ public final class FleetOutlook {
     private final int yearMonths;
     /** Credibility ratio of each depot series, keyed part id|depot id (1 where absent). */
     private final Map<Long, Double> depotSeriesRatios;
+    private final String basis;
 
     FleetOutlook(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
                  Map<ComponentFamily, FleetRateModel> models, int months) {
-        this(snapshot, definitions, models, months, Map.of());
+        this(snapshot, definitions, models, months, Map.of(), "the run's own fit");
     }
 
     FleetOutlook(FleetSnapshot snapshot, Map<ComponentFamily, ForecastModelDefinition> definitions,
-                 Map<ComponentFamily, FleetRateModel> models, int months, Map<Long, Double> depotSeriesRatios) {
+                 Map<ComponentFamily, FleetRateModel> models, int months, Map<Long, Double> depotSeriesRatios,
+                 String basis) {
         if (months < 1) {
             throw new IllegalArgumentException("months must be ≥ 1, was " + months);
         }
@@ -44,6 +46,12 @@ public final class FleetOutlook {
         this.usage = new UsageOutlook(snapshot);
         this.yearMonths = Math.min(12, months);
         this.depotSeriesRatios = new java.util.HashMap<>(depotSeriesRatios);
+        this.basis = basis;
+    }
+
+    /** Where the rates came from, in words for a reader of the projection. */
+    public String basis() {
+        return basis;
     }
 
     /** A depot series as one number (ids are positive and far below 2³²): read once per pump and part. */

@@ -19,6 +19,7 @@ import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.LocationSummary;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
@@ -38,9 +39,12 @@ public class FleetSnapshotLoader {
     private final PartService parts;
     private final PumpModelService models;
 
+    private final Clock clock;
+
     FleetSnapshotLoader(PumpService pumps, UsageService usage, RepairService repairs, LocationService locations,
-                        PartService parts, PumpModelService models) {
+                        PartService parts, PumpModelService models, Clock clock) {
         this.models = models;
+        this.clock = clock;
         this.pumps = pumps;
         this.usage = usage;
         this.repairs = repairs;
@@ -65,7 +69,7 @@ public class FleetSnapshotLoader {
 
     @Transactional
     public FleetSnapshot load(LocalDate origin, int historyMonths) {
-        return asOf(origin, historyMonths, rows(), LocalDate.now(java.time.ZoneOffset.UTC));
+        return asOf(origin, historyMonths, rows(), LocalDate.now(clock));
     }
 
     private Rows rows() {

@@ -37,6 +37,7 @@ final class ForecastRecords {
         f.methodDetail = r.methodDetail();
         f.monthlyVariance = r.monthlyVariance();
         f.yearVariance = finite(r.yearVariance());
+        f.credibilityRatio = finite(r.credibilityRatio());
         return f;
     }
 }

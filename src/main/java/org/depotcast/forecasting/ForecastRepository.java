@@ -30,6 +30,26 @@ class ForecastRepository implements PanacheRepository<PartForecast> {
         return query.setMaxResults(limit).getResultList();
     }
 
+    /** The newest finished run as of {@code origin} (a month's first day), past-date checks included. */
+    Optional<ForecastRun> latestFinishedRunAsOf(java.time.LocalDate origin) {
+        return getEntityManager().createQuery(
+                        "select r from ForecastRun r where r.status = :done and r.origin = :origin order by r.id desc",
+                        ForecastRun.class)
+                .setParameter("done", ForecastRun.Status.DONE).setParameter("origin", origin).setMaxResults(1)
+                .getResultStream().findFirst();
+    }
+
+    /** A series' stored credibility ratio. */
+    record StoredRatio(Long partId, String locationCode, Double ratio) {
+    }
+
+    /** The credibility ratio of each of the run's series that kept one (none in runs stored before it was kept). */
+    List<StoredRatio> credibilityRatios(long runId) {
+        return getEntityManager().createQuery("select f.partId, f.locationCode, f.credibilityRatio from PartForecast f "
+                        + "where f.runId = :run and f.credibilityRatio is not null", StoredRatio.class)
+                .setParameter("run", runId).getResultList();
+    }
+
     Optional<ForecastRun> run(long id) {
         return Optional.ofNullable(getEntityManager().find(ForecastRun.class, id));
     }

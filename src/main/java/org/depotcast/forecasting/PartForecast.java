@@ -67,6 +67,9 @@ public class PartForecast {
     /** Variance of the first 12 months' total demand. */
     @Column(name = "year_variance")
     public Double yearVariance;
+    /** The credibility ratio the series' fleet rate was given (null where the fleet model did not cover it). */
+    @Column(name = "credibility_ratio")
+    public Double credibilityRatio;
     @Column(name = "monthly_history", nullable = false)
     @Convert(converter = MonthlySeriesJson.class)
     public double[] monthlyHistory;

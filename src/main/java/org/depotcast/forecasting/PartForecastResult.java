@@ -21,9 +21,12 @@ import org.depotcast.core.forecast.ErrorScores;
  * @param monthlyVariance   variance of each horizon month's total demand (breakdowns with the rate's uncertainty,
  *                          plus the scheduled services' timing), units²; see {@link DemandSpread}
  * @param yearVariance      variance of the first 12 months' total demand, with the months' correlation, units²
+ * @param credibilityRatio  the multiplier the series' own history put on the fleet rate (1 where it added nothing);
+ *                          NaN where the fleet model does not cover the series
  */
 record PartForecastResult(long partId, String locationCode, String method, double alpha, double beta,
                           DemandProfile profile, double breakdownPerMonth, double variancePerMonth, double[] preventive,
                           double[] monthly, double[] history, java.time.LocalDate historyFrom, ErrorScores chosenScores, double fleetRmsse,
-                          double historyRmsse, String methodDetail, double[] monthlyVariance, double yearVariance) {
+                          double historyRmsse, String methodDetail, double[] monthlyVariance, double yearVariance,
+                          double credibilityRatio) {
 }

@@ -10,8 +10,8 @@ import org.depotcast.core.spend.SpendSimulation;
 import org.depotcast.forecasting.FleetSnapshot;
 import org.depotcast.forecasting.FleetSnapshotLoader;
 
+import java.time.Clock;
 import java.time.LocalDate;
-import java.time.ZoneOffset;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -31,8 +31,11 @@ public class BackCheckService {
     private final AccessScope scope;
     private final FinancialYearService financialYears;
 
+    private final Clock clock;
+
     BackCheckService(FleetSnapshotLoader fleet, SpendLineService lines, AccessScope scope,
-                     FinancialYearService financialYears) {
+                     FinancialYearService financialYears, Clock clock) {
+        this.clock = clock;
         this.financialYears = financialYears;
         this.fleet = fleet;
         this.lines = lines;
@@ -55,8 +58,8 @@ public class BackCheckService {
         Map<Long, PartSummary> partsById = lines.partsById();
         List<YearCheck> checks = new ArrayList<>();
         // A snapshot as of a year's start holds nothing dated after it: what was used comes from today's records.
-        List<FleetSnapshot.Consumption> used = fleet.load(LocalDate.now(ZoneOffset.UTC), 36).consumption();
-        for (FinancialYears.Period period : financialYears.current().completedBefore(LocalDate.now(ZoneOffset.UTC), years)) {
+        List<FleetSnapshot.Consumption> used = fleet.load(LocalDate.now(clock), 36).consumption();
+        for (FinancialYears.Period period : financialYears.current().completedBefore(LocalDate.now(clock), years)) {
             LocalDate origin = period.startsOn();
             int year = origin.getYear();
             ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + period.label(), 1, null, null, null, null,

@@ -9,8 +9,8 @@ import org.depotcast.access.CurrentUser;
 import org.depotcast.common.InvalidInputException;
 import org.eclipse.microprofile.config.inject.ConfigProperty;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Map;
 
@@ -28,8 +28,11 @@ public class FinancialYearService {
     private final CurrentUser currentUser;
     private final AuditService audit;
 
+    private final Clock clock;
+
     FinancialYearService(EntityManager em, @ConfigProperty(name = "depotcast.spend.financial-year-start-month",
-            defaultValue = "1") int configured, AccessScope scope, CurrentUser currentUser, AuditService audit) {
+            defaultValue = "1") int configured, AccessScope scope, CurrentUser currentUser, AuditService audit, Clock clock) {
+        this.clock = clock;
         this.em = em;
         this.configured = configured;
         this.scope = scope;
@@ -55,7 +58,7 @@ public class FinancialYearService {
         em.createNativeQuery("delete from programme_setting where setting_name = ?1").setParameter(1, SETTING).executeUpdate();
         em.createNativeQuery("insert into programme_setting (setting_name, setting_value, set_by, set_at) values (?1, ?2, ?3, ?4)")
                 .setParameter(1, SETTING).setParameter(2, Integer.toString(startMonth)).setParameter(3, currentUser.name())
-                .setParameter(4, OffsetDateTime.now(ZoneOffset.UTC)).executeUpdate();
+                .setParameter(4, OffsetDateTime.now(clock)).executeUpdate();
         audit.record("FINANCIAL_YEAR_SET", "programme_setting", SETTING, Map.of("startMonth", before.startMonth()),
                 Map.of("startMonth", startMonth));
         return new FinancialYears(startMonth);

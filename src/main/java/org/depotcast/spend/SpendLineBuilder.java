@@ -57,6 +57,11 @@ final class SpendLineBuilder {
         }
     }
 
+    /** Where the fleet's rates came from, in words ({@link FleetOutlook#basis}). */
+    String ratesBasis() {
+        return outlook.basis();
+    }
+
     SpendLineBuilder(FleetOutlook outlook, Map<Long, PartSummary> partsById, ScenarioDefinition scenario,
                      List<FinancialYears.Period> periods) {
         this.outlook = outlook;

@@ -30,8 +30,11 @@ class SpendResource {
     private final BackCheckService backCheck;
     private final FinancialYearService financialYears;
 
+    private final java.time.Clock clock;
+
     SpendResource(SpendService service, SpendScenarioService scenarios, BackCheckService backCheck,
-                  FinancialYearService financialYears) {
+                  FinancialYearService financialYears, java.time.Clock clock) {
+        this.clock = clock;
         this.service = service;
         this.scenarios = scenarios;
         this.backCheck = backCheck;
@@ -40,8 +43,8 @@ class SpendResource {
 
     /** The month the programme's financial year starts, and the current year's label and months. */
     record FinancialYearView(int startMonth, String currentYear, String currentYearMonths) {
-        static FinancialYearView of(FinancialYears fy) {
-            FinancialYears.Period now = fy.projection(fy.startOfYearContaining(java.time.LocalDate.now(java.time.ZoneOffset.UTC)), 1).get(0);
+        static FinancialYearView of(FinancialYears fy, java.time.LocalDate today) {
+            FinancialYears.Period now = fy.projection(fy.startOfYearContaining(today), 1).get(0);
             return new FinancialYearView(fy.startMonth(), now.label(), now.months());
         }
     }
@@ -53,7 +56,7 @@ class SpendResource {
     @GET
     @Path("financial-year")
     public FinancialYearView financialYear() {
-        return FinancialYearView.of(financialYears.current());
+        return FinancialYearView.of(financialYears.current(), java.time.LocalDate.now(clock));
     }
 
     /** The programme lead sets the month the financial year starts (1 = January); later runs use it. */
@@ -62,7 +65,7 @@ class SpendResource {
     @Consumes(MediaType.APPLICATION_JSON)
     @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public FinancialYearView setFinancialYear(@Valid @NotNull FinancialYearRequest request) {
-        return FinancialYearView.of(financialYears.set(request.startMonth()));
+        return FinancialYearView.of(financialYears.set(request.startMonth()), java.time.LocalDate.now(clock));
     }
 
     /** Past years: the projection made with only earlier data, beside what was actually used. */

@@ -73,8 +73,8 @@ public record SpendResults(String scenario, String currency, int draws, long see
                 + (periods.get(0).partial() ? "; the first period is the months left in the year in progress (" + periods.get(0).months()
                 + "), then " + definition.horizonYears() + " whole years." : "."));
         notes.add("The first period includes the stock needed now to bring the programme to its policy levels.");
-        notes.add("Demand as of " + periods.get(0).startsOn() + ": the fleet models, depot ratios, credibility and usage "
-                + "history (measured hours where pumps have sensors) of a forecast run as of that day.");
+        notes.add("Demand as of " + periods.get(0).startsOn() + ": the pumps and usage history (measured hours where "
+                + "pumps have sensors) as of that day, with " + builder.ratesBasis() + ".");
         notes.add("Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = the standard "
                 + "error of the family's projected log demand by the delta method) and overdispersion where the fit found it.");
         return new SpendResults(name, currency, definition.drawsOrDefault(), definition.seedOrDefault(),

@@ -16,8 +16,8 @@ import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
 import org.depotcast.stock.LocationService;
 
+import java.time.Clock;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 
 /** Saved spend scenarios: named, checked against the catalogue and the depots, changed with an audit record. */
@@ -35,8 +35,11 @@ public class SpendScenarioService {
     static class Scenarios implements PanacheRepository<SpendScenario> {
     }
 
+    private final Clock clock;
+
     SpendScenarioService(Scenarios scenarios, PumpModelService models, LocationService locations, AccessScope scope,
-                         CurrentUser currentUser, AuditService audit, ObjectMapper json) {
+                         CurrentUser currentUser, AuditService audit, ObjectMapper json, Clock clock) {
+        this.clock = clock;
         this.scenarios = scenarios;
         this.models = models;
         this.locations = locations;
@@ -56,7 +59,7 @@ public class SpendScenarioService {
         SpendScenario scenario = new SpendScenario();
         scenario.name = definition.name();
         scenario.definition = toJson(definition);
-        scenario.createdAt = OffsetDateTime.now(ZoneOffset.UTC);
+        scenario.createdAt = OffsetDateTime.now(clock);
         scenario.createdBy = currentUser.name();
         scenarios.persist(scenario);
         audit.record("SPEND_SCENARIO_SAVED", "spend_scenario", scenario.name, null, definition);

@@ -20,9 +20,9 @@ import org.depotcast.jobs.JobKind;
 import org.depotcast.jobs.JobProgress;
 import org.depotcast.jobs.JobRunner;
 
+import java.time.Clock;
 import java.time.LocalDate;
 import java.time.OffsetDateTime;
-import java.time.ZoneOffset;
 import java.util.List;
 import java.util.Map;
 
@@ -46,8 +46,11 @@ public class SpendService {
     static class Runs implements PanacheRepository<SpendRun> {
     }
 
+    private final Clock clock;
+
     SpendService(Runs runs, SpendScenarioService scenarios, SpendLineService lineService, ForecastRunService forecastRuns,
-                 AccessScope scope, JobRunner jobs, ObjectMapper json, FinancialYearService financialYears) {
+                 AccessScope scope, JobRunner jobs, ObjectMapper json, FinancialYearService financialYears, Clock clock) {
+        this.clock = clock;
         this.runs = runs;
         this.scenarios = scenarios;
         this.lineService = lineService;
@@ -74,7 +77,7 @@ public class SpendService {
      */
     public SpendRun start(long scenarioId, LocalDate origin) {
         scope.requireProgramme();
-        LocalDate current = LocalDate.now(ZoneOffset.UTC).withDayOfMonth(1);
+        LocalDate current = LocalDate.now(clock).withDayOfMonth(1);
         LocalDate from = origin == null ? current : origin.withDayOfMonth(1);
         if (from.isAfter(current)) {
             throw new InvalidInputException("origin", "must not be after the current month's first day " + current
@@ -94,7 +97,7 @@ public class SpendService {
             r.origin = from;
             r.status = SpendRun.Status.RUNNING;
             r.phase = "queued";
-            r.startedAt = OffsetDateTime.now(ZoneOffset.UTC);
+            r.startedAt = OffsetDateTime.now(clock);
             r.draws = definition.drawsOrDefault();
             r.seed = definition.seedOrDefault();
             runs.persist(r);
@@ -109,7 +112,7 @@ public class SpendService {
     void onJobFailed(@jakarta.enterprise.event.Observes JobFailed failed) {
         QuarkusTransaction.joiningExisting().run(() -> runs.update(
                 "status = ?1, finishedAt = ?2, message = ?3, phase = ?4 where jobId = ?5 and status = ?6",
-                SpendRun.Status.FAILED, OffsetDateTime.now(ZoneOffset.UTC), failed.message(), "failed", failed.jobId(),
+                SpendRun.Status.FAILED, OffsetDateTime.now(clock), failed.message(), "failed", failed.jobId(),
                 SpendRun.Status.RUNNING));
     }
 
@@ -171,7 +174,7 @@ public class SpendService {
             run.results = stored;
             run.status = SpendRun.Status.DONE;
             run.phase = "done";
-            run.finishedAt = OffsetDateTime.now(ZoneOffset.UTC);
+            run.finishedAt = OffsetDateTime.now(clock);
         });
         return "Spend run " + runId + ": " + periods.size() + " periods from " + origin + ", " + lines.length + " lines.";
     }

@@ -9,6 +9,7 @@ import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.forecasting.FleetOutlook;
 import org.depotcast.forecasting.FleetOutlooks;
+import org.depotcast.forecasting.FleetSnapshot;
 import org.depotcast.forecasting.ForecastRun;
 import org.depotcast.forecasting.ForecastRunService;
 import org.junit.jupiter.api.Test;
@@ -43,6 +44,8 @@ class SpendMatchesForecastTest {
     SpendLineService lines;
     @Inject
     FleetOutlooks outlooks;
+    @Inject
+    jakarta.persistence.EntityManager em;
 
     @Test
     void firstYearOfSpendEqualsTheStoredForecastPerDepotAndPart() {
@@ -100,6 +103,62 @@ class SpendMatchesForecastTest {
                         - v.stream().mapToDouble(Double::doubleValue).min().orElseThrow()).max().orElse(0);
         assertTrue(spread > 100 * ROUNDING, "depots of one part differ by " + spread + " units");
         assertTrue(fittedFamilies(outlook) > 0, "at least one family has a fitted model");
+    }
+
+    /**
+     * Spend reads a finished run's stored models and depot credibility ratios instead of fitting them again: read back,
+     * they give every pump the same expected breakdown units, month by month, as a fit made afresh on the same data.
+     * The demo's depot series keep ratio 1 (Dean's test finds no spread beyond chance), so one stored ratio is then
+     * changed to show the read path applies what the run stored to that depot's pumps and no others.
+     */
+    @Test
+    void theStoredRunsRatesGiveEveryPumpTheUnitsAFreshFitGives() {
+        LocalDate origin = LocalDate.now(ZoneOffset.UTC).withDayOfMonth(1);
+        ForecastRun run = forecasts.runNow("test", origin);
+        FleetOutlook fresh = outlooks.fittedAsOf(origin, 24);
+        FleetOutlook stored = outlooks.asOf(origin, 24);
+        assertTrue(stored.basis().contains("forecast run " + run.id), stored.basis());
+        assertTrue(fresh.basis().startsWith("fitted"), fresh.basis());
+        var pumps = fresh.snapshot().pumps().stream().filter(p -> p.bom().stream()
+                .anyMatch(b -> fresh.model(b.family()) != null)).toList();
+        int compared = 0;
+        for (var pump : pumps) {
+            for (var part : pump.bom()) {
+                if (fresh.model(part.family()) != null) {
+                    assertSameUnits(fresh, stored, pump, part, 1.0);
+                    compared++;
+                }
+            }
+        }
+        assertTrue(compared > 1000, "pump × part rates compared: " + compared);
+
+        var pump = pumps.get(0);
+        var part = pump.bom().stream().filter(b -> fresh.model(b.family()) != null).findFirst().orElseThrow();
+        String depot = fresh.snapshot().locationCodes().get(pump.depotId());
+        int changed = QuarkusTransaction.requiringNew().call(() -> em.createNativeQuery("update part_forecast set "
+                        + "credibility_ratio = 1.25 where run_id = ?1 and part_id = ?2 and location_code = ?3")
+                .setParameter(1, run.id).setParameter(2, part.partId()).setParameter(3, depot)
+                .executeUpdate());
+        assertEquals(1, changed);
+        FleetOutlook changedRun = outlooks.asOf(origin, 24);
+        assertEquals(1.25, changedRun.credibilityRatio(part.partId(), pump.depotId()), 1e-12);
+        assertSameUnits(fresh, changedRun, pump, part, 1.25);
+        var elsewhere = pumps.stream().filter(p -> p.depotId() != pump.depotId()
+                && p.bom().stream().anyMatch(b -> b.partId() == part.partId())).findFirst().orElseThrow();
+        assertSameUnits(fresh, changedRun, elsewhere, part, 1.0);
+    }
+
+    private static void assertSameUnits(FleetOutlook fresh, FleetOutlook stored, FleetSnapshot.PumpRecord pump,
+                                        FleetSnapshot.BomPart part, double ratio) {
+        // As spend counts them: the pump's units times its depot series' credibility ratio.
+        double[] expected = fresh.breakdownUnits(pump, part, fresh.months(pump, 1.0, 1.0));
+        double[] read = stored.breakdownUnits(pump, part, stored.months(pump, 1.0, 1.0));
+        double freshRatio = fresh.credibilityRatio(part.partId(), pump.depotId());
+        double readRatio = stored.credibilityRatio(part.partId(), pump.depotId());
+        for (int m = 0; m < expected.length; m++) {
+            assertEquals(expected[m] * freshRatio * ratio, read[m] * readRatio, 1e-12 * Math.max(1, expected[m]), "pump " + pump.id() + " part "
+                    + part.partId() + " month " + m);
+        }
     }
 
     private static long fittedFamilies(FleetOutlook outlook) {
