@@ -9,7 +9,6 @@ import java.util.EnumMap;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
-import java.util.function.BiFunction;
 import java.util.function.Function;
 
 /**
@@ -36,9 +35,8 @@ final class FleetCredibility {
         }
     }
 
-    /** Adds one pump's fleet-expected breakdown units per history month to each of its series. */
-    void addPump(FleetSnapshot.PumpRecord pump, List<String> locations,
-                 BiFunction<FleetSnapshot.BomPart, String, String> keyOf) {
+    /** Adds one pump's fleet-expected breakdown units per history month to each of its series ({@code keysByPart}). */
+    void addPump(FleetSnapshot.PumpRecord pump, Map<Long, List<String>> keysByPart) {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
         int months = monthStart.length - 1;
         for (FleetSnapshot.BomPart part : pump.bom()) {
@@ -61,8 +59,8 @@ final class FleetCredibility {
                 }
                 return units;
             });
-            for (String location : locations) {
-                double[] cell = expected.computeIfAbsent(keyOf.apply(part, location), k -> new double[months]);
+            for (String key : keysByPart.get(part.partId())) {
+                double[] cell = expected.computeIfAbsent(key, k -> new double[months]);
                 for (int m = 0; m < months; m++) {
                     cell[m] += perMonth[m];
                 }
