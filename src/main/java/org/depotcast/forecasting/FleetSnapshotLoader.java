@@ -1,5 +1,6 @@
 package org.depotcast.forecasting;
 
+import io.quarkus.narayana.jta.runtime.TransactionConfiguration;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.ComponentFamily;
@@ -67,7 +68,13 @@ public class FleetSnapshotLoader {
                 List<FleetSnapshot.BomPart> bom) {
     }
 
+    /**
+     * Reads in one transaction, so the register and the records agree. At 40 times the demo on a machine shared with
+     * other work the read took longer than the default transaction timeout and the run failed; as for storing a run,
+     * ten minutes are allowed.
+     */
     @Transactional
+    @TransactionConfiguration(timeout = 600)
     public FleetSnapshot load(LocalDate origin, int historyMonths) {
         return asOf(origin, historyMonths, rows(), LocalDate.now(clock));
     }
