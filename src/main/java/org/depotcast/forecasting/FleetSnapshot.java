@@ -65,7 +65,32 @@ public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<P
 
     }
 
+    /**
+     * One part replaced on one repair line.
+     *
+     * @param day        the day the repair was fixed, or reported while it is open
+     * @param reportedOn the day it was reported (on or before {@code day})
+     */
     public record Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,
-                       double quantity) {
+                       double quantity, LocalDate reportedOn) {
+        /** A repair fixed (or reported, while open) on the day it was reported. */
+        public Consumption(long partId, long pumpId, long depotId, String mechanic, boolean breakdown, LocalDate day,
+                           double quantity) {
+            this(partId, pumpId, depotId, mechanic, breakdown, day, quantity, day);
+        }
+
+        /**
+         * The line as the records showed it on {@code origin}: as it is, when fixed before then; open and dated by
+         * its report, when reported before then and fixed later (as {@code coalesce(fixed, reported)} dated it on that
+         * day); null when reported on or after it.
+         */
+        Consumption asKnownOn(LocalDate origin) {
+            if (day.isBefore(origin)) {
+                return this;
+            }
+            return reportedOn.isBefore(origin)
+                    ? new Consumption(partId, pumpId, depotId, mechanic, breakdown, reportedOn, quantity, reportedOn)
+                    : null;
+        }
     }
 }

@@ -117,12 +117,13 @@ class RepairRepository implements PanacheRepository<Repair> {
 
     /**
      * Every part replaced, one row per repair line: part id, pump id, mechanic, repair kind, date fixed (reported when
-     * not yet fixed), quantity, without the pump's depot (fleet's). The raw demand history for forecasting.
+     * not yet fixed), quantity, date reported, without the pump's depot (fleet's). The raw demand history for
+     * forecasting.
      */
     List<ConsumptionRow> consumptionRows() {
         return getEntityManager().createQuery("""
                 select new org.depotcast.repairs.ConsumptionRow(l.partId, r.pumpId, r.mechanic,
-                       r.kind, coalesce(r.fixedOn, r.reportedOn), l.quantity)
+                       r.kind, coalesce(r.fixedOn, r.reportedOn), l.quantity, r.reportedOn)
                 from RepairLine l join l.repair r
                 """, ConsumptionRow.class).getResultList();
     }

@@ -134,6 +134,41 @@ class ForecastOriginTest {
     }
 
     @Test
+    void aRepairOpenOnTheOriginIsReadAsTheRecordsThenShowedIt() {
+        // Reported before the origin and fixed after it: on the origin it was open, dated by its report.
+        LocalDate reported = ORIGIN.minusDays(10), fixed = ORIGIN.plusDays(20);
+        List<FleetSnapshot.Consumption> later = baseConsumption();
+        later.add(new FleetSnapshot.Consumption(CUP_SEAL, 2, TESHVALE, "m1", true, fixed, 4, reported));
+        later.add(new FleetSnapshot.Consumption(O_RING, 3, MARROWFORD, "m2", false, fixed, 1, reported));
+        later.add(new FleetSnapshot.Consumption(CUP_SEAL, 1, TESHVALE, "m1", true, fixed, 6, ORIGIN));
+        List<FleetSnapshot.Consumption> open = baseConsumption();
+        open.add(new FleetSnapshot.Consumption(CUP_SEAL, 2, TESHVALE, "m1", true, reported, 4, reported));
+        open.add(new FleetSnapshot.Consumption(O_RING, 3, MARROWFORD, "m2", false, reported, 1, reported));
+
+        FleetSnapshot asOf = FleetSnapshotLoader.asOf(ORIGIN, 72, rows(basePumps(), baseReadings(), later));
+        FleetSnapshot onTheDay = FleetSnapshotLoader.asOf(ORIGIN, 72, rows(basePumps(), baseReadings(), open));
+
+        assertEquals(baseConsumption().size() + 2, asOf.consumption().size(), "the repair reported on the origin is left out");
+        assertTrue(asOf.consumption().stream().anyMatch(c -> c.partId() == CUP_SEAL && c.quantity() == 4
+                && c.day().equals(reported)), "the open breakdown is dated by its report");
+        FleetSnapshot.PumpRecord serviced = asOf.pumps().stream().filter(p -> p.id() == 3).findFirst().orElseThrow();
+        assertEquals(reported.toEpochDay(), serviced.lastServiceDay(), "the open service counts from its report");
+        List<PartForecastResult> expected = forecast(onTheDay, "auto"), actual = forecast(asOf, "auto");
+        assertEquals(expected.size(), actual.size());
+        for (int i = 0; i < expected.size(); i++) {
+            assertArrayEquals(expected.get(i).monthly(), actual.get(i).monthly(), 1e-12, expected.get(i).locationCode());
+            assertArrayEquals(expected.get(i).history(), actual.get(i).history(), 1e-12);
+        }
+        // Left out, the breakdown would lower the cup seal's history at its depot.
+        FleetSnapshot cut = FleetSnapshotLoader.asOf(ORIGIN, 72, rows(basePumps(), baseReadings(), baseConsumption()));
+        double withOpen = forecast(asOf, "poisson").stream().filter(r -> r.partId() == CUP_SEAL && r.locationCode().equals("DEP-T"))
+                .findFirst().orElseThrow().history()[23];
+        double without = forecast(cut, "poisson").stream().filter(r -> r.partId() == CUP_SEAL && r.locationCode().equals("DEP-T"))
+                .findFirst().orElseThrow().history()[23];
+        assertEquals(without + 4, withOpen, 1e-12);
+    }
+
+    @Test
     void eachSeriesStartsAtItsRealBeginning() {
         FleetSnapshot snapshot = FleetSnapshotLoader.asOf(ORIGIN, 72, rows(basePumps(), baseReadings(), baseConsumption()));
         Map<String, PartForecastResult> byKey = new java.util.HashMap<>();

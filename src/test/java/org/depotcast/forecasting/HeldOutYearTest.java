@@ -257,7 +257,8 @@ class HeldOutYearTest {
                 String fixed = r.get("fixed_on");
                 consumption.add(new FleetSnapshot.Consumption(partIds.get(r.get("part_number")), pump.id(), pump.depotId(),
                         r.get("mechanic"), r.get("kind").equals("BREAKDOWN"),
-                        LocalDate.parse(fixed.isEmpty() ? r.get("reported_on") : fixed), Double.parseDouble(r.get("quantity"))));
+                        LocalDate.parse(fixed.isEmpty() ? r.get("reported_on") : fixed), Double.parseDouble(r.get("quantity")),
+                        LocalDate.parse(r.get("reported_on"))));
             }
             Map<ComponentFamily, PlantedRate> planted = new EnumMap<>(ComponentFamily.class);
             PlantedRate.read(dir.resolve("planted-rates.csv")).forEach((family, rate) ->
