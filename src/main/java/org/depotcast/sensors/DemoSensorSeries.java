@@ -9,14 +9,17 @@ import java.util.SplittableRandom;
  * A demo pump's invented daily hours of use, seeded by the pump's asset id so a pump always gets the same series:
  * its recorded load scaled by a lasting pump factor (lognormal, σ 0.2); a seasonal swing of ±25 % peaking in March
  * (the dry season, when other sources fail); one quiet day a week at 35 %; day-to-day noise (lognormal, σ 0.15);
- * for 8 % of pumps a gradual decline to 45 % over 60 days from a day in the year; transmission gaps (1.5 % of days
- * start one of 1–7 days with no reading); and each recorded breakdown as use near nothing from some days before its
+ * for 8 % of pumps a gradual decline to 45 % over 60 days from a day in the year; for 30 % of pumps, low-use days
+ * ({@link #idleDays}); transmission gaps (1.5 % of days start one of 1–7 days with no reading); and each recorded
+ * breakdown as use near nothing from some days before its
  * report (the sensor sees the stop before anyone reports it; {@link ReportDelay}) until its fix, or to the end while
  * it is open.
  */
 final class DemoSensorSeries {
     /** Share of demo pumps fitted with a sensor. */
     static final double SENSOR_SHARE = 0.40;
+    /** Share of sensor pumps that have low-use days while working (see seed-data/README.md: invented). */
+    static final double IDLING_SHARE = 0.30;
 
     record Stop(LocalDate reportedOn, LocalDate fixedOn) {
     }
@@ -78,6 +81,7 @@ final class DemoSensorSeries {
             double noise = Math.exp(0.15 * random.nextGaussian());
             hours[d] = Math.min(24, Math.round(level * season * week * decline * noise * 100) / 100.0);
         }
+        idleDays(hours, new SplittableRandom(seed * 104_729L + assetId.hashCode() * 31L + 17));
         List<LocalDate> stoppedFrom = new java.util.ArrayList<>();
         for (Stop stop : stops) {
             LocalDate from = stop.reportedOn().minusDays(delay.draw(random));
@@ -103,5 +107,28 @@ final class DemoSensorSeries {
             }
         }
         return new Series(hours, stoppedFrom);
+    }
+
+    /**
+     * Low-use days of a working pump (a market day, rain, another source nearby): for 30 % of pumps ({@link #IDLING_SHARE}),
+     * spells of 1 day (60 %), 2 (30 %) or 3 (10 %) days of use under a quarter of an hour, starting on a day with a
+     * chance drawn once per pump between 1 in 60 and 1 in 10 (log-uniform). Drawn from their own seeded stream, so the
+     * rest of the series is the same as without them. All figures are invented for the demo.
+     */
+    private static void idleDays(double[] hours, SplittableRandom random) {
+        if (random.nextDouble() >= IDLING_SHARE) {
+            return;
+        }
+        double spellsPerDay = Math.exp(Math.log(1 / 60.0) + random.nextDouble() * Math.log(6.0));
+        for (int d = 0; d < hours.length; d++) {
+            if (random.nextDouble() < spellsPerDay) {
+                double length = random.nextDouble();
+                int days = length < 0.6 ? 1 : length < 0.9 ? 2 : 3;
+                for (int i = d; i < Math.min(hours.length, d + days); i++) {
+                    hours[i] = Math.round(random.nextDouble() * 25) / 100.0;
+                }
+                d += days;
+            }
+        }
     }
 }

@@ -35,7 +35,8 @@ import java.util.TreeMap;
 public class ProbablyDownService {
     static final String METHOD = "Stop: Page's CUSUM (1954) on the pump's daily hours against its previous 28 days "
             + "(k = 0.5σ, h = 4σ). Probability down: Bayes' rule over the days of near-nothing use, against the pump's "
-            + "own share of idle days and a prior of one breakdown a pump-year. Parts: the probability times each "
+            + "share of idle days in its last 112 days shrunk towards the programme's (a beta prior fitted over the "
+            + "sensor pumps judged together, empirical Bayes) and a prior of one breakdown a pump-year. Parts: the probability times each "
             + "family's share of the pump's fleet-model breakdown rate (depth, age, load, its depot's ratio where the "
             + "forecast run kept one) times units per repair. To have ready: the smallest whole number of each part that "
             + "covers the flagged pumps' need (Poisson with the summed expected units) at the programme's service "

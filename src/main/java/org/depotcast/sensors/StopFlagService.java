@@ -5,6 +5,7 @@ import io.quarkus.logging.Log;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AuditService;
+import org.depotcast.core.sensors.IdleDayPrior;
 import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
 import org.depotcast.fleet.RepairFacts;
@@ -26,7 +27,11 @@ import java.util.Map;
  * ({@link StopDetector}), with a probability of at least {@value #LEAST_PROBABILITY} and no repair reported since the
  * stop, is flagged; a flag closes when a repair is reported (REPAIR_REPORTED) or when use comes back without one
  * (FALSE_ALARM, counted in the report). The detector judges the days read less the downtime of breakdowns already
- * on record ({@link RecordedDowntime}), so an earlier repair's days are not taken for the pump idling.
+ * on record ({@link RecordedDowntime}), so an earlier repair's days are not taken for the pump idling. How often a
+ * working pump idles is fitted over the pumps judged together ({@link IdleDayPrior}: a day's file of the programme, the
+ * stop check); a refresh of fewer than {@value IdleDayPrior#LEAST_PUMPS} pumps (a single pump's file) has too few to
+ * pool over and judges each pump alone (independent days by Laplace's rule), which needs more near-nothing days
+ * before a flag of a pump that never idles.
  */
 @ApplicationScoped
 public class StopFlagService {
@@ -51,7 +56,8 @@ public class StopFlagService {
     private final SensorUsageQuery usage;
     private final RepairRecords repairs;
     private final AuditService audit;
-    private final StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
+    private static final StopDetector.Settings SETTINGS = StopDetector.Settings.DEFAULT;
+    private final StopDetector detector = new StopDetector(SETTINGS);
 
     StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit) {
         this.flags = flags;
@@ -63,25 +69,29 @@ public class StopFlagService {
     /** Judges every pump read in the detector's window up to {@code asOf}. */
     @Transactional
     public int refreshAll(LocalDate asOf) {
-        int days = StopDetector.Settings.DEFAULT.windowDays();
-        return refresh(usage.pumpsReadSince(asOf.minusDays(days - 1L)), asOf);
+        return refresh(usage.pumpsReadSince(asOf.minusDays(SETTINGS.windowDays() - 1L)), asOf);
     }
 
     /** Judges the given pumps as of {@code asOf}; returns the flags open afterwards among them. */
     @Transactional
     public int refresh(Collection<Long> pumpIds, LocalDate asOf) {
-        int days = StopDetector.Settings.DEFAULT.windowDays();
+        int days = SETTINGS.historyDays();
         LocalDate firstDay = asOf.minusDays(days - 1L);
         Map<Long, double[]> windows = usage.windows(pumpIds, asOf, days);
         Map<Long, RepairFacts> facts = repairs.factsOfAll();
         Map<Long, List<RepairSpan>> breakdowns = repairs.breakdownsBetween(firstDay, asOf);
         Map<Long, StopFlag> open = new HashMap<>();
         flags.open().forEach(f -> open.put(f.pumpId, f));
-        int opened = 0, stillOpen = 0;
+        Map<Long, double[]> judged = new HashMap<>();
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
-            StopDetector.Verdict verdict = detector.judge(RecordedDowntime.leaveOut(pump.getValue(),
+            judged.put(pump.getKey(), RecordedDowntime.leaveOut(pump.getValue(),
                     inWindow(breakdowns.getOrDefault(pump.getKey(), List.of()), firstDay, days),
-                    StopDetector.Settings.DEFAULT.stopFraction()));
+                    SETTINGS.stopFraction()));
+        }
+        IdleDayPrior prior = pooledPrior(judged.values());
+        int opened = 0, stillOpen = 0;
+        for (Map.Entry<Long, double[]> pump : judged.entrySet()) {
+            StopDetector.Verdict verdict = detector.judge(pump.getValue(), prior);
             RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
@@ -92,9 +102,21 @@ public class StopFlagService {
             }
         }
         if (opened > 0) {
-            Log.infof("sensors: %d pumps newly probably down as of %s", opened, asOf);
+            Log.infof("sensors: %d pumps newly probably down as of %s (idle spells: %s)", opened, asOf, prior);
         }
         return stillOpen;
+    }
+
+    /** The programme's idle-day prior fitted over the pumps judged; judged alone when too few to pool. */
+    private IdleDayPrior pooledPrior(Collection<double[]> windows) {
+        List<StopDetector.IdleDays> histories = new ArrayList<>(windows.size());
+        for (double[] window : windows) {
+            StopDetector.IdleDays days = detector.idleDays(window);
+            if (days != null) {
+                histories.add(days);
+            }
+        }
+        return IdleDayPrior.pooled(histories);
     }
 
     /** Recorded breakdowns as days of the window from {@code firstDay}; one still open runs past its end. */
@@ -131,7 +153,7 @@ public class StopFlagService {
                 || repair.openRepairRef() != null) {
             return false;
         }
-        LocalDate stoppedFrom = asOf.minusDays(StopDetector.Settings.DEFAULT.windowDays() - 1L - verdict.changeIndex());
+        LocalDate stoppedFrom = asOf.minusDays(SETTINGS.historyDays() - 1L - verdict.changeIndex());
         if ((repair.lastFixedOn() != null && !repair.lastFixedOn().isBefore(stoppedFrom))
                 || flags.exists(pumpId, stoppedFrom)) {
             return false;

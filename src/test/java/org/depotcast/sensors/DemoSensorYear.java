@@ -2,6 +2,7 @@ package org.depotcast.sensors;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.depotcast.core.sensors.IdleDayPrior;
 import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
 
@@ -21,7 +22,8 @@ import java.util.Set;
 /**
  * The demo programme's sensor year (to 2026-11-30) replayed day by day with the detector and the service's flag
  * rules, for the evidence tests. Day t is judged on the readings up to and including day t, less the downtime of
- * the breakdowns reported by day t ({@link RecordedDowntime}), as the service judges it. A flag opens as
+ * the breakdowns reported by day t ({@link RecordedDowntime}), as the service judges it, with the idle-day prior
+ * fitted that day over all the sensor pumps judged ({@link IdleDayPrior}), as a day's file of every pump is judged. A flag opens as
  * {@link StopFlagService} opens one (stopped, probability ≥ 0.5, no repair open, the stop not begun on or before the
  * last fix), keeps the highest probability seen while open, and closes when a repair is open or use comes back.
  */
@@ -37,10 +39,11 @@ final class DemoSensorYear {
     /**
      * A flag: opened on {@code openDay}, closed on {@code closeDay} ({@link #DAYS} if still open at the end); the
      * probability held on each day open (index 0 = the open day); {@code covering}: the planted breakdown whose stop
-     * covers the open day, or −1 (a false alarm).
+     * covers the open day, or −1 (a false alarm); {@code nearNothingDays} read when it opened and the pump's
+     * {@code idleDaysOnRecord} in its idle history then.
      */
     record Flag(int openDay, int closeDay, int stoppedFrom, double[] probability, double baselineHoursPerDay,
-                int covering) {
+                int covering, int nearNothingDays, int idleDaysOnRecord) {
         double probabilityOn(int day) {
             return probability[Math.min(day - openDay, probability.length - 1)];
         }
@@ -50,23 +53,47 @@ final class DemoSensorYear {
     record PumpYear(String assetId, List<Planted> planted, List<Flag> flags, int daysJudged) {
     }
 
+    /** How the chance of an idle day is judged. */
+    enum Rule {
+        /** The service's: an idle history of 112 days, idle spells pooled over the programme's sensor pumps each day. */
+        POOLED(StopDetector.Settings.DEFAULT, true),
+        /** The rule of 2 Dec 2026: each pump alone, its 28 baseline days as independent days by Laplace's rule. */
+        ALONE_28_DAYS(new StopDetector.Settings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 28), false);
+
+        final StopDetector.Settings settings;
+        final boolean pooled;
+
+        Rule(StopDetector.Settings settings, boolean pooled) {
+            this.settings = settings;
+            this.pooled = pooled;
+        }
+    }
+
+    /** A sensor pump's year of hours and its planted breakdowns. */
+    private record SensorPump(String assetId, double[] hours, List<Planted> marks) {
+    }
+
     private DemoSensorYear() {
     }
 
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay) throws IOException {
-        return replay(seed, delay, true);
+        return replay(seed, delay, true, Rule.POOLED);
+    }
+
+    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded)
+            throws IOException {
+        return replay(seed, delay, leaveOutRecorded, Rule.POOLED);
     }
 
     /**
      * @param leaveOutRecorded false judges the days as read, recorded breakdowns included (the rule before
      *                         {@link RecordedDowntime}), for comparison
      */
-    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded)
+    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule)
             throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
-        StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
-        List<PumpYear> year = new ArrayList<>();
+        List<SensorPump> pumps = new ArrayList<>();
         for (CSVRecord pump : csv("pumps.csv")) {
             String asset = pump.get("asset_id");
             if (pump.get("status").equals("DECOMMISSIONED") || !DemoSensorSeries.hasSensor(asset, seed)) {
@@ -82,31 +109,74 @@ final class DemoSensorYear {
                 marks.add(new Planted(index(series.stoppedFrom().get(i)), index(s.reportedOn()),
                         s.fixedOn() == null ? DAYS : index(s.fixedOn())));
             }
-            year.add(judge(asset, series.hours(), marks, detector, leaveOutRecorded));
+            pumps.add(new SensorPump(asset, series.hours(), marks));
+        }
+        StopDetector detector = new StopDetector(rule.settings);
+        IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);
+        List<PumpYear> year = new ArrayList<>();
+        for (SensorPump pump : pumps) {
+            year.add(judge(pump.assetId(), pump.hours(), pump.marks(), detector, rule, priors, leaveOutRecorded));
         }
         return year;
     }
 
+    /** Each day's prior, fitted as the service fits it over every sensor pump judged that day. */
+    private static IdleDayPrior[] priors(List<SensorPump> pumps, StopDetector detector, Rule rule,
+                                         boolean leaveOutRecorded) {
+        IdleDayPrior[] priors = new IdleDayPrior[DAYS];
+        Arrays.fill(priors, IdleDayPrior.ALONE);
+        if (!rule.pooled) {
+            return priors;
+        }
+        List<List<StopDetector.IdleDays>> histories = new ArrayList<>();
+        for (int t = 0; t < DAYS; t++) {
+            histories.add(new ArrayList<>());
+        }
+        for (SensorPump pump : pumps) {
+            for (int t = rule.settings.windowDays() - 1; t < DAYS; t++) {
+                StopDetector.IdleDays days = detector.idleDays(window(pump.hours(), pump.marks(), t, rule,
+                        leaveOutRecorded));
+                if (days != null) {
+                    histories.get(t).add(days);
+                }
+            }
+        }
+        for (int t = rule.settings.windowDays() - 1; t < DAYS; t++) {
+            priors[t] = IdleDayPrior.pooled(histories.get(t));
+        }
+        return priors;
+    }
+
+    /** Day {@code t} and the days before it the rule reads, less the breakdowns reported by day t if asked. */
+    private static double[] window(double[] hours, List<Planted> marks, int t, Rule rule, boolean leaveOutRecorded) {
+        int first = firstDayRead(t, rule);
+        return RecordedDowntime.leaveOut(Arrays.copyOfRange(hours, first, t + 1),
+                leaveOutRecorded ? reportedBy(marks, t, first) : List.of(), rule.settings.stopFraction());
+    }
+
+    private static int firstDayRead(int t, Rule rule) {
+        return Math.max(0, t - rule.settings.historyDays() + 1);
+    }
+
     private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector,
-                                  boolean leaveOutRecorded) {
-        int window = StopDetector.Settings.DEFAULT.windowDays();
+                                  Rule rule, IdleDayPrior[] priors, boolean leaveOutRecorded) {
+        int window = rule.settings.windowDays();
         List<Flag> flags = new ArrayList<>();
-        int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0;
+        int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0, nearNothing = 0, idleOnRecord = 0;
         double baseline = 0;
         List<Double> probability = new ArrayList<>();
         for (int t = window - 1; t < DAYS; t++) {
             judged++;
-            StopDetector.Verdict v = detector.judge(RecordedDowntime.leaveOut(
-                    Arrays.copyOfRange(hours, t - window + 1, t + 1),
-                    leaveOutRecorded ? reportedBy(marks, t, t - window + 1) : List.of(),
-                    StopDetector.Settings.DEFAULT.stopFraction()));
+            double[] days = window(hours, marks, t, rule, leaveOutRecorded);
+            StopDetector.Verdict v = detector.judge(days, priors[t]);
             boolean repairOpen = false;
             for (Planted m : marks) {
                 repairOpen |= m.report() <= t && t < m.fix();
             }
             if (openDay >= 0) {
                 if (repairOpen || v.state() == StopDetector.State.IN_USE) {
-                    flags.add(flag(openDay, t, stoppedFrom, probability, baseline, covering));
+                    flags.add(flag(openDay, t, stoppedFrom, probability, baseline, covering, nearNothing,
+                            idleOnRecord));
                     openDay = -1;
                 } else {
                     double last = probability.get(probability.size() - 1);
@@ -114,7 +184,7 @@ final class DemoSensorYear {
                 }
                 continue;
             }
-            int from = t - window + 1 + v.changeIndex();
+            int from = firstDayRead(t, rule) + v.changeIndex();
             if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < StopFlagService.LEAST_PROBABILITY
                     || repairOpen || stopBeganByLastFix(marks, t, from)) {
                 continue;
@@ -122,6 +192,8 @@ final class DemoSensorYear {
             openDay = t;
             stoppedFrom = from;
             baseline = v.baselineMean();
+            nearNothing = v.nearNothingDays();
+            idleOnRecord = detector.idleDays(days).idle();
             probability = new ArrayList<>(List.of(v.probabilityDown()));
             covering = -1;
             for (int i = 0; i < marks.size(); i++) {
@@ -131,7 +203,7 @@ final class DemoSensorYear {
             }
         }
         if (openDay >= 0) {
-            flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering));
+            flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering, nearNothing, idleOnRecord));
         }
         return new PumpYear(asset, marks, flags, judged);
     }
@@ -148,9 +220,9 @@ final class DemoSensorYear {
     }
 
     private static Flag flag(int openDay, int closeDay, int stoppedFrom, List<Double> probability, double baseline,
-                             int covering) {
+                             int covering, int nearNothing, int idleOnRecord) {
         return new Flag(openDay, closeDay, stoppedFrom, probability.stream().mapToDouble(Double::doubleValue).toArray(),
-                baseline, covering);
+                baseline, covering, nearNothing, idleOnRecord);
     }
 
     /** As {@link StopFlagService} rules: a stop that began on or before the last fix is that repair's, not a new one. */

@@ -1,5 +1,7 @@
 package org.depotcast.core.sensors;
 
+import java.util.Arrays;
+
 /**
  * Tells from a pump's daily hours of use whether it is in normal use, has stopped, is declining, or has sent nothing.
  *
@@ -11,7 +13,9 @@ package org.depotcast.core.sensors;
  * S_t > h. The reference value k = σ/2 and the decision interval h = 4σ are the textbook choice for detecting a shift
  * of one standard deviation (Montgomery, Introduction to Statistical Quality Control, 6th ed., 2009, §9.1.3: k = 0.5σ
  * with h = 4σ or 5σ). σ is floored at max(0.25 h, 10 % of μ₀), so a pump with very even use is not flagged for a
- * small dip. The change is placed at the day after S last stood at 0 (Page's estimate of the change point).
+ * small dip. The change is placed at the day after S last stood at 0 (Page's estimate of the change point). A last
+ * day read that is near nothing is judged as a possible stop even before the sum signals: the sum, made for a shift of
+ * one σ, needs two such days at a pump whose σ exceeds μ₀/4.5, while the probability below weighs the day itself.
  *
  * <p>After a signal: if the days read at the end are near nothing (at most {@code stopFraction} of μ₀, or 0.25 h),
  * the pump has <b>stopped</b>, from the first day of that run (a low day before it, such as a quiet weekday, may have
@@ -21,10 +25,14 @@ package org.depotcast.core.sensors;
  * {@code gapDays} days is <b>no data received</b> (a transmission gap), whatever came before: a sensor that stops
  * sending is not a pump that stops pumping.
  *
- * <p>The probability that a stopped pump is down, rather than idle, is Bayes' rule over the run of near-nothing days:
- * P = π / (π + (1 − π) qⁿ), with n the near-nothing days read at the end, q the share of near-nothing days in the pump's own
- * baseline by Laplace's rule of succession ((z + 1)/(m + 2) for z such days out of m read), and π the prior chance
- * that a breakdown starts on a given day ({@code dailyBreakdownChance}). Each idle day is taken as independent.
+ * <p>The probability that a stopped pump is down, rather than idle, is Bayes' rule over the run of n near-nothing
+ * days read at the end: P = π / (π + (1 − π) c(n)), with π the prior chance that a breakdown starts on a given day
+ * ({@code dailyBreakdownChance}) and c(n) the chance of such a run at a working pump, from the pump's idle history
+ * (the {@code idleHistoryDays} before the watched days) and the programme's pumps ({@link IdleDayPrior}): a spell of
+ * idling that started n − 1 days ago and lasted n days or more, where the pump's chance of a spell is its own record
+ * shrunk towards the programme's; for a pump judged alone, independent days by Laplace's rule, c(n) = ((z + 1)/(m + 2))ⁿ
+ * for z near-nothing days of m read. A pump that never idles in a programme whose pumps rarely idle is probably down
+ * after one near-nothing day; a pump with idle spells on record needs a run longer than its spells usually last.
  */
 public final class StopDetector {
     /** What the series says, in plain words for the answer. */
@@ -56,8 +64,9 @@ public final class StopDetector {
 
     /** Settings with the defaults the Javadoc names. */
     public record Settings(int baselineDays, int watchDays, int gapDays, double kSigmas, double hSigmas,
-                           double stopFraction, int leastBaselineDays, double dailyBreakdownChance) {
-        public static final Settings DEFAULT = new Settings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365);
+                           double stopFraction, int leastBaselineDays, double dailyBreakdownChance,
+                           int idleHistoryDays) {
+        public static final Settings DEFAULT = new Settings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 112);
 
         public Settings {
             if (baselineDays < 1 || watchDays < 1 || gapDays < 1 || leastBaselineDays < 2) {
@@ -67,10 +76,19 @@ public final class StopDetector {
             if (!(dailyBreakdownChance > 0 && dailyBreakdownChance < 1)) {
                 throw new IllegalArgumentException("dailyBreakdownChance must be in (0, 1): " + dailyBreakdownChance);
             }
+            if (idleHistoryDays < baselineDays) {
+                throw new IllegalArgumentException("idleHistoryDays must be at least baselineDays: " + idleHistoryDays);
+            }
         }
 
+        /** The days the CUSUM reads: the baseline and the watched days. */
         public int windowDays() {
             return baselineDays + watchDays;
+        }
+
+        /** The most days a judgement reads: the idle history and the watched days. */
+        public int historyDays() {
+            return idleHistoryDays + watchDays;
         }
     }
 
@@ -84,41 +102,41 @@ public final class StopDetector {
     }
 
     /**
-     * @param hours the last {@link Settings#windowDays()} days up to the day judged, oldest first, hours of use a day;
-     *              NaN for a day with no reading
+     * The idle history before the watched days: days read, near-nothing days among them, and the length of each spell
+     * of near-nothing days (days with no reading neither break nor lengthen a spell).
      */
+    public record IdleDays(int read, int idle, int[] spells) {
+    }
+
+    /** {@link #judge(double[], IdleDayPrior)} for a pump judged alone ({@link IdleDayPrior#ALONE}). */
     public Verdict judge(double[] hours) {
-        if (hours.length != settings.windowDays()) {
-            throw new IllegalArgumentException("hours must hold " + settings.windowDays() + " days: " + hours.length);
-        }
-        int base = settings.baselineDays();
+        return judge(hours, IdleDayPrior.ALONE);
+    }
+
+    /**
+     * @param hours the days up to the day judged, oldest first, hours of use a day, NaN for a day with no reading: at
+     *              least {@link Settings#windowDays()} and at most {@link Settings#historyDays()} days (a pump read for
+     *              a shorter time has a shorter idle history)
+     * @param prior the programme's prior for the pump's chance of a near-nothing day
+     */
+    public Verdict judge(double[] hours, IdleDayPrior prior) {
+        checkLength(hours);
         if (noneRead(hours, hours.length - settings.gapDays(), hours.length)) {
             return new Verdict(State.NO_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
-        double sum = 0;
-        int read = 0;
-        for (int i = 0; i < base; i++) {
-            if (!Double.isNaN(hours[i])) {
-                sum += hours[i];
-                read++;
-            }
-        }
-        if (read < settings.leastBaselineDays() || sum / read <= NEAR_NOTHING_HOURS) {
+        int from = hours.length - settings.windowDays();
+        int to = from + settings.baselineDays();
+        double nearNothing = nearNothing(hours, from, to);
+        if (Double.isNaN(nearNothing)) {
             return new Verdict(State.TOO_LITTLE_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
-        double nearNothing = Math.max(NEAR_NOTHING_HOURS, settings.stopFraction() * sum / read);
         // The level in use is read from the days the pump was used: near-nothing days (an earlier breakdown in the
         // baseline) would pull the mean down and swell σ, so the sum would take days longer to see the next stop.
         // How often the pump idles is kept apart, for the probability below.
         double inUseSum = 0, inUseSumSq = 0;
-        int inUse = 0, idle = 0;
-        for (int i = 0; i < base; i++) {
-            if (Double.isNaN(hours[i])) {
-                continue;
-            }
-            if (hours[i] <= nearNothing) {
-                idle++;
-            } else {
+        int inUse = 0;
+        for (int i = from; i < to; i++) {
+            if (!Double.isNaN(hours[i]) && hours[i] > nearNothing) {
                 inUseSum += hours[i];
                 inUseSumSq += hours[i] * hours[i];
                 inUse++;
@@ -130,11 +148,75 @@ public final class StopDetector {
         double mean = inUseSum / inUse;
         double sd = Math.sqrt(Math.max(0, (inUseSumSq - inUse * mean * mean) / (inUse - 1)));
         double sigma = Math.max(sd, Math.max(LEAST_SIGMA_HOURS, 0.1 * mean));
-        int change = cusumChange(hours, base, mean, sigma);
+        int change = cusumChange(hours, to, mean, sigma);
         if (change < 0) {
-            return new Verdict(State.IN_USE, -1, mean, sd, mean, 0, 0);
+            // A near-nothing day is its own evidence, weighed below against how often the pump idles; the sum, made
+            // for a shift of one σ, needs two such days before it signals at a pump whose σ exceeds μ₀/4.5 (a quiet
+            // weekday is enough).
+            change = lastDayNearNothing(hours, to, nearNothing);
+            if (change < 0) {
+                return new Verdict(State.IN_USE, -1, mean, sd, mean, 0, 0);
+            }
         }
-        return afterChange(hours, change, mean, sd, nearNothing, (idle + 1.0) / (read + 2.0));
+        return afterChange(hours, change, mean, sd, nearNothing, countIdle(hours, nearNothing), prior);
+    }
+
+    /**
+     * The pump's near-nothing days in its idle history, as {@link #judge} counts them, for fitting the programme's
+     * prior; null when its baseline is too little to judge.
+     */
+    public IdleDays idleDays(double[] hours) {
+        checkLength(hours);
+        int from = hours.length - settings.windowDays();
+        double nearNothing = nearNothing(hours, from, from + settings.baselineDays());
+        return Double.isNaN(nearNothing) ? null : countIdle(hours, nearNothing);
+    }
+
+    private void checkLength(double[] hours) {
+        if (hours.length < settings.windowDays() || hours.length > settings.historyDays()) {
+            throw new IllegalArgumentException("hours must hold " + settings.windowDays() + " to "
+                    + settings.historyDays() + " days: " + hours.length);
+        }
+    }
+
+    /** Near nothing for this pump, from its baseline's days read; NaN when the baseline is too little to judge. */
+    private double nearNothing(double[] hours, int from, int to) {
+        double sum = 0;
+        int read = 0;
+        for (int i = from; i < to; i++) {
+            if (!Double.isNaN(hours[i])) {
+                sum += hours[i];
+                read++;
+            }
+        }
+        if (read < settings.leastBaselineDays() || sum / read <= NEAR_NOTHING_HOURS) {
+            return Double.NaN;
+        }
+        return Math.max(NEAR_NOTHING_HOURS, settings.stopFraction() * sum / read);
+    }
+
+    private IdleDays countIdle(double[] hours, double nearNothing) {
+        int to = hours.length - settings.watchDays();
+        int from = Math.max(0, to - settings.idleHistoryDays());
+        int idle = 0, read = 0, spell = 0, count = 0;
+        int[] spells = new int[to - from];
+        for (int i = from; i < to; i++) {
+            if (Double.isNaN(hours[i])) {
+                continue;
+            }
+            read++;
+            if (hours[i] <= nearNothing) {
+                idle++;
+                spell++;
+            } else if (spell > 0) {
+                spells[count++] = spell;
+                spell = 0;
+            }
+        }
+        if (spell > 0) {
+            spells[count++] = spell;
+        }
+        return new IdleDays(read, idle, Arrays.copyOf(spells, count));
     }
 
     /** The change point of the first CUSUM signal in the watched days, or −1 for none. */
@@ -157,7 +239,8 @@ public final class StopDetector {
         return -1;
     }
 
-    private Verdict afterChange(double[] hours, int change, double mean, double sd, double nearNothing, double q) {
+    private Verdict afterChange(double[] hours, int change, double mean, double sd, double nearNothing, IdleDays idle,
+                                IdleDayPrior idlePrior) {
         double sum = 0;
         int read = 0;
         for (int t = change; t < hours.length; t++) {
@@ -181,7 +264,7 @@ public final class StopDetector {
         }
         if (run > 0) {
             double prior = settings.dailyBreakdownChance();
-            double probability = prior / (prior + (1 - prior) * Math.pow(q, run));
+            double probability = prior / (prior + (1 - prior) * idlePrior.chanceOfRun(idle, run));
             return new Verdict(State.STOPPED, runStart, mean, sd, level, probability, run);
         }
         if (lastRead(hours) >= 0.5 * mean) {
@@ -189,6 +272,16 @@ public final class StopDetector {
             return new Verdict(State.IN_USE, change, mean, sd, level, 0, 0);
         }
         return new Verdict(State.DECLINING, change, mean, sd, level, 0, 0);
+    }
+
+    /** The index of the last day read when it is near nothing and in the watched days, else −1. */
+    private static int lastDayNearNothing(double[] hours, int from, double nearNothing) {
+        for (int i = hours.length - 1; i >= from; i--) {
+            if (!Double.isNaN(hours[i])) {
+                return hours[i] <= nearNothing ? i : -1;
+            }
+        }
+        return -1;
     }
 
     private static double lastRead(double[] hours) {

@@ -112,6 +112,76 @@ class StopDetectorTest {
     @Test
     void brokenContractsNameTheArgument() {
         assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[10]));
-        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10, 0));
+        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10, 0,
+                112));
+        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10,
+                1.0 / 365, 20));
+        assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[127]));
+    }
+
+    /**
+     * A programme of 100 pumps read 112 days each, 90 never idle and 10 with five one-day spells ({@link IdleDayPriorTest}):
+     * spells start Beta(0.137169, 29.991561); no spell lasted two days, so L(2) = 1/52, L(3) = 1/104.
+     */
+    private static final IdleDayPrior RARELY_IDLE = IdleDayPriorTest.rarelyIdle();
+
+    /** 112 days alternating 5 and 7 h (0.1 h on the given days), 13 days of 6 h, then one day of nothing. */
+    private static double[] oneDayOfNothingAfter(int... idleDays) {
+        double[] hours = new double[126];
+        for (int i = 0; i < 112; i++) {
+            hours[i] = i % 2 == 0 ? 5 : 7;
+        }
+        for (int d : idleDays) {
+            hours[d] = 0.1;
+        }
+        Arrays.fill(hours, 112, 125, 6);
+        hours[125] = 0;
+        return hours;
+    }
+
+    @Test
+    void oneDayOfNothingIsEnoughAtAPumpThatNeverIdlesInAProgrammeThatRarelyDoes() {
+        StopDetector.Verdict v = detector.judge(oneDayOfNothingAfter(), RARELY_IDLE);
+        // Day 125: S = 6 − 0.509175 − 0 > h. No spell in 112 days read: s = 0.137169/(112 + 30.128730) = 0.000965103;
+        // P = π/(π + (1 − π) s) = 0.740030.
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(125, v.changeIndex());
+        assertEquals(1, v.nearNothingDays());
+        assertEquals(0.740030, v.probabilityDown(), 1e-6);
+        // Judged alone (Laplace's rule, q = 1/114), the same day leaves 0.238: a second day is needed.
+        assertEquals(1 / (1 + 364.0 / 114), detector.judge(oneDayOfNothingAfter()).probabilityDown(), 1e-12);
+    }
+
+    @Test
+    void theSameDayAtAPumpThatIdlesOftenIsNotEnough() {
+        int[] idle = new int[20];
+        for (int i = 0; i < 20; i++) {
+            idle[i] = 4 * i + 1;
+        }
+        double[] hours = oneDayOfNothingAfter(idle);
+        StopDetector.IdleDays history = detector.idleDays(hours);
+        assertEquals(112, history.read());
+        assertEquals(20, history.idle());
+        assertEquals(20, history.spells().length);
+        StopDetector.Verdict v = detector.judge(hours, RARELY_IDLE);
+        // 20 spells in 112 days: s = 20.137169/142.128730 = 0.141683; one day P = 0.019021.
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(0.019021, v.probabilityDown(), 1e-6);
+        // Two days: no spell of the programme lasted two, s·L(2) = 0.141683/52, P = 0.502064.
+        hours[124] = 0;
+        assertEquals(0.502064, detector.judge(hours, RARELY_IDLE).probabilityDown(), 1e-6);
+    }
+
+    @Test
+    void aNearNothingDayIsWeighedEvenBeforeTheSumSignals() {
+        // Baseline alternating 2 and 10 h: μ₀ = 6, s = 4.073401, h = 16.29; one day of nothing adds 3.96 < h.
+        double[] hours = oneDayOfNothingAfter();
+        for (int i = 0; i < 112; i++) {
+            hours[i] = i % 2 == 0 ? 2 : 10;
+        }
+        StopDetector.Verdict v = detector.judge(hours);
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(125, v.changeIndex());
+        assertEquals(1 / (1 + 364.0 / 114), v.probabilityDown(), 1e-12);
     }
 }
