@@ -1,8 +1,7 @@
 package org.depotcast.forecasting;
 
-import io.quarkus.narayana.jta.runtime.TransactionConfiguration;
+import io.quarkus.narayana.jta.QuarkusTransaction;
 import jakarta.enterprise.context.ApplicationScoped;
-import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.catalogue.PartService;
 import org.depotcast.catalogue.PumpModelService;
@@ -69,14 +68,13 @@ public class FleetSnapshotLoader {
     }
 
     /**
-     * Reads in one transaction, so the register and the records agree. At 40 times the demo on a machine shared with
-     * other work the read took longer than the default transaction timeout and the run failed; as for storing a run,
-     * ten minutes are allowed.
+     * Reads in one transaction, so the register and the records agree: the caller's, or a new one. At 40 times the demo
+     * on a machine shared with other work the read outlasted the default transaction timeout and the run failed; as
+     * for storing a run, a new transaction is allowed ten minutes.
      */
-    @Transactional
-    @TransactionConfiguration(timeout = 600)
     public FleetSnapshot load(LocalDate origin, int historyMonths) {
-        return asOf(origin, historyMonths, rows(), LocalDate.now(clock));
+        Rows rows = QuarkusTransaction.isActive() ? rows() : QuarkusTransaction.requiringNew().timeout(600).call(this::rows);
+        return asOf(origin, historyMonths, rows, LocalDate.now(clock));
     }
 
     private Rows rows() {
