@@ -91,6 +91,12 @@ final class DemoSensorYear {
      */
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule)
             throws IOException {
+        return replay(seed, delay, leaveOutRecorded, rule, StopFlagService.LEAST_PROBABILITY);
+    }
+
+    /** @param leastProbability the probability a flag opens at (the service's {@link StopFlagService#LEAST_PROBABILITY}) */
+    static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule,
+                                 double leastProbability) throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
         List<SensorPump> pumps = new ArrayList<>();
@@ -115,7 +121,8 @@ final class DemoSensorYear {
         IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);
         List<PumpYear> year = new ArrayList<>();
         for (SensorPump pump : pumps) {
-            year.add(judge(pump.assetId(), pump.hours(), pump.marks(), detector, rule, priors, leaveOutRecorded));
+            year.add(judge(pump.assetId(), pump.hours(), pump.marks(), detector, rule, priors, leaveOutRecorded,
+                    leastProbability));
         }
         return year;
     }
@@ -159,7 +166,8 @@ final class DemoSensorYear {
     }
 
     private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector,
-                                  Rule rule, IdleDayPrior[] priors, boolean leaveOutRecorded) {
+                                  Rule rule, IdleDayPrior[] priors, boolean leaveOutRecorded,
+                                  double leastProbability) {
         int window = rule.settings.windowDays();
         List<Flag> flags = new ArrayList<>();
         int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0, nearNothing = 0, idleOnRecord = 0;
@@ -185,7 +193,7 @@ final class DemoSensorYear {
                 continue;
             }
             int from = firstDayRead(t, rule) + v.changeIndex();
-            if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < StopFlagService.LEAST_PROBABILITY
+            if (v.state() != StopDetector.State.STOPPED || v.probabilityDown() < leastProbability
                     || repairOpen || stopBeganByLastFix(marks, t, from)) {
                 continue;
             }

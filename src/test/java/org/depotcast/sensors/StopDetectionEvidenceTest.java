@@ -69,6 +69,43 @@ class StopDetectionEvidenceTest {
         }
     }
 
+    /**
+     * What the flag's threshold trades, under the demo's delay: the share flagged before the report and the false
+     * alarms when flags open at a probability of 0.5 (the service's), 0.8 or 0.95; and whether the probabilities mean
+     * what they say: at 0.5, the mean probability of the flags opened against the share that covered a planted stop.
+     */
+    @Test
+    void aHigherThresholdTradesEarlyFlagsForFewerFalseAlarms() throws IOException {
+        DemoSensorSeries.ReportDelay delay = DemoSensorSeries.ReportDelay.CARETAKER_TO_MECHANIC;
+        for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
+            double[] previous = null;
+            for (double least : new double[]{0.5, 0.8, 0.95}) {
+                List<DemoSensorYear.PumpYear> year = DemoSensorYear.replay(seed, delay, true,
+                        DemoSensorYear.Rule.POOLED, least);
+                double[] figures = statistics(year);
+                double probability = 0;
+                int flags = 0, covering = 0;
+                for (DemoSensorYear.PumpYear pump : year) {
+                    for (DemoSensorYear.Flag flag : pump.flags()) {
+                        probability += flag.probability()[0];
+                        flags++;
+                        covering += flag.covering() >= 0 ? 1 : 0;
+                    }
+                }
+                System.out.printf("EVIDENCE %s, seed %d, flags opening at %.2f: median %.1f days, %.1f %% flagged "
+                                + "before the report (%.1f %% of those reported 2+ days on), %.2f false alarms per "
+                                + "1,000 pump-months; %d flags of mean probability %.3f, %.3f of them on a planted "
+                                + "stop%n", delay, seed, least, figures[1], 100 * figures[2], 100 * figures[5],
+                        figures[3], flags, probability / flags, (double) covering / flags);
+                if (previous != null) {
+                    assertTrue(figures[3] <= previous[3] && figures[2] <= previous[2] + 1e-9,
+                            "a higher threshold raises fewer flags, false or true");
+                }
+                previous = figures;
+            }
+        }
+    }
+
     /** The same replay judging the days as read, recorded breakdowns included (the rule before RecordedDowntime). */
     @Test
     void leavingOutRecordedBreakdownsFlagsMoreStopsBeforeTheirReport() throws IOException {
