@@ -73,4 +73,19 @@ public class Repair {
     public Long downtimeDays() {
         return fixedOn == null ? null : ChronoUnit.DAYS.between(reportedOn, fixedOn);
     }
+
+    /** A new repair as requested, at the pump {@code pumpId}, by {@code mechanic}; lines are added after. */
+    static Repair from(RepairRequest r, long pumpId, String mechanic) {
+        Repair repair = new Repair();
+        repair.repairRef = r.repairRef();
+        repair.pumpId = pumpId;
+        repair.mechanic = mechanic;
+        repair.kind = r.kind();
+        repair.reportedOn = r.reportedOn();
+        repair.diagnosedOn = r.diagnosedOn();
+        repair.partsAvailableOn = r.partsAvailableOn();
+        repair.fixedOn = r.fixedOn();
+        repair.fault = r.fault();
+        return repair;
+    }
 }

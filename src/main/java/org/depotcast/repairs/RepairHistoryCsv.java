@@ -25,9 +25,7 @@ import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 
-import static org.depotcast.repairs.RepairService.dateOrderProblem;
-import static org.depotcast.repairs.RepairService.line;
-import static org.depotcast.repairs.RepairService.newRepair;
+import static org.depotcast.repairs.RepairDates.dateOrderProblem;
 
 /** Repair history in and out as CSV, through the one import path and the one export writer. */
 @ApplicationScoped
@@ -123,7 +121,7 @@ public class RepairHistoryCsv {
             if (dateProblem != null) {
                 throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
             }
-            Repair repair = newRepair(request, pump.id(), request.mechanic());
+            Repair repair = Repair.from(request, pump.id(), request.mechanic());
             repair.ledgerPosted = false;
             for (int i = 0; i < request.lines().size(); i++) {
                 RepairRequest.Line l = request.lines().get(i);
@@ -137,7 +135,7 @@ public class RepairHistoryCsv {
                     throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber()
                             + "' appears twice in repair '" + request.repairRef() + "'");
                 }
-                repair.addLine(line(part.id(), quantity));
+                repair.addLine(RepairLine.of(part.id(), quantity));
             }
             touched.add(pump.id());
             repairs.persist(repair);

@@ -27,4 +27,11 @@ public class RepairLine {
     public long partId;
     @Column(nullable = false)
     public BigDecimal quantity;
+
+    static RepairLine of(long partId, BigDecimal quantity) {
+        RepairLine line = new RepairLine();
+        line.partId = partId;
+        line.quantity = quantity;
+        return line;
+    }
 }

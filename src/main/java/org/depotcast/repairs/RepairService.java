@@ -147,12 +147,12 @@ public class RepairService {
         }
         String mechanic = request.mechanic() == null || currentUser.hasRole(Roles.MECHANIC)
                 ? currentUser.name() : request.mechanic();
-        String dateProblem = dateOrderProblem(request.reportedOn(), request.diagnosedOn(), request.partsAvailableOn(),
+        String dateProblem = RepairDates.dateOrderProblem(request.reportedOn(), request.diagnosedOn(), request.partsAvailableOn(),
                 request.fixedOn());
         if (dateProblem != null) {
             throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
         }
-        Repair repair = newRepair(request, pumps.requireVisible("assetId", request.assetId()).id(), mechanic);
+        Repair repair = Repair.from(request, pumps.requireVisible("assetId", request.assetId()).id(), mechanic);
         addLines(repair, request.lines() == null ? List.of() : request.lines());
         repair.ledgerPosted = repair.fixedOn != null && !repair.lines.isEmpty();
         repairs.persist(repair);
@@ -176,11 +176,11 @@ public class RepairService {
         PumpSummary pump = pumps.requireVisible(repair.pumpId);
         Map<Long, String> partNumbers = partNumbers();
         RepairResponse before = RepairResponse.from(repair, pump, partNumbers);
-        repair.diagnosedOn = keepOrSet("diagnosedOn", repair.diagnosedOn, p.diagnosedOn());
-        repair.partsAvailableOn = keepOrSet("partsAvailableOn", repair.partsAvailableOn, p.partsAvailableOn());
+        repair.diagnosedOn = RepairDates.keepOrSet("diagnosedOn", repair.diagnosedOn, p.diagnosedOn());
+        repair.partsAvailableOn = RepairDates.keepOrSet("partsAvailableOn", repair.partsAvailableOn, p.partsAvailableOn());
         boolean fixesNow = repair.fixedOn == null && p.fixedOn() != null;
-        repair.fixedOn = keepOrSet("fixedOn", repair.fixedOn, p.fixedOn());
-        String dateProblem = dateOrderProblem(repair.reportedOn, repair.diagnosedOn, repair.partsAvailableOn, repair.fixedOn);
+        repair.fixedOn = RepairDates.keepOrSet("fixedOn", repair.fixedOn, p.fixedOn());
+        String dateProblem = RepairDates.dateOrderProblem(repair.reportedOn, repair.diagnosedOn, repair.partsAvailableOn, repair.fixedOn);
         if (dateProblem != null) {
             throw new InvalidInputException(dateProblem, "dates must run reported ≤ diagnosed ≤ parts available ≤ fixed");
         }
@@ -208,16 +208,6 @@ public class RepairService {
         return after;
     }
 
-    private static LocalDate keepOrSet(String field, LocalDate stored, LocalDate sent) {
-        if (sent == null || sent.equals(stored)) {
-            return stored;
-        }
-        if (stored != null) {
-            throw new ConflictException(field, "is already recorded as " + stored);
-        }
-        return sent;
-    }
-
     private void addLines(Repair repair, List<RepairRequest.Line> lines) {
         for (int i = 0; i < lines.size(); i++) {
             PartSummary part = parts.requireSummary("lines[" + i + "].partNumber", lines.get(i).partNumber());
@@ -226,7 +216,7 @@ public class RepairService {
             if (repair.lines.stream().anyMatch(l -> l.partId == part.id())) {
                 throw new InvalidInputException("lines[" + i + "].partNumber", "part '" + part.partNumber() + "' is listed twice");
             }
-            repair.addLine(line(part.id(), quantity));
+            repair.addLine(RepairLine.of(part.id(), quantity));
         }
     }
 
@@ -242,42 +232,5 @@ public class RepairService {
                     repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + partNumber), null, repair.id);
             ledger.postWithin(command);
         }
-    }
-
-    static Repair newRepair(RepairRequest r, long pumpId, String mechanic) {
-        Repair repair = new Repair();
-        repair.repairRef = r.repairRef();
-        repair.pumpId = pumpId;
-        repair.mechanic = mechanic;
-        repair.kind = r.kind();
-        repair.reportedOn = r.reportedOn();
-        repair.diagnosedOn = r.diagnosedOn();
-        repair.partsAvailableOn = r.partsAvailableOn();
-        repair.fixedOn = r.fixedOn();
-        repair.fault = r.fault();
-        return repair;
-    }
-
-    static RepairLine line(long partId, BigDecimal quantity) {
-        RepairLine line = new RepairLine();
-        line.partId = partId;
-        line.quantity = quantity;
-        return line;
-    }
-
-    /** Null when the dates run in order, else the name of the first date that comes too early. */
-    static String dateOrderProblem(LocalDate reported, LocalDate diagnosed, LocalDate available, LocalDate fixed) {
-        LocalDate last = reported;
-        String[] names = {"diagnosedOn", "partsAvailableOn", "fixedOn"};
-        LocalDate[] dates = {diagnosed, available, fixed};
-        for (int i = 0; i < dates.length; i++) {
-            if (dates[i] != null) {
-                if (dates[i].isBefore(last)) {
-                    return names[i];
-                }
-                last = dates[i];
-            }
-        }
-        return null;
     }
 }

@@ -32,8 +32,8 @@ class RepairDatesTest {
 
     @Test
     void datesMustRunInOrder() {
-        assertNull(RepairService.dateOrderProblem(D, D.plusDays(1), null, D.plusDays(3)));
-        assertEquals("fixedOn", RepairService.dateOrderProblem(D, D.plusDays(2), null, D.plusDays(1)));
-        assertEquals("diagnosedOn", RepairService.dateOrderProblem(D, D.minusDays(1), null, null));
+        assertNull(RepairDates.dateOrderProblem(D, D.plusDays(1), null, D.plusDays(3)));
+        assertEquals("fixedOn", RepairDates.dateOrderProblem(D, D.plusDays(2), null, D.plusDays(1)));
+        assertEquals("diagnosedOn", RepairDates.dateOrderProblem(D, D.minusDays(1), null, null));
     }
 }
