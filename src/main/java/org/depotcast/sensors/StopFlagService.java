@@ -6,8 +6,10 @@ import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AuditService;
 import org.depotcast.core.sensors.IdleDayPrior;
+import org.depotcast.core.sensors.IdleDays;
 import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
+import org.depotcast.core.sensors.StopSettings;
 import org.depotcast.fleet.RepairFacts;
 import org.depotcast.fleet.RepairRecords;
 import org.depotcast.fleet.RepairSpan;
@@ -56,7 +58,7 @@ public class StopFlagService {
     private final SensorUsageQuery usage;
     private final RepairRecords repairs;
     private final AuditService audit;
-    private static final StopDetector.Settings SETTINGS = StopDetector.Settings.DEFAULT;
+    private static final StopSettings SETTINGS = StopSettings.DEFAULT;
     private final StopDetector detector = new StopDetector(SETTINGS);
 
     StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit) {
@@ -109,9 +111,9 @@ public class StopFlagService {
 
     /** The programme's idle-day prior fitted over the pumps judged; judged alone when too few to pool. */
     private IdleDayPrior pooledPrior(Collection<double[]> windows) {
-        List<StopDetector.IdleDays> histories = new ArrayList<>(windows.size());
+        List<IdleDays> histories = new ArrayList<>(windows.size());
         for (double[] window : windows) {
-            StopDetector.IdleDays days = detector.idleDays(window);
+            IdleDays days = detector.idleDays(window);
             if (days != null) {
                 histories.add(days);
             }

@@ -3,8 +3,10 @@ package org.depotcast.sensors;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.depotcast.core.sensors.IdleDayPrior;
+import org.depotcast.core.sensors.IdleDays;
 import org.depotcast.core.sensors.RecordedDowntime;
 import org.depotcast.core.sensors.StopDetector;
+import org.depotcast.core.sensors.StopSettings;
 
 import java.io.IOException;
 import java.io.Reader;
@@ -56,14 +58,14 @@ final class DemoSensorYear {
     /** How the chance of an idle day is judged. */
     enum Rule {
         /** The service's: an idle history of 112 days, idle spells pooled over the programme's sensor pumps each day. */
-        POOLED(StopDetector.Settings.DEFAULT, true),
+        POOLED(StopSettings.DEFAULT, true),
         /** The rule of 2 Dec 2026: each pump alone, its 28 baseline days as independent days by Laplace's rule. */
-        ALONE_28_DAYS(new StopDetector.Settings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 28), false);
+        ALONE_28_DAYS(new StopSettings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 28), false);
 
-        final StopDetector.Settings settings;
+        final StopSettings settings;
         final boolean pooled;
 
-        Rule(StopDetector.Settings settings, boolean pooled) {
+        Rule(StopSettings settings, boolean pooled) {
             this.settings = settings;
             this.pooled = pooled;
         }
@@ -135,13 +137,13 @@ final class DemoSensorYear {
         if (!rule.pooled) {
             return priors;
         }
-        List<List<StopDetector.IdleDays>> histories = new ArrayList<>();
+        List<List<IdleDays>> histories = new ArrayList<>();
         for (int t = 0; t < DAYS; t++) {
             histories.add(new ArrayList<>());
         }
         for (SensorPump pump : pumps) {
             for (int t = rule.settings.windowDays() - 1; t < DAYS; t++) {
-                StopDetector.IdleDays days = detector.idleDays(window(pump.hours(), pump.marks(), t, rule,
+                IdleDays days = detector.idleDays(window(pump.hours(), pump.marks(), t, rule,
                         leaveOutRecorded));
                 if (days != null) {
                     histories.get(t).add(days);

@@ -1,6 +1,7 @@
 package org.depotcast.sensors;
 
 import org.depotcast.core.sensors.StopDetector;
+import org.depotcast.core.sensors.StopSettings;
 import org.junit.jupiter.api.Test;
 
 import java.io.IOException;
@@ -161,7 +162,7 @@ class StopDetectionEvidenceTest {
      * before report of those reported 2+ days after the stop, how many those are}.
      */
     private static double[] statistics(List<DemoSensorYear.PumpYear> year) {
-        int window = StopDetector.Settings.DEFAULT.windowDays();
+        int window = StopSettings.DEFAULT.windowDays();
         List<Integer> delays = new ArrayList<>();
         int planted = 0, beforeReport = 0, falseAlarms = 0, laterReported = 0, laterBeforeReport = 0;
         double pumpDays = 0;

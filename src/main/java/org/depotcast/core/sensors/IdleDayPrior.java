@@ -60,7 +60,7 @@ public final class IdleDayPrior {
     }
 
     /** The chance that a working pump with the given idle history shows a run of {@code run} near-nothing days. */
-    public double chanceOfRun(StopDetector.IdleDays own, int run) {
+    public double chanceOfRun(IdleDays own, int run) {
         if (run < 1) {
             throw new IllegalArgumentException("run must be at least 1: " + run);
         }
@@ -71,7 +71,7 @@ public final class IdleDayPrior {
     }
 
     /** The posterior mean chance that a spell starts on a given day, (k + a)/(m + a + b). */
-    public double spellChance(StopDetector.IdleDays own) {
+    public double spellChance(IdleDays own) {
         return (own.spells().length + a) / (own.read() + a + b);
     }
 
@@ -87,11 +87,11 @@ public final class IdleDayPrior {
     }
 
     /** Fits the prior over the pumps' idle histories; fewer than {@value #LEAST_PUMPS} with days read: {@link #ALONE}. */
-    public static IdleDayPrior pooled(List<StopDetector.IdleDays> pumps) {
+    public static IdleDayPrior pooled(List<IdleDays> pumps) {
         int n = 0, longest = 0;
         long spells = 0, read = 0;
         int[] readOf = new int[pumps.size()];
-        for (StopDetector.IdleDays p : pumps) {
+        for (IdleDays p : pumps) {
             if (p.read() > 0) {
                 readOf[n++] = p.read();
                 spells += p.spells().length;
@@ -105,7 +105,7 @@ public final class IdleDayPrior {
             return ALONE;
         }
         long[] lastingAtLeast = new long[longest + 1];
-        for (StopDetector.IdleDays p : pumps) {
+        for (IdleDays p : pumps) {
             for (int length : p.spells()) {
                 for (int j = 1; j <= length; j++) {
                     lastingAtLeast[j]++;
@@ -122,13 +122,13 @@ public final class IdleDayPrior {
     }
 
     /** Kleinman's moment estimate of ρ, or 0 when no pump or every pump had a spell on every day read. */
-    private static double intraPumpCorrelation(List<StopDetector.IdleDays> pumps, long spells, long read) {
+    private static double intraPumpCorrelation(List<IdleDays> pumps, long spells, long read) {
         if (spells == 0 || spells == read) {
             return 0;
         }
         double share = (double) spells / read;
         double s = 0, c0 = 0, c1 = 0;
-        for (StopDetector.IdleDays p : pumps) {
+        for (IdleDays p : pumps) {
             int m = p.read();
             if (m == 0) {
                 continue;

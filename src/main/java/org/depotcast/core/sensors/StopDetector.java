@@ -1,7 +1,5 @@
 package org.depotcast.core.sensors;
 
-import java.util.Arrays;
-
 /**
  * Tells from a pump's daily hours of use whether it is in normal use, has stopped, is declining, or has sent nothing.
  *
@@ -62,50 +60,13 @@ public final class StopDetector {
                           double probabilityDown, int nearNothingDays) {
     }
 
-    /** Settings with the defaults the Javadoc names. */
-    public record Settings(int baselineDays, int watchDays, int gapDays, double kSigmas, double hSigmas,
-                           double stopFraction, int leastBaselineDays, double dailyBreakdownChance,
-                           int idleHistoryDays) {
-        public static final Settings DEFAULT = new Settings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 112);
-
-        public Settings {
-            if (baselineDays < 1 || watchDays < 1 || gapDays < 1 || leastBaselineDays < 2) {
-                throw new IllegalArgumentException("windows must be positive: baseline " + baselineDays + ", watch "
-                        + watchDays + ", gap " + gapDays + ", least baseline " + leastBaselineDays);
-            }
-            if (!(dailyBreakdownChance > 0 && dailyBreakdownChance < 1)) {
-                throw new IllegalArgumentException("dailyBreakdownChance must be in (0, 1): " + dailyBreakdownChance);
-            }
-            if (idleHistoryDays < baselineDays) {
-                throw new IllegalArgumentException("idleHistoryDays must be at least baselineDays: " + idleHistoryDays);
-            }
-        }
-
-        /** The days the CUSUM reads: the baseline and the watched days. */
-        public int windowDays() {
-            return baselineDays + watchDays;
-        }
-
-        /** The most days a judgement reads: the idle history and the watched days. */
-        public int historyDays() {
-            return idleHistoryDays + watchDays;
-        }
-    }
-
     private static final double NEAR_NOTHING_HOURS = 0.25;
     private static final double LEAST_SIGMA_HOURS = 0.25;
 
-    private final Settings settings;
+    private final StopSettings settings;
 
-    public StopDetector(Settings settings) {
+    public StopDetector(StopSettings settings) {
         this.settings = settings;
-    }
-
-    /**
-     * The idle history before the watched days: days read, near-nothing days among them, and the length of each spell
-     * of near-nothing days (days with no reading neither break nor lengthen a spell).
-     */
-    public record IdleDays(int read, int idle, int[] spells) {
     }
 
     /** {@link #judge(double[], IdleDayPrior)} for a pump judged alone ({@link IdleDayPrior#ALONE}). */
@@ -115,8 +76,8 @@ public final class StopDetector {
 
     /**
      * @param hours the days up to the day judged, oldest first, hours of use a day, NaN for a day with no reading: at
-     *              least {@link Settings#windowDays()} and at most {@link Settings#historyDays()} days (a pump read for
-     *              a shorter time has a shorter idle history)
+     *              least {@link StopSettings#windowDays()} and at most {@link StopSettings#historyDays()} days (a pump
+     *              read for a shorter time has a shorter idle history)
      * @param prior the programme's prior for the pump's chance of a near-nothing day
      */
     public Verdict judge(double[] hours, IdleDayPrior prior) {
@@ -158,7 +119,7 @@ public final class StopDetector {
                 return new Verdict(State.IN_USE, -1, mean, sd, mean, 0, 0);
             }
         }
-        return afterChange(hours, change, mean, sd, nearNothing, countIdle(hours, nearNothing), prior);
+        return afterChange(hours, change, mean, sd, nearNothing, IdleDays.count(hours, nearNothing, settings), prior);
     }
 
     /**
@@ -169,7 +130,7 @@ public final class StopDetector {
         checkLength(hours);
         int from = hours.length - settings.windowDays();
         double nearNothing = nearNothing(hours, from, from + settings.baselineDays());
-        return Double.isNaN(nearNothing) ? null : countIdle(hours, nearNothing);
+        return Double.isNaN(nearNothing) ? null : IdleDays.count(hours, nearNothing, settings);
     }
 
     private void checkLength(double[] hours) {
@@ -193,30 +154,6 @@ public final class StopDetector {
             return Double.NaN;
         }
         return Math.max(NEAR_NOTHING_HOURS, settings.stopFraction() * sum / read);
-    }
-
-    private IdleDays countIdle(double[] hours, double nearNothing) {
-        int to = hours.length - settings.watchDays();
-        int from = Math.max(0, to - settings.idleHistoryDays());
-        int idle = 0, read = 0, spell = 0, count = 0;
-        int[] spells = new int[to - from];
-        for (int i = from; i < to; i++) {
-            if (Double.isNaN(hours[i])) {
-                continue;
-            }
-            read++;
-            if (hours[i] <= nearNothing) {
-                idle++;
-                spell++;
-            } else if (spell > 0) {
-                spells[count++] = spell;
-                spell = 0;
-            }
-        }
-        if (spell > 0) {
-            spells[count++] = spell;
-        }
-        return new IdleDays(read, idle, Arrays.copyOf(spells, count));
     }
 
     /** The change point of the first CUSUM signal in the watched days, or −1 for none. */

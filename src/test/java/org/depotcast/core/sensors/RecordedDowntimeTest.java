@@ -10,7 +10,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** A recorded breakdown's downtime left out of the days judged, on hand-made series. */
 class RecordedDowntimeTest {
-    private static final StopDetector DETECTOR = new StopDetector(StopDetector.Settings.DEFAULT);
+    private static final StopDetector DETECTOR = new StopDetector(StopSettings.DEFAULT);
 
     /** 6 h a day; stood broken days 5–12 (stopped day 5, reported day 8, fixed day 13); stopped again days 40–41. */
     private static double[] series() {
@@ -44,7 +44,7 @@ class RecordedDowntimeTest {
         assertEquals(1.0 / (1 + 364 * 0.09), counted.probabilityDown(), 1e-9);
         // Left out: 20 days read, none idle, q = 1/22; P = 484 / (484 + 364) ≈ 0.571, over the flag's 0.5.
         StopDetector.Verdict leftOut = DETECTOR.judge(RecordedDowntime.leaveOut(hours,
-                List.of(new RecordedDowntime.Breakdown(8, 13)), StopDetector.Settings.DEFAULT.stopFraction()));
+                List.of(new RecordedDowntime.Breakdown(8, 13)), StopSettings.DEFAULT.stopFraction()));
         assertEquals(StopDetector.State.STOPPED, leftOut.state());
         assertEquals(484.0 / 848, leftOut.probabilityDown(), 1e-9);
     }

@@ -12,7 +12,7 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
  * k = 0.5σ, h = 4σ as in Montgomery 2009 §9.1.3, prior 1/365 a day).
  */
 class StopDetectorTest {
-    private final StopDetector detector = new StopDetector(StopDetector.Settings.DEFAULT);
+    private final StopDetector detector = new StopDetector(StopSettings.DEFAULT);
 
     /** 28 baseline days alternating 5 and 7 h: μ₀ = 6, s = √(28/27) = 1.018350, so k = 0.509175, h = 4.073401. */
     private static double[] series(double... watch) {
@@ -112,9 +112,9 @@ class StopDetectorTest {
     @Test
     void brokenContractsNameTheArgument() {
         assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[10]));
-        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10, 0,
+        assertThrows(IllegalArgumentException.class, () -> new StopSettings(28, 14, 3, 0.5, 4, 0.1, 10, 0,
                 112));
-        assertThrows(IllegalArgumentException.class, () -> new StopDetector.Settings(28, 14, 3, 0.5, 4, 0.1, 10,
+        assertThrows(IllegalArgumentException.class, () -> new StopSettings(28, 14, 3, 0.5, 4, 0.1, 10,
                 1.0 / 365, 20));
         assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[127]));
     }
@@ -159,7 +159,7 @@ class StopDetectorTest {
             idle[i] = 4 * i + 1;
         }
         double[] hours = oneDayOfNothingAfter(idle);
-        StopDetector.IdleDays history = detector.idleDays(hours);
+        IdleDays history = detector.idleDays(hours);
         assertEquals(112, history.read());
         assertEquals(20, history.idle());
         assertEquals(20, history.spells().length);
