@@ -66,6 +66,19 @@ class LeadJourneyBrowserTest extends BrowserSession {
         }
         assertTrue(driver.getCurrentUrl().contains("part=OB-CS-50") && driver.getCurrentUrl().contains("location=DEP-PELLOWDENE"));
         PrintedPage.assertPrintsChartAndTable(driver, "#explorer figure.chart", "lead-forecast-printed");
+        assertEquals(List.of("pieces", "pieces", "pieces"), unitWords());
+
+        // A part counted in sets says sets in every figure, the expected month too (it said "pieces").
+        new Select(driver.findElement(By.id("part"))).selectByValue("OB-OR-SET");
+        driver.findElement(By.cssSelector("#explore-form button[type=submit]")).click();
+        steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#explorer h3")).getText().startsWith("OB-OR-SET"));
+        assertEquals(List.of("sets", "sets", "sets"), unitWords());
+    }
+
+    /** The unit word that ends the expected next month, the expected next 12 months and the 80 % range. */
+    private List<String> unitWords() {
+        return driver.findElements(By.cssSelector("#explorer dl.figures dd")).subList(1, 4).stream()
+                .map(dd -> dd.getText().replaceAll("^.*\\s", "")).toList();
     }
 
     /** A wait that reads elements afresh when the page has redrawn them meanwhile. */

@@ -110,7 +110,7 @@ async function showPart(push = true) {
         h('h3', {}, `${view.partNumber} · ${view.description}`, h('span', {class: 'muted'}, ` at ${where ? where : 'the whole programme'}`)),
         figures([
             ['Method used', methodWords(f.method)],
-            ['Expected next month', `${fmt.num(view.ranges[0].mean, whole ? 1 : 2)} ${whole ? 'pieces' : unitWord(view.unitOfIssue)}`],
+            ['Expected next month', `${fmt.num(view.ranges[0].mean, whole ? 1 : 2)} ${unitWord(view.unitOfIssue)}`],
             ['Expected next 12 months', fmt.qty(next12, view.unitOfIssue)],
             ['Next month, 80 % range', `${fmt.qty(view.ranges[0].low80, view.unitOfIssue)} to ${fmt.qty(view.ranges[0].high80, view.unitOfIssue)}`],
             ['Demand pattern', f.demandClass ? f.demandClass.replace(/_/g, ' ').toLowerCase() : '–'],
