@@ -34,6 +34,18 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         waitOutbox(1);
         recordFixedRepair(sealPart, 2);
         waitOutbox(2);
+        // A further repair taking more seals than the 3 the waiting one leaves is named on the form before it is sent.
+        press("#repair-form div.part-lines + button");
+        choose("#repair-form select[data-field='lines[0].partNumber']", sealPart);
+        type("#repair-form input[data-field='lines[0].quantity']", "4");
+        String shortNote = wait(Duration.ofSeconds(10)).ignoring(StaleElementReferenceException.class).until(d -> {
+            String words = d.findElement(By.cssSelector("#repair-form .kit-short")).getText();
+            return words.isEmpty() ? null : words;
+        });
+        assertTrue(shortNote.startsWith("More than your kit holds: " + sealPart + " has 3 pieces left after the repairs waiting to send"),
+                shortNote);
+        type("#repair-form input[data-field='lines[0].quantity']", "3");
+        wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#repair-form .kit-short")).getText().isEmpty());
         assertEquals("2 actions are waiting to send.", driver.findElement(By.id("outbox-count")).getText());
         assertEquals(2, driver.findElements(By.cssSelector("#outbox-list li")).size());
         assertFitsThePhone();

@@ -6,7 +6,7 @@
  */
 import * as fmt from '/app/js/format.js';
 import {h, clearErrors} from '/app/js/ui.js';
-import {field, partLines, checkLines, refuse, describeKit} from './forms.js';
+import {field, partLines, checkLines, refuse, describeKit, kitShortfall} from './forms.js';
 
 function repairWords(r) {
     return `${r.assetId}: ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'} reported ${fmt.date(r.reportedOn)}`
@@ -18,7 +18,7 @@ function latestDate(r) {
     return [r.reportedOn, r.diagnosedOn, r.partsAvailableOn].filter(Boolean).sort().pop();
 }
 
-export function closeForm(snapshot, queue) {
+export function closeForm(snapshot, queue, waiting) {
     const open = snapshot.openRepairs;
     const byRef = new Map(open.map(r => [r.repairRef, r]));
     // The kit's parts and those the open repairs wait for (one may have come since the page last read the kit).
@@ -33,11 +33,14 @@ export function closeForm(snapshot, queue) {
         h('p', {class: 'hint'}, 'Closing takes these parts out of your kit when it reaches the server, and the pump counts as '
             + 'working again unless another breakdown of it is still open.'),
         h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Close this repair as fixed')));
+    const shortfall = kitShortfall(snapshot, waiting, form, lines, () => true);
+    lines.box.after(shortfall.note);
     const fill = () => {
         const r = byRef.get(form.elements.repairRef.value);
         lines.clear();
         (r ? r.lines : []).forEach(l => lines.add(l.partNumber, Number(l.quantity)));
         form.elements.fixedOn.min = r ? latestDate(r) : '';
+        shortfall.draw();
     };
     form.addEventListener('submit', async e => {
         e.preventDefault();

@@ -7,6 +7,7 @@ import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
 import {h, mount, showError, clearErrors} from '/app/js/ui.js';
 import {partLabel} from './views.js';
+import {waitingUse} from './data.js';
 
 let fieldIds = 0;
 
@@ -76,6 +77,29 @@ export function describeKit(snapshot) {
     return n => `${partLabel(snapshot, n)} (${fmt.num(onHand.get(n) || 0, 2)} in kit)`;
 }
 
+/**
+ * Under the parts used of a fixed repair: the lines that take more than the kit held at the last refresh, less what
+ * the fixed repairs still waiting to send take, since the server refuses such a repair unless parts reached the kit
+ * since. It warns and does not stop the form: the phone's data may be older than the parts in the mechanic's hands.
+ *   waiting()  the mechanic's outbox now;  fixed()  whether this repair is recorded as fixed
+ */
+export function kitShortfall(snapshot, waiting, form, lines, fixed) {
+    const note = h('p', {class: 'kit-short', role: 'status', 'aria-live': 'polite'});
+    const units = new Map(snapshot.parts.map(p => [p.partNumber, p.unitOfIssue]));
+    const draw = () => {
+        const held = new Map(snapshot.balances.map(b => [b.partNumber, Number(b.onHand)]));
+        const using = waitingUse(waiting());
+        const short = !fixed() ? [] : lines.read().filter(l => l.partNumber && l.quantity > 0)
+            .map(l => ({...l, left: Math.max(0, (held.get(l.partNumber) || 0) - (using.get(l.partNumber) || 0)), waits: using.has(l.partNumber)}))
+            .filter(l => l.quantity > l.left);
+        mount(note, short.length ? [h('strong', {}, 'More than your kit holds: '),
+            short.map(l => `${l.partNumber} has ${fmt.qty(l.left, units.get(l.partNumber))} left${l.waits ? ' after the repairs waiting to send' : ''}`)
+                .join('; ') + `, as of the last refresh. The server will refuse this repair unless these parts reached your kit since.`] : []);
+    };
+    ['input', 'change', 'click', 'reset'].forEach(e => form.addEventListener(e, () => setTimeout(draw)));
+    return {note, draw};
+}
+
 export function askForm(snapshot, queue) {
     const lines = partLines(snapshot, 'Parts', snapshot.parts.map(p => p.partNumber), n => partLabel(snapshot, n));
     const form = h('form', {id: 'ask-form', novalidate: true},
@@ -114,7 +138,7 @@ export function askForm(snapshot, queue) {
     }};
 }
 
-export function repairForm(snapshot, queue) {
+export function repairForm(snapshot, queue, waiting) {
     const kitParts = snapshot.balances.map(b => b.partNumber);
     const lines = partLines(snapshot, 'Parts used from your kit', kitParts, describeKit(snapshot));
     const today = fmt.isoDay();
@@ -129,6 +153,8 @@ export function repairForm(snapshot, queue) {
         lines.box,
         h('p', {class: 'hint'}, 'A fixed repair takes its parts out of your kit when it reaches the server.'),
         h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Record this repair')));
+    const shortfall = kitShortfall(snapshot, waiting, form, lines, () => Boolean(form.elements.fixedOn.value));
+    lines.box.after(shortfall.note);
     form.addEventListener('submit', async e => {
         e.preventDefault();
         clearErrors(form);
@@ -166,6 +192,7 @@ export function repairForm(snapshot, queue) {
     });
     return {form, open(assetId) {
         form.elements.assetId.value = assetId || '';
+        shortfall.draw();
     }};
 }
 

@@ -113,8 +113,8 @@ function drawData() {
         snapshot.openRepairs.map(r => r.repairRef)]);
     if (key !== formsKey) {
         formsKey = key;
-        forms = {ask: askForm(snapshot, queue), repair: repairForm(snapshot, queue), report: statusForm(snapshot, queue),
-            close: closeForm(snapshot, queue)};
+        forms = {ask: askForm(snapshot, queue), repair: repairForm(snapshot, queue, () => outbox), report: statusForm(snapshot, queue),
+            close: closeForm(snapshot, queue, () => outbox)};
         mount(el('ask-body'), forms.ask.form);
         mount(el('repair-body'), forms.repair.form);
         mount(el('report-body'), forms.report.form);
