@@ -32,6 +32,7 @@ final class SpendReport {
 
     static String html(SpendResults r) {
         StringBuilder h = new StringBuilder();
+        String c = r.currency();
         h.append("<!doctype html><html lang=\"en\"><head><meta charset=\"utf-8\"><title>Parts spend projection: ")
                 .append(escape(r.scenario())).append("</title><style>body{font-family:sans-serif;margin:2em;color:#222}"
                         + "table{border-collapse:collapse;margin:1em 0}td,th{border:1px solid #999;padding:4px 8px;text-align:right}"
@@ -43,9 +44,10 @@ final class SpendReport {
         h.append("<h2>Total per financial year</h2><table><tr><th>Financial year</th><th>Months</th><th>Expected</th>"
                 + "<th>80% range</th><th>95% range</th></tr>");
         for (SpendResults.Year y : r.years()) {
-            h.append("<tr><td>").append(escape(y.label())).append("</td><td>").append(escape(y.months())).append("</td><td>").append(money(y.total().mean())).append("</td><td>")
-                    .append(money(y.total().p10())).append(" – ").append(money(y.total().p90())).append("</td><td>")
-                    .append(money(y.total().p2_5())).append(" – ").append(money(y.total().p97_5())).append("</td></tr>");
+            h.append("<tr><td>").append(escape(y.label())).append("</td><td>").append(escape(y.months())).append("</td><td>")
+                    .append(shown(y.total().mean(), c)).append("</td><td>")
+                    .append(shown(y.total().p10(), c)).append(" – ").append(grouped(y.total().p90())).append("</td><td>")
+                    .append(shown(y.total().p2_5(), c)).append(" – ").append(grouped(y.total().p97_5())).append("</td></tr>");
         }
         h.append("</table><h2>Per component family (expected, 80% range)</h2><table><tr><th>Family</th>");
         r.years().forEach(y -> h.append("<th>").append(escape(y.label())).append("<br><small>")
@@ -55,8 +57,8 @@ final class SpendReport {
             h.append("<tr><td>").append(family.toLowerCase(Locale.ROOT).replace('_', ' ')).append("</td>");
             for (SpendResults.Year y : r.years()) {
                 SpendSimulation.Summary s = y.families().get(family);
-                h.append("<td>").append(s == null ? "–" : money(s.mean()) + "<br><small>" + money(s.p10()) + " – "
-                        + money(s.p90()) + "</small>").append("</td>");
+                h.append("<td>").append(s == null ? "–" : shown(s.mean(), c) + "<br><small>" + grouped(s.p10()) + " – "
+                        + grouped(s.p90()) + "</small>").append("</td>");
             }
             h.append("</tr>");
         }
@@ -90,13 +92,24 @@ final class SpendReport {
             svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"240\" font-size=\"12\">%s</text>", x + 4,
                     escape(y.label() + (y.partial() ? " (part)" : ""))));
             svg.append(String.format(Locale.ROOT, "<text x=\"%.0f\" y=\"%.1f\" font-size=\"11\">%s</text>", x, top - 4,
-                    money(y.total().mean())));
+                    escape(r.currency()) + " " + String.format(Locale.ROOT, "%,.0f", y.total().mean())));
         }
         return svg.append("</svg>").toString();
     }
 
+    /** Plain figures for the CSV, which a spreadsheet reads: no thousands separators, no currency. */
     private static String money(double value) {
         return String.format(Locale.ROOT, "%.2f", value);
+    }
+
+    /** Figures for people on the printed page: thousands separators, two decimals ("1,685,745.70"). */
+    static String grouped(double value) {
+        return String.format(Locale.ROOT, "%,.2f", value);
+    }
+
+    /** An amount with its currency before it ("KES 1,685,745.70"), as the pages show money. */
+    static String shown(double value, String currency) {
+        return escape(currency) + " " + grouped(value);
     }
 
     private static String escape(String text) {

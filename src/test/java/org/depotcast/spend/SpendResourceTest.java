@@ -124,8 +124,16 @@ class SpendResourceTest {
         for (int i = 0; i < 600 && "RUNNING".equals(as("lead").get("/api/spend/runs/" + run).jsonPath().getString("status")); i++) {
             Thread.sleep(100);
         }
+        io.restassured.path.json.JsonPath results = as("lead").get("/api/spend/runs/" + run + "/results").then().statusCode(200)
+                .extract().jsonPath();
+        // The printed page shows money for people: the currency and thousands separators ("KES 1,685,745.70").
+        int last = results.getList("years").size() - 1;
+        String lastYear = String.format(java.util.Locale.ROOT, "%s %,.2f", results.getString("currency"),
+                results.getDouble("years[" + last + "].total.mean"));
+        assertTrue(lastYear.contains(","), "a whole year's spend on the demo runs into thousands: " + lastYear);
         as("lead").get("/api/spend/runs/" + run + "/report").then().statusCode(200)
-                .body(containsString("<svg")).body(containsString("drinking-water"));
+                .body(containsString("<svg")).body(containsString("drinking-water"))
+                .body(containsString("<td>" + lastYear + "</td>"));
         String csv = as("lead").get("/api/spend/runs/" + run + "/results.csv").then().statusCode(200).extract().asString();
         assertTrue(csv.startsWith("financial_year,months,level,key,mean"));
         as("lead").get("/api/spend/compare?runs=" + run + "," + run).then().statusCode(200).body("size()", equalTo(2))
