@@ -30,6 +30,15 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         assertTrue(driver.findElement(By.id("connection")).getText().startsWith("No connection"));
         assertTrue(driver.findElement(By.id("freshness")).getText().startsWith("Data from the server as of"));
 
+        // Half a piece is refused on the phone, not by the server once the connection returns.
+        openSection("ask");
+        choose("#ask-form select[data-field='lines[0].partNumber']", valvePart);
+        type("#ask-form input[data-field='lines[0].quantity']", "1.5");
+        press("#ask-form button[type=submit]");
+        String halfPiece = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#ask-form .field-error")).getText());
+        assertTrue(halfPiece.contains("give a whole number: this part is counted in pieces"), halfPiece);
+        assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-outbox"));
+
         askForTopUp(valvePart, 3);
         waitOutbox(1);
         recordFixedRepair(sealPart, 2);

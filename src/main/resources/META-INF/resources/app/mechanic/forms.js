@@ -41,7 +41,9 @@ export function partLines(snapshot, legend, choices, describe) {
     box.append(h('button', {type: 'button', onclick: () => add()}, 'Add a part'));
     return {box, add, clear: () => mount(list), read: () => [...list.children].map(row => {
         const [select, amount] = row.querySelectorAll('select, input');
-        return {partNumber: select.value, quantity: amount.value === '' ? NaN : Number(amount.value), select, amount};
+        const part = snapshot.parts.find(p => p.partNumber === select.value);
+        return {partNumber: select.value, quantity: amount.value === '' ? NaN : Number(amount.value), select, amount,
+            unit: part ? part.unitOfIssue : null};
     })};
 }
 
@@ -59,6 +61,9 @@ export function checkLines(lines, required) {
         seen.add(l.partNumber);
         if (!(l.quantity > 0)) {
             errors.push({field: `lines[${i}].quantity`, message: 'give a quantity above zero'});
+        } else if (l.unit && fmt.wholeUnits(l.unit) && !Number.isInteger(l.quantity)) {
+            // The API refuses it too; on the phone it is said now, not when the connection returns.
+            errors.push({field: `lines[${i}].quantity`, message: `give a whole number: this part is counted in ${fmt.qty(2, l.unit).replace(/^2 /, '')}`});
         }
     });
     if (required && !lines.length) {
