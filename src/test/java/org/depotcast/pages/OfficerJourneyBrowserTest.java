@@ -82,6 +82,15 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         Object fits = driver.executeScript("const t = document.getElementById('alerts'); return t.scrollWidth <= t.parentElement.clientWidth + 1;");
         assertEquals(Boolean.TRUE, fits, "every column of the board shows on a 1280 px screen");
         screenshot("officer-board-desk");
+        // An alert's details say its forecast method in words (the API sends a code such as FLEET) and the demand a
+        // day with the part's unit.
+        WebElement more = driver.findElement(By.cssSelector("#alerts tbody tr.alert-row button.more"));
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", more);
+        more.click();
+        String details = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.id("details-0")).getText());
+        String method = top.getString("[0].forecastMethod");
+        assertTrue(details.contains("Forecast method\n" + methodWords(method)), details);
+        assertTrue(details.matches("(?s).*Demand a day\n[0-9.,]+ (pieces|sets|pairs|lengths|m|kg|L)\n.*"), details);
 
         driver.findElement(By.linkText("Requests")).click();
         waitReady();
@@ -110,6 +119,20 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         assertEquals("officer", moving.get(0).get("actor"));
         assertEquals(fromBefore - quantity, onHand(from, part), 1e-9, "the stock left the sending store");
         assertNoPageErrors();
+    }
+
+    /** The words the pages use for a method (app/js/methods.js), for the methods the demo's alerts come from. */
+    private static String methodWords(String method) {
+        return switch (method) {
+            case "FLEET" -> "fleet model (breakdown rate of the installed pumps)";
+            case "SBA" -> "SBA (Croston, bias-corrected)";
+            case "TSB" -> "TSB (Teunter–Syntetos–Babai)";
+            case "SES" -> "simple exponential smoothing";
+            case "POISSON" -> "Poisson mean";
+            case "MEAN12" -> "mean of the last 12 months";
+            case "COMBINED" -> "combination (equal weights of SBA, TSB, smoothing, Poisson mean and 12-month mean)";
+            default -> method.toLowerCase(java.util.Locale.ROOT);
+        };
     }
 
     private double onHand(String location, String part) {

@@ -16,16 +16,7 @@ const TABS = [
     ['/app/lead/accuracy.html', 'Forecast accuracy']
 ];
 
-export const METHOD_WORDS = {
-    FLEET: 'fleet model (breakdown rate of the installed pumps)', CROSTON: 'Croston', SBA: 'SBA (Croston, bias-corrected)',
-    SBJ: 'SBJ (Croston, Shale–Boylan–Johnston correction)', TSB: 'TSB (Teunter–Syntetos–Babai)',
-    SES: 'simple exponential smoothing', POISSON: 'Poisson mean', MEAN12: 'mean of the last 12 months',
-    COMBINED: 'combination (equal weights of SBA, TSB, smoothing, Poisson mean and 12-month mean)', 'no forecast': 'no forecast'
-};
-
-export function methodWords(method) {
-    return METHOD_WORDS[method] || METHOD_WORDS[String(method).toUpperCase()] || String(method).toLowerCase();
-}
+export {METHOD_WORDS, methodWords} from '/app/js/methods.js';
 
 function tabs() {
     const here = location.pathname.endsWith('/index.html') ? location.pathname.replace(/index\.html$/, '') : location.pathname;

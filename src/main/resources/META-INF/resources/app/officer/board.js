@@ -6,6 +6,7 @@
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
 import {provenance} from '/app/js/provenance.js';
+import {methodWords} from '/app/js/methods.js';
 import {h, mount, table, state, say, busy, figures, caution} from '/app/js/ui.js';
 import {startOfficer, kindWords, describe, ready, orderQuantity, storeName} from './officer.js';
 
@@ -137,9 +138,9 @@ function detailsOf(alert, policy, suggestions) {
         h('ul', {}, alert.reasons.map(r => h('li', {}, `${kindWords(r.kind)[0]}: ${r.detail}`))),
         figures([
             ['Inventory position', fmt.qty(alert.position, u)],
-            ['Demand a day', fmt.num(alert.dailyDemand, 2)],
+            ['Demand a day', `${fmt.num(alert.dailyDemand, 2)} ${fmt.qty(2, u).replace(/^2 /, '')}`],
             ['Days of cover', alert.daysOfCover === null ? '–' : fmt.num(alert.daysOfCover, 1)],
-            ['Forecast method', alert.forecastMethod || '–'],
+            ['Forecast method', alert.forecastMethod ? methodWords(alert.forecastMethod) : '–'],
             policy ? ['Service level', fmt.percent(policy.serviceLevel)] : null
         ]),
         alert.waitingPumps.length ? table({caption: 'Pumps waiting for this part', rows: alert.waitingPumps, columns: [
