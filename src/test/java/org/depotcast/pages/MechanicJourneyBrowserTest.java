@@ -53,6 +53,9 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         });
         assertTrue(shortNote.startsWith("More than your kit holds: " + sealPart + " has 3 pieces left after the repairs waiting to send"),
                 shortNote);
+        String offered = driver.findElement(By.cssSelector("#repair-form select[data-field='lines[0].partNumber'] option[value='"
+                + sealPart + "']")).getText();
+        assertTrue(offered.endsWith("(5 pieces in kit)"), "the kit as last read, with its unit: " + offered);
         type("#repair-form input[data-field='lines[0].quantity']", "3");
         wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#repair-form .kit-short")).getText().isEmpty());
         assertEquals("2 actions are waiting to send.", driver.findElement(By.id("outbox-count")).getText());

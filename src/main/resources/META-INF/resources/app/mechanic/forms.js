@@ -79,7 +79,8 @@ export function refuse(form, errors) {
 
 export function describeKit(snapshot) {
     const onHand = new Map(snapshot.balances.map(b => [b.partNumber, b.onHand]));
-    return n => `${partLabel(snapshot, n)} (${fmt.num(onHand.get(n) || 0, 2)} in kit)`;
+    const units = new Map(snapshot.parts.map(p => [p.partNumber, p.unitOfIssue]));
+    return n => `${partLabel(snapshot, n)} (${fmt.qty(onHand.get(n) || 0, units.get(n))} in kit)`;
 }
 
 /**
