@@ -27,13 +27,21 @@ final class MonthDays {
 
     static MonthDays decode(LocalDate monthStart, String text) {
         int[] days = new int[monthStart.lengthOfMonth()];
-        // Read by character: a year of files re-reads hundreds of thousands of months.
         for (int d = 0; d < days.length; d++) {
-            int at = 4 * d;
-            days[d] = text.charAt(at) == '.' ? MISSING : (text.charAt(at) - '0') * 1000
-                    + (text.charAt(at + 1) - '0') * 100 + (text.charAt(at + 2) - '0') * 10 + (text.charAt(at + 3) - '0');
+            days[d] = hundredthsOn(text, d);
         }
         return new MonthDays(monthStart, days);
+    }
+
+    /**
+     * Hundredths of an hour on the day {@code index} (0 for the first) of a stored {@code day_hours} text, or
+     * {@link #MISSING}: read by character, since a year of files re-reads hundreds of thousands of months and the stop
+     * check reads five months of every pump judged.
+     */
+    static int hundredthsOn(String text, int index) {
+        int at = 4 * index;
+        return text.charAt(at) == '.' ? MISSING : (text.charAt(at) - '0') * 1000
+                + (text.charAt(at + 1) - '0') * 100 + (text.charAt(at + 2) - '0') * 10 + (text.charAt(at + 3) - '0');
     }
 
     String encode() {
@@ -55,11 +63,6 @@ final class MonthDays {
 
     int length() {
         return hundredths.length;
-    }
-
-    /** Hundredths of an hour on the month's day {@code index} (0 for the first), or {@link #MISSING}. */
-    int onDayIndex(int index) {
-        return hundredths[index];
     }
 
     /** Hundredths of an hour on the day, or {@link #MISSING}. */

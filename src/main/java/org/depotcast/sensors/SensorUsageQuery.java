@@ -142,13 +142,16 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
                     java.util.Arrays.fill(empty, Double.NaN);
                     return empty;
                 });
-                MonthDays month = MonthDays.decode(r.getDate(2).toLocalDate(), r.getString(3));
-                long offset = month.monthStart().toEpochDay() - firstDay.toEpochDay();
-                for (int d = 0; d < month.length(); d++) {
-                    long index = offset + d;
-                    int hundredths = month.onDayIndex(d);
-                    if (index >= 0 && index < days && hundredths != MonthDays.MISSING) {
-                        window[(int) index] = hundredths / 100.0;
+                // Only the month's days inside the window are read, straight from the stored text: the stop check
+                // reads the idle history of every pump judged, five or six months each.
+                LocalDate monthStart = r.getDate(2).toLocalDate();
+                String text = r.getString(3);
+                int offset = (int) (monthStart.toEpochDay() - firstDay.toEpochDay());
+                int last = Math.min(monthStart.lengthOfMonth(), days - offset);
+                for (int d = Math.max(0, -offset); d < last; d++) {
+                    int hundredths = MonthDays.hundredthsOn(text, d);
+                    if (hundredths != MonthDays.MISSING) {
+                        window[offset + d] = hundredths / 100.0;
                     }
                 }
             });

@@ -21,8 +21,10 @@ import java.time.temporal.ChronoUnit;
 import java.util.ArrayList;
 import java.util.Collection;
 import java.util.HashMap;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 
 /**
  * Keeps the "probably down" flags in step with the sensors and the repairs: a pump the detector finds stopped
@@ -49,8 +51,13 @@ public class StopFlagService {
             return list("pumpId in ?1 order by flaggedOn desc", pumpIds);
         }
 
-        boolean exists(long pumpId, LocalDate stoppedFrom) {
-            return count("pumpId = ?1 and stoppedFrom = ?2", pumpId, stoppedFrom) > 0;
+        /** Per pump, the days its flags (of any state) date a stop from, for stops from {@code from} on. */
+        Map<Long, Set<LocalDate>> stopsFrom(LocalDate from) {
+            Map<Long, Set<LocalDate>> stops = new HashMap<>();
+            getEntityManager().createQuery("select f.pumpId, f.stoppedFrom from StopFlag f where f.stoppedFrom >= ?1",
+                            Object[].class).setParameter(1, from).getResultStream()
+                    .forEach(r -> stops.computeIfAbsent((Long) r[0], k -> new HashSet<>()).add((LocalDate) r[1]));
+            return stops;
         }
     }
 
@@ -84,21 +91,28 @@ public class StopFlagService {
         Map<Long, List<RepairSpan>> breakdowns = repairs.breakdownsBetween(firstDay, asOf);
         Map<Long, StopFlag> open = new HashMap<>();
         flags.open().forEach(f -> open.put(f.pumpId, f));
-        Map<Long, double[]> judged = new HashMap<>();
+        // A stop is flagged once: the flags already dating a stop inside the window, read in one query (a query per
+        // pump raised flushed the session each time).
+        Map<Long, Set<LocalDate>> flaggedStops = flags.stopsFrom(firstDay);
+        // Each window is judged less its recorded downtime, in place: a pump with no breakdown in it keeps its own
+        // array (a copy of every window judged was most of a day's file's garbage).
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
-            judged.put(pump.getKey(), RecordedDowntime.leaveOut(pump.getValue(),
-                    inWindow(breakdowns.getOrDefault(pump.getKey(), List.of()), firstDay, days),
-                    SETTINGS.stopFraction()));
+            List<RepairSpan> spans = breakdowns.get(pump.getKey());
+            if (spans != null && !spans.isEmpty()) {
+                pump.setValue(RecordedDowntime.leaveOut(pump.getValue(), inWindow(spans, firstDay, days),
+                        SETTINGS.stopFraction()));
+            }
         }
-        IdleDayPrior prior = pooledPrior(judged.values());
+        IdleDayPrior prior = pooledPrior(windows.values());
         int opened = 0, stillOpen = 0;
-        for (Map.Entry<Long, double[]> pump : judged.entrySet()) {
+        for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
             StopDetector.Verdict verdict = detector.judge(pump.getValue(), prior);
             RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
                 stillOpen += follow(flag, verdict, repair, asOf) ? 1 : 0;
-            } else if (raise(pump.getKey(), verdict, repair, asOf)) {
+            } else if (raise(pump.getKey(), verdict, repair, asOf,
+                    flaggedStops.getOrDefault(pump.getKey(), Set.of()))) {
                 opened++;
                 stillOpen++;
             }
@@ -150,14 +164,16 @@ public class StopFlagService {
         return true;
     }
 
-    private boolean raise(long pumpId, StopDetector.Verdict verdict, RepairFacts repair, LocalDate asOf) {
+    /** Opens a flag for a probable stop not flagged before ({@code flaggedStops}: the pump's flagged stop days). */
+    private boolean raise(long pumpId, StopDetector.Verdict verdict, RepairFacts repair, LocalDate asOf,
+                          Set<LocalDate> flaggedStops) {
         if (verdict.state() != StopDetector.State.STOPPED || verdict.probabilityDown() < LEAST_PROBABILITY
                 || repair.openRepairRef() != null) {
             return false;
         }
         LocalDate stoppedFrom = asOf.minusDays(SETTINGS.historyDays() - 1L - verdict.changeIndex());
         if ((repair.lastFixedOn() != null && !repair.lastFixedOn().isBefore(stoppedFrom))
-                || flags.exists(pumpId, stoppedFrom)) {
+                || flaggedStops.contains(stoppedFrom)) {
             return false;
         }
         StopFlag flag = new StopFlag();
