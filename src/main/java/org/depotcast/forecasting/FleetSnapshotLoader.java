@@ -38,7 +38,6 @@ public class FleetSnapshotLoader {
     private final LocationService locations;
     private final PartService parts;
     private final PumpModelService models;
-
     private final Clock clock;
 
     FleetSnapshotLoader(PumpService pumps, UsageService usage, RepairService repairs, LocationService locations,
