@@ -44,4 +44,7 @@ public class ForecastRun {
     /** The background job that computes it (jobs/): state and progress for any instance to answer a poll. */
     @Column(name = "job_id")
     public Long jobId;
+    /** Whoever started its job: an account name, or {@code system:<purpose>} for the nightly schedule. */
+    @Column(name = "started_by")
+    public String startedBy;
 }

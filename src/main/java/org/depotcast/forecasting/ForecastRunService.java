@@ -172,6 +172,7 @@ public class ForecastRunService {
         run.startedAt = OffsetDateTime.now(clock);
         run.horizonMonths = horizonMonths;
         run.jobId = jobId;
+        run.startedBy = jobs.startedBy(jobId);
         repository.getEntityManager().persist(run);
         return run.id;
     }

@@ -72,6 +72,14 @@ public class JobRunner {
         }
     }
 
+    /**
+     * Who started the job: in the transaction that created it (rows linked by {@link #createExclusive}) or any later
+     * one, so work done for a job (an accuracy check's forecast run) is credited to the person who asked for it.
+     */
+    public String startedBy(long jobId) {
+        return QuarkusTransaction.joiningExisting().call(() -> jobs.findById(jobId).startedBy);
+    }
+
     private long persist(JobKind kind, String startedBy, OffsetDateTime now) {
         BackgroundJob job = new BackgroundJob();
         job.kind = kind;

@@ -77,7 +77,8 @@ class AccuracyReportTest {
         // The as-of run stays out of planning's way.
         assertEquals(planningRunBefore, planningRunId());
         TestData.as("lead").get("/api/forecast/runs/" + report.getLong("forecastRunId")).then().statusCode(200)
-                .body("trigger", equalTo("as-of")).body("origin", equalTo(origin.toString()));
+                .body("trigger", equalTo("as-of")).body("origin", equalTo(origin.toString()))
+                .body("startedBy", equalTo("lead"));
         TestData.as("officer").get(location.substring(location.indexOf("/api/"))).then().statusCode(200);
         // Listed among the earlier reports, newest first, with its origin and its job's state.
         TestData.as("officer").get(REPORTS + "?limit=100").then().statusCode(200)

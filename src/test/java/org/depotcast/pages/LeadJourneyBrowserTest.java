@@ -40,6 +40,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("provenance")).getText()
                 .contains("forecast run " + runId + ", which finished"));
         assertEquals("finished", driver.findElement(By.cssSelector("#runs tbody tr:first-child td[data-label=State]")).getText());
+        assertEquals("lead", driver.findElement(By.cssSelector("#runs tbody tr:first-child td[data-label='Started by']")).getText());
     }
 
     private void readAPartsChart() {

@@ -127,13 +127,18 @@ function unitWord(unit) {
     return fmt.qty(2, unit).replace(/^[\d.,\s]+/, '');
 }
 
+/** The account that started a run, the nightly schedule, or (runs older than the record) "not recorded". */
+function startedBy(r) {
+    const who = r.trigger === 'schedule' ? 'the nightly schedule' : r.startedBy || 'not recorded';
+    return r.trigger === 'as-of' ? `${who}, for an accuracy check as of ${monthLabel(r.origin)}` : who;
+}
+
 async function showRuns() {
     const runs = await api.get('/api/forecast/runs', {limit: 5});
     mount(document.getElementById('runs'), table({caption: 'Recent forecast runs', rows: runs, empty: 'No forecast run yet.',
         columns: [{label: 'Run', num: true, value: r => String(r.id)},
             {label: 'State', value: r => state(...(RUN_STATES[r.status] || [r.status, 'quiet']))},
-            {label: 'Started by', value: r => r.trigger === 'request' ? 'a person' : r.trigger === 'schedule' ? 'the nightly schedule'
-                : r.trigger === 'as-of' ? `an accuracy check as of ${r.origin}` : r.trigger},
+            {label: 'Started by', value: startedBy},
             {label: 'Started', value: r => fmt.dateTime(r.startedAt)},
             {label: 'Finished', value: r => fmt.dateTime(r.finishedAt)},
             {label: 'Forecasts made', num: true, value: r => r.seriesTotal ? `${fmt.num(r.seriesDone)} of ${fmt.num(r.seriesTotal)}` : '–'},
