@@ -57,63 +57,132 @@ final class FleetModelFitter {
     /** Every declared family's model on one snapshot; families fit independently, one per core. */
     static Map<ComponentFamily, FleetRateModel> fitAll(Map<ComponentFamily, ForecastModelDefinition> definitions,
                                                        FleetSnapshot snapshot, int skipRecentBlocks) {
+        return fitBoth(definitions, snapshot, skipRecentBlocks).full();
+    }
+
+    /** Each family's model on the whole history and on the history without its last 12 months (the backtest's). */
+    record Fits(Map<ComponentFamily, FleetRateModel> full, Map<ComponentFamily, FleetRateModel> holdout) {
+    }
+
+    /**
+     * Both fits of every declared family, one family per core. The holdout's rows are the full fit's without the
+     * last block, so each family's rows are collected once and serve both; {@code holdoutFrom} 1 for the holdout
+     * fits too, 0 to make none.
+     */
+    static Fits fitBoth(Map<ComponentFamily, ForecastModelDefinition> definitions, FleetSnapshot snapshot,
+                        int holdoutFrom) {
         Map<ComponentFamily, Breakdowns> breakdowns = Breakdowns.of(snapshot);
-        Map<ComponentFamily, FleetRateModel> models = new java.util.EnumMap<>(ComponentFamily.class);
-        definitions.values().parallelStream()
-                .map(d -> Map.entry(d.family(), fit(d, snapshot, breakdowns.get(d.family()), skipRecentBlocks)))
-                .toList().forEach(e -> models.put(e.getKey(), e.getValue()));
-        return models;
+        Map<ComponentFamily, FleetRateModel> full = new java.util.EnumMap<>(ComponentFamily.class);
+        Map<ComponentFamily, FleetRateModel> holdout = new java.util.EnumMap<>(ComponentFamily.class);
+        definitions.values().parallelStream().map(d -> {
+            Breakdowns b = breakdowns.get(d.family());
+            Rows rows = Rows.of(d, snapshot, b);
+            return Map.entry(d.family(), new FleetRateModel[]{model(d, rows, unitsPerEvent(d, b)),
+                    holdoutFrom > 0 ? model(d, rows.from(holdoutFrom), unitsPerEvent(d, b)) : null});
+        }).toList().forEach(m -> {
+            full.put(m.getKey(), m.getValue()[0]);
+            if (m.getValue()[1] != null) {
+                holdout.put(m.getKey(), m.getValue()[1]);
+            }
+        });
+        return new Fits(full, holdout);
     }
 
     /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
     static FleetRateModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns,
                           int skipRecentBlocks) {
-        ComponentFamily family = definition.family();
-        Map<Long, long[]> eventDays = breakdowns == null ? Map.of() : breakdowns.daysByPump();
-        double units = definition.unitsPerEvent() != null ? definition.unitsPerEvent()
+        return model(definition, Rows.of(definition, snapshot, breakdowns).from(skipRecentBlocks),
+                unitsPerEvent(definition, breakdowns));
+    }
+
+    private static double unitsPerEvent(ForecastModelDefinition definition, Breakdowns breakdowns) {
+        return definition.unitsPerEvent() != null ? definition.unitsPerEvent()
                 : breakdowns != null ? breakdowns.meanUnits() : 1.0;
-        int blocks = snapshot.months() / 12;
-        int capacity = snapshot.pumps().size() * blocks;
-        double[][] covariates = new double[capacity][];
-        double[] y = new double[capacity], e = new double[capacity];
-        long[] depots = new long[capacity];
-        int rows = 0;
-        for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
-            if (pump.bom().stream().noneMatch(b -> b.family() == family)) {
-                continue;
-            }
-            long[] events = eventDays.getOrDefault(pump.id(), new long[0]);
-            for (int b = skipRecentBlocks; b < blocks; b++) {
-                LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
-                // Hours before the first repair on record would count as event-free: leave them out.
-                long from = Math.max(Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay()),
-                        snapshot.recordsStartDay());
-                long to = Math.min(blockEnd.toEpochDay(), pump.endDay());
-                double hours = pump.usage().hoursBetween(from, to);
-                if (to - from < 1 || hours < 1) {
+    }
+
+    /**
+     * One family's pump-year rows: each pump in each 12-month block counted back from the origin ({@code blocks},
+     * 0 the last), in pump order and, within a pump, from the last block back.
+     */
+    record Rows(double[][] covariates, double[] y, double[] e, long[] depots, int[] blocks) {
+        static Rows of(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns) {
+            ComponentFamily family = definition.family();
+            Map<Long, long[]> eventDays = breakdowns == null ? Map.of() : breakdowns.daysByPump();
+            int blockCount = snapshot.months() / 12;
+            int capacity = snapshot.pumps().size() * blockCount;
+            Rows all = new Rows(new double[capacity][], new double[capacity], new double[capacity], new long[capacity],
+                    new int[capacity]);
+            int rows = 0;
+            for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
+                if (pump.bom().stream().noneMatch(b -> b.family() == family)) {
                     continue;
                 }
-                int count = 0;
-                for (long day : events) {
-                    if (day >= from && day < to) {
-                        count++;
-                    }
+                long[] events = eventDays.getOrDefault(pump.id(), new long[0]);
+                for (int b = 0; b < blockCount; b++) {
+                    rows = all.add(rows, definition, snapshot, pump, events, b);
                 }
-                double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                covariates[rows] = RateCovariate.values(definition.covariates(), pump.depthM(), age, hours / (to - from));
-                y[rows] = count;
-                e[rows] = hours;
-                depots[rows] = pump.depotId();
-                rows++;
             }
+            return all.first(rows);
         }
-        return model(definition, java.util.Arrays.copyOf(covariates, rows), java.util.Arrays.copyOf(y, rows),
-                java.util.Arrays.copyOf(e, rows), java.util.Arrays.copyOf(depots, rows), units);
+
+        /** Adds the pump's row of block {@code b} at {@code row} when it ran then; answers the next free row. */
+        private int add(int row, ForecastModelDefinition definition, FleetSnapshot snapshot,
+                        FleetSnapshot.PumpRecord pump, long[] events, int b) {
+            LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
+            // Hours before the first repair on record would count as event-free: leave them out.
+            long from = Math.max(Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay()),
+                    snapshot.recordsStartDay());
+            long to = Math.min(blockEnd.toEpochDay(), pump.endDay());
+            double hours = pump.usage().hoursBetween(from, to);
+            if (to - from < 1 || hours < 1) {
+                return row;
+            }
+            int count = 0;
+            for (long day : events) {
+                if (day >= from && day < to) {
+                    count++;
+                }
+            }
+            double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
+            covariates[row] = RateCovariate.values(definition.covariates(), pump.depthM(), age, hours / (to - from));
+            y[row] = count;
+            e[row] = hours;
+            depots[row] = pump.depotId();
+            blocks[row] = b;
+            return row + 1;
+        }
+
+        private Rows first(int n) {
+            return new Rows(java.util.Arrays.copyOf(covariates, n), java.util.Arrays.copyOf(y, n),
+                    java.util.Arrays.copyOf(e, n), java.util.Arrays.copyOf(depots, n), java.util.Arrays.copyOf(blocks, n));
+        }
+
+        /** The rows of blocks {@code skip} and older, in the same order. */
+        Rows from(int skip) {
+            if (skip == 0) {
+                return this;
+            }
+            Rows kept = new Rows(new double[y.length][], new double[y.length], new double[y.length],
+                    new long[y.length], new int[y.length]);
+            int n = 0;
+            for (int i = 0; i < y.length; i++) {
+                if (blocks[i] >= skip) {
+                    kept.covariates[n] = covariates[i];
+                    kept.y[n] = y[i];
+                    kept.e[n] = e[i];
+                    kept.depots[n] = depots[i];
+                    kept.blocks[n++] = blocks[i];
+                }
+            }
+            return kept.first(n);
+        }
     }
 
     /** The model on the collected pump-year rows: the covariates the data carry (BIC), or the prior when too few. */
-    private static FleetRateModel model(ForecastModelDefinition definition, double[][] covariates, double[] y, double[] e,
-                                        long[] depots, double units) {
+    private static FleetRateModel model(ForecastModelDefinition definition, Rows rows, double units) {
+        double[][] covariates = rows.covariates();
+        double[] y = rows.y(), e = rows.e();
+        long[] depots = rows.depots();
         int events = (int) java.util.Arrays.stream(y).sum();
         double exposure = java.util.Arrays.stream(e).sum();
         double prior = definition.priorEventsPer1000Hours() / 1000.0;

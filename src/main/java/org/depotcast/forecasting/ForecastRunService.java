@@ -186,9 +186,10 @@ public class ForecastRunService {
         Log.infof("forecast run %d: %d pumps, %d consumption lines read in %d ms", runId, snapshot.pumps().size(),
                 snapshot.consumption().size(), (System.nanoTime() - started) / 1_000_000);
         progress.phase("fitting the fleet models");
-        // Families fit independently: one per core.
-        Map<ComponentFamily, FleetRateModel> models = FleetModelFitter.fitAll(definitions, snapshot, 0);
-        Map<ComponentFamily, FleetRateModel> holdout = FleetModelFitter.fitAll(definitions, snapshot, 1);
+        // Families fit independently, one per core; each family's rows serve its full and its holdout fit.
+        FleetModelFitter.Fits fits = FleetModelFitter.fitBoth(definitions, snapshot, 1);
+        Map<ComponentFamily, FleetRateModel> models = fits.full();
+        Map<ComponentFamily, FleetRateModel> holdout = fits.holdout();
         DemandAssembler assembler = new DemandAssembler(snapshot, definitions, models, holdout, horizonMonths);
         int total = assembler.seriesCount();
         progress.phase("forecasting each part at each location");

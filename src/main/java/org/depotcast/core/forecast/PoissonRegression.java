@@ -101,6 +101,10 @@ public final class PoissonRegression {
     private static void accumulateNormalEquations(double[][] covariates, double[] counts, double[] offset,
                                                   double[] mu, double[] eta, double[][] xtwx, double[] xtwz) {
         int k = xtwz.length;
+        if (k <= 3) {
+            accumulateUpToThree(covariates, counts, offset, mu, eta, xtwx, xtwz);
+            return;
+        }
         double[] row = new double[k];
         for (int i = 0; i < counts.length; i++) {
             row[0] = 1.0;
@@ -115,8 +119,47 @@ public final class PoissonRegression {
                 }
             }
         }
+        mirror(xtwx);
+    }
+
+    /**
+     * The same sums for at most two covariates (every fleet fit) in local variables: each sum takes the same terms in
+     * the same order as above, so the results are identical; an absent column is 0 and its sums are not written.
+     */
+    private static void accumulateUpToThree(double[][] covariates, double[] counts, double[] offset, double[] mu,
+                                            double[] eta, double[][] xtwx, double[] xtwz) {
+        int k = xtwz.length;
+        double z0 = 0, z1 = 0, z2 = 0, s00 = 0, s10 = 0, s11 = 0, s20 = 0, s21 = 0, s22 = 0;
+        for (int i = 0; i < counts.length; i++) {
+            double[] x = covariates[i];
+            double x1 = k > 1 ? x[0] : 0, x2 = k > 2 ? x[1] : 0;
+            double w = mu[i];
+            double z = eta[i] - offset[i] + (counts[i] - mu[i]) / mu[i];
+            double w1 = w * x1, w2 = w * x2;
+            z0 += w * z;
+            z1 += w1 * z;
+            z2 += w2 * z;
+            s00 += w;
+            s10 += w1;
+            s11 += w1 * x1;
+            s20 += w2;
+            s21 += w2 * x1;
+            s22 += w2 * x2;
+        }
+        double[] z = {z0, z1, z2};
+        double[][] s = {{s00}, {s10, s11}, {s20, s21, s22}};
         for (int a = 0; a < k; a++) {
-            for (int b = a + 1; b < k; b++) {
+            xtwz[a] += z[a];
+            for (int b = 0; b <= a; b++) {
+                xtwx[a][b] += s[a][b];
+            }
+        }
+        mirror(xtwx);
+    }
+
+    private static void mirror(double[][] xtwx) {
+        for (int a = 0; a < xtwx.length; a++) {
+            for (int b = a + 1; b < xtwx.length; b++) {
                 xtwx[a][b] = xtwx[b][a];
             }
         }
