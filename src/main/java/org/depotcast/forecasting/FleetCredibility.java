@@ -39,23 +39,23 @@ final class FleetCredibility {
     void addPump(FleetSnapshot.PumpRecord pump, Map<Long, List<String>> keysByPart) {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
         int months = monthStart.length - 1;
+        Exposure exposure = null;
         for (FleetSnapshot.BomPart part : pump.bom()) {
             FleetRateModel model = models.get(part.family());
             if (model == null) {
                 continue;
             }
+            if (exposure == null) {
+                exposure = exposure(pump);
+            }
+            Exposure pumpMonths = exposure;
             double[] perMonth = byFamily.computeIfAbsent(part.family(), f -> {
                 double[] units = new double[months];
                 for (int m = 0; m < months; m++) {
-                    // As the fit: no exposure before the first repair on record.
-                    long from = Math.max(Math.max(monthStart[m], pump.installedDay()), snapshot.recordsStartDay());
-                    long to = Math.min(monthStart[m + 1], pump.endDay());
-                    if (to <= from) {
-                        continue;
+                    if (pumpMonths.days[m] > 0) {
+                        units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), pumpMonths.ageYears[m],
+                                pumpMonths.hours[m], pumpMonths.days[m]);
                     }
-                    double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                    units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), age,
-                            pump.usage().hoursBetween(from, to), to - from);
                 }
                 return units;
             });
@@ -66,6 +66,26 @@ final class FleetCredibility {
                 }
             }
         }
+    }
+
+    /** A pump's days in service, operating hours and mid-month age in each history month: the same for every family. */
+    private record Exposure(long[] days, double[] hours, double[] ageYears) {
+    }
+
+    private Exposure exposure(FleetSnapshot.PumpRecord pump) {
+        int months = monthStart.length - 1;
+        Exposure exposure = new Exposure(new long[months], new double[months], new double[months]);
+        for (int m = 0; m < months; m++) {
+            // As the fit: no exposure before the first repair on record.
+            long from = Math.max(Math.max(monthStart[m], pump.installedDay()), snapshot.recordsStartDay());
+            long to = Math.min(monthStart[m + 1], pump.endDay());
+            if (to > from) {
+                exposure.days[m] = to - from;
+                exposure.hours[m] = pump.usage().hoursBetween(from, to);
+                exposure.ageYears[m] = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
+            }
+        }
+        return exposure;
     }
 
     /**
