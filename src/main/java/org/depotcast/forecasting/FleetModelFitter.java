@@ -8,7 +8,6 @@ import org.depotcast.core.forecast.PoissonRegression;
 import org.depotcast.core.forecast.RateCovariate;
 import org.depotcast.core.forecast.RateShrinkage;
 
-import java.time.LocalDate;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
@@ -23,7 +22,6 @@ import java.util.Map;
  */
 final class FleetModelFitter {
     static final int MIN_EVENTS = 10;
-    private static final double DAYS_PER_YEAR = 365.25;
 
     private FleetModelFitter() {
     }
@@ -76,7 +74,7 @@ final class FleetModelFitter {
         Map<ComponentFamily, FleetRateModel> holdout = new java.util.EnumMap<>(ComponentFamily.class);
         definitions.values().parallelStream().map(d -> {
             Breakdowns b = breakdowns.get(d.family());
-            Rows rows = Rows.of(d, snapshot, b);
+            PumpYearRows rows = PumpYearRows.of(d, snapshot, b);
             return Map.entry(d.family(), new FleetRateModel[]{model(d, rows, unitsPerEvent(d, b)),
                     holdoutFrom > 0 ? model(d, rows.from(holdoutFrom), unitsPerEvent(d, b)) : null});
         }).toList().forEach(m -> {
@@ -91,7 +89,7 @@ final class FleetModelFitter {
     /** @param skipRecentBlocks 0 to use the whole history; 1 to hold out the last 12 months (for the backtest) */
     static FleetRateModel fit(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns,
                           int skipRecentBlocks) {
-        return model(definition, Rows.of(definition, snapshot, breakdowns).from(skipRecentBlocks),
+        return model(definition, PumpYearRows.of(definition, snapshot, breakdowns).from(skipRecentBlocks),
                 unitsPerEvent(definition, breakdowns));
     }
 
@@ -100,86 +98,8 @@ final class FleetModelFitter {
                 : breakdowns != null ? breakdowns.meanUnits() : 1.0;
     }
 
-    /**
-     * One family's pump-year rows: each pump in each 12-month block counted back from the origin ({@code blocks},
-     * 0 the last), in pump order and, within a pump, from the last block back.
-     */
-    record Rows(double[][] covariates, double[] y, double[] e, long[] depots, int[] blocks) {
-        static Rows of(ForecastModelDefinition definition, FleetSnapshot snapshot, Breakdowns breakdowns) {
-            ComponentFamily family = definition.family();
-            Map<Long, long[]> eventDays = breakdowns == null ? Map.of() : breakdowns.daysByPump();
-            int blockCount = snapshot.months() / 12;
-            int capacity = snapshot.pumps().size() * blockCount;
-            Rows all = new Rows(new double[capacity][], new double[capacity], new double[capacity], new long[capacity],
-                    new int[capacity]);
-            int rows = 0;
-            for (FleetSnapshot.PumpRecord pump : snapshot.pumps()) {
-                if (pump.bom().stream().noneMatch(b -> b.family() == family)) {
-                    continue;
-                }
-                long[] events = eventDays.getOrDefault(pump.id(), new long[0]);
-                for (int b = 0; b < blockCount; b++) {
-                    rows = all.add(rows, definition, snapshot, pump, events, b);
-                }
-            }
-            return all.first(rows);
-        }
-
-        /** Adds the pump's row of block {@code b} at {@code row} when it ran then; answers the next free row. */
-        private int add(int row, ForecastModelDefinition definition, FleetSnapshot snapshot,
-                        FleetSnapshot.PumpRecord pump, long[] events, int b) {
-            LocalDate blockEnd = snapshot.historyEnd().minusMonths(12L * b);
-            // Hours before the first repair on record would count as event-free: leave them out.
-            long from = Math.max(Math.max(blockEnd.minusMonths(12).toEpochDay(), pump.installedDay()),
-                    snapshot.recordsStartDay());
-            long to = Math.min(blockEnd.toEpochDay(), pump.endDay());
-            double hours = pump.usage().hoursBetween(from, to);
-            if (to - from < 1 || hours < 1) {
-                return row;
-            }
-            int count = 0;
-            for (long day : events) {
-                if (day >= from && day < to) {
-                    count++;
-                }
-            }
-            double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-            covariates[row] = RateCovariate.values(definition.covariates(), pump.depthM(), age, hours / (to - from));
-            y[row] = count;
-            e[row] = hours;
-            depots[row] = pump.depotId();
-            blocks[row] = b;
-            return row + 1;
-        }
-
-        private Rows first(int n) {
-            return new Rows(java.util.Arrays.copyOf(covariates, n), java.util.Arrays.copyOf(y, n),
-                    java.util.Arrays.copyOf(e, n), java.util.Arrays.copyOf(depots, n), java.util.Arrays.copyOf(blocks, n));
-        }
-
-        /** The rows of blocks {@code skip} and older, in the same order. */
-        Rows from(int skip) {
-            if (skip == 0) {
-                return this;
-            }
-            Rows kept = new Rows(new double[y.length][], new double[y.length], new double[y.length],
-                    new long[y.length], new int[y.length]);
-            int n = 0;
-            for (int i = 0; i < y.length; i++) {
-                if (blocks[i] >= skip) {
-                    kept.covariates[n] = covariates[i];
-                    kept.y[n] = y[i];
-                    kept.e[n] = e[i];
-                    kept.depots[n] = depots[i];
-                    kept.blocks[n++] = blocks[i];
-                }
-            }
-            return kept.first(n);
-        }
-    }
-
     /** The model on the collected pump-year rows: the covariates the data carry (BIC), or the prior when too few. */
-    private static FleetRateModel model(ForecastModelDefinition definition, Rows rows, double units) {
+    private static FleetRateModel model(ForecastModelDefinition definition, PumpYearRows rows, double units) {
         double[][] covariates = rows.covariates();
         double[] y = rows.y(), e = rows.e();
         long[] depots = rows.depots();
