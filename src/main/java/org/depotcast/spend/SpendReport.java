@@ -102,12 +102,15 @@ final class SpendReport {
         return String.format(Locale.ROOT, "%.2f", value);
     }
 
-    /** Figures for people on the printed page: thousands separators, two decimals ("1,685,745.70"). */
+    /**
+     * Figures for people on the printed page: thousands separators, whole currency units ("1,685,746"), as the spend
+     * page shows a projection (cents of a projected year mean nothing).
+     */
     static String grouped(double value) {
-        return String.format(Locale.ROOT, "%,.2f", value);
+        return String.format(Locale.ROOT, "%,.0f", value);
     }
 
-    /** An amount with its currency before it ("KES 1,685,745.70"), as the pages show money. */
+    /** An amount with its currency before it ("KES 1,685,746"), as the pages show money. */
     static String shown(double value, String currency) {
         return escape(currency) + " " + grouped(value);
     }

@@ -72,7 +72,9 @@ public record SpendResults(String scenario, String currency, int draws, long see
                 + java.time.Month.of(financialYears.startMonth()).getDisplayName(java.time.format.TextStyle.FULL, java.util.Locale.ENGLISH)
                 + (periods.get(0).partial() ? "; the first period is the months left in the year in progress (" + periods.get(0).months()
                 + "), then " + definition.horizonYears() + " whole years." : "."));
-        notes.add("The first period includes the stock needed now to bring the programme to its policy levels.");
+        notes.add("The first period includes the stock needed now to bring the programme to its policy levels, bought "
+                + "once by the central store (its only spend); after that each year's parts are counted at the depot whose "
+                + "pumps use them, so the central store shows no spend in later years.");
         notes.add("Demand as of " + periods.get(0).startsOn() + ": the pumps and usage history (measured hours where "
                 + "pumps have sensors) as of that day, with " + builder.ratesBasis() + ".");
         notes.add("Intervals include the sampling uncertainty of each family's fitted rate (lognormal, σ = the standard "

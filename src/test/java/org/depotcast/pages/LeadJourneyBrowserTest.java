@@ -188,8 +188,23 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertEquals(years.size(), rows.size());
         @SuppressWarnings("unchecked")
         double firstMean = ((Number) ((Map<String, Object>) years.get(0).get("total")).get("mean")).doubleValue();
-        assertEquals(String.format(java.util.Locale.US, "%,d", Math.round(firstMean)), text(rows.get(0), "Expected (mean)"));
-        assertTrue(total.startsWith(results.getString("currency")), total);
+        String currency = results.getString("currency");
+        assertEquals(currency + " " + String.format(java.util.Locale.US, "%,d", Math.round(firstMean)),
+                text(rows.get(0), "Expected (mean)").replace('\u00a0', ' '));
+        // One rule for the projection's money: the currency, thousands separators, whole units (a range names the
+        // currency once), in the chart's table, the totals and both breakdowns alike.
+        String amount = "\\d{1,3}(,\\d{3})*";
+        String money = currency + " " + amount + "( – " + amount + ")?";
+        assertTrue(total.replace('\u00a0', ' ').matches(money), total);
+        for (WebElement cell : driver.findElements(By.cssSelector("#results tbody td.num"))) {
+            String shown = cell.getText().replace('\u00a0', ' ');
+            assertTrue(shown.matches(money) || shown.equals("–"), "money as the rule says: " + shown);
+        }
+        // The central store's spend is the first period's stock-up only, and the page says why.
+        List<WebElement> central = driver.findElements(By.xpath("//table[@id='spend-depots']//tbody/tr[td[1][normalize-space()='CENTRAL']]/td"));
+        assertTrue(central.size() > 2, "the depot table has the central store's row");
+        assertEquals(currency + " 0", central.get(2).getText().replace('\u00a0', ' '), "nothing at the central store after the first period");
+        assertTrue(text(By.id("central-store-note")).contains("counted at the depot whose pumps use them"));
         assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
         assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
         PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");

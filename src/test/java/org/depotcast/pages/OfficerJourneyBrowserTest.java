@@ -81,6 +81,17 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         assertTrue(firstRow.contains(top.getString("[0].partNumber")), firstRow);
         Object fits = driver.executeScript("const t = document.getElementById('alerts'); return t.scrollWidth <= t.parentElement.clientWidth + 1;");
         assertEquals(Boolean.TRUE, fits, "every column of the board shows on a 1280 px screen");
+        // Pump-days keep one decimal on every row (a whole 21 showed as "21" beside "261.4") and in the summary.
+        List<WebElement> days = driver.findElements(By.cssSelector("#alerts tbody tr.alert-row td[data-label='Pump-days without water']"));
+        List<Number> apiDays = top.getList("pumpDaysAtRisk");
+        assertEquals(apiDays.size(), days.size());
+        for (int i = 0; i < days.size(); i++) {
+            String shown = days.get(i).getText();
+            assertTrue(shown.matches("\\d{1,3}(,\\d{3})*\\.\\d"), "one decimal: " + shown);
+            assertEquals(apiDays.get(i).doubleValue(), Double.parseDouble(shown.replace(",", "")), 0.05, shown);
+        }
+        String summary = driver.findElement(By.cssSelector(".board-summary")).getText();
+        assertTrue(summary.matches("(?s).*Expected pump-days without water\\n\\d{1,3}(,\\d{3})*\\.\\d\\n.*"), summary);
         screenshot("officer-board-desk");
         // An alert's details say its forecast method in words (the API sends a code such as FLEET) and the demand a
         // day with the part's unit.

@@ -28,7 +28,8 @@ class SharedModulesBrowserTest extends BrowserSession {
         driver.executeCdpCommand("Emulation.setLocaleOverride", Map.of("locale", "en-US"));
         Map<String, Object> out = inPage("/app/js/format.js", "done({pieces: m.qty(2.6, 'EACH'), one: m.qty(1, 'SET'),"
                 + " metres: m.qty(12.345, 'METRE'), money: m.money(1250, 'USD'), zero: m.num(-0.2), big: m.num(1234567.891, 1),"
-                + " none: m.qty(null, 'EACH'), day: m.date('2026-11-03'), pct: m.percent(0.953)});");
+                + " none: m.qty(null, 'EACH'), day: m.date('2026-11-03'), pct: m.percent(0.953),"
+                + " days: m.pumpDays(21), manyDays: m.pumpDays(1234.56), noDays: m.pumpDays(-0.01)});");
         assertEquals("3 pieces", out.get("pieces"));
         assertEquals("1 set", out.get("one"));
         assertEquals("12.35 m", out.get("metres"));
@@ -38,6 +39,9 @@ class SharedModulesBrowserTest extends BrowserSession {
         assertEquals("–", out.get("none"));
         assertEquals("Nov 3, 2026", out.get("day"), "a calendar date stays that day in every time zone");
         assertEquals("95.3 %", out.get("pct"));
+        assertEquals("21.0", out.get("days"), "pump-days always keep their one decimal");
+        assertEquals("1,234.6", out.get("manyDays"));
+        assertEquals("0.0", out.get("noDays"));
         assertNoPageErrors();
     }
 

@@ -10,7 +10,8 @@
  *       coloured, so it reads in black and white
  *   scatterChart({title, xLabel, yLabel, points: [{label, x, y}], diagonal, pointName})  one dot per point on
  *       numeric axes; diagonal draws the line y = x (where forecast equals actual); the table lists the points
- * format(value) turns a number into text for ticks and the table (default: thousands separators, 1 decimal).
+ * format(value) turns a number into text for ticks and the table (default: thousands separators, 1 decimal);
+ * cell(value), where given, for the table only (money in the table with its currency, the axis says it once).
  * Each returns a <figure> to put in the page.
  */
 import {h, table} from './ui.js';
@@ -98,7 +99,7 @@ function figure(title, svg, legendItems, x, xLabel, columns, format) {
     return h('figure', {class: 'chart'}, h('figcaption', {}, title), h('div', {}, svg, legend(legendItems)), t);
 }
 
-export function lineChart({title, x, xLabel, yLabel, series = [], bands = [], marker, format = v => num(v, 1)}) {
+export function lineChart({title, x, xLabel, yLabel, series = [], bands = [], marker, format = v => num(v, 1), cell = format}) {
     const all = [...series.flatMap(r => r.values), ...bands.flatMap(b => [...b.lower, ...b.upper])];
     const f = frame(x, all, yLabel, xLabel, format);
     const px = i => M.left + (x.length <= 1 ? f.innerW / 2 : (i / (x.length - 1)) * f.innerW);
@@ -121,16 +122,16 @@ export function lineChart({title, x, xLabel, yLabel, series = [], bands = [], ma
         ...sorted.map(b => [b.level >= 95 ? 'band95' : 'band80', 0, `${b.name} (${b.level >= 95 ? 'lighter' : 'darker'} band)`])];
     const columns = [...series.map(r => ({label: r.name, values: r.values})),
         ...sorted.flatMap(b => [{label: `${b.name}: low`, values: b.lower}, {label: `${b.name}: high`, values: b.upper}])];
-    return figure(title, svg, legendItems, x, xLabel, columns, format);
+    return figure(title, svg, legendItems, x, xLabel, columns, cell);
 }
 
-export function fanChart({title, x, xLabel, yLabel, centre, centreName = 'Median', range80, range95, extra = [], format}) {
-    return lineChart({title, x, xLabel, yLabel, format, series: [{name: centreName, values: centre}, ...extra],
+export function fanChart({title, x, xLabel, yLabel, centre, centreName = 'Median', range80, range95, extra = [], format, cell}) {
+    return lineChart({title, x, xLabel, yLabel, format, cell, series: [{name: centreName, values: centre}, ...extra],
         bands: [{name: '95 % range', level: 95, lower: range95[0], upper: range95[1]},
             {name: '80 % range', level: 80, lower: range80[0], upper: range80[1]}]});
 }
 
-export function barChart({title, x, xLabel, yLabel, series, format = v => num(v, 1)}) {
+export function barChart({title, x, xLabel, yLabel, series, format = v => num(v, 1), cell = format}) {
     const f = frame(x, series.flatMap(r => r.values), yLabel, xLabel, format);
     const slot = f.innerW / Math.max(1, x.length);
     const barW = Math.max(2, (slot * 0.75) / series.length);
@@ -146,7 +147,7 @@ export function barChart({title, x, xLabel, yLabel, series, format = v => num(v,
     const xTicks = x.map((label, i) => i % f.every === 0 ? s('text', {x: M.left + (i + 0.5) * slot, y: M.top + f.innerH + 16, 'text-anchor': 'middle', class: 'chart-axis'}, label) : null);
     const svg = svgFor(title, [hatch(hatchId), f.g, bars, xTicks]);
     return figure(title, svg, series.map((r, k) => ['bar', k, `${r.name} (${k % 2 ? 'hatched' : 'solid'} bars)`]),
-        x, xLabel, series.map(r => ({label: r.name, values: r.values})), format);
+        x, xLabel, series.map(r => ({label: r.name, values: r.values})), cell);
 }
 
 export function scatterChart({title, xLabel, yLabel, points, diagonal = false, pointName = 'Point', format = v => num(v, 1)}) {

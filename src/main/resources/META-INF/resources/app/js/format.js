@@ -3,7 +3,11 @@
  *   qty(value, unit)      whole numbers for parts counted by the piece (EACH, PAIR, SET, LENGTH), at most two
  *                         decimals for measured ones, with the unit in words: "3 pieces", "12.5 m"
  *   num(value, digits=0)  thousands separators, at most `digits` decimals
- *   money(value, currency) "USD 1,250.00" style from Intl, or the number and the code when Intl lacks it
+ *   fixed(value, digits)  thousands separators, exactly `digits` decimals (figures compared in a column)
+ *   pumpDays(value)       expected pump-days without water, always one decimal: "21.0", "261.4"
+ *   money(value, currency) "USD 1,250.00" style from Intl, or the number and the code when Intl lacks it: amounts
+ *                         that are exact (prices, order and plan lines and their totals)
+ *   wholeMoney(value, currency) "USD 12,858": projections and their ranges (spend, back-check), whose cents mean nothing
  *   percent(share)        0.953 → "95.3 %"
  *   date(iso) dateTime(iso) relative(iso)  "3 Nov 2025", "3 Nov 2025, 08:14", "3 days ago" / "in 2 hours"
  * Every function answers "–" for a missing value, never "NaN" or "null".
@@ -29,6 +33,20 @@ export function num(value, digits = 0) {
     // Rounds first, so that -0.2 shown without decimals is "0", not "-0".
     const shown = Math.round(n * 10 ** digits) / 10 ** digits;
     return new Intl.NumberFormat(locale, {maximumFractionDigits: digits, minimumFractionDigits: 0}).format(shown === 0 ? 0 : shown);
+}
+
+export function fixed(value, digits) {
+    if (missing(value)) {
+        return NONE;
+    }
+    const shown = Math.round(Number(value) * 10 ** digits) / 10 ** digits;
+    return new Intl.NumberFormat(locale, {maximumFractionDigits: digits, minimumFractionDigits: digits})
+        .format(shown === 0 ? 0 : shown);
+}
+
+/** One rule for pump-days on every page (board, alert details, transfers, budget plan): one decimal, always shown. */
+export function pumpDays(value) {
+    return fixed(value, 1);
 }
 
 export function wholeUnits(unit) {
@@ -58,6 +76,18 @@ export function money(value, currency) {
             .format(Number(value));
     } catch (e) {
         return `${num(value, 2)} ${currency || ''}`.trim();
+    }
+}
+
+export function wholeMoney(value, currency) {
+    if (missing(value)) {
+        return NONE;
+    }
+    try {
+        return new Intl.NumberFormat(locale, {style: 'currency', currency: currency || 'USD', currencyDisplay: 'code',
+            minimumFractionDigits: 0, maximumFractionDigits: 0}).format(Math.round(Number(value)) || 0);
+    } catch (e) {
+        return `${num(value, 0)} ${currency || ''}`.trim();
     }
 }
 

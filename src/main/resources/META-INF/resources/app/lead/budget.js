@@ -18,7 +18,7 @@ document.getElementById('budget-currency').textContent = `in ${currency}, the cu
 const REASONS = {BUDGET: 'the budget ran out', OTHER_CURRENCY: 'priced in another currency (no exchange rate set)'};
 
 function pumpDays(v) {
-    return `${fmt.num(v, 1)} pump-days`;
+    return `${fmt.pumpDays(v)} pump-days`;
 }
 
 function acceptedOrders(orders, plan) {

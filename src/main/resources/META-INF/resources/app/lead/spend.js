@@ -26,6 +26,9 @@ let runs = [];
 const PHASES = ['queued', 'reading the fleet', 'simulating', 'summarising', 'done'];
 const RUN_STATES = {RUNNING: ['running', 'info'], DONE: ['finished', 'ok'], FAILED: ['failed', 'urgent']};
 const whole = v => fmt.num(v, 0);
+// Money on this page is projected: whole currency units with the currency, a range with the currency once.
+const money = (v, currency) => fmt.wholeMoney(v, currency);
+const range = (low, high, currency) => `${money(low, currency)} – ${whole(high)}`;
 
 function changes(d) {
     const said = [];
@@ -161,9 +164,9 @@ function perGroupTable(caption, years, key, currency, id) {
     const names = [...new Set(years.flatMap(y => Object.keys(y[key] || {})))].sort();
     return table({caption, id, rows: names, columns: [{label: key === 'families' ? 'Component family' : 'Depot',
         value: n => key === 'families' ? n.replace(/_/g, ' ').toLowerCase() : n},
-        ...years.map(y => ({label: `${y.label} (mean)`, num: true, value: n => fmt.money(y[key][n]?.mean, currency)})),
+        ...years.map(y => ({label: `${y.label} (mean)`, num: true, value: n => money(y[key][n]?.mean, currency)})),
         ...years.map(y => ({label: `${y.label} (80 % range)`, num: true,
-            value: n => y[key][n] ? `${whole(y[key][n].p10)} – ${whole(y[key][n].p90)}` : '–'}))]});
+            value: n => y[key][n] ? range(y[key][n].p10, y[key][n].p90, currency) : '–'}))]});
 }
 
 async function showResults(runId) {
@@ -175,7 +178,7 @@ async function showResults(runId) {
     const total = years.reduce((s, y) => s + y.total.mean, 0);
     mount(results,
         h('h3', {}, `${r.scenario}: run ${runId}`),
-        h('p', {}, `Expected parts spend over the ${years.length} periods: `, h('strong', {id: 'spend-total'}, fmt.money(total, r.currency)),
+        h('p', {}, `Expected parts spend over the ${years.length} periods: `, h('strong', {id: 'spend-total'}, money(total, r.currency)),
             ` (${fmt.num(r.draws)} draws, seed ${r.seed}). Financial years start in `,
             new Intl.DateTimeFormat(undefined, {month: 'long'}).format(new Date(2026, r.financialYearStartMonth - 1, 15)), '.'),
         h('p', {class: 'row no-print'},
@@ -184,10 +187,13 @@ async function showResults(runId) {
         fanChart({title: `Parts spend a financial year, ${r.scenario} (${r.currency})`, x, xLabel: 'Financial year',
             yLabel: `Spend a year (${r.currency})`, centreName: 'Expected (mean)', centre: years.map(y => y.total.mean),
             range80: [years.map(y => y.total.p10), years.map(y => y.total.p90)],
-            range95: [years.map(y => y.total.p2_5), years.map(y => y.total.p97_5)], format: whole}),
+            range95: [years.map(y => y.total.p2_5), years.map(y => y.total.p97_5)], format: whole, cell: v => money(v, r.currency)}),
         h('p', {class: 'hint'}, years.map(y => `${y.label}: ${y.months}`).join('; '), '.'),
         perGroupTable(`Spend per component family (${r.currency})`, years, 'families', r.currency, 'spend-families'),
         perGroupTable(`Spend per depot (${r.currency})`, years, 'depots', r.currency, 'spend-depots'),
+        h('p', {class: 'hint', id: 'central-store-note'}, 'The central store buys once, in the first period, the stock that '
+            + 'brings the programme up to its policy levels; after that each year\'s parts are counted at the depot whose '
+            + 'pumps use them, so the central store shows no spend in later years.'),
         r.notes?.length ? h('ul', {class: 'hint'}, r.notes.map(n => h('li', {}, n))) : null);
     ready();
 }
@@ -211,7 +217,7 @@ async function compare() {
     const labels = base.years.map(y => y.financialYear);
     mount(document.getElementById('compare'),
         barChart({title: `Expected parts spend a financial year (${base.currency})`, x: labels, xLabel: 'Financial year',
-            yLabel: `Spend a year (${base.currency})`, format: whole,
+            yLabel: `Spend a year (${base.currency})`, format: whole, cell: v => money(v, base.currency),
             series: same.map(r => ({name: r.scenario, values: labels.map(l => r.years.find(y => y.financialYear === l)?.total.mean ?? null)}))}),
         table({caption: 'Scenarios side by side', id: 'compare-table', rows,
             columns: [{label: 'Scenario', value: r => r.scenario},
@@ -221,10 +227,10 @@ async function compare() {
                         return '–';
                     }
                     const diff = y.differenceFromBaseline;
-                    return h('span', {}, fmt.money(y.total.mean, r.currency),
-                        r !== base && diff !== null && diff !== undefined ? h('span', {class: 'hint'}, `${diff >= 0 ? '+' : '−'}${fmt.money(Math.abs(diff), r.currency)} against ${base.scenario}`) : null);
+                    return h('span', {}, money(y.total.mean, r.currency),
+                        r !== base && diff !== null && diff !== undefined ? h('span', {class: 'hint'}, `${diff >= 0 ? '+' : '−'}${money(Math.abs(diff), r.currency)} against ${base.scenario}`) : null);
                 }})),
-                {label: 'All years', num: true, value: r => fmt.money(r.expectedTotal, r.currency)},
+                {label: 'All years', num: true, value: r => money(r.expectedTotal, r.currency)},
                 {label: 'Note', value: r => r.note || (r === base ? 'baseline' : '')}]}));
 }
 
@@ -235,12 +241,12 @@ async function backCheck() {
         const x = years.map(y => y.label);
         mount(box,
             lineChart({title: `Projected against actually spent, past financial years (${catalogueCurrency})`, x, xLabel: 'Financial year',
-                yLabel: `Spend a year (${catalogueCurrency})`, format: whole,
+                yLabel: `Spend a year (${catalogueCurrency})`, format: whole, cell: v => money(v, catalogueCurrency),
                 series: [{name: 'Projected (mean)', dashed: true, values: years.map(y => y.projectedMean)},
                     {name: 'Actually spent', values: years.map(y => y.actual)}],
                 bands: [{name: 'Projected 95 % range', level: 95, lower: years.map(y => y.projectedP2_5), upper: years.map(y => y.projectedP97_5)},
                     {name: 'Projected 80 % range', level: 80, lower: years.map(y => y.projectedP10), upper: years.map(y => y.projectedP90)}]}),
-            h('ul', {id: 'back-check-words'}, years.map(y => h('li', {}, `${y.label} (${y.months}): spent ${fmt.money(y.actual, catalogueCurrency)}, `,
+            h('ul', {id: 'back-check-words'}, years.map(y => h('li', {}, `${y.label} (${y.months}): spent ${money(y.actual, catalogueCurrency)}, `,
                 y.within80 ? state('inside the 80 % range', 'ok') : y.within95 ? state('inside the 95 % range only', 'warn')
                     : state('outside the 95 % range', 'urgent')))));
     } catch (e) {

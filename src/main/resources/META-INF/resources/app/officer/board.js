@@ -50,7 +50,7 @@ function summary(alerts, requests, inbound, suggestions) {
     const open = alerts.filter(a => !a.acknowledged);
     return h('div', {class: 'card board-summary'}, figures([
         ['Alerts not yet acknowledged', fmt.num(open.length)],
-        ['Expected pump-days without water', fmt.num(alerts.reduce((t, a) => t + a.pumpDaysAtRisk, 0))],
+        ['Expected pump-days without water', fmt.pumpDays(alerts.reduce((t, a) => t + a.pumpDaysAtRisk, 0))],
         ['Pumps waiting for parts', fmt.num(new Set(alerts.flatMap(a => a.waitingPumps.map(p => p.assetId))).size)],
         ['Requests to approve', link('requests.html', fmt.num(requests.length))],
         ['Transfers on the way here', link('transfers.html', fmt.num(inbound.length))],
@@ -82,7 +82,7 @@ function alertTable(alerts, policyOf, suggestions) {
             {label: 'Part', value: r => [describe(parts, r.a.partNumber),
                 h('span', {class: 'hint'}, `counted in ${UNIT_NAMES[unit(r.a.partNumber)] || 'units'}`)]},
             {label: 'Why', value: r => reasons(r.a)},
-            {label: 'Pump-days without water', value: r => fmt.num(r.a.pumpDaysAtRisk, 1), num: true},
+            {label: 'Pump-days without water', value: r => fmt.pumpDays(r.a.pumpDaysAtRisk), num: true},
             {label: 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
             {label: 'On order', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
@@ -162,7 +162,7 @@ function transferOffer(s, u) {
         say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, u)} of ${s.partNumber} from ${s.from} to ${s.to}, now in transit.`);
     }));
     return h('div', {class: 'transfer'}, h('p', {}, `Send ${fmt.qty(s.quantity, u)} from ${names.get(s.from) || s.from} to `
-        + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.num(s.pumpDaysAvoided, 1)} pump-days without water.`),
+        + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.pumpDays(s.pumpDaysAvoided)} pump-days without water.`),
         me.locationCodes.length && !me.locationCodes.includes(s.from) && !me.roles.includes('admin')
             ? h('p', {class: 'hint'}, `The officer of ${s.from} dispatches it.`) : send);
 }

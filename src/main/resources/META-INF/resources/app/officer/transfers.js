@@ -53,7 +53,7 @@ function suggestionTable(rows) {
             {label: 'From', value: s => s.from}, {label: 'To', value: s => s.to},
             {label: 'Quantity', value: s => fmt.qty(s.quantity, unit(s.partNumber)), num: true},
             {label: 'Distance', value: s => `${fmt.num(s.distanceKm)} km`, num: true},
-            {label: 'Pump-days avoided', value: s => fmt.num(s.pumpDaysAvoided, 1), num: true},
+            {label: 'Pump-days avoided', value: s => fmt.pumpDays(s.pumpDaysAvoided), num: true},
             {label: 'Action', value: s => {
                 if (!mayDispatchFrom(s.from)) {
                     return h('span', {class: 'hint'}, `The officer of ${s.from} dispatches it.`);
