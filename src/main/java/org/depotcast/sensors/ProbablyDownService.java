@@ -34,9 +34,12 @@ import java.util.TreeMap;
 @ApplicationScoped
 public class ProbablyDownService {
     static final String METHOD = "Stop: Page's CUSUM (1954) on the pump's daily hours against its previous 28 days "
-            + "(k = 0.5σ, h = 4σ). Probability down: Bayes' rule over the days of near-nothing use, against the pump's "
-            + "share of idle days in its last 112 days shrunk towards the programme's (a beta prior fitted over the "
-            + "sensor pumps judged together, empirical Bayes) and a prior of one breakdown a pump-year. Parts: the probability times each "
+            + "(k = 0.5σ, h = 4σ). Probability down: Shiryaev's Bayesian change-point posterior (1963) over the days "
+            + "since the pump was last read in use, a breakdown starting with the pump's own daily chance from the "
+            + "forecast run's fleet models (one a pump-year without a run) against an idle spell, whose start is the "
+            + "pump's record of spells in its last 112 days shrunk towards the programme's (a beta prior fitted over "
+            + "the sensor pumps judged together, empirical Bayes) and whose length and hours are the programme's "
+            + "(hours of idle days against those of broken days on record). Parts: the probability times each "
             + "family's share of the pump's fleet-model breakdown rate (depth, age, load, its depot's ratio where the "
             + "forecast run kept one) times units per repair. To have ready: the smallest whole number of each part that "
             + "covers the flagged pumps' need (Poisson with the summed expected units) at the programme's service "

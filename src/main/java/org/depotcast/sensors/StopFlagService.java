@@ -35,7 +35,9 @@ import java.util.Set;
  * working pump idles is fitted over the pumps judged together ({@link IdleDayPrior}: a day's file of the programme, the
  * stop check); a refresh of fewer than {@value IdleDayPrior#LEAST_PUMPS} pumps (a single pump's file) has too few to
  * pool over and judges each pump alone (independent days by Laplace's rule), which needs more near-nothing days
- * before a flag of a pump that never idles.
+ * before a flag of a pump that never idles. The hours of the broken days on record (left out of the days judged)
+ * and of the idle days teach the prior how each kind of day looks. A pump's prior chance of a breakdown on a day is
+ * its own rate from the latest finished forecast run ({@link BreakdownHazards}), else one a pump-year.
  */
 @ApplicationScoped
 public class StopFlagService {
@@ -65,10 +67,13 @@ public class StopFlagService {
     private final SensorUsageQuery usage;
     private final RepairRecords repairs;
     private final AuditService audit;
+    private final BreakdownHazards hazards;
     private static final StopSettings SETTINGS = StopSettings.DEFAULT;
     private final StopDetector detector = new StopDetector(SETTINGS);
 
-    StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit) {
+    StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit,
+                    BreakdownHazards hazards) {
+        this.hazards = hazards;
         this.flags = flags;
         this.usage = usage;
         this.repairs = repairs;
@@ -95,18 +100,23 @@ public class StopFlagService {
         // pump raised flushed the session each time).
         Map<Long, Set<LocalDate>> flaggedStops = flags.stopsFrom(firstDay);
         // Each window is judged less its recorded downtime, in place: a pump with no breakdown in it keeps its own
-        // array (a copy of every window judged was most of a day's file's garbage).
+        // array (a copy of every window judged was most of a day's file's garbage); the days as read are kept for
+        // those with one, for the hours of their broken days.
+        Map<Long, double[]> asRead = new HashMap<>();
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
             List<RepairSpan> spans = breakdowns.get(pump.getKey());
             if (spans != null && !spans.isEmpty()) {
+                asRead.put(pump.getKey(), pump.getValue());
                 pump.setValue(RecordedDowntime.leaveOut(pump.getValue(), inWindow(spans, firstDay, days),
                         SETTINGS.stopFraction()));
             }
         }
-        IdleDayPrior prior = pooledPrior(windows.values());
+        IdleDayPrior prior = pooledPrior(windows, asRead);
+        Map<Long, Double> perHour = hazards.perHour(windows.keySet(), asOf);
         int opened = 0, stillOpen = 0;
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
-            StopDetector.Verdict verdict = detector.judge(pump.getValue(), prior);
+            StopDetector.Verdict verdict = detector.judge(pump.getValue(), prior,
+                    perHour.getOrDefault(pump.getKey(), Double.NaN));
             RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
@@ -124,10 +134,11 @@ public class StopFlagService {
     }
 
     /** The programme's idle-day prior fitted over the pumps judged; judged alone when too few to pool. */
-    private IdleDayPrior pooledPrior(Collection<double[]> windows) {
+    private IdleDayPrior pooledPrior(Map<Long, double[]> windows, Map<Long, double[]> asRead) {
         List<IdleDays> histories = new ArrayList<>(windows.size());
-        for (double[] window : windows) {
-            IdleDays days = detector.idleDays(window);
+        for (Map.Entry<Long, double[]> window : windows.entrySet()) {
+            IdleDays days = detector.idleDays(window.getValue(), asRead.getOrDefault(window.getKey(),
+                    window.getValue()));
             if (days != null) {
                 histories.add(days);
             }

@@ -55,24 +55,31 @@ final class DemoSensorYear {
     record PumpYear(String assetId, List<Planted> planted, List<Flag> flags, int daysJudged) {
     }
 
-    /** How the chance of an idle day is judged. */
+    /** How the chance of an idle day and of a breakdown are judged. */
     enum Rule {
-        /** The service's: an idle history of 112 days, idle spells pooled over the programme's sensor pumps each day. */
-        POOLED(StopSettings.DEFAULT, true),
+        /**
+         * The service's: an idle history of 112 days, idle spells pooled over the programme's sensor pumps each day,
+         * the pump's own breakdown rate (here the planted rates stand in for the forecast run's fitted models).
+         */
+        POOLED(StopSettings.DEFAULT, true, true),
+        /** The same with the flat prior of one breakdown a pump-year (the service with no finished forecast run). */
+        POOLED_FLAT_PRIOR(StopSettings.DEFAULT, true, false),
         /** The rule of 2 Dec 2026: each pump alone, its 28 baseline days as independent days by Laplace's rule. */
-        ALONE_28_DAYS(new StopSettings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 28), false);
+        ALONE_28_DAYS(new StopSettings(28, 14, 3, 0.5, 4.0, 0.10, 10, 1.0 / 365, 28), false, false);
 
         final StopSettings settings;
         final boolean pooled;
+        final boolean ownRate;
 
-        Rule(StopSettings settings, boolean pooled) {
+        Rule(StopSettings settings, boolean pooled, boolean ownRate) {
             this.settings = settings;
             this.pooled = pooled;
+            this.ownRate = ownRate;
         }
     }
 
-    /** A sensor pump's year of hours and its planted breakdowns. */
-    private record SensorPump(String assetId, double[] hours, List<Planted> marks) {
+    /** A sensor pump's year of hours, its planted breakdowns and its breakdowns per operating hour. */
+    private record SensorPump(String assetId, double[] hours, List<Planted> marks, double breakdownsPerHour) {
     }
 
     private DemoSensorYear() {
@@ -101,6 +108,7 @@ final class DemoSensorYear {
                                  double leastProbability) throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
+        List<CSVRecord> planted = csv("planted-rates.csv");
         List<SensorPump> pumps = new ArrayList<>();
         for (CSVRecord pump : csv("pumps.csv")) {
             String asset = pump.get("asset_id");
@@ -117,14 +125,14 @@ final class DemoSensorYear {
                 marks.add(new Planted(index(series.stoppedFrom().get(i)), index(s.reportedOn()),
                         s.fixedOn() == null ? DAYS : index(s.fixedOn())));
             }
-            pumps.add(new SensorPump(asset, series.hours(), marks));
+            pumps.add(new SensorPump(asset, series.hours(), marks, plantedRate(planted,
+                    Double.parseDouble(pump.get("depth_m")), LocalDate.parse(pump.get("installed_on")))));
         }
         StopDetector detector = new StopDetector(rule.settings);
         IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);
         List<PumpYear> year = new ArrayList<>();
         for (SensorPump pump : pumps) {
-            year.add(judge(pump.assetId(), pump.hours(), pump.marks(), detector, rule, priors, leaveOutRecorded,
-                    leastProbability));
+            year.add(judge(pump, detector, rule, priors, leaveOutRecorded, leastProbability));
         }
         return year;
     }
@@ -143,8 +151,9 @@ final class DemoSensorYear {
         }
         for (SensorPump pump : pumps) {
             for (int t = rule.settings.windowDays() - 1; t < DAYS; t++) {
+                double[] asRead = Arrays.copyOfRange(pump.hours(), firstDayRead(t, rule), t + 1);
                 IdleDays days = detector.idleDays(window(pump.hours(), pump.marks(), t, rule,
-                        leaveOutRecorded));
+                        leaveOutRecorded), asRead);
                 if (days != null) {
                     histories.get(t).add(days);
                 }
@@ -167,9 +176,11 @@ final class DemoSensorYear {
         return Math.max(0, t - rule.settings.historyDays() + 1);
     }
 
-    private static PumpYear judge(String asset, double[] hours, List<Planted> marks, StopDetector detector,
-                                  Rule rule, IdleDayPrior[] priors, boolean leaveOutRecorded,
-                                  double leastProbability) {
+    private static PumpYear judge(SensorPump pump, StopDetector detector, Rule rule, IdleDayPrior[] priors,
+                                  boolean leaveOutRecorded, double leastProbability) {
+        double[] hours = pump.hours();
+        List<Planted> marks = pump.marks();
+        double perHour = rule.ownRate ? pump.breakdownsPerHour() : Double.NaN;
         int window = rule.settings.windowDays();
         List<Flag> flags = new ArrayList<>();
         int openDay = -1, stoppedFrom = 0, covering = -1, judged = 0, nearNothing = 0, idleOnRecord = 0;
@@ -178,7 +189,7 @@ final class DemoSensorYear {
         for (int t = window - 1; t < DAYS; t++) {
             judged++;
             double[] days = window(hours, marks, t, rule, leaveOutRecorded);
-            StopDetector.Verdict v = detector.judge(days, priors[t]);
+            StopDetector.Verdict v = detector.judge(days, priors[t], perHour);
             boolean repairOpen = false;
             for (Planted m : marks) {
                 repairOpen |= m.report() <= t && t < m.fix();
@@ -215,7 +226,7 @@ final class DemoSensorYear {
         if (openDay >= 0) {
             flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering, nearNothing, idleOnRecord));
         }
-        return new PumpYear(asset, marks, flags, judged);
+        return new PumpYear(pump.assetId(), marks, flags, judged);
     }
 
     /** The breakdowns reported by day {@code today}, as days of the window starting on day {@code first}. */
@@ -243,6 +254,21 @@ final class DemoSensorYear {
             }
         }
         return false;
+    }
+
+    /**
+     * The pump's planted breakdowns per operating hour (seed-data/README.md), summed over the families, at its age in
+     * the middle of the year: r30/1000 × (depth/30)^d × exp(a × age).
+     */
+    private static double plantedRate(List<CSVRecord> families, double depthM, LocalDate installedOn) {
+        double ageYears = Math.max(0, (FIRST.plusDays(DAYS / 2).toEpochDay() - installedOn.toEpochDay()) / 365.25);
+        double perHour = 0;
+        for (CSVRecord f : families) {
+            perHour += Double.parseDouble(f.get("events_per_1000h_at_30m_new")) / 1000
+                    * Math.pow(depthM / 30, Double.parseDouble(f.get("depth_exponent")))
+                    * Math.exp(Double.parseDouble(f.get("age_coefficient_per_year")) * ageYears);
+        }
+        return perHour;
     }
 
     /** The pump's load as the demo holds it after loading: its newest usage reading. */

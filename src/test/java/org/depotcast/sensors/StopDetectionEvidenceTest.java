@@ -36,8 +36,13 @@ class StopDetectionEvidenceTest {
             for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
                 double[] before = statistics(DemoSensorYear.replay(seed, delay, true,
                         DemoSensorYear.Rule.ALONE_28_DAYS));
+                double[] flat = statistics(DemoSensorYear.replay(seed, delay, true,
+                        DemoSensorYear.Rule.POOLED_FLAT_PRIOR));
                 List<DemoSensorYear.PumpYear> year = DemoSensorYear.replay(seed, delay);
                 double[] figures = statistics(year);
+                System.out.printf("EVIDENCE %s, seed %d, with the flat prior of one breakdown a pump-year instead of "
+                                + "the pump's own rate: median %.1f, %.1f %% (%.1f %%), %.2f%n", delay, seed, flat[1],
+                        100 * flat[2], 100 * flat[5], flat[3]);
                 System.out.printf("EVIDENCE %s, seed %d: %d planted breakdowns judged, median %.1f days from stop to "
                                 + "flag, %.1f %% flagged before the report (%.1f %% of the %d reported 2 or more days "
                                 + "after the stop), %.2f false alarms per 1,000 pump-months (%.0f pump-months); "
@@ -53,19 +58,19 @@ class StopDetectionEvidenceTest {
                         decided[1][2], decided[1][3]);
                 assertTrue(figures[0] >= 30, "enough planted breakdowns to judge: " + figures[0]);
                 assertTrue(figures[1] <= 2, "median days to the flag: " + figures[1]);
-                // The demo's working pumps have idle spells of 1–3 days (seed-data/README.md), so no rule deciding
-                // within two days avoids false alarms: the 2 per 1,000 pump-months and 80 % flagged before
-                // the report are not reached (README). Guards: the programme's spells cut the false alarms of the rule
-                // of 2 Dec by at least half on the same series, without flagging fewer stops first.
+                // The demo's working pumps have idle spells of 1–3 days (seed-data/README.md), so run length alone
+                // cannot tell a 2-day spell from a stop; the hours of near-nothing days can, where idle and broken
+                // days look different (on the demo: broken days mostly nothing at all, idle ones a few minutes).
+                // Guards on both seeds (measured 74–75 % and 9–10 under the demo's delay, README): at least half the
+                // false alarms of the rule of 2 Dec, and not fewer stops flagged first.
                 assertTrue(figures[3] <= 0.5 * before[3], "false alarms: " + before[3] + " → " + figures[3]);
                 assertTrue(figures[2] >= before[2] - 0.01, "flagged before the report: " + before[2] + " → "
                         + figures[2]);
-                // Of stops reported 2+ days on, 66–75 % are flagged first: pumps with idle spells on record need 3–4
-                // days, and gaps in transmission hide others.
-                assertTrue(figures[5] >= 0.6, "share flagged before the report, reported 2+ days on: " + figures[5]);
-                // It adapts: one near-nothing day is enough at pumps with no idle day on record, never at the others.
+                assertTrue(figures[5] >= 0.75, "share flagged before the report, reported 2+ days on: " + figures[5]);
+                assertTrue(figures[3] <= 12, "false alarms per 1,000 pump-months: " + figures[3]);
+                // One near-nothing day is enough at pumps with no idle day on record, and now at some with spells on
+                // record when the day's hours look broken.
                 assertTrue(decided[0][0] >= 30, "one-day flags at pumps that do not idle: " + decided[0][0]);
-                assertEquals(0, decided[1][0], "one-day flags at pumps with idle days on record");
             }
         }
     }
@@ -98,6 +103,11 @@ class StopDetectionEvidenceTest {
                                 + "1,000 pump-months; %d flags of mean probability %.3f, %.3f of them on a planted "
                                 + "stop%n", delay, seed, least, figures[1], 100 * figures[2], 100 * figures[5],
                         figures[3], flags, probability / flags, (double) covering / flags);
+                if (least == 0.95) {
+                    // A stricter flag keeps false alarms within the 2 per 1,000 pump-months and still flags
+                    // most stops first (65–66 % on the demo's series).
+                    assertTrue(figures[3] <= 2 && figures[2] >= 0.6, "at 0.95: " + figures[2] + ", " + figures[3]);
+                }
                 if (previous != null) {
                     assertTrue(figures[3] <= previous[3] && figures[2] <= previous[2] + 1e-9,
                             "a higher threshold raises fewer flags, false or true");

@@ -2,6 +2,11 @@ package org.depotcast.sensors;
 
 import io.restassured.path.json.JsonPath;
 import io.quarkus.test.junit.QuarkusTest;
+import jakarta.inject.Inject;
+import org.depotcast.access.SystemWork;
+import org.depotcast.core.sensors.StopPosterior;
+import org.depotcast.fleet.PumpQueryService;
+import org.depotcast.fleet.PumpSummary;
 import org.junit.jupiter.api.Test;
 
 import java.time.LocalDate;
@@ -19,6 +24,29 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 @QuarkusTest
 class StopFlagTest {
     private static final LocalDate FIRST = LocalDate.of(2026, 9, 1);
+
+    @Inject
+    BreakdownHazards hazards;
+    @Inject
+    PumpQueryService pumps;
+    @Inject
+    SystemWork system;
+
+    /**
+     * Two near-nothing days at a pump judged alone (a one-pump file) with share q of near-nothing days, by Shiryaev's
+     * posterior as StopDetectorTest works it: down π + π(1 − π)q against idle (1 − π)²q². π is one breakdown a
+     * pump-year, or the pump's own rate at {@code hoursPerDay} when a forecast run has finished (other tests may
+     * have made one).
+     */
+    private double twoDaysDown(String asset, LocalDate asOf, double q, double hoursPerDay) {
+        double pi = system.call("test", () -> {
+            PumpSummary pump = pumps.all().stream().filter(p -> p.assetId().equals(asset)).findFirst().orElseThrow();
+            Double perHour = hazards.perHour(List.of(pump.id()), asOf).get(pump.id());
+            return perHour == null ? 1.0 / 365 : StopPosterior.dailyChance(perHour, hoursPerDay);
+        });
+        double down = pi + pi * (1 - pi) * q;
+        return down / (down + (1 - pi) * (1 - pi) * q * q);
+    }
 
     /** The detector test's series: 28 days alternating 5 and 7 h, 12 days of 6 h, then two days of nothing. */
     private static String stoppedHistory(String asset) {
@@ -44,8 +72,9 @@ class StopFlagTest {
         Map<String, Object> flagged = reportOf(p);
         assertEquals("probably down", flagged.get("state"));
         assertEquals("2026-10-11", flagged.get("stoppedFrom"));
-        // As worked by hand in StopDetectorTest: 900/1264.
-        assertEquals(0.7120, ((Number) flagged.get("probabilityDown")).doubleValue(), 1e-6);
+        // As worked by hand in StopDetectorTest (q = 1/30, 0.7192 with no forecast run), to the flag's 4 decimals.
+        assertEquals(twoDaysDown(p, LocalDate.of(2026, 10, 12), 1.0 / 30, 6.0),
+                ((Number) flagged.get("probabilityDown")).doubleValue(), 5e-5);
         long falseAlarmsBefore = as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down")
                 .then().extract().jsonPath().getLong("falseAlarms");
 
@@ -112,8 +141,9 @@ class StopFlagTest {
         Map<String, Object> flagged = reportOf(p);
         assertEquals("probably down", flagged.get("state"));
         assertEquals("2026-07-11", flagged.get("stoppedFrom"));
-        // RecordedDowntimeTest's case: 20 days read in the baseline, none idle: 484 / 848. Counted as idle, the 8
-        // broken days would leave 0.0297, and no flag.
-        assertEquals(0.5708, ((Number) flagged.get("probabilityDown")).doubleValue(), 1e-4);
+        // RecordedDowntimeTest's case: 20 days read in the baseline, none idle, q = 1/22: 0.5822 with no forecast run.
+        // Counted as idle, the 8 broken days would leave 0.0382, and no flag.
+        assertEquals(twoDaysDown(p, LocalDate.of(2026, 7, 12), 1.0 / 22, 6.0),
+                ((Number) flagged.get("probabilityDown")).doubleValue(), 5e-5);
     }
 }

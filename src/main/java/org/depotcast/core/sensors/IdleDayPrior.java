@@ -25,6 +25,14 @@ import java.util.List;
  * at least n days, is the programme's, each step by Laplace's rule: L(1) = 1, L(n) = L(n − 1)·(N≥n + 1)/(N≥n−1 + 2),
  * N≥j the spells seen lasting j days or more; a run longer than any spell seen soon becomes unlikely for a working pump.
  *
+ * <p>The hours of a near-nothing day are evidence too: a pump standing broken and a pump idling need not leave the
+ * same trace (a broken pump may give nothing at all, an idle one a few minutes). The shares of near-nothing days in
+ * each class of hours ({@link IdleDays#bin}) are learnt over the programme: days on record as broken (repair records)
+ * and idle-history days, each a Dirichlet-multinomial posterior mean (n_b + α p_b)/(n + α) around the classes' share
+ * over both kinds together, p_b = (n_b^idle + n_b^broken + 1)/(n^idle + n^broken + {@value IdleDays#BINS}) by Laplace's
+ * rule, with α = {@value #HOURS_PRIOR_DAYS} days' worth; so with no broken day on record, or where both look alike,
+ * the two shares agree and the hours weigh nothing. Judged alone, the hours weigh nothing.
+ *
  * <p>A pump judged alone ({@link #ALONE}, and any pool of fewer than {@value #LEAST_PUMPS} pumps) has no programme to
  * learn spells from: its near-nothing days are taken as independent, each with its share by Laplace's rule of
  * succession, ((z + 1)/(m + 2))ⁿ for z such days of m read. That needs at least two days before a pump read for 28
@@ -32,19 +40,36 @@ import java.util.List;
  */
 public final class IdleDayPrior {
     /** A pump judged alone: independent days by Laplace's rule. */
-    public static final IdleDayPrior ALONE = new IdleDayPrior(1, 1, null);
+    public static final IdleDayPrior ALONE = new IdleDayPrior(1, 1, null, null, null);
     /** Fewest pumps with days read to pool. */
     public static final int LEAST_PUMPS = 30;
+    /** α, the days' worth of evidence the programme's mix of hours counts for in each kind's shares. */
+    public static final double HOURS_PRIOR_DAYS = 10;
 
     private final double a;
     private final double b;
     /** lastingAtLeast[j]: the pooled spells that lasted j days or more; null when judged alone. */
     private final long[] lastingAtLeast;
+    /** Shares of near-nothing days by class of hours when idle and when broken; null when judged alone. */
+    private final double[] idleShare;
+    private final double[] brokenShare;
 
-    private IdleDayPrior(double a, double b, long[] lastingAtLeast) {
+    private IdleDayPrior(double a, double b, long[] lastingAtLeast, double[] idleShare, double[] brokenShare) {
         this.a = a;
         this.b = b;
         this.lastingAtLeast = lastingAtLeast;
+        this.idleShare = idleShare;
+        this.brokenShare = brokenShare;
+    }
+
+    /** The chance of a near-nothing day's class of hours at a pump idling; 1 when judged alone. */
+    public double idleHoursChance(int bin) {
+        return idleShare == null ? 1 : idleShare[bin];
+    }
+
+    /** The chance of a near-nothing day's class of hours at a pump standing broken; 1 when judged alone. */
+    public double brokenHoursChance(int bin) {
+        return brokenShare == null ? 1 : brokenShare[bin];
     }
 
     public double a() {
@@ -68,6 +93,30 @@ public final class IdleDayPrior {
             return Math.pow((own.idle() + 1.0) / (own.read() + 2.0), run);
         }
         return spellChance(own) * lasting(run);
+    }
+
+    /**
+     * The chance that a working pump in use starts a spell of near-nothing days on a given day: the posterior mean
+     * {@link #spellChance} when pooled; judged alone, Laplace's share of near-nothing days (z + 1)/(m + 2).
+     */
+    public double spellStartChance(IdleDays own) {
+        return lastingAtLeast == null ? (own.idle() + 1.0) / (own.read() + 2.0) : spellChance(own);
+    }
+
+    /**
+     * The chance that a spell that has lasted {@code days} days lasts another, L(days + 1)/L(days) when pooled;
+     * judged alone, days are independent and it is the share of near-nothing days, (z + 1)/(m + 2).
+     */
+    public double continuing(IdleDays own, int days) {
+        if (days < 1) {
+            throw new IllegalArgumentException("days must be at least 1: " + days);
+        }
+        if (lastingAtLeast == null) {
+            return (own.idle() + 1.0) / (own.read() + 2.0);
+        }
+        long reached = days < lastingAtLeast.length ? lastingAtLeast[days] : 0;
+        long went = days + 1 < lastingAtLeast.length ? lastingAtLeast[days + 1] : 0;
+        return (went + 1.0) / (reached + 2.0);
     }
 
     /** The posterior mean chance that a spell starts on a given day, (k + a)/(m + a + b). */
@@ -118,7 +167,31 @@ public final class IdleDayPrior {
         double rho = intraPumpCorrelation(pumps, spells, read);
         double weight = rho > 0 ? Math.min(medianRead, Math.max(1, 1 / rho - 1)) : medianRead;
         double mean = (spells + 1.0) / (read + 2.0);
-        return new IdleDayPrior(mean * weight, (1 - mean) * weight, lastingAtLeast);
+        long[] idleHours = new long[IdleDays.BINS], brokenHours = new long[IdleDays.BINS];
+        for (IdleDays p : pumps) {
+            for (int bin = 0; bin < IdleDays.BINS; bin++) {
+                idleHours[bin] += p.idleHours()[bin];
+                brokenHours[bin] += p.brokenHours()[bin];
+            }
+        }
+        double[][] shares = hoursShares(idleHours, brokenHours);
+        return new IdleDayPrior(mean * weight, (1 - mean) * weight, lastingAtLeast, shares[0], shares[1]);
+    }
+
+    /** Each kind's shares by class of hours, shrunk towards both kinds' shares together (class Javadoc). */
+    private static double[][] hoursShares(long[] idle, long[] broken) {
+        long idleDays = 0, brokenDays = 0;
+        for (int bin = 0; bin < IdleDays.BINS; bin++) {
+            idleDays += idle[bin];
+            brokenDays += broken[bin];
+        }
+        double[][] shares = new double[2][IdleDays.BINS];
+        for (int bin = 0; bin < IdleDays.BINS; bin++) {
+            double both = (idle[bin] + broken[bin] + 1.0) / (idleDays + brokenDays + IdleDays.BINS);
+            shares[0][bin] = (idle[bin] + HOURS_PRIOR_DAYS * both) / (idleDays + HOURS_PRIOR_DAYS);
+            shares[1][bin] = (broken[bin] + HOURS_PRIOR_DAYS * both) / (brokenDays + HOURS_PRIOR_DAYS);
+        }
+        return shares;
     }
 
     /** Kleinman's moment estimate of ρ, or 0 when no pump or every pump had a spell on every day read. */
@@ -145,7 +218,8 @@ public final class IdleDayPrior {
     @Override
     public String toString() {
         return lastingAtLeast == null ? "judged alone (Laplace's rule, independent days)"
-                : String.format("spell start Beta(%.4f, %.2f), spells lasting 2+ days %.3f, 3+ %.3f, 4+ %.4f", a, b,
-                lasting(2), lasting(3), lasting(4));
+                : String.format("spell start Beta(%.4f, %.2f), spells lasting 2+ days %.3f, 3+ %.3f, 4+ %.4f; "
+                + "near-nothing days with nothing at all: idle %.3f, broken %.3f", a, b, lasting(2), lasting(3),
+                lasting(4), idleShare[0], brokenShare[0]);
     }
 }

@@ -23,14 +23,15 @@ package org.depotcast.core.sensors;
  * {@code gapDays} days is <b>no data received</b> (a transmission gap), whatever came before: a sensor that stops
  * sending is not a pump that stops pumping.
  *
- * <p>The probability that a stopped pump is down, rather than idle, is Bayes' rule over the run of n near-nothing
- * days read at the end: P = π / (π + (1 − π) c(n)), with π the prior chance that a breakdown starts on a given day
- * ({@code dailyBreakdownChance}) and c(n) the chance of such a run at a working pump, from the pump's idle history
- * (the {@code idleHistoryDays} before the watched days) and the programme's pumps ({@link IdleDayPrior}): a spell of
- * idling that started n − 1 days ago and lasted n days or more, where the pump's chance of a spell is its own record
- * shrunk towards the programme's; for a pump judged alone, independent days by Laplace's rule, c(n) = ((z + 1)/(m + 2))ⁿ
- * for z near-nothing days of m read. A pump that never idles in a programme whose pumps rarely idle is probably down
- * after one near-nothing day; a pump with idle spells on record needs a run longer than its spells usually last.
+ * <p>The probability that a stopped pump is down, rather than idle, is the Bayesian change-point posterior of
+ * {@link StopPosterior} (Shiryaev 1963) over the days since the pump was last read in use: a breakdown starting on a
+ * day with the pump's own hazard π = 1 − exp(−λ μ₀), λ its breakdowns per operating hour from the fleet model and μ₀
+ * its hours a day in use ({@code dailyBreakdownChance} when no rate is known), against an idle spell, whose start
+ * chance is the pump's idle history (the {@code idleHistoryDays} before the watched days) shrunk towards the
+ * programme's and whose length is the programme's ({@link IdleDayPrior}); a pump judged alone takes its days as
+ * independent, each near nothing with chance (z + 1)/(m + 2) for z near-nothing days of m read (Laplace's rule). A
+ * pump that never idles in a programme whose pumps rarely idle is probably down after one near-nothing day; a pump with
+ * idle spells on record needs a run longer than its spells usually last.
  */
 public final class StopDetector {
     /** What the series says, in plain words for the answer. */
@@ -81,8 +82,16 @@ public final class StopDetector {
      * @param prior the programme's prior for the pump's chance of a near-nothing day
      */
     public Verdict judge(double[] hours, IdleDayPrior prior) {
+        return judge(hours, prior, Double.NaN);
+    }
+
+    /**
+     * {@link #judge(double[], IdleDayPrior)} with the pump's breakdowns per operating hour (the fleet model's rate for
+     * it; NaN when none is known, for the settings' {@code dailyBreakdownChance}).
+     */
+    public Verdict judge(double[] hours, IdleDayPrior prior, double breakdownsPerHour) {
         checkLength(hours);
-        if (noneRead(hours, hours.length - settings.gapDays(), hours.length)) {
+        if (DaysRead.none(hours, hours.length - settings.gapDays(), hours.length)) {
             return new Verdict(State.NO_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
         int from = hours.length - settings.windowDays();
@@ -114,12 +123,15 @@ public final class StopDetector {
             // A near-nothing day is its own evidence, weighed below against how often the pump idles; the sum, made
             // for a shift of one σ, needs two such days before it signals at a pump whose σ exceeds μ₀/4.5 (a quiet
             // weekday is enough).
-            change = lastDayNearNothing(hours, to, nearNothing);
+            change = DaysRead.lastNearNothing(hours, to, nearNothing);
             if (change < 0) {
                 return new Verdict(State.IN_USE, -1, mean, sd, mean, 0, 0);
             }
         }
-        return afterChange(hours, change, mean, sd, nearNothing, IdleDays.count(hours, nearNothing, settings), prior);
+        double hazard = Double.isNaN(breakdownsPerHour) ? settings.dailyBreakdownChance()
+                : StopPosterior.dailyChance(breakdownsPerHour, mean);
+        return afterChange(hours, change, mean, sd, nearNothing, IdleDays.count(hours, nearNothing, settings), prior,
+                hazard);
     }
 
     /**
@@ -127,10 +139,18 @@ public final class StopDetector {
      * prior; null when its baseline is too little to judge.
      */
     public IdleDays idleDays(double[] hours) {
+        return idleDays(hours, hours);
+    }
+
+    /**
+     * As {@link #idleDays(double[])} for the days judged ({@code hours}, breakdowns on record left out), with the
+     * hours of those broken days from the days as read ({@code asRead}).
+     */
+    public IdleDays idleDays(double[] hours, double[] asRead) {
         checkLength(hours);
         int from = hours.length - settings.windowDays();
         double nearNothing = nearNothing(hours, from, from + settings.baselineDays());
-        return Double.isNaN(nearNothing) ? null : IdleDays.count(hours, nearNothing, settings);
+        return Double.isNaN(nearNothing) ? null : IdleDays.count(hours, asRead, nearNothing, settings);
     }
 
     private void checkLength(double[] hours) {
@@ -177,7 +197,7 @@ public final class StopDetector {
     }
 
     private Verdict afterChange(double[] hours, int change, double mean, double sd, double nearNothing, IdleDays idle,
-                                IdleDayPrior idlePrior) {
+                                IdleDayPrior idlePrior, double hazard) {
         double sum = 0;
         int read = 0;
         for (int t = change; t < hours.length; t++) {
@@ -188,54 +208,24 @@ public final class StopDetector {
         }
         double level = read == 0 ? Double.NaN : sum / read;
         // The run of near-nothing days read at the end (days with no reading neither break nor lengthen it).
-        int run = 0, runStart = -1;
-        for (int t = hours.length - 1; t >= 0; t--) {
-            if (Double.isNaN(hours[t])) {
-                continue;
+        int run = 0, runStart = -1, lastInUse = -1;
+        for (int t = hours.length - 1; t >= 0 && lastInUse < 0; t--) {
+            if (!Double.isNaN(hours[t]) && hours[t] > nearNothing) {
+                lastInUse = t;
+            } else if (!Double.isNaN(hours[t])) {
+                run++;
+                runStart = t;
             }
-            if (hours[t] > nearNothing) {
-                break;
-            }
-            run++;
-            runStart = t;
         }
-        if (run > 0) {
-            double prior = settings.dailyBreakdownChance();
-            double probability = prior / (prior + (1 - prior) * idlePrior.chanceOfRun(idle, run));
+        if (run > 0 && lastInUse >= 0) {
+            double probability = StopPosterior.probabilityDown(hours, lastInUse, nearNothing, hazard, idlePrior,
+                    idle);
             return new Verdict(State.STOPPED, runStart, mean, sd, level, probability, run);
         }
-        if (lastRead(hours) >= 0.5 * mean) {
+        if (DaysRead.last(hours) >= 0.5 * mean) {
             // Use has come back: a dip, not a fall.
             return new Verdict(State.IN_USE, change, mean, sd, level, 0, 0);
         }
         return new Verdict(State.DECLINING, change, mean, sd, level, 0, 0);
-    }
-
-    /** The index of the last day read when it is near nothing and in the watched days, else −1. */
-    private static int lastDayNearNothing(double[] hours, int from, double nearNothing) {
-        for (int i = hours.length - 1; i >= from; i--) {
-            if (!Double.isNaN(hours[i])) {
-                return hours[i] <= nearNothing ? i : -1;
-            }
-        }
-        return -1;
-    }
-
-    private static double lastRead(double[] hours) {
-        for (int i = hours.length - 1; i >= 0; i--) {
-            if (!Double.isNaN(hours[i])) {
-                return hours[i];
-            }
-        }
-        return Double.NaN;
-    }
-
-    private static boolean noneRead(double[] hours, int from, int to) {
-        for (int i = Math.max(0, from); i < to; i++) {
-            if (!Double.isNaN(hours[i])) {
-                return false;
-            }
-        }
-        return true;
     }
 }

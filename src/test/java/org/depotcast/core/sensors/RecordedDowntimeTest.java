@@ -38,15 +38,24 @@ class RecordedDowntimeTest {
     @Test
     void anEarlierBreakdownOnRecordNoLongerMakesTheNextStopLookLikeIdling() {
         double[] hours = series();
-        // Counted as idle, the 8 broken days give q = 9/30: two days of nothing leave P = π / (π + (1 − π) 0.09).
+        // Counted as idle, the 8 broken days give q = 9/30: two days of nothing leave, by Shiryaev's posterior
+        // (StopPosteriorTest), down π + π(1 − π)q against idle (1 − π)²q², P = 0.0382.
         StopDetector.Verdict counted = DETECTOR.judge(hours);
         assertEquals(StopDetector.State.STOPPED, counted.state());
-        assertEquals(1.0 / (1 + 364 * 0.09), counted.probabilityDown(), 1e-9);
-        // Left out: 20 days read, none idle, q = 1/22; P = 484 / (484 + 364) ≈ 0.571, over the flag's 0.5.
+        assertEquals(twoDaysDown(0.3), counted.probabilityDown(), 1e-9);
+        assertEquals(0.038246, counted.probabilityDown(), 1e-6);
+        // Left out: 20 days read, none idle, q = 1/22; P = 0.582, over the flag's 0.5.
         StopDetector.Verdict leftOut = DETECTOR.judge(RecordedDowntime.leaveOut(hours,
                 List.of(new RecordedDowntime.Breakdown(8, 13)), StopSettings.DEFAULT.stopFraction()));
         assertEquals(StopDetector.State.STOPPED, leftOut.state());
-        assertEquals(484.0 / 848, leftOut.probabilityDown(), 1e-9);
+        assertEquals(twoDaysDown(1.0 / 22), leftOut.probabilityDown(), 1e-9);
+        assertEquals(0.582248, leftOut.probabilityDown(), 1e-6);
+    }
+
+    /** Two near-nothing days at a pump judged alone with share q of near-nothing days, π = 1/365. */
+    private static double twoDaysDown(double q) {
+        double pi = 1.0 / 365, down = pi + pi * (1 - pi) * q;
+        return down / (down + (1 - pi) * (1 - pi) * q * q);
     }
 
     @Test

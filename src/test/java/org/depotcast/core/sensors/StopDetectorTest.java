@@ -42,11 +42,27 @@ class StopDetectorTest {
         assertEquals(40, v.changeIndex());
         assertEquals(6.0, v.baselineMean(), 1e-12);
         assertEquals(1.018350, v.baselineSd(), 1e-6);
-        // No idle day in 28 read: q = (0 + 1)/(28 + 2) = 1/30; two idle days: P = π/(π + (1 − π)/900), π = 1/365,
-        // = 900/1264.
-        assertEquals(900.0 / 1264.0, v.probabilityDown(), 1e-12);
-        assertEquals(0.712025, v.probabilityDown(), 1e-6);
+        // No idle day in 28 read: q = (0 + 1)/(28 + 2) = 1/30, judged alone as independent days; π = 1/365. Shiryaev's
+        // posterior over the two days (StopPosterior): down π + π(1 − π)q (broken on day 1, or idle then broken on day
+        // 2) against idle both days (1 − π)²q²: 0.719238 (the run rule of 3 Dec, π/(π + (1 − π)q²), gave 0.712025).
+        double down = 1.0 / 365 + (1.0 / 365) * (364.0 / 365) / 30;
+        assertEquals(down / (down + (364.0 / 365) * (364.0 / 365) / 900), v.probabilityDown(), 1e-12);
+        assertEquals(0.719238, v.probabilityDown(), 1e-6);
         assertEquals(2, v.nearNothingDays());
+    }
+
+    @Test
+    void thePumpsOwnBreakdownRateSetsTheDailyHazard() {
+        double[] hours = series(join(repeat(6, 12), repeat(0, 2)));
+        // 5e-4 breakdowns an operating hour at μ₀ = 6 h a day: π = 1 − e^(−0.003) = 0.00299551, above 1/365, so the
+        // same two days are likelier a breakdown than with the flat prior.
+        double pi = -Math.expm1(-0.003), q = 1.0 / 30;
+        double down = pi + pi * (1 - pi) * q;
+        double expected = down / (down + (1 - pi) * (1 - pi) * q * q);
+        assertEquals(expected, detector.judge(hours, IdleDayPrior.ALONE, 5e-4).probabilityDown(), 1e-12);
+        assertEquals(0.737002, expected, 1e-6);
+        assertEquals(detector.judge(hours).probabilityDown(),
+                detector.judge(hours, IdleDayPrior.ALONE, Double.NaN).probabilityDown(), 0.0, "no rate: 1/365");
     }
 
     @Test
@@ -63,8 +79,12 @@ class StopDetectorTest {
         assertEquals(39, v.changeIndex());
         assertEquals(6.0, v.baselineMean(), 1e-12);
         assertEquals(0.0, v.baselineSd(), 1e-12);
-        // 4 idle days of 28: q = 5/30 = 1/6; three idle days: P = 1/(1 + (364/365)(365)/216) = 216/580.
-        assertEquals(216.0 / 580.0, v.probabilityDown(), 1e-12);
+        // 4 idle days of 28: q = 5/30 = 1/6; three idle days, by the recursion (checked in Python, independent days):
+        // down π + π(1 − π)q + π(1 − π)²q², idle (1 − π)³q³: 0.416000.
+        double pi = 1.0 / 365, q = 1.0 / 6;
+        double down = pi + pi * (1 - pi) * q + pi * (1 - pi) * (1 - pi) * q * q;
+        assertEquals(down / (down + Math.pow((1 - pi) * q, 3)), v.probabilityDown(), 1e-12);
+        assertEquals(0.416000, v.probabilityDown(), 1e-6);
     }
 
     @Test
@@ -167,9 +187,10 @@ class StopDetectorTest {
         // 20 spells in 112 days: s = 20.137169/142.128730 = 0.141683; one day P = 0.019021.
         assertEquals(StopDetector.State.STOPPED, v.state());
         assertEquals(0.019021, v.probabilityDown(), 1e-6);
-        // Two days: no spell of the programme lasted two, s·L(2) = 0.141683/52, P = 0.502064.
+        // Two days: no spell of the programme lasted two, so a spell goes on with chance 1/52; down π + π(1 − π)s
+        // against idle (1 − π)²s/52: P = 0.535730 (the run rule of 3 Dec gave 0.502064).
         hours[124] = 0;
-        assertEquals(0.502064, detector.judge(hours, RARELY_IDLE).probabilityDown(), 1e-6);
+        assertEquals(0.535730, detector.judge(hours, RARELY_IDLE).probabilityDown(), 1e-6);
     }
 
     @Test
