@@ -5,6 +5,7 @@ import org.depotcast.core.forecast.CredibilityWeight;
 import org.depotcast.core.forecast.DemandChoice;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PumpMonths;
+import org.depotcast.core.forecast.ServiceTiming;
 
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -27,11 +28,13 @@ final class DemandAssembler {
     static final String PROGRAMME = "PROGRAMME";
     static final String FLEET = "FLEET";
     private static final int HOLDOUT_MONTHS = DemandChoice.HOLDOUT_MONTHS;
+    /** Pumps worked out together in parallel: enough to keep the cores busy, few enough to hold little memory. */
+    private static final int PUMPS_AT_ONCE = 1024;
 
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, ForecastModelDefinition> definitions;
     private final Map<ComponentFamily, FleetRateModel> models;
-    private final Map<ComponentFamily, FleetRateModel> holdoutModels;
+    private final HoldoutExpectation holdout;
     private final int horizon;
     private final int months;
     private final Map<String, double[]> history = new LinkedHashMap<>();
@@ -48,7 +51,7 @@ final class DemandAssembler {
         this.snapshot = snapshot;
         this.definitions = definitions;
         this.models = models;
-        this.holdoutModels = holdoutModels;
+        this.holdout = new HoldoutExpectation(snapshot, holdoutModels);
         this.horizon = horizon;
         this.months = snapshot.months();
         this.credibility = new FleetCredibility(snapshot, models);
@@ -97,25 +100,14 @@ final class DemandAssembler {
             }
         }
         long origin = snapshot.historyEnd().toEpochDay();
-        for (FleetSnapshot.PumpRecord pump : inSeriesOrder(snapshot.pumps())) {
-            List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
-            int installedMonth = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(pump.installedDay())));
-            // Each part's series keys, made once per pump and shared by every sum below.
-            Map<Long, List<String>> keysByPart = new java.util.HashMap<>();
-            for (FleetSnapshot.BomPart part : pump.bom()) {
-                keysByPart.computeIfAbsent(part.partId(), p -> keysOf(p, locations));
-            }
-            credibility.addPump(pump, keysByPart);
-            PumpMonths ahead = pump.endDay() > origin ? horizonDemand.monthsOf(pump) : null;
-            for (FleetSnapshot.BomPart part : pump.bom()) {
-                List<String> keys = keysByPart.get(part.partId());
-                addFleet(pump, part, keys, ahead);
-                for (String key : keys) {
-                    firstMonth.merge(key, installedMonth, Math::min);
-                }
-            }
-            if (ahead != null) {
-                horizonDemand.addServices(pump, ahead, part -> keysByPart.get(part.partId()));
+        List<FleetSnapshot.PumpRecord> pumps = inSeriesOrder(snapshot.pumps());
+        for (int first = 0; first < pumps.size(); first += PUMPS_AT_ONCE) {
+            List<FleetSnapshot.PumpRecord> batch = pumps.subList(first, Math.min(pumps.size(), first + PUMPS_AT_ONCE));
+            // What the models expect of a pump depends on that pump alone: worked out on every core, then added to
+            // the series in the same order as ever, so every sum is the same to the last digit.
+            List<PumpExpectation> expected = batch.parallelStream().map(pump -> expectationOf(pump, origin)).toList();
+            for (int i = 0; i < batch.size(); i++) {
+                addPump(batch.get(i), expected.get(i));
             }
         }
         // Every series with a fleet expectation or a history gets a forecast.
@@ -134,35 +126,54 @@ final class DemandAssembler {
         return ordered;
     }
 
-    /**
-     * {@code keys}: the part's series at the pump's locations; {@code ahead}: the pump's months over the horizon, null
-     * when it is out of service by the origin.
-     */
-    private void addFleet(FleetSnapshot.PumpRecord pump, FleetSnapshot.BomPart part, List<String> keys,
-                          PumpMonths ahead) {
-        FleetRateModel holdout = holdoutModels.get(part.family());
+    /** A pump's history and horizon as the models see them; {@code ahead} null when it is out of service by then. */
+    private record PumpExpectation(Map<ComponentFamily, double[]> history, Map<ComponentFamily, double[]> holdout,
+                                   PumpMonths ahead, Map<ComponentFamily, HorizonDemand.Breakdowns> breakdowns,
+                                   ServiceTiming.Outlook services) {
+    }
+
+    private PumpExpectation expectationOf(FleetSnapshot.PumpRecord pump, long origin) {
+        PumpMonths ahead = pump.endDay() > origin ? horizonDemand.monthsOf(pump) : null;
+        return new PumpExpectation(credibility.expectedOf(pump), holdout.expectedOf(pump), ahead,
+                ahead == null ? null : horizonDemand.breakdownsOf(pump, ahead),
+                ahead == null ? null : horizonDemand.servicesOf(pump, ahead));
+    }
+
+    private void addPump(FleetSnapshot.PumpRecord pump, PumpExpectation expected) {
+        List<String> locations = locationsOf(pump.depotId(), pump.mechanic());
+        int installedMonth = Math.max(0, snapshot.monthIndex(java.time.LocalDate.ofEpochDay(pump.installedDay())));
+        // Each part's series keys, made once per pump and shared by every sum below.
+        Map<Long, List<String>> keysByPart = new java.util.HashMap<>();
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            keysByPart.computeIfAbsent(part.partId(), p -> keysOf(p, locations));
+        }
+        credibility.addPump(pump, expected.history(), keysByPart);
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            List<String> keys = keysByPart.get(part.partId());
+            addFleet(part, keys, expected);
+            for (String key : keys) {
+                firstMonth.merge(key, installedMonth, Math::min);
+            }
+        }
+        if (expected.ahead() != null) {
+            horizonDemand.addServices(pump, expected.services(), part -> keysByPart.get(part.partId()));
+        }
+    }
+
+    /** {@code keys}: the part's series at the pump's locations. */
+    private void addFleet(FleetSnapshot.BomPart part, List<String> keys, PumpExpectation expected) {
         if (!models.containsKey(part.family())) {
             return;
         }
-        if (ahead != null) {
-            horizonDemand.addBreakdowns(pump, part, ahead, keys);
+        if (expected.ahead() != null) {
+            horizonDemand.addBreakdowns(expected.breakdowns().get(part.family()), keys);
         }
+        double[] holdout = expected.holdout().get(part.family());
         if (holdout != null) {
-            double[] expected = new double[HOLDOUT_MONTHS];
-            LocalDate start = snapshot.historyEnd().minusMonths(HOLDOUT_MONTHS);
-            for (int m = 0; m < HOLDOUT_MONTHS; m++) {
-                long from = Math.max(start.plusMonths(m).toEpochDay(), pump.installedDay());
-                long to = Math.min(start.plusMonths(m + 1).toEpochDay(), pump.endDay());
-                double hours = pump.usage().hoursBetween(from, to);
-                if (hours > 0) {
-                    double age = ((from + to) / 2.0 - pump.installedDay()) / 365.25;
-                    expected[m] = holdout.expectedUnits(pump.depotId(), pump.depthM(), age, hours, to - from);
-                }
-            }
             for (String key : keys) {
                 double[] cell = fleetHoldout.computeIfAbsent(key, k -> new double[HOLDOUT_MONTHS]);
                 for (int m = 0; m < HOLDOUT_MONTHS; m++) {
-                    cell[m] += expected[m];
+                    cell[m] += holdout[m];
                 }
             }
         }

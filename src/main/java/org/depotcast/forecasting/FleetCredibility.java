@@ -35,30 +35,43 @@ final class FleetCredibility {
         }
     }
 
-    /** Adds one pump's fleet-expected breakdown units per history month to each of its series ({@code keysByPart}). */
-    void addPump(FleetSnapshot.PumpRecord pump, Map<Long, List<String>> keysByPart) {
+    /**
+     * One pump's fleet-expected breakdown units in each history month, by family: it depends on the pump alone, so
+     * pumps can be worked out in parallel and then added in order ({@link #addPump}).
+     */
+    Map<ComponentFamily, double[]> expectedOf(FleetSnapshot.PumpRecord pump) {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
         int months = monthStart.length - 1;
         Exposure exposure = null;
         for (FleetSnapshot.BomPart part : pump.bom()) {
             FleetRateModel model = models.get(part.family());
-            if (model == null) {
+            if (model == null || byFamily.containsKey(part.family())) {
                 continue;
             }
             if (exposure == null) {
                 exposure = exposure(pump);
             }
-            Exposure pumpMonths = exposure;
-            double[] perMonth = byFamily.computeIfAbsent(part.family(), f -> {
-                double[] units = new double[months];
-                for (int m = 0; m < months; m++) {
-                    if (pumpMonths.days[m] > 0) {
-                        units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), pumpMonths.ageYears[m],
-                                pumpMonths.hours[m], pumpMonths.days[m]);
-                    }
+            double[] units = new double[months];
+            for (int m = 0; m < months; m++) {
+                if (exposure.days[m] > 0) {
+                    units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), exposure.ageYears[m],
+                            exposure.hours[m], exposure.days[m]);
                 }
-                return units;
-            });
+            }
+            byFamily.put(part.family(), units);
+        }
+        return byFamily;
+    }
+
+    /** Adds one pump's {@link #expectedOf} to each of its series ({@code keysByPart}). */
+    void addPump(FleetSnapshot.PumpRecord pump, Map<ComponentFamily, double[]> byFamily,
+                 Map<Long, List<String>> keysByPart) {
+        int months = monthStart.length - 1;
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            double[] perMonth = byFamily.get(part.family());
+            if (perMonth == null) {
+                continue;
+            }
             for (String key : keysByPart.get(part.partId())) {
                 double[] cell = expected.computeIfAbsent(key, k -> new double[months]);
                 for (int m = 0; m < months; m++) {

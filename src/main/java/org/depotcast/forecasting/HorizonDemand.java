@@ -1,10 +1,12 @@
 package org.depotcast.forecasting;
 
+import org.depotcast.catalogue.ComponentFamily;
 import org.depotcast.core.forecast.FleetRateModel;
 import org.depotcast.core.forecast.PumpMonths;
 import org.depotcast.core.forecast.ServiceTiming;
 
 import java.util.ArrayList;
+import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
@@ -36,11 +38,27 @@ final class HorizonDemand {
         return outlook.months(pump);
     }
 
-    /** One pump's expected breakdown units of one part, added to each of its series. */
-    void addBreakdowns(FleetSnapshot.PumpRecord pump, FleetSnapshot.BomPart part, PumpMonths months, List<String> keys) {
-        FleetRateModel model = outlook.model(part.family());
-        double[] units = outlook.breakdownUnits(pump, part, months);
-        spread.addBreakdowns(keys, units, model.covariateRows(pump.depthM(), months), model.unitDispersion());
+    /** A pump's expected breakdown units of one family in each month ahead, the design rows behind them and φ. */
+    record Breakdowns(double[] units, double[][] covariates, double phi) {
+    }
+
+    /** Per family of the pump's parts that a model covers: depends on the pump alone. */
+    Map<ComponentFamily, Breakdowns> breakdownsOf(FleetSnapshot.PumpRecord pump, PumpMonths months) {
+        Map<ComponentFamily, Breakdowns> byFamily = new EnumMap<>(ComponentFamily.class);
+        for (FleetSnapshot.BomPart part : pump.bom()) {
+            FleetRateModel model = outlook.model(part.family());
+            if (model != null && !byFamily.containsKey(part.family())) {
+                byFamily.put(part.family(), new Breakdowns(outlook.breakdownUnits(pump, part, months),
+                        model.covariateRows(pump.depthM(), months), model.unitDispersion()));
+            }
+        }
+        return byFamily;
+    }
+
+    /** One pump's expected breakdown units of one part ({@link #breakdownsOf}), added to each of its series. */
+    void addBreakdowns(Breakdowns breakdowns, List<String> keys) {
+        double[] units = breakdowns.units();
+        spread.addBreakdowns(keys, units, breakdowns.covariates(), breakdowns.phi());
         for (String key : keys) {
             double[] cell = fleet.computeIfAbsent(key, k -> new double[horizon]);
             for (int m = 0; m < horizon; m++) {
@@ -49,10 +67,14 @@ final class HorizonDemand {
         }
     }
 
+    /** When the pump's coming services fall ({@link FleetOutlook#services}): depends on the pump alone. */
+    ServiceTiming.Outlook servicesOf(FleetSnapshot.PumpRecord pump, PumpMonths months) {
+        return outlook.services(pump, months);
+    }
+
     /** One pump's scheduled services: each service-kit part's expected units, added to each of its series. */
-    void addServices(FleetSnapshot.PumpRecord pump, PumpMonths months,
+    void addServices(FleetSnapshot.PumpRecord pump, ServiceTiming.Outlook services,
                      Function<FleetSnapshot.BomPart, List<String>> keysOf) {
-        ServiceTiming.Outlook services = outlook.services(pump, months);
         double[] due = services.expected();
         double total = 0;
         for (double d : due) {
