@@ -37,8 +37,11 @@ class BreakdownHazards {
 
     /** Breakdowns per operating hour by pump id, as of {@code asOf}; empty when no run has finished. */
     Map<Long, Double> perHour(Collection<Long> pumpIds, LocalDate asOf) {
+        if (pumpIds.isEmpty()) {
+            return Map.of();
+        }
         Optional<FleetRates> rates = system.call("stop-check-rates", forecasts::fleetRates);
-        if (rates.isEmpty() || rates.get().models().isEmpty() || pumpIds.isEmpty()) {
+        if (rates.isEmpty() || rates.get().models().isEmpty()) {
             return Map.of();
         }
         Map<Long, Double> perHour = new HashMap<>();

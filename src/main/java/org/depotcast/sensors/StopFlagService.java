@@ -112,11 +112,10 @@ public class StopFlagService {
             }
         }
         IdleDayPrior prior = pooledPrior(windows, asRead);
-        Map<Long, Double> perHour = hazards.perHour(windows.keySet(), asOf);
+        Map<Long, StopDetector.Verdict> verdicts = verdicts(windows, prior, asOf);
         int opened = 0, stillOpen = 0;
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
-            StopDetector.Verdict verdict = detector.judge(pump.getValue(), prior,
-                    perHour.getOrDefault(pump.getKey(), Double.NaN));
+            StopDetector.Verdict verdict = verdicts.get(pump.getKey());
             RepairFacts repair = facts.getOrDefault(pump.getKey(), RepairFacts.NONE);
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
@@ -131,6 +130,26 @@ public class StopFlagService {
             Log.infof("sensors: %d pumps newly probably down as of %s (idle spells: %s)", opened, asOf, prior);
         }
         return stillOpen;
+    }
+
+    /**
+     * Each pump's verdict. Only a stopped pump's probability needs its breakdown rate, so the pumps are judged with the
+     * flat prior first and the few found stopped again with their own rate: a day's file of every pump reads the pump
+     * records of those few, not of all.
+     */
+    private Map<Long, StopDetector.Verdict> verdicts(Map<Long, double[]> windows, IdleDayPrior prior, LocalDate asOf) {
+        Map<Long, StopDetector.Verdict> verdicts = new HashMap<>();
+        List<Long> stopped = new ArrayList<>();
+        windows.forEach((pumpId, window) -> {
+            StopDetector.Verdict verdict = detector.judge(window, prior);
+            verdicts.put(pumpId, verdict);
+            if (verdict.state() == StopDetector.State.STOPPED) {
+                stopped.add(pumpId);
+            }
+        });
+        hazards.perHour(stopped, asOf).forEach((pumpId, perHour) ->
+                verdicts.put(pumpId, detector.judge(windows.get(pumpId), prior, perHour)));
+        return verdicts;
     }
 
     /** The programme's idle-day prior fitted over the pumps judged; judged alone when too few to pool. */

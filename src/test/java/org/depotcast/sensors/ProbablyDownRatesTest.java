@@ -51,6 +51,21 @@ class ProbablyDownRatesTest {
                 ProbablyDownService.familyRates(atDepot(6L), flag, models).get(0).eventsPerHour(), 1e-15, "another depot: ratio 1");
     }
 
+    @Test
+    void aPumpsBreakdownRateForTheStopCheckIsTheSumOverFamiliesWithItsDepotsRatio() {
+        PoissonFit fit = new PoissonFit(new double[]{-7, 0.5, 0.1}, new double[]{0.1, 0.05, 0.01}, 100, 97, 1.0, 5,
+                true, new double[][]{{0.01, 0, 0}, {0, 0.0025, 0}, {0, 0, 1e-4}});
+        Map<ComponentFamily, FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
+        models.put(ComponentFamily.CUP_SEAL, new FleetRateModel(List.of(RateCovariate.LOG_DEPTH,
+                RateCovariate.AGE_YEARS), fit, 1e-3, 2.0, 50, 40_000, Map.of(5L, 1.6)));
+        models.put(ComponentFamily.HANDLE, new FleetRateModel(List.of(), null, 4e-4, 1.0, 3, 9_000, Map.of()));
+        // By hand, on 1 March 2026 (4.0 years old, 60 m): exp(−7 + 0.5 ln 2 + 0.4) × 1.6 + 4e-4 = 3.4782e-3 per hour;
+        // the units per event do not enter (a breakdown is an event, whatever it replaces).
+        assertEquals(Math.exp(-7 + 0.5 * Math.log(2) + 0.4) * 1.6 + 4e-4,
+                BreakdownHazards.perHour(atDepot(5L), models, LocalDate.of(2026, 3, 1)), 1e-15);
+        assertEquals(3.4782e-3, BreakdownHazards.perHour(atDepot(5L), models, LocalDate.of(2026, 3, 1)), 1e-7);
+    }
+
     /** A pump 60 m deep installed on 1 March 2022 at the given depot. */
     private static PumpSummary atDepot(long depotId) {
         return new PumpSummary(1L, "P-1", 1L, depotId, "D-" + depotId, null, new BigDecimal("60"),

@@ -31,6 +31,8 @@ class StopFlagTest {
     PumpQueryService pumps;
     @Inject
     SystemWork system;
+    @Inject
+    org.depotcast.forecasting.ForecastRunService runs;
 
     /**
      * Two near-nothing days at a pump judged alone (a one-pump file) with share q of near-nothing days, by Shiryaev's
@@ -83,6 +85,23 @@ class StopFlagTest {
         assertTrue(reportOf(p).isEmpty(), "the flag closed");
         as("officer").queryParam("depot", "DEP-TESHVALE").get("/api/sensors/probably-down").then()
                 .body("falseAlarms", equalTo((int) falseAlarmsBefore + 1));
+    }
+
+    @Test
+    void withAFinishedForecastRunAPumpsOwnBreakdownRateSetsItsPrior() {
+        if (runs.latestFinished().isEmpty()) {
+            runs.runNow("test", LocalDate.of(2026, 12, 2));
+        }
+        String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        SensorIntakeTest.csv("officer", stoppedHistory(p)).then().statusCode(200);
+        double perHour = system.call("test", () -> {
+            PumpSummary pump = pumps.all().stream().filter(x -> x.assetId().equals(p)).findFirst().orElseThrow();
+            return hazards.perHour(List.of(pump.id()), LocalDate.of(2026, 10, 12)).get(pump.id());
+        });
+        assertTrue(perHour > 0, "the run gives the pump a rate: " + perHour);
+        double probability = ((Number) reportOf(p).get("probabilityDown")).doubleValue();
+        assertEquals(twoDaysDown(p, LocalDate.of(2026, 10, 12), 1.0 / 30, 6.0), probability, 5e-5);
+        assertTrue(Math.abs(probability - 0.7192) > 1e-3, "not the flat prior's 0.7192: " + probability);
     }
 
     @Test
