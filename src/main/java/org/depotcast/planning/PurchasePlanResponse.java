@@ -65,7 +65,7 @@ public record PurchasePlanResponse(long id, String status, LocalDate planningDat
                 : p.horizonDaysMin.equals(p.horizonDaysMax) ? p.horizonDaysMin + " days"
                 : p.horizonDaysMin + "–" + p.horizonDaysMax + " days (each part's supplier lead time + central review)";
         String statement = String.format(java.util.Locale.ROOT, "minimise expected pump-days without water over the "
-                + "next %s: %.1f before this plan, %.1f after", days, p.pumpDaysBefore, p.pumpDaysAfter);
+                + "next %s: %,.1f before this plan, %,.1f after", days, p.pumpDaysBefore, p.pumpDaysAfter);
         return new Objective("expected pump-days without water", "pump-days", p.horizonDaysMin, p.horizonDaysMax,
                 p.pumpDaysBefore, p.pumpDaysAfter, statement);
     }

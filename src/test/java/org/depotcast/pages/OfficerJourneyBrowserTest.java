@@ -96,6 +96,11 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         // An alert's details say its forecast method in words (the API sends a code such as FLEET) and the demand a
         // day with the part's unit.
         WebElement more = driver.findElement(By.cssSelector("#alerts tbody tr.alert-row button.more"));
+        // Each row's buttons say which part they act on to a screen reader (every row has the same visible words).
+        String firstPart = top.getString("[0].partNumber");
+        assertEquals("Acknowledge the alert for " + firstPart,
+                driver.findElement(By.cssSelector("#alerts tbody tr.alert-row button.ack")).getAccessibleName());
+        assertEquals("Details, snooze, transfer, buy for " + firstPart, more.getAccessibleName());
         driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", more);
         more.click();
         String details = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.id("details-0")).getText());
@@ -120,6 +125,7 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         String from = dispatch.getDomAttribute("data-from");
         String to = dispatch.getDomAttribute("data-to");
         double quantity = Double.parseDouble(dispatch.getDomAttribute("data-quantity"));
+        assertEquals("Dispatch " + part + " from " + from + " to " + to, dispatch.getAccessibleName());
         double fromBefore = onHand(from, part);
         int inTransitBefore = inTransit(from, to, part).size();
         dispatch.click();

@@ -50,6 +50,11 @@ class PurchasePlanOutputTest {
         assertTrue(days >= 30 + 30, "supplier lead time + 30-day review: " + days);
         assertTrue(plan.getString("objective.statement").contains("pump-days without water over the next " + days));
         assertEquals(plan.getDouble("pumpDaysBefore"), plan.getDouble("objective.before"), 1e-9);
+        // The statement is for people, as the budget page shows it: thousands separators, one decimal.
+        assertTrue(plan.getDouble("pumpDaysBefore") >= 1000, "the demo's programme has thousands of pump-days at risk");
+        String said = String.format(java.util.Locale.ROOT, "%,.1f before this plan, %,.1f after",
+                plan.getDouble("pumpDaysBefore"), plan.getDouble("pumpDaysAfter"));
+        assertTrue(plan.getString("objective.statement").endsWith(said), plan.getString("objective.statement"));
         assertTrue(plan.getString("caution").contains("drinking water"));
 
         String csv = as("lead").get("/api/planning/purchase-plans/" + plan.getLong("id") + "/export").then().statusCode(200)

@@ -110,13 +110,16 @@ function alertTable(alerts, policyOf, suggestions) {
 
 function actions(alert, policy, suggestions) {
     const box = h('div', {class: 'actions'});
-    const ack = h('button', {type: 'button', class: 'ack'}, 'Acknowledge');
+    // Every row has the same two buttons: the hidden words tell a screen reader which part each one is for.
+    const forPart = h('span', {class: 'visually-hidden'}, ` the alert for ${alert.partNumber}`);
+    const ack = h('button', {type: 'button', class: 'ack'}, 'Acknowledge', forPart);
     ack.addEventListener('click', () => busy(ack, async () => {
         await api.post('/api/planning/alerts/actions', {partNumber: alert.partNumber, location: alert.locationCode, action: 'ACKNOWLEDGE'});
         await load();
         say(`Alert for ${alert.partNumber} acknowledged until the next review.`);
     }));
-    const more = h('button', {type: 'button', class: 'more', 'aria-expanded': 'false'}, 'Details, snooze, transfer, buy');
+    const more = h('button', {type: 'button', class: 'more', 'aria-expanded': 'false'}, 'Details, snooze, transfer, buy',
+        h('span', {class: 'visually-hidden'}, ` for ${alert.partNumber}`));
     more.addEventListener('click', () => {
         const row = more.closest('tr').nextElementSibling;
         const details = row.querySelector('.alert-details');

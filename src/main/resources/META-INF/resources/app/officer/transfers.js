@@ -59,7 +59,8 @@ function suggestionTable(rows) {
                     return h('span', {class: 'hint'}, `The officer of ${s.from} dispatches it.`);
                 }
                 const go = h('button', {type: 'button', class: 'primary dispatch', 'data-key': api.clientRef('dispatch'),
-                    'data-part': s.partNumber, 'data-from': s.from, 'data-to': s.to, 'data-quantity': s.quantity}, 'Dispatch');
+                    'data-part': s.partNumber, 'data-from': s.from, 'data-to': s.to, 'data-quantity': s.quantity}, 'Dispatch',
+                    h('span', {class: 'visually-hidden'}, ` ${s.partNumber} from ${s.from} to ${s.to}`));
                 go.addEventListener('click', () => dispatch(go, {partNumber: s.partNumber, from: s.from, to: s.to, quantity: s.quantity}));
                 return go;
             }}]});
