@@ -52,21 +52,28 @@ export function kitView(snapshot, waiting, onAsk) {
     ];
 }
 
-function serviceLine(due) {
+/** Below this a pump's recent use shows as "0 h a day" and a due date worked out from it lies centuries ahead. */
+const HARDLY_USED_HOURS_A_DAY = 0.05;
+
+/** A pump card's service state in words, with the hours behind it. */
+export function serviceLine(due) {
     if (!due) {
         return null;
     }
     const hours = `${fmt.num(due.hoursSinceService)} of ${fmt.num(due.serviceIntervalHours)} operating hours since `
         + (due.lastServiceOn ? `the service on ${fmt.date(due.lastServiceOn)}` : due.serviceOnRecord
             ? `installation (${fmt.date(due.countedFrom)})` : `${fmt.date(due.countedFrom)}, no service on record since`);
+    const hardlyUsed = due.hoursPerDay < HARDLY_USED_HOURS_A_DAY;
     const words = {
         OVERDUE: `Service overdue since about ${fmt.date(due.dueOn)}`,
         DUE_SOON: `Service due ${fmt.date(due.dueOn)}`,
-        LATER: `Next service about ${fmt.date(due.dueOn)}`,
+        LATER: hardlyUsed ? `Next service after ${fmt.num(due.hoursLeft)} more operating hours`
+            : `Next service about ${fmt.date(due.dueOn)}`,
         NOT_IN_USE: 'Not in use: no service falls due'
     }[due.state];
-    return h('p', {class: 'pump__service'}, state(words, SERVICE_STATES[due.state]),
-        h('span', {class: 'hint'}, `${hours}; at ${fmt.num(due.hoursPerDay, 1)} h a day.`));
+    const use = hardlyUsed && due.hoursPerDay > 0 ? 'hardly used lately (under 0.1 h a day), so no date can be given'
+        : `at ${fmt.num(due.hoursPerDay, 1)} h a day`;
+    return h('p', {class: 'pump__service'}, state(words, SERVICE_STATES[due.state]), h('span', {class: 'hint'}, `${hours}; ${use}.`));
 }
 
 /** An open repair on a pump's card, with the button that closes it, or the words that its closing waits to send. */
