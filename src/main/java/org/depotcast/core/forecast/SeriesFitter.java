@@ -7,6 +7,11 @@ package org.depotcast.core.forecast;
  * [0.05, 0.50] step 0.05 for TSB. TSB starts p̂ at the mean demand share.
  */
 public final class SeriesFitter {
+    /** The grids, made once (read only): α for SES, α for Croston, SBA and SBJ, α and β for TSB. */
+    private static final double[] SES_ALPHAS = grid(0.01, 1.0, 0.01);
+    private static final double[] CROSTON_ALPHAS = grid(0.05, 0.5, 0.01);
+    private static final double[] TSB_GRID = grid(0.05, 0.5, 0.05);
+
     private SeriesFitter() {
     }
 
@@ -27,16 +32,14 @@ public final class SeriesFitter {
         if (!method.usesAlpha() || (!Double.isNaN(alpha) && (!method.usesBeta() || !Double.isNaN(beta)))) {
             return fit(y, method, alpha, beta);
         }
-        double[] work = new double[y.length];
         double bestAlpha = alpha, bestBeta = beta, bestMse = Double.POSITIVE_INFINITY;
-        double[] alphas = Double.isNaN(alpha) ? grid(method == ForecastMethod.SES ? 0.01 : 0.05,
-                method == ForecastMethod.SES ? 1.0 : 0.5, method == ForecastMethod.TSB ? 0.05 : 0.01) : new double[]{alpha};
+        double[] alphas = !Double.isNaN(alpha) ? new double[]{alpha}
+                : method == ForecastMethod.SES ? SES_ALPHAS : method == ForecastMethod.TSB ? TSB_GRID : CROSTON_ALPHAS;
         double[] betas = !method.usesBeta() ? new double[]{Double.NaN}
-                : Double.isNaN(beta) ? grid(0.05, 0.5, 0.05) : new double[]{beta};
+                : Double.isNaN(beta) ? TSB_GRID : new double[]{beta};
         for (double a : alphas) {
             for (double b : betas) {
-                run(y, method, a, b, work);
-                double mse = Smoothing.meanSquaredError(y, work);
+                double mse = Smoothing.oneStepMse(y, method, a, b);
                 // Strictly better only: ties keep the smaller constant, the smoother forecast.
                 if (mse < bestMse - 1e-12) {
                     bestMse = mse;
