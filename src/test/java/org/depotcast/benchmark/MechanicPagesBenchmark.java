@@ -68,7 +68,7 @@ class MechanicPagesBenchmark extends BrowserSession {
         long pageBytes = firstLoadBytes();
         long kept = keptBytes();
         long total = pageBytes + kept;
-        Figures.report(String.format(Locale.ROOT, "mechanic page first load (empty cache, mechanic3 with 125 pumps): %.1f KB "
+        Figures.report(String.format(Locale.ROOT, "mechanic page first load (empty cache, demo mechanic3): %.1f KB "
                 + "page, modules and data + %.1f KB kept by the service worker = %.1f KB (budget 300 KB); ready in %.0f ms",
                 pageBytes / 1024.0, kept / 1024.0, total / 1024.0, firstMs));
         assertTrue(total <= 300 * 1024, "first load moved " + total + " bytes");
