@@ -174,6 +174,10 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         String heading = driver.findElement(By.tagName("h1")).getText();
         assertTrue(heading.contains("DEP-PELLOWDENE") && !heading.contains(DEPOT), heading);
         assertTrue(driver.findElements(By.id("store")).isEmpty(), "one store: no store picker");
+        // The store asked for in the address is not theirs: the page says so in words instead of silently showing another.
+        assertEquals(DEPOT + " is not one of your stores, so Pellowdene Flats district depot (DEP-PELLOWDENE) is shown. "
+                + "If you need " + DEPOT + ", ask the programme's administrator to assign it to your account.",
+                driver.findElement(By.id("store-not-yours")).getText());
         List<String> api = as("officer2").get(url("/api/planning/alerts?location=DEP-PELLOWDENE")).then().statusCode(200)
                 .extract().jsonPath().getList("partNumber", String.class);
         assertFalse(api.isEmpty());

@@ -88,6 +88,11 @@ export async function startOfficer({page, title}) {
     if (!store) {
         head.append(h('p', {class: 'message'}, 'No store is assigned to your account yet. Ask an administrator to assign your depot.'));
     }
+    const asked = new URLSearchParams(location.search).get('location');
+    if (asked && store && asked !== store.code) {
+        head.append(h('p', {class: 'message', id: 'store-not-yours'}, `${asked} is not one of your stores, so ${storeName(store)} `
+            + `is shown. If you need ${asked}, ask the programme's administrator to assign it to your account.`));
+    }
     const parts = new Map(partList.map(p => [p.partNumber, p]));
     return {me, stores, store, parts, run};
 }
