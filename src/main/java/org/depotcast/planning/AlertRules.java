@@ -46,9 +46,12 @@ final class AlertRules {
                                            List<ReorderAlert.WaitingPump> waiting, StockPolicy breakdownsOnly) {
         if (p.onHand() <= 0 && !waiting.isEmpty()) {
             ReorderAlert.WaitingPump longest = waiting.get(0);
-            reasons.add(new ReorderAlert.Reason(AlertKind.OUT_WITH_PUMPS_WAITING, String.format(Locale.ROOT,
-                    "none on hand; %d pump(s) broken and waiting for this part, the longest (%s, repair %s) for %d days",
-                    waiting.size(), longest.assetId(), longest.repairRef(), longest.daysWaiting())));
+            String days = longest.daysWaiting() == 1 ? "1 day" : longest.daysWaiting() + " days";
+            reasons.add(new ReorderAlert.Reason(AlertKind.OUT_WITH_PUMPS_WAITING, waiting.size() == 1
+                    ? String.format(Locale.ROOT, "none on hand; 1 pump broken and waiting for this part (%s, repair %s) for %s",
+                    longest.assetId(), longest.repairRef(), days)
+                    : String.format(Locale.ROOT, "none on hand; %d pumps broken and waiting for this part, the longest (%s, "
+                    + "repair %s) for %s", waiting.size(), longest.assetId(), longest.repairRef(), days)));
         }
         if (p.dailyDemand() > 0 && p.position() <= p.reorderPoint()) {
             if (breakdownsOnly != null && breakdownsOnly.position() > breakdownsOnly.reorderPoint()) {

@@ -36,6 +36,17 @@ class AlertRulesTest {
         assertEquals(2, alert.pumpsWaiting());
         assertEquals("OB-1", alert.waitingPumps().get(0).assetId());
         assertTrue(alert.detail().contains("R-1") && alert.detail().contains("9 days"));
+        assertEquals("none on hand; 2 pumps broken and waiting for this part, the longest (OB-1, repair R-1) for 9 days",
+                alert.reasons().get(0).detail());
+    }
+
+    @Test
+    void oneWaitingPumpIsSaidInPlainWords() {
+        // Was "1 pump(s) broken and waiting for this part, the longest (...) for 1 days".
+        ReorderAlert alert = AlertRules.raise(policy("DEPOT", 0.5, 6, 0, 4.0, "SBA"),
+                List.of(new ReorderAlert.WaitingPump("OB-7", 1, "R-7")), null);
+        assertEquals("none on hand; 1 pump broken and waiting for this part (OB-7, repair R-7) for 1 day",
+                alert.reasons().get(0).detail());
     }
 
     @Test
