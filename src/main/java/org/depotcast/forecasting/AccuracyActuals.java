@@ -41,11 +41,14 @@ final class AccuracyActuals {
                 f.yearVariance != null ? f.yearVariance : summed);
     }
 
-    /** Units replaced in [from, to), per series key. */
+    /**
+     * Units replaced in [from, to) for repairs reported from {@code from} on, per series key: a repair open on the
+     * origin is in the history the forecast was made from ({@link FleetSnapshot.Consumption#arisingBetween}).
+     */
     static Map<String, Double> totals(FleetSnapshot snapshot, LocalDate from, LocalDate to) {
         Map<String, Double> totals = new TreeMap<>();
         forEachUse(snapshot, (c, key) -> {
-            if (!c.day().isBefore(from) && c.day().isBefore(to)) {
+            if (c.arisingBetween(from, to) != null) {
                 totals.merge(key, c.quantity(), Double::sum);
             }
         });
@@ -62,10 +65,12 @@ final class AccuracyActuals {
             histories.put(key(s.partNumber(), s.location()),
                     new double[(int) Math.max(0, ChronoUnit.MONTHS.between(start, origin))]);
         }
+        // As a run on the origin read the records: a repair open then is dated by its report.
         forEachUse(snapshot, (c, key) -> {
             LocalDate start = starts.get(key);
-            if (start != null && !c.day().isBefore(start) && c.day().isBefore(origin)) {
-                histories.get(key)[(int) ChronoUnit.MONTHS.between(start, c.day().withDayOfMonth(1))] += c.quantity();
+            FleetSnapshot.Consumption known = c.asKnownOn(origin);
+            if (start != null && known != null && !known.day().isBefore(start)) {
+                histories.get(key)[(int) ChronoUnit.MONTHS.between(start, known.day().withDayOfMonth(1))] += c.quantity();
             }
         });
         return histories;
@@ -93,8 +98,9 @@ final class AccuracyActuals {
             }
         }
         List<String> notes = new ArrayList<>();
-        notes.add("Demand is every part replaced, at breakdowns and at scheduled services, by the repair records' date "
-                + "(the fix, else the report).");
+        notes.add("Demand is every part replaced, at breakdowns and at scheduled services, for the repairs reported in "
+                + "the 12 months. A repair still open on the origin is left out: the forecast counted it as history, "
+                + "and planning shows its pump as waiting for parts.");
         notes.add("Ranges: the service's are the ranges its stored forecast states for the 12-month total; the "
                 + "last-12-month mean's and Croston's come from the larger of their mean and in-sample squared error, "
                 + "months taken as independent.");

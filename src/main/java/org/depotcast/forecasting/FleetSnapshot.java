@@ -92,5 +92,16 @@ public record FleetSnapshot(LocalDate historyStart, LocalDate historyEnd, List<P
                     ? new Consumption(partId, pumpId, depotId, mechanic, breakdown, reportedOn, quantity, reportedOn)
                     : null;
         }
+
+        /**
+         * The line as a held-out window [{@code from}, {@code to}) counts it: as a run on {@code to} reads it (dated by
+         * its fix, or by its report while still open then), and null when it was reported before {@code from}, since
+         * a run on {@code from} already counted it in its history ({@link #asKnownOn}), or on or after {@code to}.
+         * Scored this way every repair is counted once, on one side of the origin: counted by fix date, a repair open
+         * on the origin would be history to the forecast and an outcome to its scoring.
+         */
+        Consumption arisingBetween(LocalDate from, LocalDate to) {
+            return reportedOn.isBefore(from) ? null : asKnownOn(to);
+        }
     }
 }

@@ -13,6 +13,7 @@ import java.util.Map;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** The as-of cut (nothing dated on or after the origin is used) and each series' real start. */
@@ -131,6 +132,28 @@ class ForecastOriginTest {
             assertArrayEquals(e.monthly(), a.monthly(), 1e-12);
             assertArrayEquals(e.history(), a.history(), 1e-12);
         }
+    }
+
+    @Test
+    void aHeldOutWindowCountsEachRepairOnceOnOneSideOfTheOrigin() {
+        LocalDate end = ORIGIN.plusYears(1);
+        // Open on the origin: history to a run made then, so no outcome of the window after it.
+        assertNull(new FleetSnapshot.Consumption(CUP_SEAL, 2, TESHVALE, "m1", true, ORIGIN.plusDays(20), 4,
+                ORIGIN.minusDays(10)).arisingBetween(ORIGIN, end));
+        // Reported and fixed inside the window: as it is.
+        FleetSnapshot.Consumption inside = new FleetSnapshot.Consumption(CUP_SEAL, 2, TESHVALE, "m1", true,
+                ORIGIN.plusDays(30), 4, ORIGIN);
+        assertEquals(inside, inside.arisingBetween(ORIGIN, end));
+        // Reported in the window's last days and fixed after it: open at its end, dated by its report.
+        assertEquals(end.minusDays(3), new FleetSnapshot.Consumption(O_RING, 3, MARROWFORD, "m2", true, end.plusDays(9),
+                1, end.minusDays(3)).arisingBetween(ORIGIN, end).day());
+        // Reported on the window's end: the next window's.
+        assertNull(new FleetSnapshot.Consumption(O_RING, 3, MARROWFORD, "m2", true, end, 1, end).arisingBetween(ORIGIN, end));
+        // Chained windows count every repair exactly once.
+        FleetSnapshot.Consumption straddling = new FleetSnapshot.Consumption(CUP_SEAL, 2, TESHVALE, "m1", true,
+                end.plusDays(5), 4, end.minusDays(5));
+        assertEquals(1, (straddling.arisingBetween(ORIGIN, end) == null ? 0 : 1)
+                + (straddling.arisingBetween(end, end.plusYears(1)) == null ? 0 : 1));
     }
 
     @Test

@@ -138,8 +138,9 @@ class HeldOutYearTest {
 
         // What happened in the held-out year, and what the planted rates expected of the pumps known at the cut.
         Map<String, Double> actual = new TreeMap<>(), planted = new TreeMap<>();
-        for (FleetSnapshot.Consumption c : p.rows.consumption()) {
-            if (c.breakdown() && !c.day().isBefore(ORIGIN) && c.day().isBefore(ORIGIN.plusYears(1))) {
+        for (FleetSnapshot.Consumption line : p.rows.consumption()) {
+            FleetSnapshot.Consumption c = line.arisingBetween(ORIGIN, ORIGIN.plusYears(1));
+            if (c != null && c.breakdown()) {
                 actual.merge(c.partId() + "|" + p.rows.locationCodes().get(c.depotId()), c.quantity(), Double::sum);
             }
         }

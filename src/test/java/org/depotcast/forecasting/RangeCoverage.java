@@ -60,8 +60,9 @@ final class RangeCoverage {
 
     static Table score(Map<String, PartForecastResult> forecasts, FleetSnapshotLoader.Rows rows, LocalDate origin) {
         Map<String, double[]> actual = new HashMap<>();
-        for (FleetSnapshot.Consumption c : rows.consumption()) {
-            long m = ChronoUnit.MONTHS.between(origin, c.day().withDayOfMonth(1));
+        for (FleetSnapshot.Consumption line : rows.consumption()) {
+            FleetSnapshot.Consumption c = line.arisingBetween(origin, origin.plusMonths(12));
+            long m = c == null ? -1 : ChronoUnit.MONTHS.between(origin, c.day().withDayOfMonth(1));
             if (m < 0 || m >= 12) {
                 continue;
             }
