@@ -14,6 +14,7 @@ import java.util.Map;
 
 import static org.depotcast.TestData.as;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -62,6 +63,9 @@ class LeadJourneyBrowserTest extends BrowserSession {
         String method = api.getString("forecast.method");
         String chosenBox = driver.findElement(By.cssSelector("#explorer .method-box")).getText();
         assertTrue(chosenBox.contains("How the method was chosen") && chosenBox.contains("RMSSE"), chosenBox);
+        // The rate's reason in words, not the stored figures ("credibility 0.000 for 1928.0 units" before).
+        assertTrue(chosenBox.contains("FLEET".equals(method) ? "The forecast uses the fleet model" : "The forecast uses the part's own history"), chosenBox);
+        assertFalse(chosenBox.matches("(?s).*credibility \\d.*") || chosenBox.contains("fleet model x"), chosenBox);
         if (!"FLEET".equals(method)) {
             assertTrue(driver.findElements(By.xpath("//div[@class='method-box']//td[@data-label='In use'][normalize-space()='used']")).size() == 1);
         }

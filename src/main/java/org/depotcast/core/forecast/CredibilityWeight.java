@@ -1,6 +1,7 @@
 package org.depotcast.core.forecast;
 
 import java.time.LocalDate;
+import java.time.format.TextStyle;
 import java.util.Locale;
 
 /**
@@ -46,12 +47,27 @@ public record CredibilityWeight(double ratio, double credibility, double ratioVa
         return weights;
     }
 
-    /** In words, for the forecast's method detail; {@code from} is the series' first month. */
+    /**
+     * In words, for the forecast's method detail (shown to the programme lead after "the forecast uses the fleet
+     * model: "); {@code from} is the series' first month.
+     */
     public String describe(LocalDate from) {
         if (Double.isNaN(expected)) {
             return "fleet model";
         }
-        return String.format(Locale.ROOT, "fleet model x %.3f: credibility %.3f for %.1f units seen against %.1f "
-                + "expected since %s", ratio, credibility, observed, expected, from);
+        String since = from.getMonth().getDisplayName(TextStyle.FULL, Locale.ENGLISH) + " " + from.getYear();
+        if (credibility == 0) {
+            return String.format(Locale.ROOT, "its rate as it is, since the %s units used here from %s are within "
+                    + "chance of the %s it expected", units(observed), since, units(expected));
+        }
+        return String.format(Locale.ROOT, "its rate × %.2f, because %s units were used here from %s where it expected "
+                + "%s; this place's own history carries %.0f %% of the weight", ratio, units(observed), since,
+                units(expected), 100 * credibility);
+    }
+
+    /** Whole units without decimals, others to one; thousands separated. */
+    private static String units(double value) {
+        return Math.rint(value) == value ? String.format(Locale.ROOT, "%,.0f", value)
+                : String.format(Locale.ROOT, "%,.1f", value);
     }
 }

@@ -69,8 +69,10 @@ function howChosen(view) {
     const holdText = hold.fleetRmsse === null || hold.fleetRmsse === undefined
         ? 'No fleet model covers this part here, so its own history is used.'
         : `Over the last 12 months held out, the fleet model scored RMSSE ${fmt.num(hold.fleetRmsse, 3)} and the part's own history `
-          + `RMSSE ${fmt.num(hold.historyRmsse, 3)} (lower is better). The forecast uses the ${hold.chosen}`
-          + (f.methodDetail ? `: ${f.methodDetail}` : '.');
+          + `RMSSE ${fmt.num(hold.historyRmsse, 3)} (lower is better). `
+          + (hold.chosen === 'fleet model'
+              ? 'The forecast uses the fleet model' + (f.methodDetail && f.methodDetail !== 'fleet model' ? `: ${f.methodDetail}.` : '.')
+              : `The forecast uses the part's own history (${methodWords(f.method)}).`);
     return h('div', {class: 'method-box'},
         h('h3', {}, 'How the method was chosen'),
         h('p', {}, 'Used: ', h('strong', {}, methodWords(f.method)),

@@ -25,9 +25,9 @@ class CredibilityWeightTest {
             assertEquals(o[i], w[i].observed(), 0.0);
         }
         assertTrue(w[0].ratio() > 1 && w[1].ratio() < 1);
-        assertEquals(String.format(java.util.Locale.ROOT, "fleet model x %.3f: credibility %.3f for 30.0 units seen "
-                + "against 10.0 expected since 2023-06-01", w[0].ratio(), w[0].credibility()),
-                w[0].describe(LocalDate.of(2023, 6, 1)));
+        assertEquals(String.format(java.util.Locale.ROOT, "its rate × %.2f, because 30 units were used here from June "
+                + "2023 where it expected 10; this place's own history carries %.0f %% of the weight", w[0].ratio(),
+                100 * w[0].credibility()), w[0].describe(LocalDate.of(2023, 6, 1)));
     }
 
     @Test
@@ -40,6 +40,8 @@ class CredibilityWeightTest {
             assertEquals(0, weight.ratioVariance(), 0.0);
         }
         assertEquals("fleet model", CredibilityWeight.FLEET_ONLY.describe(LocalDate.of(2023, 6, 1)));
+        assertEquals("its rate as it is, since the 1,928 units used here from December 2020 are within chance of the "
+                + "1,903.5 it expected", new CredibilityWeight(1, 0, 0, 1928, 1903.5).describe(LocalDate.of(2020, 12, 1)));
         assertThrows(IllegalArgumentException.class, () -> new CredibilityWeight(-1, 0, 0, 1, 1));
     }
 }

@@ -57,7 +57,8 @@ class DemandChoiceTest {
         assertEquals(3.494, r.variancePerMonth(), 1e-12);
         assertEquals(3.494 + 0.25, r.monthlyVariance()[0], 1e-12);
         assertEquals(10.8375, r.yearVariance(), 1e-12);
-        assertEquals("fleet model x 1.500: credibility 0.400 for 9.0 units seen against 6.0 expected since 2024-01-01",
+        assertEquals("its rate × 1.50, because 9 units were used here from January 2024 where it expected 6; this "
+                + "place's own history carries 40 % of the weight",
                 r.weight().describe(LocalDate.of(2024, 1, 1)));
     }
 
