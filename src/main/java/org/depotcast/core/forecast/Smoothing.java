@@ -17,33 +17,25 @@ public final class Smoothing {
      */
     public static double croston(double[] y, double alpha, ForecastMethod variant, double[] fitted) {
         Series.requireSmoothing("alpha", alpha);
-        double factor = switch (variant) {
+        double factor = crostonFactor(variant, alpha);
+        CrostonLevels levels = new CrostonLevels(alpha);
+        for (int t = 0; t < y.length; t++) {
+            if (fitted != null) {
+                fitted[t] = levels.forecast(factor);
+            }
+            levels.observe(y[t]);
+        }
+        double last = levels.forecast(factor);
+        return Double.isNaN(last) ? 0.0 : last;
+    }
+
+    private static double crostonFactor(ForecastMethod variant, double alpha) {
+        return switch (variant) {
             case CROSTON -> 1.0;
             case SBA -> 1.0 - alpha / 2.0;
             case SBJ -> 1.0 - alpha / (2.0 - alpha);
             default -> throw new IllegalArgumentException("variant must be CROSTON, SBA or SBJ, was " + variant);
         };
-        double z = 0, p = 0;
-        boolean started = false;
-        int sinceLast = 0;
-        for (int t = 0; t < y.length; t++) {
-            if (fitted != null) {
-                fitted[t] = started ? factor * z / p : Double.NaN;
-            }
-            sinceLast++;
-            if (y[t] > 0) {
-                if (!started) {
-                    z = y[t];
-                    p = sinceLast;
-                    started = true;
-                } else {
-                    z += alpha * (y[t] - z);
-                    p += alpha * (sinceLast - p);
-                }
-                sinceLast = 0;
-            }
-        }
-        return started ? factor * z / p : 0.0;
     }
 
     /** How TSB's demand-probability estimate starts. */
@@ -153,30 +145,18 @@ public final class Smoothing {
 
     private static double crostonMse(double[] y, double alpha, ForecastMethod variant) {
         Series.requireSmoothing("alpha", alpha);
-        double factor = variant == ForecastMethod.CROSTON ? 1.0
-                : variant == ForecastMethod.SBA ? 1.0 - alpha / 2.0 : 1.0 - alpha / (2.0 - alpha);
-        double z = 0, p = 0, sse = 0;
-        boolean started = false;
-        int sinceLast = 0, n = 0;
-        for (int t = 0; t < y.length; t++) {
-            double f = started ? factor * z / p : Double.NaN;
+        double factor = crostonFactor(variant, alpha);
+        CrostonLevels levels = new CrostonLevels(alpha);
+        double sse = 0;
+        int n = 0;
+        for (double v : y) {
+            double f = levels.forecast(factor);
             if (!Double.isNaN(f)) {
-                double e = y[t] - f;
+                double e = v - f;
                 sse += e * e;
                 n++;
             }
-            sinceLast++;
-            if (y[t] > 0) {
-                if (!started) {
-                    z = y[t];
-                    p = sinceLast;
-                    started = true;
-                } else {
-                    z += alpha * (y[t] - z);
-                    p += alpha * (sinceLast - p);
-                }
-                sinceLast = 0;
-            }
+            levels.observe(v);
         }
         return n == 0 ? Double.NaN : sse / n;
     }
