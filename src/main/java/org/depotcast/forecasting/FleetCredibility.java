@@ -18,8 +18,6 @@ import java.util.function.Function;
  * estimate of how far true rates stray from the fleet model's.
  */
 final class FleetCredibility {
-    private static final double DAYS_PER_YEAR = 365.25;
-
     private final FleetSnapshot snapshot;
     private final Map<ComponentFamily, FleetRateModel> models;
     private final long[] monthStart;
@@ -42,20 +40,21 @@ final class FleetCredibility {
     Map<ComponentFamily, double[]> expectedOf(FleetSnapshot.PumpRecord pump) {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
         int months = monthStart.length - 1;
-        Exposure exposure = null;
+        PumpExposure exposure = null;
         for (FleetSnapshot.BomPart part : pump.bom()) {
             FleetRateModel model = models.get(part.family());
             if (model == null || byFamily.containsKey(part.family())) {
                 continue;
             }
             if (exposure == null) {
-                exposure = exposure(pump);
+                // As the fit: no exposure before the first repair on record.
+                exposure = PumpExposure.of(pump, monthStart, snapshot.recordsStartDay());
             }
             double[] units = new double[months];
             for (int m = 0; m < months; m++) {
-                if (exposure.days[m] > 0) {
-                    units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), exposure.ageYears[m],
-                            exposure.hours[m], exposure.days[m]);
+                if (exposure.days()[m] > 0) {
+                    units[m] = model.expectedUnits(pump.depotId(), pump.depthM(), exposure.ageYears()[m],
+                            exposure.hours()[m], exposure.days()[m]);
                 }
             }
             byFamily.put(part.family(), units);
@@ -79,26 +78,6 @@ final class FleetCredibility {
                 }
             }
         }
-    }
-
-    /** A pump's days in service, operating hours and mid-month age in each history month: the same for every family. */
-    private record Exposure(long[] days, double[] hours, double[] ageYears) {
-    }
-
-    private Exposure exposure(FleetSnapshot.PumpRecord pump) {
-        int months = monthStart.length - 1;
-        Exposure exposure = new Exposure(new long[months], new double[months], new double[months]);
-        for (int m = 0; m < months; m++) {
-            // As the fit: no exposure before the first repair on record.
-            long from = Math.max(Math.max(monthStart[m], pump.installedDay()), snapshot.recordsStartDay());
-            long to = Math.min(monthStart[m + 1], pump.endDay());
-            if (to > from) {
-                exposure.days[m] = to - from;
-                exposure.hours[m] = pump.usage().hoursBetween(from, to);
-                exposure.ageYears[m] = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-            }
-        }
-        return exposure;
     }
 
     /**

@@ -13,7 +13,6 @@ import java.util.Map;
  */
 final class HoldoutExpectation {
     private static final int MONTHS = DemandChoice.HOLDOUT_MONTHS;
-    private static final double DAYS_PER_YEAR = 365.25;
 
     private final Map<ComponentFamily, FleetRateModel> models;
     private final long[] monthStart = new long[MONTHS + 1];
@@ -28,19 +27,20 @@ final class HoldoutExpectation {
     /** Expected breakdown units per held-out month, by family of the pump's parts: depends on the pump alone. */
     Map<ComponentFamily, double[]> expectedOf(FleetSnapshot.PumpRecord pump) {
         Map<ComponentFamily, double[]> byFamily = new EnumMap<>(ComponentFamily.class);
+        PumpExposure exposure = null;
         for (FleetSnapshot.BomPart part : pump.bom()) {
             FleetRateModel model = models.get(part.family());
             if (model == null || byFamily.containsKey(part.family())) {
                 continue;
             }
+            if (exposure == null) {
+                exposure = PumpExposure.of(pump, monthStart, Long.MIN_VALUE);
+            }
             double[] expected = new double[MONTHS];
             for (int m = 0; m < MONTHS; m++) {
-                long from = Math.max(monthStart[m], pump.installedDay());
-                long to = Math.min(monthStart[m + 1], pump.endDay());
-                double hours = pump.usage().hoursBetween(from, to);
-                if (hours > 0) {
-                    double age = ((from + to) / 2.0 - pump.installedDay()) / DAYS_PER_YEAR;
-                    expected[m] = model.expectedUnits(pump.depotId(), pump.depthM(), age, hours, to - from);
+                if (exposure.hours()[m] > 0) {
+                    expected[m] = model.expectedUnits(pump.depotId(), pump.depthM(), exposure.ageYears()[m],
+                            exposure.hours()[m], exposure.days()[m]);
                 }
             }
             byFamily.put(part.family(), expected);
