@@ -19,9 +19,9 @@ import java.util.Optional;
 /**
  * Each pump's breakdowns per operating hour as the latest finished forecast run's fleet models give them, for the
  * stop check's prior chance that a breakdown starts on a given day: the sum over the component families of the
- * family's rate for the pump's depth, age and daily load, times its depot's ratio where the run kept one (as
- * {@link ProbablyDownService#familyRates} reads them for the parts). With no finished run, no pump has a rate and the
- * detector keeps its flat prior.
+ * family's rate for the pump's depth, age and daily load, times its depot's ratio where the run kept one
+ * ({@link FleetRateModel#ratePerHourAtDepot}, which {@link ProbablyDownService#familyRates} reads for the parts too).
+ * With no finished run, no pump has a rate and the detector keeps its flat prior.
  */
 @ApplicationScoped
 class BreakdownHazards {
@@ -57,7 +57,7 @@ class BreakdownHazards {
         double hoursPerDay = pump.usageHoursPerDay().doubleValue();
         double sum = 0;
         for (FleetRateModel model : models.values()) {
-            sum += model.ratePerHour(depthM, ageYears, hoursPerDay) * model.depotRatio(pump.depotId());
+            sum += model.ratePerHourAtDepot(pump.depotId(), depthM, ageYears, hoursPerDay);
         }
         return sum;
     }

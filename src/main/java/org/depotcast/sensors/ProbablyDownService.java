@@ -129,7 +129,7 @@ public class ProbablyDownService {
         double hoursPerDay = flag.baselineHours.doubleValue();
         List<StoppedPumpParts.FamilyRate> rates = new ArrayList<>();
         models.forEach((family, model) -> rates.add(new StoppedPumpParts.FamilyRate(family.name(),
-                model.ratePerHour(depthM, ageYears, hoursPerDay) * model.depotRatio(pump.depotId()),
+                model.ratePerHourAtDepot(pump.depotId(), depthM, ageYears, hoursPerDay),
                 model.unitsPerEvent())));
         return rates;
     }

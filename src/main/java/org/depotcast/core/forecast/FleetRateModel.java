@@ -70,6 +70,11 @@ public record FleetRateModel(List<RateCovariate> covariates, PoissonFit fit, dou
         return depotRatios.getOrDefault(depotId, 1.0);
     }
 
+    /** Breakdowns per operating hour of one pump at its depot: the profile's rate times the depot's ratio. */
+    public double ratePerHourAtDepot(long depotId, double depthM, double ageYears, double hoursPerDay) {
+        return ratePerHour(depthM, ageYears, hoursPerDay) * depotRatio(depotId);
+    }
+
     /** Expected breakdown units in each of a pump's coming months, its depot's ratio applied. */
     public double[] expectedUnits(long depotId, double depthM, PumpMonths months) {
         double[] units = new double[months.months()];

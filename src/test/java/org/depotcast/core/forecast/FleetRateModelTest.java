@@ -38,6 +38,15 @@ class FleetRateModelTest {
     }
 
     @Test
+    void aPumpsRateAtItsDepotCarriesTheDepotsRatio() {
+        // Depot 7 breaks down 1.5 times as often as the fleet; depot 8 has no ratio kept, so the fleet's rate stands.
+        FleetRateModel model = twoDepths(Map.of(7L, 1.5));
+        assertEquals(0.0015, model.ratePerHourAtDepot(7, 30, 4, 5), 1e-12);
+        assertEquals(0.003, model.ratePerHourAtDepot(7, 60, 4, 5), 1e-12);
+        assertEquals(0.002, model.ratePerHourAtDepot(8, 60, 4, 5), 1e-12);
+    }
+
+    @Test
     void logRateStandardErrorByTheDeltaMethod() {
         FleetRateModel model = twoDepths(Map.of());
         assertEquals(1 / Math.sqrt(10), model.logRateStandardError(model.covariateValues(30, 0, 5)), 1e-6);
