@@ -3,6 +3,7 @@ package org.depotcast.requests;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.access.AccessScope;
+import org.depotcast.core.stats.SampleQuantile;
 import org.depotcast.repairs.PartsWaitService;
 import org.depotcast.stock.LocationSummary;
 import org.depotcast.stock.LocationKind;
@@ -57,14 +58,9 @@ public class RequestReportService {
             Map<String, Long> now = waitingNow.getOrDefault(depot.code(), Map.of());
             out.add(new RequestDtos.DepotReport(depot.code(), hours.length,
                     hours.length == 0 ? null : java.util.Arrays.stream(hours).average().orElse(0),
-                    hours.length == 0 ? null : median(hours), wait[0], wait[1], now.size(),
+                    hours.length == 0 ? null : SampleQuantile.median(hours), wait[0], wait[1], now.size(),
                     now.values().stream().mapToLong(Long::longValue).sum()));
         }
         return out;
-    }
-
-    private static double median(double[] sorted) {
-        int n = sorted.length;
-        return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
     }
 }

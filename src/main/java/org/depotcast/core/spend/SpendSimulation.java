@@ -1,5 +1,7 @@
 package org.depotcast.core.spend;
 
+import org.depotcast.core.stats.SampleQuantile;
+
 import java.util.Arrays;
 import java.util.SplittableRandom;
 
@@ -127,16 +129,10 @@ public final class SpendSimulation {
             int n = sorted.length;
             double mean = sum / n;
             double sd = Math.sqrt(Math.max(0, (sumSq - n * mean * mean) / (n - 1)));
-            return new Summary(mean, quantile(sorted, 0.025), quantile(sorted, 0.10), quantile(sorted, 0.5),
-                    quantile(sorted, 0.90), quantile(sorted, 0.975), sd / Math.sqrt(n));
+            return new Summary(mean, SampleQuantile.of(sorted, 0.025), SampleQuantile.of(sorted, 0.10),
+                    SampleQuantile.median(sorted), SampleQuantile.of(sorted, 0.90), SampleQuantile.of(sorted, 0.975),
+                    sd / Math.sqrt(n));
         }
 
-        /** Type-7 sample quantile (linear interpolation, R's default). */
-        static double quantile(double[] sorted, double p) {
-            double h = (sorted.length - 1) * p;
-            int lo = (int) Math.floor(h);
-            int hi = Math.min(sorted.length - 1, lo + 1);
-            return sorted[lo] + (h - lo) * (sorted[hi] - sorted[lo]);
-        }
     }
 }
