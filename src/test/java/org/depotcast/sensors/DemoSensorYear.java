@@ -106,6 +106,21 @@ final class DemoSensorYear {
     /** @param leastProbability the probability a flag opens at (the service's {@link StopFlagService#LEAST_PROBABILITY}) */
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule,
                                  double leastProbability) throws IOException {
+        return replay(seed, delay, leaveOutRecorded, rule, leastProbability, null);
+    }
+
+    /**
+     * The service's rule with each pump's breakdowns per operating hour given by asset id (a forecast's fitted models,
+     * as {@link BreakdownHazards} reads them) instead of the planted rates.
+     */
+    static List<PumpYear> replayWithRates(long seed, DemoSensorSeries.ReportDelay delay,
+                                          Map<String, Double> ratesByAsset) throws IOException {
+        return replay(seed, delay, true, Rule.POOLED, StopFlagService.LEAST_PROBABILITY, ratesByAsset);
+    }
+
+    private static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded,
+                                         Rule rule, double leastProbability, Map<String, Double> ratesByAsset)
+            throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
         List<CSVRecord> planted = csv("planted-rates.csv");
@@ -125,8 +140,9 @@ final class DemoSensorYear {
                 marks.add(new Planted(index(series.stoppedFrom().get(i)), index(s.reportedOn()),
                         s.fixedOn() == null ? DAYS : index(s.fixedOn())));
             }
-            pumps.add(new SensorPump(asset, series.hours(), marks, plantedRate(planted,
-                    Double.parseDouble(pump.get("depth_m")), LocalDate.parse(pump.get("installed_on")))));
+            double perHour = ratesByAsset != null ? ratesByAsset.get(asset) : plantedRate(planted,
+                    Double.parseDouble(pump.get("depth_m")), LocalDate.parse(pump.get("installed_on")));
+            pumps.add(new SensorPump(asset, series.hours(), marks, perHour));
         }
         StopDetector detector = new StopDetector(rule.settings);
         IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);

@@ -171,7 +171,7 @@ class StopDetectionEvidenceTest {
      * {planted judged, median delay, share before report, false alarms per 1,000 pump-months, pump-months, share
      * before report of those reported 2+ days after the stop, how many those are}.
      */
-    private static double[] statistics(List<DemoSensorYear.PumpYear> year) {
+    static double[] statistics(List<DemoSensorYear.PumpYear> year) {
         int window = StopSettings.DEFAULT.windowDays();
         List<Integer> delays = new ArrayList<>();
         int planted = 0, beforeReport = 0, falseAlarms = 0, laterReported = 0, laterBeforeReport = 0;
