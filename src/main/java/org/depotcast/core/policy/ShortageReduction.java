@@ -14,7 +14,8 @@ public final class ShortageReduction {
 
     /**
      * @param demand         demand over the protection period
-     * @param position       inventory position before the units arrive (on hand + on order − committed)
+     * @param position       inventory position before the units arrive (on hand + on order − committed; may be
+     *                       below 0)
      * @param units          units added (≥ 0)
      * @param protectionDays lead time + review period the position must cover (&gt; 0)
      */
@@ -25,9 +26,15 @@ public final class ShortageReduction {
         if (!(protectionDays > 0)) {
             throw new IllegalArgumentException("protectionDays must be > 0, was " + protectionDays);
         }
-        double from = Math.max(0, position);
-        double to = Math.max(0, position + units);
-        return Math.max(0, demand.expectedShortfall(from) - demand.expectedShortfall(to)) * protectionDays / 2;
+        return Math.max(0, loss(demand, position) - loss(demand, position + units)) * protectionDays / 2;
+    }
+
+    /**
+     * G(x) = E(D − x)⁺, which for x ≤ 0 is m − x exactly (D ≥ 0): a position below zero (units committed beyond stock)
+     * is that many units short before any demand, so the units that bring it back to 0 each remove a whole unit.
+     */
+    private static double loss(DemandDistribution demand, double x) {
+        return x < 0 ? demand.mean() - x : demand.expectedShortfall(x);
     }
 
     /**

@@ -31,6 +31,19 @@ class ShortageReductionTest {
     }
 
     @Test
+    void unitsCommittedBeyondStockAreWorthAWholeUnitShortEach() {
+        // Two units approved for mechanics and none on hand or on order: position −2. G(x) = E(D − x)⁺ = m − x for
+        // x ≤ 0, so G(−2) = 6 and G(−1) = 5 for Poisson 4: the first unit removes a whole unit short, 1 × 21/2.
+        PoissonDemand demand = new PoissonDemand(4);
+        assertEquals(10.5, ShortageReduction.pumpDaysAvoided(demand, -2, 1, 21), 1e-9);
+        assertEquals((2 + 4 - (2 + 6 * Math.exp(-4))) * 10.5, ShortageReduction.pumpDaysAvoided(demand, -2, 4, 21),
+                1e-9);
+        // The rods of the slow mover, two committed: the two that fill them, then the three worth it from 0.
+        PoissonDemand rods = new PoissonDemand(1.26);
+        assertEquals(5, ShortageReduction.worthwhileUnits(rods, -2, 23, 21, 0.5));
+    }
+
+    @Test
     void brokenContractsNameTheArgument() {
         PoissonDemand demand = new PoissonDemand(1);
         assertEquals("units must be ≥ 0, was -1.0",
