@@ -15,6 +15,8 @@ import jakarta.persistence.OptimisticLockException;
 import jakarta.validation.ConstraintViolation;
 import jakarta.validation.ConstraintViolationException;
 import jakarta.ws.rs.WebApplicationException;
+import jakarta.ws.rs.core.HttpHeaders;
+import jakarta.ws.rs.core.MediaType;
 import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
 import org.hibernate.StaleObjectStateException;
@@ -143,11 +145,15 @@ public class ProblemMapper {
     }
 
     @ServerExceptionMapper
-    public Response web(WebApplicationException e, UriInfo uri) {
+    public Response web(WebApplicationException e, UriInfo uri, HttpHeaders headers) {
         if (e.getCause() instanceof JsonProcessingException json) {
             return unreadableJson(json, uri);
         }
         int status = e.getResponse().getStatus();
+        if (status == 404 && PageNotFound.answers(uri, headers)) {
+            return Response.status(404).type(MediaType.TEXT_HTML_TYPE.withCharset("UTF-8"))
+                    .header("Cache-Control", "no-store").entity(PageNotFound.html(uri.getPath())).build();
+        }
         if (status >= 500) {
             return unexpected(e, uri);
         }
