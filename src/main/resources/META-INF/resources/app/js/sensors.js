@@ -1,6 +1,7 @@
 /*
  * sensors.js: words the officer's and the mechanic's pages share about pump sensors.
  *   stopCaution()            the plain caution beside every list of pumps probably down
+ *   downWords(pump)          "Probably down (87 % likely)"; never "100 %": a flag is a judgement, not a fact
  *   fellWords(pump)          "Use fell on 11 Oct 2026, 3 days ago"
  *   repairWords(pump)        whether a repair is open on a flagged pump, in words
  *   dueWords(row, today)     a service-due row's date in words: overdue, due today, or due on a day
@@ -14,6 +15,12 @@ export function stopCaution() {
         + 'stand idle. Ask the community or the area mechanic before sending anyone, and treat the parts as an '
         + 'estimate of what a repair is likely to need, not a diagnosis. Repairs follow trained, licensed practice and '
         + 'local rules.');
+}
+
+export function downWords(pump) {
+    const p = Number(pump.probabilityDown);
+    // 0.9998 rounds to "100 %", which reads as certain beside the caution that it is not known.
+    return `Probably down (${p >= 0.995 ? 'over 99 %' : fmt.percent(p, 0)} likely)`;
 }
 
 export function fellWords(pump) {

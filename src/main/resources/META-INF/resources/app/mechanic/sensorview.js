@@ -9,7 +9,7 @@
  */
 import * as fmt from '/app/js/format.js';
 import {h, state} from '/app/js/ui.js';
-import {stopCaution, fellWords, repairWords, dueWords, hoursWords} from '/app/js/sensors.js';
+import {stopCaution, downWords, fellWords, repairWords, dueWords, hoursWords} from '/app/js/sensors.js';
 
 const HORIZON_DAYS = 90;
 
@@ -60,7 +60,7 @@ export function sensorCounts(snapshot) {
 function downCard(p, act) {
     return h('li', {class: 'pump card', 'data-asset': p.assetId},
         h('h4', {}, p.assetId),
-        h('p', {}, state(`Probably down (${fmt.percent(p.probabilityDown, 0)} likely)`, 'urgent')),
+        h('p', {}, state(downWords(p), 'urgent')),
         h('p', {class: 'hint'}, `${fellWords(p)}; about ${fmt.num(p.baselineHoursPerDay, 1)} h a day before.`),
         h('p', {class: 'hint'}, repairWords(p)),
         p.openRepairRef ? null : h('button', {type: 'button', onclick: () => act('status', p.assetId, 'BROKEN')},

@@ -7,7 +7,7 @@
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
 import {h, mount, table, state, figures, caution} from '/app/js/ui.js';
-import {stopCaution, fellWords, repairWords, dueWords, hoursWords} from '/app/js/sensors.js';
+import {stopCaution, downWords, fellWords, repairWords, dueWords, hoursWords} from '/app/js/sensors.js';
 import {startOfficer, describe, ready} from './officer.js';
 
 const {store, parts, run} = await startOfficer({page: 'sensors', title: 'Pump sensors'});
@@ -30,7 +30,7 @@ function downTable(down) {
         id: 'down-pumps', rows: down.pumps, empty: 'No pump at this store looks stopped: every sensor shows use, or a '
             + 'repair is already reported.', columns: [
             {label: 'Pump', value: p => h('strong', {}, p.assetId)},
-            {label: 'State', value: p => state(`Probably down (${fmt.percent(p.probabilityDown, 0)} likely)`, 'urgent')},
+            {label: 'State', value: p => state(downWords(p), 'urgent')},
             {label: 'Use fell', value: p => fellWords(p)},
             {label: 'Usual use', value: p => `${fmt.num(p.baselineHoursPerDay, 1)} h a day before`, num: true},
             {label: 'Repair', value: p => repairWords(p)},
