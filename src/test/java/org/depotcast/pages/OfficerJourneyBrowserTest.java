@@ -90,6 +90,23 @@ class OfficerJourneyBrowserTest extends BrowserSession {
             assertTrue(shown.matches("\\d{1,3}(,\\d{3})*\\.\\d"), "one decimal: " + shown);
             assertEquals(apiDays.get(i).doubleValue(), Double.parseDouble(shown.replace(",", "")), 0.05, shown);
         }
+        // The demand over the protection period in words ("Lead-time demand" before), a small average with its
+        // decimal (0.3 showed as "0" beside a reorder point of 2).
+        Map<String, Map<String, Object>> policies = new java.util.HashMap<>();
+        as("officer").get(url("/api/planning/policies?location=" + DEPOT)).jsonPath().<Map<String, Object>>getList("$")
+                .forEach(p -> policies.put((String) p.get("partNumber"), p));
+        List<WebElement> use = driver.findElements(By.cssSelector("#alerts tbody tr.alert-row td[data-label='Expected use']"));
+        assertEquals(api.size(), use.size());
+        for (int i = 0; i < use.size(); i++) {
+            Map<String, Object> policy = policies.get(api.get(i));
+            if (policy == null) {
+                continue;
+            }
+            double mean = ((Number) policy.get("demandMean")).doubleValue();
+            String[] lines = use.get(i).getText().split("\n");
+            assertEquals(mean, Double.parseDouble(lines[0].replace(",", "")), mean < 10 ? 0.051 : 0.51, use.get(i).getText());
+            assertEquals("over the next " + ((Number) policy.get("protectionDays")).intValue() + " days", lines[1]);
+        }
         String summary = driver.findElement(By.cssSelector(".board-summary")).getText();
         assertTrue(summary.matches("(?s).*Expected pump-days without water\\n\\d{1,3}(,\\d{3})*\\.\\d\\n.*"), summary);
         screenshot("officer-board-desk");

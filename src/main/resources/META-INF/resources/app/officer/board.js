@@ -88,8 +88,11 @@ function alertTable(alerts, policyOf, suggestions) {
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
             {label: 'Reorder point', value: r => n(r.a.reorderPoint, r.a.partNumber), num: true},
             {label: 'Order up to', value: r => n(r.a.orderUpTo, r.a.partNumber), num: true},
-            {label: 'Lead-time demand', value: r => r.policy
-                ? h('span', {}, n(r.policy.demandMean, r.a.partNumber), h('span', {class: 'hint'}, `in ${fmt.num(r.policy.protectionDays)} days`))
+            // The demand the reorder point covers, in the officer's words; an average, so a small one keeps a decimal
+            // (0.3 showed as "0" beside a reorder point of 2).
+            {label: 'Expected use', value: r => r.policy
+                ? h('span', {}, fmt.num(r.policy.demandMean, r.policy.demandMean < 10 ? 1 : 0),
+                    h('span', {class: 'hint'}, `over the next ${fmt.num(r.policy.protectionDays)} days`))
                 : '–', num: true},
             {label: 'Pumps waiting', value: r => pumps(r.a)},
             {label: 'Actions', value: r => actions(r.a, r.policy, suggestions.filter(s => s.partNumber === r.a.partNumber))}
