@@ -2,7 +2,7 @@
  * chart.js: SVG charts drawn by our own code, each with labelled axes (with units), a legend in words and the
  * same numbers as a table beside it (below it on a phone and in print). No canvas: SVG prints crisply.
  *   lineChart({title, x, xLabel, yLabel, series, bands, marker, format})
- *       x: category labels (months, years); series: [{name, values, dashed?}]; values may hold null for gaps;
+ *       x: category labels (months, years); series: [{name, values, dashed?, dotted?}]; values may hold null for gaps;
  *       bands: [{name, lower, upper, level: 95|80}] drawn under the lines (95 % lighter, 80 % darker);
  *       marker: {at: index, label} a dashed vertical line (e.g. "forecast starts")
  *   fanChart(opts)   lineChart with a central series and its nested 80 % / 95 % ranges (yearly spend)
@@ -21,6 +21,10 @@ const SVG = 'http://www.w3.org/2000/svg';
 const W = 640, H = 320, M = {left: 70, right: 16, top: 14, bottom: 52};
 const INK = ['#1d5f7a', '#8a2b12', '#3d6b2a', '#5b4a8a'];
 let counter = 0;
+// A line's style says which it is without its colour: solid, dashed or dotted.
+const DASHES = {dashed: '6 4', dotted: '2 3'};
+const STYLE_WORDS = {line: 'solid line', dashed: 'dashed line', dotted: 'dotted line'};
+const styleOf = r => (r.dotted ? 'dotted' : r.dashed ? 'dashed' : 'line');
 
 function s(tag, attrs = {}, ...children) {
     const el = document.createElementNS(SVG, tag);
@@ -79,7 +83,7 @@ function swatch(kind, i, hatchId) {
         : kind === 'band80' ? s('rect', {x: 0, y: 0, width: 24, height: 12, fill: '#1d5f7a', 'fill-opacity': .35})
         : kind === 'dot' ? s('circle', {cx: 12, cy: 6, r: 4, fill: color, 'fill-opacity': .6, stroke: color})
         : kind === 'bar' ? s('rect', {x: 0, y: 0, width: 24, height: 12, fill: i % 2 ? `url(#${hatchId})` : color, stroke: color})
-        : s('line', {x1: 0, x2: 24, y1: 6, y2: 6, stroke: color, 'stroke-width': 3, 'stroke-dasharray': kind === 'dashed' ? '6 4' : null});
+        : s('line', {x1: 0, x2: 24, y1: 6, y2: 6, stroke: color, 'stroke-width': 3, 'stroke-dasharray': DASHES[kind] || null});
     return s('svg', {viewBox: '0 0 24 12', 'aria-hidden': 'true'}, body, kind === 'bar' ? hatch(hatchId) : null);
 }
 
@@ -113,12 +117,12 @@ export function lineChart({title, x, xLabel, yLabel, series = [], bands = [], ma
     const gap = v => v === null || v === undefined;
     const lines = series.map((r, k) => s('path', {
         d: r.values.map((v, i) => gap(v) ? '' : `${i === 0 || gap(r.values[i - 1]) ? 'M' : 'L'}${px(i)},${f.y(v)}`).join(''),
-        fill: 'none', stroke: INK[k % INK.length], 'stroke-width': 2.5, 'stroke-dasharray': r.dashed ? '7 4' : null}));
+        fill: 'none', stroke: INK[k % INK.length], 'stroke-width': 2.5, 'stroke-dasharray': r.dotted ? '2 4' : r.dashed ? '7 4' : null}));
     const xTicks = x.map((label, i) => i % f.every === 0 ? s('text', {x: px(i), y: M.top + f.innerH + 16, 'text-anchor': 'middle', class: 'chart-axis'}, label) : null);
     const mark = marker ? s('g', {}, s('line', {x1: px(marker.at), x2: px(marker.at), y1: M.top, y2: M.top + f.innerH, stroke: '#555', 'stroke-dasharray': '3 3'}),
         s('text', {x: px(marker.at) + 4, y: M.top + 12, class: 'chart-axis'}, marker.label)) : null;
     const svg = svgFor(title, [f.g, areas, lines, xTicks, mark]);
-    const legendItems = [...series.map((r, k) => [r.dashed ? 'dashed' : 'line', k, `${r.name} (${r.dashed ? 'dashed line' : 'solid line'})`]),
+    const legendItems = [...series.map((r, k) => [styleOf(r), k, `${r.name} (${STYLE_WORDS[styleOf(r)]})`]),
         ...sorted.map(b => [b.level >= 95 ? 'band95' : 'band80', 0, `${b.name} (${b.level >= 95 ? 'lighter' : 'darker'} band)`])];
     const columns = [...series.map(r => ({label: r.name, values: r.values})),
         ...sorted.flatMap(b => [{label: `${b.name}: low`, values: b.lower}, {label: `${b.name}: high`, values: b.upper}])];

@@ -55,8 +55,11 @@ function chart(view, yearsShown) {
     return lineChart({
         title: `${view.partNumber} at ${view.location === 'PROGRAMME' ? 'the whole programme' : view.location}: used each month and forecast`,
         x, xLabel: 'Month', yLabel: `Units a month (${unit})`, format: num1,
-        series: [{name: 'Used (repairs)', values: [...history.map(m => m.quantity), ...pad(f.forecast.length)]},
-            {name: 'Forecast, expected', dashed: true, values: [...pad(nh), ...view.ranges.map(r => r.mean)]}],
+        // The history is what breakdown repairs used; the forecast adds the scheduled services. Its breakdown part is
+        // drawn too, so the step at the forecast's start is not read as demand jumping.
+        series: [{name: 'Used in breakdown repairs', values: [...history.map(m => m.quantity), ...pad(f.forecast.length)]},
+            {name: 'Forecast, breakdowns and services', dashed: true, values: [...pad(nh), ...view.ranges.map(r => r.mean)]},
+            {name: 'Forecast, breakdowns only', dotted: true, values: [...pad(nh), ...f.forecast.map(m => m.breakdown)]}],
         bands: [{name: '95 % range', level: 95, lower: [...pad(nh), ...view.ranges.map(r => r.low95)], upper: [...pad(nh), ...view.ranges.map(r => r.high95)]},
             {name: '80 % range', level: 80, lower: [...pad(nh), ...view.ranges.map(r => r.low80)], upper: [...pad(nh), ...view.ranges.map(r => r.high80)]}],
         marker: {at: nh, label: 'forecast starts'}
@@ -119,6 +122,9 @@ async function showPart(push = true) {
             ['Months between demands (ADI)', fmt.num(f.adi, 2)]
         ]),
         chart(view, Number(document.getElementById('years').value)),
+        f.forecast.length && f.forecast[0].preventive > 0 ? h('p', {class: 'hint', id: 'history-note'}, 'The solid line counts '
+            + `the parts breakdown repairs used; the forecast adds the scheduled services: next month ${fmt.num(f.forecast[0].preventive, 1)} `
+            + `of the ${fmt.num(f.forecast[0].total, 1)} expected are for services.`) : null,
         howChosen(view));
     ready();
 }
