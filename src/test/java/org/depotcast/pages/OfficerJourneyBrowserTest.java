@@ -127,6 +127,20 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         String method = top.getString("[0].forecastMethod");
         assertTrue(details.contains("Forecast method\n" + methodWords(method)), details);
         assertTrue(details.matches("(?s).*Demand a day\n[0-9.,]+ (pieces|sets|pairs|lengths|m|kg|L)\n.*"), details);
+        // Acknowledging redraws the board: the row says so in words and keeps only its details button (the
+        // missing Acknowledge button was written as the word "null").
+        String acknowledged = ackRow.getDomAttribute("data-part");
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", ackRow.findElement(By.cssSelector("button.ack")));
+        ackRow.findElement(By.cssSelector("button.ack")).click();
+        wait(Duration.ofSeconds(20)).until(d -> d.findElement(By.id("status")).getText()
+                .contains("Alert for " + acknowledged + " acknowledged until the next review"));
+        WebElement done = driver.findElement(By.cssSelector("#alerts tr.alert-row[data-part='" + acknowledged + "']"));
+        assertTrue(done.findElement(By.cssSelector("td[data-label=Why]")).getText().contains("Acknowledged"), done.getText());
+        String actions = done.findElement(By.cssSelector("td[data-label=Actions]")).getText();
+        assertTrue(actions.startsWith("Details, snooze, transfer, buy"), actions);
+        assertFalse(actions.contains("null") || actions.contains("Acknowledge"), actions);
+        driver.findElement(By.cssSelector("#status .message button")).click();
+        driver.executeScript("window.scrollTo(0, 0)");
 
         driver.findElement(By.linkText("Requests")).click();
         waitReady();

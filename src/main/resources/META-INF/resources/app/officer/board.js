@@ -133,7 +133,8 @@ function actions(alert, policy, suggestions) {
             mount(details, detailsOf(alert, policy, suggestions));
         }
     });
-    box.append(alert.acknowledged ? null : ack, more);
+    // append() writes a null as the word "null": an acknowledged alert keeps only its details button.
+    box.append(...(alert.acknowledged ? [more] : [ack, more]));
     return box;
 }
 
