@@ -90,6 +90,8 @@ class LeadJourneyBrowserTest extends BrowserSession {
         driver.findElement(By.cssSelector("#explore-form button[type=submit]")).click();
         steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#explorer h3")).getText().startsWith("OB-OR-SET"));
         assertEquals(List.of("sets", "sets", "sets"), unitWords());
+        String axis = driver.findElement(By.cssSelector("#explorer figure.chart svg")).getText();
+        assertTrue(axis.contains("Units a month (sets)"), axis);
     }
 
     private static String oneDecimal(double value) {

@@ -51,7 +51,8 @@ function chart(view, yearsShown) {
     const x = [...history.map(m => monthLabel(m.month)), ...f.forecast.map(m => monthLabel(m.month))];
     const pad = n => Array(n).fill(null);
     const nh = history.length;
-    const unit = fmt.wholeUnits(view.unitOfIssue) ? 'pieces' : (view.unitOfIssue || '').toLowerCase();
+    // The part's own unit word: a part counted in sets said "pieces" on the axis beside "sets" in the figures.
+    const unit = unitWord(view.unitOfIssue) || (view.unitOfIssue || 'units').toLowerCase();
     return lineChart({
         title: `${view.partNumber} at ${view.location === 'PROGRAMME' ? 'the whole programme' : view.location}: used each month and forecast`,
         x, xLabel: 'Month', yLabel: `Units a month (${unit})`, format: num1,
