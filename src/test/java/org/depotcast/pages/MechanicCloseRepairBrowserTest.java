@@ -12,6 +12,7 @@ import java.util.Map;
 
 import static org.depotcast.TestData.as;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
@@ -84,6 +85,11 @@ class MechanicCloseRepairBrowserTest extends MechanicPhoneSession {
                 .until(d -> d.findElement(By.cssSelector(".outbox__item--refused .outbox__message")).getText());
         assertTrue(message.startsWith("Fixed on: is already recorded as ") && !message.contains(yesterday), "in the phone's own date words: " + message);
         screenshot("mechanic-close-refused");
+        // The heading counts it in words, and the kit no longer counts its parts as on their way out of the kit.
+        assertEquals("Waiting to send: nothing, 1 refused by the server", driver.findElement(By.id("outbox-title")).getText());
+        String kitRow = driver.findElements(By.cssSelector("#kit-table tbody tr")).stream()
+                .map(tr -> tr.getDomProperty("textContent")).filter(t -> t.startsWith(sealPart)).findFirst().orElseThrow();
+        assertFalse(kitRow.contains("in repairs waiting to send"), kitRow);
         assertEquals(0, new BigDecimal("3").compareTo(stock.onHand(sealPart, kit)), "taken once, by the officer's closing");
         String repairs = url("/api/repairs/" + ref);
         assertNoPageErrors("HTTP 409 PATCH " + repairs, repairs + " - Failed to load resource: the server responded with a status of 409");

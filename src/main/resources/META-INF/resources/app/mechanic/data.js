@@ -67,7 +67,8 @@ export function coming(snapshot, waiting) {
 /** Parts that waiting (unsent) fixed repairs and closings will take out of the kit. */
 export function waitingUse(waiting) {
     const byPart = new Map();
-    for (const item of waiting.filter(i => (i.kind === 'repair' || i.kind === 'close') && i.body.fixedOn)) {
+    // A refused repair took nothing from the kit: only those still waiting to send count.
+    for (const item of waiting.filter(i => i.state !== 'refused' && (i.kind === 'repair' || i.kind === 'close') && i.body.fixedOn)) {
         (item.body.lines || []).forEach(l => byPart.set(l.partNumber, (byPart.get(l.partNumber) || 0) + Number(l.quantity)));
     }
     return byPart;

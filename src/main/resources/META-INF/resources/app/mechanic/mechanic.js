@@ -129,7 +129,8 @@ async function drawOutbox() {
     mount(el('outbox-body'), outboxView(outbox, discard));
     const waiting = outbox.filter(i => i.state === 'waiting').length;
     const refused = outbox.length - waiting;
-    heading('outbox', `Waiting to send: ${outbox.length ? `${waiting}${refused ? `, and ${refused} refused` : ''}` : 'nothing'}`);
+    // "Waiting to send: 0, and 1 refused" before.
+    heading('outbox', `Waiting to send: ${waiting || 'nothing'}${refused ? `, ${refused} refused by the server` : ''}`);
     if (refused) {
         openSection('outbox');
     }
