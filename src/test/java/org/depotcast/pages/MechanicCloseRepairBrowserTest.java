@@ -47,6 +47,11 @@ class MechanicCloseRepairBrowserTest extends MechanicPhoneSession {
         openPageOnPhone();
         assertTrue(driver.findElement(By.id("pump-" + pump)).getText().contains("Broken since"));
         offline(true);
+        // Where work on a pump is written down, the safety words are there too, not only folded at the page's foot.
+        for (String form : List.of("#repair-form", "#close-form")) {
+            String words = driver.findElement(By.cssSelector(form + " .repair-caution")).getDomProperty("textContent");
+            assertTrue(words.startsWith("Safety:") && words.contains("touch drinking water") && words.contains("disinfection"), words);
+        }
         closeOnThePhone(ref);
         waitOutbox(1);
         assertTrue(driver.findElement(By.cssSelector("li[data-repair='" + ref + "']")).getText()

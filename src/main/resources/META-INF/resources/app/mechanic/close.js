@@ -6,7 +6,7 @@
  */
 import * as fmt from '/app/js/format.js';
 import {h, clearErrors} from '/app/js/ui.js';
-import {field, partLines, checkLines, refuse, describeKit, kitShortfall} from './forms.js';
+import {field, partLines, checkLines, refuse, describeKit, kitShortfall, repairCaution} from './forms.js';
 
 function repairWords(r) {
     return `${r.assetId}: ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'} reported ${fmt.date(r.reportedOn)}`
@@ -32,6 +32,7 @@ export function closeForm(snapshot, queue, waiting) {
         lines.box,
         h('p', {class: 'hint'}, 'Closing takes these parts out of your kit when it reaches the server, and the pump counts as '
             + 'working again unless another breakdown of it is still open.'),
+        repairCaution(),
         h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Close this repair as fixed')));
     const shortfall = kitShortfall(snapshot, waiting, form, lines, () => true);
     lines.box.after(shortfall.note);

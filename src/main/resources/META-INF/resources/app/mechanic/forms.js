@@ -72,6 +72,16 @@ export function checkLines(lines, required) {
     return errors;
 }
 
+/**
+ * Beside the forms that record work on a pump: the safety words the page's foot holds, where the work is written
+ * down. depotcast plans parts and does not say how to repair; these are the rules the repair itself falls under.
+ */
+export function repairCaution() {
+    return h('p', {class: 'message repair-caution'}, h('strong', {}, 'Safety: '), 'parts that touch drinking water (seals, '
+        + 'pipes, grease) and any substitute must be approved for that use here. After a repair that opens the rising main, '
+        + 'the water authority\'s disinfection and testing rules apply before people drink from the pump.');
+}
+
 export function refuse(form, errors) {
     showError({errors, detail: 'Check the marked fields; nothing was saved.'}, form);
     return false;
@@ -158,6 +168,7 @@ export function repairForm(snapshot, queue, waiting) {
             field('Fixed on', date('fixedOn', today), 'leave empty while the pump waits')),
         lines.box,
         h('p', {class: 'hint'}, 'A fixed repair takes its parts out of your kit when it reaches the server.'),
+        repairCaution(),
         h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Record this repair')));
     const shortfall = kitShortfall(snapshot, waiting, form, lines, () => Boolean(form.elements.fixedOn.value));
     lines.box.after(shortfall.note);
