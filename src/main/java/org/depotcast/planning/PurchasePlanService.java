@@ -74,7 +74,7 @@ public class PurchasePlanService {
         for (StockPolicy p : priced) {
             int step = step(p);
             items.add(new MarginalAllocation.Item(PolicyCalculator.distribution(p.demandMean(), p.demandVariance()),
-                    Math.max(0, p.position()), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0, wanted(p)));
+                    p.position(), step, step * p.unitCost() + 1e-9, p.protectionDays() / 2.0, wanted(p)));
         }
         MarginalAllocation.Plan allocation = MarginalAllocation.allocate(items, budget.doubleValue());
         PurchasePlan plan = new PurchasePlan();

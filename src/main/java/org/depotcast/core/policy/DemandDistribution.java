@@ -18,7 +18,10 @@ public sealed interface DemandDistribution permits PoissonDemand, NegativeBinomi
     /** The smallest whole (discrete) or real (normal) s with P(D ≤ s) ≥ p, for p in (0, 1). */
     double quantile(double p);
 
-    /** First-order loss G(x) = E[(D − x)+], expected units short when x are on hand. */
+    /**
+     * First-order loss G(x) = E[(D − x)+], expected units short when x are on hand; m − x for x below 0 (units owed
+     * beyond stock).
+     */
     double expectedShortfall(double x);
 
     /**

@@ -60,7 +60,8 @@ public record NegativeBinomialDemand(double mean, double variance) implements De
     public double expectedShortfall(double x) {
         int s = (int) Math.min(Integer.MAX_VALUE - 1L, (long) Math.floor(x));
         if (s <= 0) {
-            return mean - Math.max(0, x);
+            // D ≥ 0: below zero (units owed beyond stock) every one of them is short as well as all the demand.
+            return mean - x;
         }
         double q = 1 - successProbability(), r = size();
         double meanAbove = mean * Beta.regularizedBeta(q, s, r + 1);

@@ -49,7 +49,8 @@ public record PoissonDemand(double mean) implements DemandDistribution {
     @Override
     public double expectedShortfall(double x) {
         if (x <= 0) {
-            return mean - Math.max(0, x);
+            // D ≥ 0: below zero (units owed beyond stock) every one of them is short as well as all the demand.
+            return mean - x;
         }
         int s = (int) Math.min(Integer.MAX_VALUE - 1L, (long) Math.floor(x));
         return Math.max(0, (mean - s) * (1 - cdf(s)) + mean * pmf(s));

@@ -26,15 +26,9 @@ public final class ShortageReduction {
         if (!(protectionDays > 0)) {
             throw new IllegalArgumentException("protectionDays must be > 0, was " + protectionDays);
         }
-        return Math.max(0, loss(demand, position) - loss(demand, position + units)) * protectionDays / 2;
-    }
-
-    /**
-     * G(x) = E(D − x)⁺, which for x ≤ 0 is m − x exactly (D ≥ 0): a position below zero (units committed beyond stock)
-     * is that many units short before any demand, so the units that bring it back to 0 each remove a whole unit.
-     */
-    private static double loss(DemandDistribution demand, double x) {
-        return x < 0 ? demand.mean() - x : demand.expectedShortfall(x);
+        // Below zero G(x) = m − x: the units that bring a position owed beyond stock back to 0 each remove a whole unit.
+        return Math.max(0, demand.expectedShortfall(position) - demand.expectedShortfall(position + units))
+                * protectionDays / 2;
     }
 
     /**

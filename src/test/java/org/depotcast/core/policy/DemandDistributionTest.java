@@ -30,6 +30,14 @@ class DemandDistributionTest {
     }
 
     @Test
+    void lossBelowZeroCountsTheUnitsAlreadyOwed() {
+        // D ≥ 0, so for x ≤ 0 G(x) = E(D − x)⁺ = m − x: a position of −2 is two units short before any demand.
+        assertEquals(6.0, new PoissonDemand(4).expectedShortfall(-2), 1e-12);
+        assertEquals(7.0, new NegativeBinomialDemand(4, 8).expectedShortfall(-3), 1e-12);
+        assertEquals(4.0, new NegativeBinomialDemand(4, 8).expectedShortfall(0), 1e-12);
+    }
+
+    @Test
     void poissonAgreesWithCommonsMathEverywhere() {
         for (double m : new double[]{0.2, 1.7, 6.0, 25.0}) {
             PoissonDistribution reference = new PoissonDistribution(m);

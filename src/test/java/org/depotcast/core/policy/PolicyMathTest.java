@@ -77,6 +77,20 @@ class PolicyMathTest {
     }
 
     @Test
+    void unitsOwedToPumpsAreBoughtFirst() {
+        // B: two units committed beyond stock (position −2), pipeline Poisson 0.8, cost 10; A: position 0, Poisson 3.0,
+        // cost 2. B's owed units each remove a whole backorder (G(−2) − G(−1) = 1), 0.1 per unit of money, which comes
+        // before A's fifth unit (P(X > 4)/2 = 0.092). Budget 28: A four times (0.475, 0.400, 0.288, 0.176), then B, B.
+        List<MarginalAllocation.Item> items = List.of(
+                new MarginalAllocation.Item(new PoissonDemand(3.0), 0, 1, 2, 1, Long.MAX_VALUE),
+                new MarginalAllocation.Item(new PoissonDemand(0.8), -2, 1, 10, 1, 4));
+        MarginalAllocation.Plan plan = MarginalAllocation.allocate(items, 28);
+        assertEquals(4, plan.unitsPerItem()[0]);
+        assertEquals(2, plan.unitsPerItem()[1]);
+        assertEquals(3.0 + 2.8, plan.backordersBefore(), 1e-9);
+    }
+
+    @Test
     void transportationProblemWithAKnownOptimum() {
         // Surplus A 5, B 3; deficit C 4, D 3; costs A→C 2, A→D 5, B→C 4, B→D 1 → A→C 4, B→D 3, cost 11 (hand-solved).
         List<TransferPlanner.Move> moves = TransferPlanner.plan(new long[]{5, 3}, new long[]{4, 3},
