@@ -88,7 +88,8 @@ class SensorResource {
     @Path("stop-check")
     @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
     public StopCheckResult stopCheck(@QueryParam("day") String day) {
-        LocalDate asOf = QueryParams.optionalDate("day", day);
+        // The day judged is a day the readings are in: as an event's date, at most a day ahead (422 beyond).
+        LocalDate asOf = DateBounds.requireEvent("day", QueryParams.optionalDate("day", day));
         LocalDate judged = asOf == null ? DateBounds.today() : asOf;
         return new StopCheckResult(judged, stopFlags.refreshAll(judged));
     }

@@ -136,6 +136,10 @@ class StopFlagTest {
         as("officer").queryParam("day", "31/12/2026").post("/api/sensors/stop-check").then().statusCode(403);
         as("lead").queryParam("day", "31/12/2026").post("/api/sensors/stop-check").then().statusCode(400)
                 .body("errors[0].field", equalTo("day"));
+        // Judged as of a day not yet come, the days to it would read as a transmission gap or a stop.
+        String ahead = java.time.LocalDate.now(java.time.ZoneOffset.UTC).plusDays(5).toString();
+        as("lead").queryParam("day", ahead).post("/api/sensors/stop-check").then().statusCode(422)
+                .contentType("application/problem+json").body("type", equalTo("/problems/dated-in-future"));
     }
 
     @Test
