@@ -7,6 +7,7 @@ import jakarta.persistence.LockTimeoutException;
 import jakarta.persistence.PessimisticLockException;
 import org.depotcast.access.CurrentUser;
 import org.depotcast.common.ConflictException;
+import org.depotcast.common.ExclusiveLock;
 import org.eclipse.microprofile.context.ManagedExecutor;
 import io.smallrye.context.api.ManagedExecutorConfig;
 import org.eclipse.microprofile.context.ThreadContext;
@@ -27,14 +28,14 @@ public class JobRunner {
     private final JobWorker worker;
     private final JobInstance instance;
     private final CurrentUser currentUser;
-    private final JobStartLock startLock;
+    private final ExclusiveLock startLock;
     private final Clock clock;
 
     @Inject
     @ManagedExecutorConfig(propagated = {}, cleared = ThreadContext.ALL_REMAINING)
     ManagedExecutor executor;
 
-    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser, JobStartLock startLock,
+    JobRunner(JobRepository jobs, JobWorker worker, JobInstance instance, CurrentUser currentUser, ExclusiveLock startLock,
               Clock clock) {
         this.jobs = jobs;
         this.worker = worker;
@@ -61,7 +62,7 @@ public class JobRunner {
         try {
             return QuarkusTransaction.requiringNew().call(() -> {
                 OffsetDateTime now = OffsetDateTime.now(clock);
-                startLock.take(kind, now);
+                startLock.take(kind.name(), now);
                 if (jobs.anyRunning(kind)) {
                     throw new ConflictException(null, "one " + kind.words() + " at a time: another is already in progress");
                 }

@@ -8,11 +8,14 @@ import jakarta.persistence.EntityManager;
 import org.depotcast.access.AccessScope;
 import org.depotcast.access.AuditService;
 import org.depotcast.common.DateBounds;
+import org.depotcast.common.ExclusiveLock;
 import org.depotcast.fleet.PumpService;
 
 import java.io.InputStream;
 import java.sql.SQLException;
+import java.time.Clock;
 import java.time.LocalDate;
+import java.time.OffsetDateTime;
 import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.LinkedHashMap;
@@ -40,7 +43,15 @@ public class SensorIntakeService {
     static final int REFUSED_LISTED = 1_000;
     private static final int TRANSACTION_TIMEOUT_SECONDS = 3_600;
 
+    /**
+     * The database lock a file's transaction holds: a file's pump-months are read, merged and rewritten whole, so two
+     * instances sharing a database must not take files at once (the later write would drop the other's days).
+     */
+    static final String INTAKE_LOCK = "SENSOR_INTAKE";
+
     private final ReentrantLock oneFileAtATime = new ReentrantLock(true);
+    private final ExclusiveLock acrossInstances;
+    private final Clock clock;
     private final SensorReadingStore store;
     private final PumpService pumps;
     private final AccessScope scope;
@@ -52,7 +63,9 @@ public class SensorIntakeService {
 
     SensorIntakeService(SensorReadingStore store, PumpService pumps, AccessScope scope, AuditService audit,
                         SensorConversionService conversions, ObjectMapper json, StopFlagService stopFlags,
-                        EntityManager session) {
+                        EntityManager session, ExclusiveLock acrossInstances, Clock clock) {
+        this.acrossInstances = acrossInstances;
+        this.clock = clock;
         this.session = session;
         this.stopFlags = stopFlags;
         this.json = json;
@@ -90,6 +103,7 @@ public class SensorIntakeService {
     }
 
     private Tally run(Consumer<Consumer<RawReading>> reader) {
+        acrossInstances.take(INTAKE_LOCK, OffsetDateTime.now(clock));
         PumpIndex index = PumpIndex.of(pumps.intakeRows(), scope.current());
         ReadingCheck check = new ReadingCheck(index, conversions.factorsByModel(), DateBounds.latestEvent());
         Tally tally = new Tally();
