@@ -25,4 +25,11 @@ public record StockPolicy(String partNumber, String locationCode, String level, 
                           double onHand, double onOrder, double committed, double position, double expectedShortUnits,
                           double pumpDaysAtRisk, String forecastMethod, Integer shelfLifeDays, double unitCost,
                           String currency, int packSize, int minOrderQty, String supplier, String orderUpToRule) {
+    /**
+     * Whole units this location can give another and stay at its reorder point: what is on the shelf less what is
+     * already promised to mechanics (approved, not yet issued), above s. Units on order are not on the shelf to send.
+     */
+    public long spareToGive() {
+        return Math.max(0, (long) Math.floor(onHand - committed - reorderPoint));
+    }
 }

@@ -116,7 +116,7 @@ public class TransferService {
             if (p == null) {
                 continue;
             }
-            long spare = (long) Math.floor(p.onHand() - p.reorderPoint());
+            long spare = p.spareToGive();
             if (spare > 0) {
                 sides.donors().add(depot);
                 sides.surplus().add(spare);

@@ -21,6 +21,16 @@ class AlertRulesTest {
                 10, "Supplier", "reorder point + economic order quantity");
     }
 
+    /** A depot with 10 on the shelf, 6 of them promised to mechanics and s = 3 has 1 to give, not 7. */
+    @Test
+    void unitsPromisedToMechanicsAreNotSpareToGive() {
+        StockPolicy promised = new StockPolicy("P-1", "DEP-A", "DEPOT", true, 0.95, 21, 0.1, 2.1, 2.1, "poisson", 3,
+                10, 13, 10, 4, 6, 8, 0.1, 0.2, "fleet", null, 2.5, "USD", 1, 1, "Supplier", "rule");
+        assertEquals(1, promised.spareToGive());
+        assertEquals(7, policy("DEPOT", 0.1, 3, 10, 0, "fleet").spareToGive());
+        assertEquals(0, policy("DEPOT", 0.1, 3, 2.5, 0, "fleet").spareToGive(), "below s there is nothing to give");
+    }
+
     private static final List<ReorderAlert.WaitingPump> TWO_WAITING = List.of(
             new ReorderAlert.WaitingPump("OB-1", 9, "R-1"), new ReorderAlert.WaitingPump("OB-2", 3, "R-2"));
 
