@@ -6,10 +6,12 @@ import org.depotcast.access.AccessScope;
 import org.depotcast.stock.LocationService;
 import org.depotcast.stock.LocationSummary;
 
+import java.time.LocalDate;
 import java.util.Collection;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.Predicate;
 
 /**
@@ -98,6 +100,13 @@ public class PumpQueryService {
             repository.summariesOf(pumpIds, locations.codesById()).forEach(p -> byId.put(p.id(), p));
         }
         return byId;
+    }
+
+    /** The day the programme's first pump on the register was installed; empty with no pump. */
+    @Transactional
+    public Optional<LocalDate> firstInstalled() {
+        return Optional.ofNullable(repository.getEntityManager()
+                .createQuery("select min(p.installedOn) from Pump p", LocalDate.class).getSingleResult());
     }
 
     /** Every pump, for work the system does for the whole programme, by asset id. */

@@ -39,10 +39,12 @@ public class AccuracyReportService {
     private final CurrentUser currentUser;
     private final ObjectMapper json;
     private final Clock clock;
+    private final PastOrigins pastOrigins;
 
     AccuracyReportService(ForecastRunService forecastRuns, ForecastRepository forecasts, FleetSnapshotLoader loader,
                           JobRunner jobs, JobService jobViews, AccessScope scope, CurrentUser currentUser, ObjectMapper json,
-                          Clock clock) {
+                          Clock clock, PastOrigins pastOrigins) {
+        this.pastOrigins = pastOrigins;
         this.forecastRuns = forecastRuns;
         this.forecasts = forecasts;
         this.loader = loader;
@@ -73,6 +75,7 @@ public class AccuracyReportService {
             throw new InvalidInputException("origin", "must be at least 12 months in the past (at most " + latest
                     + ", so that the 12 months after it are over), was " + origin);
         }
+        pastOrigins.requireHistoryBefore(from, origin);
         long[] ids = create(from);
         jobs.launch(ids[1], progress -> compute(ids[0], from, progress));
         return ids[0];

@@ -46,11 +46,14 @@ public class ForecastRunService {
     private final int historyMonths;
     private final int horizonMonths;
     private final Clock clock;
+    private final PastOrigins pastOrigins;
 
     ForecastRunService(ForecastModelFiles modelFiles, FleetSnapshotLoader loader, ForecastRepository repository,
                        JobRunner jobs, ScheduleClaims claims, SystemWork system, AccessScope scope,
                        @ConfigProperty(name = "depotcast.forecast.history-months") int historyMonths,
-                       @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths, Clock clock) {
+                       @ConfigProperty(name = "depotcast.forecast.horizon-months") int horizonMonths, Clock clock,
+                       PastOrigins pastOrigins) {
+        this.pastOrigins = pastOrigins;
         if (historyMonths < 24) {
             throw new IllegalStateException("depotcast.forecast.history-months must be at least 24, was " + historyMonths);
         }
@@ -98,6 +101,9 @@ public class ForecastRunService {
         if (from.isAfter(current)) {
             throw new org.depotcast.common.InvalidInputException("origin",
                     "must not be after the current month's first day " + current + ", was " + origin);
+        }
+        if (origin != null) {
+            pastOrigins.requireHistoryBefore(from, origin);
         }
         return startExclusive(from.isBefore(current) ? AS_OF_TRIGGER : trigger, from);
     }

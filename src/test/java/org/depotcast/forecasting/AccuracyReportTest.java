@@ -39,6 +39,9 @@ class AccuracyReportTest {
         TestData.as("lead").post(REPORTS).then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("origin"));
         TestData.as("lead").post(REPORTS + "?origin=last-year").then().statusCode(400).contentType(PROBLEM)
                 .body("errors.field", hasItem("origin"));
+        // Before the register's first pump there is nothing to forecast from: refused, not an empty report.
+        TestData.as("lead").post(REPORTS + "?origin=1900-01-01").then().statusCode(400).contentType(PROBLEM)
+                .body("errors.field", hasItem("origin")).body("errors[0].message", containsString("first pump"));
         TestData.as("officer").post(REPORTS + "?origin=2024-01-01").then().statusCode(403);
         TestData.as("mechanic1").get(REPORTS + "/1").then().statusCode(403);
         TestData.as("lead").get(REPORTS + "/987654").then().statusCode(404).contentType(PROBLEM);

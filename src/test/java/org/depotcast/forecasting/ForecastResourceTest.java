@@ -178,5 +178,9 @@ class ForecastResourceTest {
                 .body("type", org.hamcrest.Matchers.endsWith("/invalid-input")).body("errors[0].field", equalTo("origin"));
         as("lead").queryParam("origin", "last-year").post("/api/forecast/runs").then().statusCode(400)
                 .contentType(PROBLEM).body("errors[0].field", equalTo("origin"));
+        // Before the register's first pump (the demo's: 2015) there is no history: refused, not an empty run.
+        as("lead").queryParam("origin", "1900-01-01").post("/api/forecast/runs").then().statusCode(400)
+                .contentType(PROBLEM).body("errors[0].field", equalTo("origin"))
+                .body("errors[0].message", org.hamcrest.Matchers.containsString("first pump"));
     }
 }
