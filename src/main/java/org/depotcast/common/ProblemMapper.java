@@ -99,6 +99,11 @@ public class ProblemMapper {
     }
 
     @ServerExceptionMapper
+    public Response notEnoughStock(NotEnoughStockException e, UriInfo uri) {
+        return respond(422, "not-enough-stock", "Not enough on hand", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
+    }
+
+    @ServerExceptionMapper
     public Response datedInFuture(DatedInFutureException e, UriInfo uri) {
         return respond(422, "dated-in-future", "Dated in the future", e.getMessage(), uri,
                 fieldList(e.field(), e.getMessage()));

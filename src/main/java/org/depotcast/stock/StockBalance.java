@@ -12,6 +12,7 @@ import jakarta.persistence.Table;
 import jakarta.persistence.Version;
 import org.depotcast.common.Bounds;
 import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.NotEnoughStockException;
 
 import java.math.BigDecimal;
 
@@ -45,7 +46,7 @@ public class StockBalance {
 
     void take(BigDecimal quantity, String partNumber, String locationCode) {
         if (onHand.compareTo(quantity) < 0) {
-            throw new BusinessRuleException("quantity", "only " + onHand.stripTrailingZeros().toPlainString() + " of part '"
+            throw new NotEnoughStockException("quantity", "only " + onHand.stripTrailingZeros().toPlainString() + " of part '"
                     + partNumber + "' on hand at '" + locationCode + "', cannot take " + quantity.stripTrailingZeros().toPlainString());
         }
         onHand = onHand.subtract(quantity);

@@ -77,7 +77,7 @@ class StockResourceTest {
         expectProblem(move("TRANSFER", part, depot, "NO-SUCH-DEPOT", 1), 422, "/problems/unknown-reference", "to");
         expectProblem(move("TRANSFER", part, depot, other, -1), 400, "/problems/invalid-input", "quantity");
         expectProblem(move("TRANSFER", part, depot, other, 1.5), 400, "/problems/invalid-input", "quantity");
-        expectProblem(move("TRANSFER", part, depot, other, 3), 422, "/problems/rule-violated", "quantity");
+        expectProblem(move("TRANSFER", part, depot, other, 3), 422, "/problems/not-enough-stock", "quantity");
         expectProblem(move("TRANSFER", part, depot, depot, 1), 422, "/problems/rule-violated", "to");
         expectProblem(move("TRANSFER", part, depot, other, "three"), 400, "/problems/invalid-input", "quantity");
         expectProblem(move("SPIRIT_AWAY", part, depot, other, 1), 400, "/problems/invalid-input", "kind");

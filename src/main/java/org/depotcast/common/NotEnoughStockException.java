@@ -1,0 +1,11 @@
+package org.depotcast.common;
+
+/**
+ * A draw of more than the books show on hand at a location; answered 422 {@code /problems/not-enough-stock}, a
+ * kind of its own so that a client can tell "book the parts first, then send the same again" from other refusals.
+ */
+public class NotEnoughStockException extends BusinessRuleException {
+    public NotEnoughStockException(String field, String message) {
+        super(field, message);
+    }
+}
