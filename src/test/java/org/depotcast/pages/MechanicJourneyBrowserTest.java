@@ -107,7 +107,7 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
         // The outbox list is drawn again as the page refreshes its data: read each text in one step that retries.
         String message = textOf(By.cssSelector(".outbox__item--refused .outbox__message"));
-        assertTrue(message.contains("only 5 of part '" + sealPart + "'") && message.contains("cannot take 9"), message);
+        assertEquals("The books show only 5 of part " + sealPart + " in " + kit + ", and this needs 9.", message);
         assertTrue(textOf(By.id("outbox-count")).contains("1 refused by the server"));
         screenshot("mechanic-refused-action");
 
@@ -118,7 +118,7 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         assertEquals(0, new BigDecimal("5").compareTo(stock.onHand(sealPart, kit)), "nothing left the kit");
 
         // The refusal leaves only when the mechanic discards it.
-        press(".outbox__item--refused button");
+        press(".outbox__item--refused button.outbox__discard");
         wait(Duration.ofSeconds(10)).until(d -> "0".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
         // The one refusal caused on purpose shows in the network events and the browser log; nothing else may fail.
         String repairs = url("/api/repairs");

@@ -7,7 +7,7 @@ import {startPage, topBar} from '/app/js/nav.js';
 import * as fmt from '/app/js/format.js';
 import {h, mount, say, showError, caution} from '/app/js/ui.js';
 import * as store from './store.js';
-import {sendWaiting} from './send.js';
+import {sendWaiting, sendAgain} from './send.js';
 import {fetchSnapshot, kitRows} from './data.js';
 import {kitView, pumpCard, requestsView, outboxView} from './views.js';
 import {askForm, repairForm, statusForm} from './forms.js';
@@ -126,7 +126,7 @@ async function drawOutbox() {
     const all = await store.items();
     outbox = me ? all.filter(i => i.username === me.username) : [];
     othersWaiting = all.filter(i => !me || i.username !== me.username);
-    mount(el('outbox-body'), outboxView(outbox, discard));
+    mount(el('outbox-body'), outboxView(outbox, discard, again, me && me.kitCode));
     const waiting = outbox.filter(i => i.state === 'waiting').length;
     const refused = outbox.length - waiting;
     // "Waiting to send: 0, and 1 refused" before.
@@ -159,6 +159,14 @@ async function discard(item) {
     say(`Discarded: ${item.summary}.`, 'ok');
     await drawOutbox();
     drawData();
+}
+
+async function again(item) {
+    await sendAgain(item);
+    say(navigator.onLine ? `Sending again: ${item.summary}.` : `It will be sent again when the connection returns: ${item.summary}.`, 'ok');
+    await drawOutbox();
+    drawData();
+    await syncAndRefresh(false);
 }
 
 async function syncAndRefresh(announce) {

@@ -3,13 +3,17 @@
  * Lock), so nothing goes twice at once. An item leaves the outbox only when the server has it: a new record (201)
  * or the one it already had under the same reference (200, a resend after a lost answer). A refusal the same
  * action would meet again (400, 403, 404, 409, 422) stays on the phone with the server's words until the user
- * discards it; no connection or a server fault (5xx) leaves the item waiting for the next try.
+ * discards it or sends it again (sendAgain); no connection or a server fault (5xx) leaves the item waiting for the
+ * next try. A refusal for too few parts on the kit's books (/problems/not-enough-stock) is marked `shortage`: the
+ * repair happened, so it waits for the stores officer to book the parts to the kit and is then sent again under the
+ * same reference (the server kept nothing of the refused send, so the resend records it once).
  */
 import * as api from '/app/js/api.js';
 import * as store from './store.js';
 import * as fmt from '/app/js/format.js';
 
 const REFUSALS = new Set([400, 403, 404, 409, 422]);
+const SHORTAGE = '/problems/not-enough-stock';
 
 let sending = null;
 
@@ -26,7 +30,30 @@ function withLock(work) {
     return navigator.locks ? navigator.locks.request('depotcast-mechanic-outbox', work) : work();
 }
 
+/** A refused item back to waiting, as it was queued (same reference and body), for the next send. */
+export function sendAgain(item) {
+    const {status, message, errors, shortage, ...kept} = item;
+    return store.update({...kept, state: 'waiting'});
+}
+
+/** A refusal for too few parts on the kit's books (also one kept on the phone before refusals were marked so). */
+export function isShortage(item) {
+    return item.state === 'refused' && (item.shortage || (item.status === 422 && STOCK_WORDS.test(item.message || '')));
+}
+
+const STOCK_WORDS = /only (\S+) of part '([^']+)' on hand at '([^']+)', cannot take (\S+)/;
+
+/** "only 0 of part 'OB-BR-20' on hand at 'KIT-M03', cannot take 3" in the phone's words, codes without quotes. */
+export function shortageText(detail) {
+    const m = STOCK_WORDS.exec(detail || '');
+    return m ? `The books show only ${m[1]} of part ${m[2]} in ${m[3]}, and this needs ${m[4]}.`
+        : capital(String(detail || '').replace(/'([^']*)'/g, '$1'));
+}
+
 export function refusalText(error) {
+    if (error.type === SHORTAGE) {
+        return shortageText(error.detail);
+    }
     const detail = error.detail || error.title || `The server answered ${error.status}.`;
     const own = (error.errors || []).find(e => e.field && e.message === detail);
     // "is already recorded as …" alone does not say what is: name the field in the form's words.
@@ -68,7 +95,8 @@ async function sendAll(username, onEach) {
                 result.stopped = e;
                 break;
             }
-            await store.update({...item, state: 'refused', status: e.status, message: refusalText(e), errors: e.errors});
+            await store.update({...item, state: 'refused', status: e.status, message: refusalText(e), errors: e.errors,
+                shortage: e.type === SHORTAGE});
             result.refused++;
         }
         if (onEach) {

@@ -6,6 +6,7 @@ import * as fmt from '/app/js/format.js';
 import {h, state, table} from '/app/js/ui.js';
 import {kitRows} from './data.js';
 import {stopWords} from './pumplist.js';
+import {isShortage, shortageText} from './send.js';
 
 const KIT_STATES = {
     out: ['Out: none left', 'urgent'], 'top-up': ['At or below min: top up', 'warn'],
@@ -128,7 +129,14 @@ export function requestsView(snapshot, waiting) {
         ]});
 }
 
-export function outboxView(waiting, discard) {
+/** What to do about a refusal for too few parts on the kit's books: the repair happened, so it is not lost. */
+function shortageAdvice(kitCode) {
+    const kit = kitCode ? `your kit ${kitCode}` : 'your kit';
+    return h('p', {class: 'outbox__advice'}, `If the parts really came from ${kit}, ask the stores officer to book them to `
+        + `${kit} (a transfer to the kit, or a count of the kit), then press "Send again". It stays on this phone until then.`);
+}
+
+export function outboxView(waiting, discard, sendAgain, kitCode) {
     if (!waiting.length) {
         return h('p', {class: 'muted', id: 'outbox-empty'}, 'Nothing waiting: everything you did has reached the server.');
     }
@@ -136,8 +144,12 @@ export function outboxView(waiting, discard) {
         'data-ref': item.ref || ''},
         h('p', {}, h('strong', {}, item.summary)),
         item.state === 'refused'
-            ? h('p', {}, state('Refused by the server', 'urgent'), ' ', h('span', {class: 'outbox__message'}, item.message))
+            ? h('p', {}, state('Refused by the server', 'urgent'), ' ', h('span', {class: 'outbox__message'},
+                isShortage(item) ? shortageText(item.message) : item.message))
             : h('p', {}, state('Waiting to send', 'info'), h('span', {class: 'hint'}, `Made ${fmt.dateTime(item.createdAt)}`)),
+        isShortage(item) ? shortageAdvice(kitCode) : null,
         item.ref ? h('p', {class: 'hint'}, `Reference ${item.ref}`) : null,
-        item.state === 'refused' ? h('button', {type: 'button', onclick: () => discard(item)}, 'Discard this action') : null)));
+        item.state === 'refused' ? h('p', {class: 'row'},
+            isShortage(item) ? h('button', {type: 'button', class: 'primary outbox__again', onclick: () => sendAgain(item)}, 'Send again') : null,
+            h('button', {type: 'button', class: 'outbox__discard', onclick: () => discard(item)}, 'Discard this action')) : null)));
 }
