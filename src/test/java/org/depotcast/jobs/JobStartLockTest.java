@@ -11,6 +11,8 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
+import static org.depotcast.TestThreads.await;
+import static org.depotcast.TestThreads.pause;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -100,23 +102,5 @@ class JobStartLockTest {
         QuarkusTransaction.requiringNew().run(() -> em.createNativeQuery(
                 "update background_job set state = 'DONE' where kind = ?1 and state = 'RUNNING'")
                 .setParameter(1, kind.name()).executeUpdate());
-    }
-
-    private static void await(CountDownLatch latch) {
-        try {
-            assertTrue(latch.await(30, TimeUnit.SECONDS));
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static void pause(long millis) {
-        try {
-            Thread.sleep(millis);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
     }
 }

@@ -12,6 +12,8 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.CountDownLatch;
 import java.util.concurrent.TimeUnit;
 
+import static org.depotcast.TestThreads.await;
+import static org.depotcast.TestThreads.pause;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -63,23 +65,5 @@ class IntakeLockTest {
         assertEquals(1, taken.taken(), "the file's one reading was taken: " + taken);
         assertTrue(lockTakenAt > fileReadAt[0], "the other transaction got the lock only after the whole file was "
                 + "read, at its commit: " + (lockTakenAt - fileReadAt[0]) / 1_000_000 + " ms after");
-    }
-
-    private static void await(CountDownLatch latch) {
-        try {
-            assertTrue(latch.await(30, TimeUnit.SECONDS));
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
-    }
-
-    private static void pause(long millis) {
-        try {
-            Thread.sleep(millis);
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException(e);
-        }
     }
 }
