@@ -133,6 +133,5 @@ public final class SpendSimulation {
                     SampleQuantile.median(sorted), SampleQuantile.of(sorted, 0.90), SampleQuantile.of(sorted, 0.975),
                     sd / Math.sqrt(n));
         }
-
     }
 }
