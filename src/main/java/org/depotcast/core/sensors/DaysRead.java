@@ -24,6 +24,15 @@ final class DaysRead {
         return Double.NaN;
     }
 
+    /** Days read in [from, to). */
+    static int count(double[] hours, int from, int to) {
+        int read = 0;
+        for (int i = Math.max(0, from); i < to; i++) {
+            read += Double.isNaN(hours[i]) ? 0 : 1;
+        }
+        return read;
+    }
+
     static boolean none(double[] hours, int from, int to) {
         for (int i = Math.max(0, from); i < to; i++) {
             if (!Double.isNaN(hours[i])) {

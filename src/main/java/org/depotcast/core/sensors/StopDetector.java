@@ -5,8 +5,9 @@ package org.depotcast.core.sensors;
  *
  * <p>Method: Page's one-sided cumulative sum (CUSUM) for a fall in the mean (E. S. Page, "Continuous inspection
  * schemes", Biometrika 41(1/2):100–115, 1954), on the pump's own pattern: the mean μ₀ and standard deviation σ of the
- * days in use (read, and above near nothing: see below) in the {@code baselineDays} before the last {@code watchDays},
- * so an earlier breakdown inside the baseline neither lowers the level watched nor widens σ. Over the watched days
+ * days in use (read, and above near nothing: see below) in the {@code baselineDays} before the last {@code watchDays}
+ * (reaching further back past days not read, such as a recorded breakdown's, until it holds {@code baselineDays}
+ * days read), so an earlier breakdown inside the baseline neither lowers the level watched nor widens σ. Over the watched days
  * S_t = max(0, S_{t−1} + (μ₀ − k) − x_t), a day with no reading leaving S unchanged; a fall is signalled when
  * S_t > h. The reference value k = σ/2 and the decision interval h = 4σ are the textbook choice for detecting a shift
  * of one standard deviation (Montgomery, Introduction to Statistical Quality Control, 6th ed., 2009, §9.1.3: k = 0.5σ
@@ -94,8 +95,8 @@ public final class StopDetector {
         if (DaysRead.none(hours, hours.length - settings.gapDays(), hours.length)) {
             return new Verdict(State.NO_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
         }
-        int from = hours.length - settings.windowDays();
-        int to = from + settings.baselineDays();
+        int to = hours.length - settings.watchDays();
+        int from = baselineStart(hours, to);
         double nearNothing = nearNothing(hours, from, to);
         if (Double.isNaN(nearNothing)) {
             return new Verdict(State.TOO_LITTLE_DATA, -1, Double.NaN, Double.NaN, Double.NaN, 0, 0);
@@ -148,8 +149,8 @@ public final class StopDetector {
      */
     public IdleDays idleDays(double[] hours, double[] asRead) {
         checkLength(hours);
-        int from = hours.length - settings.windowDays();
-        double nearNothing = nearNothing(hours, from, from + settings.baselineDays());
+        int to = hours.length - settings.watchDays();
+        double nearNothing = nearNothing(hours, baselineStart(hours, to), to);
         return Double.isNaN(nearNothing) ? null : IdleDays.count(hours, asRead, nearNothing, settings);
     }
 
@@ -158,6 +159,22 @@ public final class StopDetector {
             throw new IllegalArgumentException("hours must hold " + settings.windowDays() + " to "
                     + settings.historyDays() + " days: " + hours.length);
         }
+    }
+
+    /**
+     * The first day of the baseline ending before {@code to}: the {@code baselineDays} before it, reaching further
+     * back, as far as the days given go, past days not read until it holds {@code baselineDays} days read. Days a
+     * recorded breakdown explains are not read ({@link RecordedDowntime}), so a pump that stops again a few weeks
+     * after a long repair is judged against its use before that breakdown instead of against too little to judge.
+     */
+    private int baselineStart(double[] hours, int to) {
+        int from = to - settings.baselineDays();
+        int read = DaysRead.count(hours, from, to);
+        while (from > 0 && read < settings.baselineDays()) {
+            from--;
+            read += Double.isNaN(hours[from]) ? 0 : 1;
+        }
+        return from;
     }
 
     /** Near nothing for this pump, from its baseline's days read; NaN when the baseline is too little to judge. */

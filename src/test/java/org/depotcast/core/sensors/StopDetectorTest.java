@@ -130,6 +130,28 @@ class StopDetectorTest {
     }
 
     @Test
+    void aStopSoonAfterALongRepairIsJudgedAgainstTheUseBeforeThatBreakdown() {
+        // 70 days: 30 in use alternating 5 and 7 h, 30 days of a recorded breakdown (left out: NaN, as
+        // RecordedDowntime leaves them), then 8 days of use at 6 h and 2 days of nothing. The 28 days before the 14
+        // watched (days 28–55) hold only 2 days read, too little to judge; the baseline reaches back past the
+        // breakdown to the 28 days read before the watched days, days 2–29: μ₀ = 6, s = √(28/27), and the sum
+        // signals on day 68 as in the first test (S = 6 − 0.509175 > h = 4.073401).
+        double[] hours = new double[70];
+        for (int i = 0; i < 30; i++) {
+            hours[i] = i % 2 == 0 ? 5 : 7;
+        }
+        Arrays.fill(hours, 30, 60, Double.NaN);
+        Arrays.fill(hours, 60, 68, 6);
+        Arrays.fill(hours, 68, 70, 0);
+        StopDetector.Verdict v = detector.judge(hours);
+        assertEquals(StopDetector.State.STOPPED, v.state());
+        assertEquals(68, v.changeIndex());
+        assertEquals(6.0, v.baselineMean(), 1e-12);
+        assertEquals(Math.sqrt(28.0 / 27), v.baselineSd(), 1e-12);
+        assertEquals(2, v.nearNothingDays());
+    }
+
+    @Test
     void brokenContractsNameTheArgument() {
         assertThrows(IllegalArgumentException.class, () -> detector.judge(new double[10]));
         assertThrows(IllegalArgumentException.class, () -> new StopSettings(28, 14, 3, 0.5, 4, 0.1, 10, 0,
