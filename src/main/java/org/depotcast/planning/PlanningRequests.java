@@ -54,10 +54,16 @@ public final class PlanningRequests {
                                       @PlanDate LocalDate planningDate) {
     }
 
+    /**
+     * A part class's cycle service level as a fraction, 0.5 to 0.999: below a half the reorder point falls under the
+     * mean demand, and the bound refuses a mix-up of scales (99 % typed as 0.99 on a per-cent form arrives as 0.0099).
+     */
     public record ServiceLevelRequest(@NotBlank @Size(max = 40) String partClass,
-                                      @NotNull @DecimalMin(value = "0", inclusive = false)
-                                      @DecimalMax(value = "1", inclusive = false) Double level) {
+                                      @NotNull @DecimalMin(value = "0.5", message = LEVEL_RANGE)
+                                      @DecimalMax(value = "0.999", message = LEVEL_RANGE) Double level) {
     }
+
+    static final String LEVEL_RANGE = "must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)";
 
     public record LaneCostRequest(@NotBlank @Size(max = 40) String from, @NotBlank @Size(max = 40) String to,
                                   @NotNull @DecimalMin(value = "0", message = "must not be negative")

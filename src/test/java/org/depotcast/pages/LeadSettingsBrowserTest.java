@@ -59,8 +59,15 @@ class LeadSettingsBrowserTest extends BrowserSession {
             enter(driver.findElement(By.id("level-standard")), "120");
             save("#level-standard-form");
             String refused = waitFor(By.cssSelector("#level-standard-form .field-error")).getText();
-            assertTrue(!refused.isBlank(), "the refusal is said beside the input");
+            assertTrue(refused.contains("per cent, from 50 to 99.9"), "the refusal says the page's own scale: " + refused);
             assertEquals(before, level("standard"), 1e-9, "a refused level changes nothing");
+
+            // A fraction typed into the per-cent input (0.99 for 99 %) would be 0.99 %: refused, not saved.
+            enter(driver.findElement(By.id("level-standard")), "0.99");
+            save("#level-standard-form");
+            wait(Duration.ofSeconds(20)).ignoring(StaleElementReferenceException.class).until(d -> d.findElement(
+                    By.cssSelector("#level-standard-form .field-error")).getText().contains("from 50 to 99.9"));
+            assertEquals(before, level("standard"), 1e-9, "a fraction typed as per cent changes nothing");
 
             enter(driver.findElement(By.id("level-standard")), "91.5");
             save("#level-standard-form");

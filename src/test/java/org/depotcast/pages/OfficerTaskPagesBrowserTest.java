@@ -14,9 +14,12 @@ import java.nio.file.Path;
 import java.time.Duration;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
+import java.util.stream.Collectors;
 
 import static io.restassured.RestAssured.given;
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /** The officer's task pages: each opens on a phone and a desk screen; counts, imports and purchase orders work through them. */
@@ -86,6 +89,25 @@ class OfficerTaskPagesBrowserTest extends BrowserSession {
         screenshot("officer-stock-import-errors");
         Files.delete(bad);
         assertNoPageErrors("HTTP 400 POST " + url("/api/stock/counts/import"), "counts/import - Failed to load resource");
+    }
+
+    @Test
+    void aPartStockedHereThatHasRunOutIsListedAmongTheBalancesAtNothing() throws Exception {
+        OfficerJourneyBrowserTest.forecastRunThroughTheApi(url(""));
+        Set<String> listed = officer().get(url("/api/stock/balances?location=" + DEPOT)).jsonPath().<Map<String, Object>>getList("$")
+                .stream().map(b -> (String) b.get("partNumber")).collect(Collectors.toSet());
+        String sheet = officer().accept("text/csv").get(url("/api/stock/counts/export?location=" + DEPOT)).asString();
+        List<String> runOut = sheet.lines().skip(1).map(l -> l.split(",")[1]).filter(p -> !listed.contains(p)).toList();
+        assertFalse(runOut.isEmpty(), "the demo depot has parts on its count sheet at 0 that the ledger never listed");
+        signIn("officer", "officer-demo");
+        open("/app/officer/stock.html?location=" + DEPOT);
+        waitReady();
+        driver.findElement(By.id("balance-search")).sendKeys(runOut.get(0));
+        WebElement row = waitFor(By.cssSelector("#balances tbody tr"));
+        assertTrue(row.getText().contains(runOut.get(0)), row.getText());
+        assertTrue(row.findElement(By.cssSelector("td[data-label='On hand']")).getText().startsWith("0 "), row.getText());
+        assertEquals(0, driver.findElements(By.cssSelector("#balances + .empty")).size(), "not said to match nothing");
+        assertNoPageErrors();
     }
 
     @Test

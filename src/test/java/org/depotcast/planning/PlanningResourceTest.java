@@ -195,6 +195,28 @@ class PlanningResourceTest {
                 .put("/api/planning/service-levels").then().statusCode(403);
     }
 
+    @Test
+    void aMissingValueIsSaidInPlainWordsBesideItsField() {
+        as("lead").contentType("application/json").body("{}").post("/api/planning/purchase-plans")
+                .then().statusCode(400).contentType(PROBLEM).body("errors[0].field", equalTo("budget"))
+                .body("errors[0].message", equalTo("is required"));
+        as("lead").contentType("application/json").body(Map.of("partClass", " ", "level", 0.95))
+                .put("/api/planning/service-levels").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("partClass")).body("errors[0].message", equalTo("is required"));
+    }
+
+    @Test
+    void aServiceLevelBelowAHalfIsRefusedNamingTheFieldAndItsScale() {
+        // 99 % typed as 0.99 on the per-cent form arrives as 0.0099: it must not become the level in force.
+        double before = as("lead").get("/api/planning/service-levels").then().extract().jsonPath().getDouble("critical");
+        as("lead").contentType("application/json").body(Map.of("partClass", "CRITICAL", "level", 0.0099))
+                .put("/api/planning/service-levels").then().statusCode(400).contentType(PROBLEM)
+                .body("errors[0].field", equalTo("level"))
+                .body("errors[0].message", equalTo("must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)"));
+        assertEquals(before, as("lead").get("/api/planning/service-levels").then().statusCode(200).extract().jsonPath()
+                .getDouble("critical"), 1e-9);
+    }
+
     private static Map<String, Double> policyOf(String part, String location) {
         List<Map<String, Object>> policies = as("lead").queryParam("location", location).get("/api/planning/policies")
                 .then().statusCode(200).extract().jsonPath().getList("$");

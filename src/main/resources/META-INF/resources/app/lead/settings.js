@@ -11,7 +11,7 @@ function levelForm(partClass, words, level, defaultLevel) {
     const id = `level-${partClass.toLowerCase()}`;
     const form = h('form', {class: 'card', id: `${id}-form`, novalidate: true},
         h('h3', {}, words),
-        h('label', {for: id}, 'Cycle service level', h('span', {class: 'hint'}, `per cent; configured default ${fmt.num(defaultLevel * 100, 1)} %`)),
+        h('label', {for: id}, 'Cycle service level', h('span', {class: 'hint'}, `per cent, 50 to 99.9; configured default ${fmt.num(defaultLevel * 100, 1)} %`)),
         h('input', {id, name: 'level', type: 'number', min: 50, max: 99.9, step: 0.1, value: Number((level * 100).toFixed(2))}),
         h('p', {}, 'In force now: ', h('strong', {class: 'in-force'}, `${fmt.num(level * 100, 1)} %`)),
         h('button', {type: 'submit', class: 'primary'}, `Save for ${words.toLowerCase()}`));
@@ -19,6 +19,11 @@ function levelForm(partClass, words, level, defaultLevel) {
         e.preventDefault();
         busy(e.submitter || form.querySelector('button'), async () => {
             const percent = form.level.value === '' ? NaN : Number(form.level.value);
+            // Checked here in per cent: the API's bounds are a fraction's, and "less than 1" would invite 0.99 %.
+            if (!(percent >= 50 && percent <= 99.9)) {
+                throw {errors: [{field: 'level', message: 'enter a level in per cent, from 50 to 99.9 (e.g. 95)'}],
+                    detail: `${words}: nothing was saved.`};
+            }
             await api.put('/api/planning/service-levels', {partClass, level: percent / 100});
             say(`${words}: ${fmt.num(percent, 1)} % from now on.`, 'ok');
             await showLevels();

@@ -35,9 +35,23 @@ async function load() {
     }
     const [balances, sheet] = await Promise.all([api.get('/api/stock/balances', {location: store.code}),
         api.get('/api/stock/counts/export', {location: store.code})]);
+    const rows = parseCsv(sheet);
     // Counting stock means handling rods and rising mains (heavy lengths) and parts that touch drinking water.
-    mount(main, balancesSection(balances), countSection(parseCsv(sheet)), importSection(), exportSection(), caution());
+    mount(main, balancesSection(withStockedAtNothing(balances, rows)), countSection(rows), importSection(), exportSection(), caution());
     ready();
+}
+
+/**
+ * The ledger lists a part only once it has moved here; a part stocked here and run out since is on the count sheet at
+ * 0 but not among the balances, and a search for it said "no part matches". Such parts join the list at 0.
+ */
+function withStockedAtNothing(balances, sheetRows) {
+    const [header, ...lines] = sheetRows.filter(r => r.length > 1);
+    const part = header ? header.indexOf('part_number') : -1;
+    const listed = new Set(balances.map(b => b.partNumber));
+    const missing = part < 0 ? [] : lines.map(r => r[part]).filter(p => p && !listed.has(p))
+        .map(p => ({partNumber: p, description: (parts.get(p) || {}).description || '', onHand: 0, onOrder: 0}));
+    return [...balances, ...missing].sort((a, b) => a.partNumber.localeCompare(b.partNumber));
 }
 
 function balancesSection(balances) {
