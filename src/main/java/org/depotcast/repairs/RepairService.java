@@ -11,6 +11,7 @@ import org.depotcast.common.BusinessRuleException;
 import org.depotcast.common.ConflictException;
 import org.depotcast.common.EntityMissingException;
 import org.depotcast.common.InvalidInputException;
+import org.depotcast.common.NotEnoughStockException;
 import org.depotcast.common.Quantities;
 import org.depotcast.fleet.PumpQueryService;
 import org.depotcast.fleet.PumpService;
@@ -45,10 +46,12 @@ public class RepairService {
     private final CurrentUser currentUser;
     private final org.depotcast.access.AuditService audit;
     private final PumpStatusService pumpStatus;
+    private final RefusedRepairService refusals;
 
     RepairService(RepairRepository repairs, PumpQueryService pumps, PumpService pumpRegister, PartService parts,
                   LocationService locations, StockLedgerService ledger, CurrentUser currentUser,
-                  org.depotcast.access.AuditService audit, PumpStatusService pumpStatus) {
+                  org.depotcast.access.AuditService audit, PumpStatusService pumpStatus, RefusedRepairService refusals) {
+        this.refusals = refusals;
         this.audit = audit;
         this.pumpStatus = pumpStatus;
         this.repairs = repairs;
@@ -128,9 +131,12 @@ public class RepairService {
         return rows;
     }
 
-    /** Records a repair; a fixed one consumes its parts from the mechanic's kit, all in one transaction. */
-    @Transactional
+    /** Records a repair; a fixed one consumes its parts from the kit, all in one transaction (or a notice: see noting). */
     public Recorded record(RepairRequest request) {
+        return refusals.noting(() -> recordWithin(request));
+    }
+
+    private Recorded recordWithin(RepairRequest request) {
         Optional<Repair> earlier = repairs.byRef(request.repairRef());
         if (earlier.isPresent()) {
             PumpSummary pump = pumps.summariesById(List.of(earlier.get().pumpId)).get(earlier.get().pumpId);
@@ -170,8 +176,11 @@ public class RepairService {
      * Records what happened since a repair was reported (see {@link RepairProgress}): dates reached, the parts it
      * needs until it is fixed; the fix consumes them from the mechanic's kit and the pump's status follows.
      */
-    @Transactional
     public RepairResponse progress(String repairRef, RepairProgress p) {
+        return refusals.noting(() -> progressWithin(repairRef, p));
+    }
+
+    private RepairResponse progressWithin(String repairRef, RepairProgress p) {
         Repair repair = repairs.byRef(repairRef).orElseThrow(() -> new EntityMissingException(null, "repair", repairRef));
         PumpSummary pump = pumps.requireVisible(repair.pumpId);
         Map<Long, String> partNumbers = partNumbers();
@@ -230,7 +239,12 @@ public class RepairService {
                     line.quantity, repair.fixedOn.atStartOfDay().atOffset(ZoneOffset.UTC),
                     repair.kind == RepairKind.BREAKDOWN ? "breakdown repair" : "preventive service",
                     repair.repairRef, IdempotencyKey.internal("repair", repair.repairRef + ":" + partNumber), null, repair.id);
-            ledger.postWithin(command);
+            try {
+                ledger.postWithin(command);
+            } catch (NotEnoughStockException e) {
+                throw RefusedRepairException.of(e, repair, kit, partNumbers);
+            }
         }
+        refusals.closeRecorded(repair.repairRef);
     }
 }

@@ -3,7 +3,7 @@ package org.depotcast.stock;
 import jakarta.enterprise.context.ApplicationScoped;
 import jakarta.transaction.Transactional;
 import org.depotcast.catalogue.PartSummary;
-import org.depotcast.common.BusinessRuleException;
+import org.depotcast.common.NotEnoughStockException;
 import org.depotcast.common.Quantities;
 
 import java.math.BigDecimal;
@@ -38,8 +38,10 @@ class StockBalanceWriter {
         if (from == null) {
             return;
         }
-        StockBalance balance = balances.lockedFor(part.id(), from.id).orElseThrow(() -> new BusinessRuleException("quantity",
-                "no stock of part '" + part.partNumber() + "' at '" + from.code + "'"));
+        // A part never held there is a draw of more than the books show (0), answered as any other such draw.
+        StockBalance balance = balances.lockedFor(part.id(), from.id).orElseThrow(() -> new NotEnoughStockException("quantity",
+                "only 0 of part '" + part.partNumber() + "' on hand at '" + from.code + "', cannot take "
+                        + quantity.stripTrailingZeros().toPlainString()));
         balance.take(quantity, part.partNumber(), from.code);
     }
 

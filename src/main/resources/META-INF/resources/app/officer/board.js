@@ -9,6 +9,7 @@ import {provenance} from '/app/js/provenance.js';
 import {methodWords} from '/app/js/methods.js';
 import {h, mount, table, state, say, busy, figures, caution} from '/app/js/ui.js';
 import {startOfficer, kindWords, describe, ready, orderQuantity, storeName} from './officer.js';
+import {refusedRepairs} from './refused.js';
 
 const {me, store, stores, parts} = await startOfficer({page: 'board', title: 'Morning board'});
 const main = document.getElementById('content');
@@ -23,9 +24,10 @@ async function load() {
         ready();
         return;
     }
-    const run = await provenance(document.getElementById('provenance'), me);
+    // Refused repairs show with or without a forecast run: they wait on the officer, not on planning.
+    const [run, refused] = await Promise.all([provenance(document.getElementById('provenance'), me), refusedRepairs(store, load)]);
     if (!run) {
-        mount(main);
+        mount(main, refused);
         ready();
         return;
     }
@@ -37,7 +39,7 @@ async function load() {
     const policyOf = new Map(policies.map(p => [p.partNumber, p]));
     const mine = suggestions.filter(s => s.to === store.code || s.from === store.code);
     const requests = waiting.filter(r => r.depot === store.code);
-    mount(main, summary(alerts, requests, inbound, mine),
+    mount(main, refused, summary(alerts, requests, inbound, mine),
         h('section', {'aria-labelledby': 'alerts-title'},
             h('h2', {id: 'alerts-title'}, 'Alerts, most pump-days without water first'),
             alertTable(alerts, policyOf, mine)),
