@@ -181,7 +181,7 @@ class OfficerJourneyBrowserTest extends BrowserSession {
             case "SES" -> "simple exponential smoothing";
             case "POISSON" -> "Poisson mean";
             case "MEAN12" -> "mean of the last 12 months";
-            case "COMBINED" -> "combination (equal weights of SBA, TSB, smoothing, Poisson mean and 12-month mean)";
+            case "COMBINED" -> "combination (the middle value of SBA, TSB, smoothing, Poisson mean and 12-month mean)";
             default -> method.toLowerCase(java.util.Locale.ROOT);
         };
     }

@@ -55,19 +55,28 @@ public final class SeriesFitter {
         return fit(y, method, bestAlpha, bestBeta);
     }
 
-    /** {@link ForecastMethod#COMBINED}: each part tuned on its own, forecasts and fitted values averaged. */
+    /**
+     * {@link ForecastMethod#COMBINED}: each part tuned on its own; the median of their forecasts, and of their fitted
+     * values period by period (for the in-sample error the interval model reads).
+     */
     private static FittedSeries combined(double[] y) {
-        double[] fitted = new double[y.length];
-        double forecast = 0;
         int parts = ForecastMethod.COMBINED_PARTS.size();
-        for (ForecastMethod part : ForecastMethod.COMBINED_PARTS) {
-            FittedSeries f = fitOptimised(y, part, Double.NaN, Double.NaN);
-            forecast += f.perPeriod() / parts;
-            for (int t = 0; t < y.length; t++) {
-                fitted[t] += f.fitted()[t] / parts;
-            }
+        double[] forecasts = new double[parts];
+        double[][] partsFitted = new double[parts][];
+        for (int i = 0; i < parts; i++) {
+            FittedSeries f = fitOptimised(y, ForecastMethod.COMBINED_PARTS.get(i), Double.NaN, Double.NaN);
+            forecasts[i] = f.perPeriod();
+            partsFitted[i] = f.fitted();
         }
-        return new FittedSeries(ForecastMethod.COMBINED, Double.NaN, Double.NaN, forecast,
+        double[] fitted = new double[y.length];
+        double[] column = new double[parts];
+        for (int t = 0; t < y.length; t++) {
+            for (int i = 0; i < parts; i++) {
+                column[i] = partsFitted[i][t];
+            }
+            fitted[t] = median(column);
+        }
+        return new FittedSeries(ForecastMethod.COMBINED, Double.NaN, Double.NaN, median(forecasts),
                 Smoothing.meanSquaredError(y, fitted), fitted);
     }
 
@@ -96,5 +105,12 @@ public final class SeriesFitter {
             values[i] = Math.round((from + i * step) * 1e6) / 1e6;
         }
         return values;
+    }
+
+    private static double median(double[] values) {
+        double[] sorted = values.clone();
+        java.util.Arrays.sort(sorted);
+        int n = sorted.length;
+        return n % 2 == 1 ? sorted[n / 2] : (sorted[n / 2 - 1] + sorted[n / 2]) / 2;
     }
 }

@@ -8,7 +8,7 @@ import java.util.Map;
 /**
  * Forecasts one demand series with a named method, or "auto".
  *
- * <p>Auto: the {@link ForecastMethod#COMBINED} forecast (equal weights on SBA, TSB, SES, the Poisson mean and the
+ * <p>Auto: the {@link ForecastMethod#COMBINED} forecast (the median of SBA, TSB, SES, the Poisson mean and the
  * 12-period mean). Choosing the one method with the lowest backtest error loses to the plain 12-period mean on
  * simulated part series with level shifts (selection on a short backtest is noisy), the combination does not (see
  * AutoVersusMeanTest). Each candidate, the combination included, is still scored over the last

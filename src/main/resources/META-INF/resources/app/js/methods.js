@@ -6,7 +6,7 @@ export const METHOD_WORDS = {
     FLEET: 'fleet model (breakdown rate of the installed pumps)', CROSTON: 'Croston', SBA: 'SBA (Croston, bias-corrected)',
     SBJ: 'SBJ (Croston, Shale–Boylan–Johnston correction)', TSB: 'TSB (Teunter–Syntetos–Babai)',
     SES: 'simple exponential smoothing', POISSON: 'Poisson mean', MEAN12: 'mean of the last 12 months',
-    COMBINED: 'combination (equal weights of SBA, TSB, smoothing, Poisson mean and 12-month mean)', 'no forecast': 'no forecast'
+    COMBINED: 'combination (the middle value of SBA, TSB, smoothing, Poisson mean and 12-month mean)', 'no forecast': 'no forecast'
 };
 
 export function methodWords(method) {
