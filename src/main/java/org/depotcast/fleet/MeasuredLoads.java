@@ -17,9 +17,10 @@ public interface MeasuredLoads {
     List<UsageReadingRow> monthlyLoads();
 
     /**
-     * Per pump, its readings from its own first day up to {@code lastDay} (the last {@code lastDaysKept} days read
-     * kept, oldest first); pumps with none are absent.
+     * Per pump, its readings on the days from its own first day (inclusive) to {@code until} (exclusive: the span
+     * {@link ServiceByHours#project} divides by, as the recorded estimate counts it), the last {@code lastDaysKept}
+     * days read kept, oldest first; pumps with no month read in the span's months are absent.
      */
-    Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate lastDay,
+    Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate until,
                                                      int lastDaysKept);
 }

@@ -56,11 +56,11 @@ public class UsageService {
         return UsageHistory.merge(typed, measured.get().monthlyLoads());
     }
 
-    /** What sensors read per pump from its own first day to {@code lastDay} ({@link MeasuredLoads#measuredSince}). */
-    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate lastDay,
+    /** What sensors read per pump from its own first day up to {@code until}, not included ({@link MeasuredLoads#measuredSince}). */
+    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate until,
                                                             int lastDaysKept) {
         return measured.isUnsatisfied() || firstDays.isEmpty() ? Map.of()
-                : measured.get().measuredSince(firstDays, lastDay, lastDaysKept);
+                : measured.get().measuredSince(firstDays, until, lastDaysKept);
     }
 
     @Transactional

@@ -160,18 +160,18 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
     }
 
     @Override
-    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate lastDay,
+    public Map<Long, ServiceByHours.Measured> measuredSince(Map<Long, LocalDate> firstDays, LocalDate until,
                                                             int lastDaysKept) {
         Map<Long, double[]> totals = new HashMap<>();
         Map<Long, java.util.ArrayDeque<Double>> last = new HashMap<>();
         List<Long> ids = new ArrayList<>(firstDays.keySet());
-        LocalDate earliest = firstDays.values().stream().min(LocalDate::compareTo).orElse(lastDay);
+        LocalDate earliest = firstDays.values().stream().min(LocalDate::compareTo).orElse(until);
         for (int from = 0; from < ids.size(); from += 5_000) {
             List<Long> part = ids.subList(from, Math.min(ids.size(), from + 5_000));
             query("select pump_id, month_start, day_hours from sensor_month where " + SensorReadingStore.pumpIdIn(part)
                     + " and month_start between ? and ? order by pump_id, month_start", s -> {
                 s.setDate(1, Date.valueOf(earliest.withDayOfMonth(1)));
-                s.setDate(2, Date.valueOf(lastDay.withDayOfMonth(1)));
+                s.setDate(2, Date.valueOf(until.withDayOfMonth(1)));
             }, r -> {
                 long pumpId = r.getLong(1);
                 LocalDate first = firstDays.get(pumpId);
@@ -181,7 +181,8 @@ public class SensorUsageQuery implements org.depotcast.fleet.MeasuredLoads {
                 for (LocalDate day = month.monthStart(); day.getMonth() == month.monthStart().getMonth();
                      day = day.plusDays(1)) {
                     int hundredths = month.get(day);
-                    if (hundredths == MonthDays.MISSING || day.isAfter(lastDay)) {
+                    // The span is the estimate's: the days before until (today counts in neither).
+                    if (hundredths == MonthDays.MISSING || !day.isBefore(until)) {
                         continue;
                     }
                     if (!day.isBefore(first)) {

@@ -47,7 +47,8 @@ class ServicePlanTest {
         String p = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
         LocalDate today = LocalDate.now(ZoneOffset.UTC);
         StringBuilder csv = new StringBuilder("asset_id,day,hours\n");
-        for (int d = 27; d >= 0; d--) {
+        // The 28 days before today: the span counted runs from the service up to today, today not included.
+        for (int d = 28; d >= 1; d--) {
             csv.append(p).append(',').append(today.minusDays(d)).append(",8\n");
         }
         SensorIntakeTest.csv("officer", csv.toString()).then().statusCode(200).body("added", equalTo(28));

@@ -23,8 +23,9 @@ public final class ServiceByHours {
     }
 
     /**
-     * What a pump's sensor read from the day its hours are counted from: hours read on the days read, how many days
-     * were read, and its last days read (oldest first).
+     * What a pump's sensor read from the day its hours are counted from up to today, today not included (the span
+     * the estimate covers and {@link #project(LocalDate, PumpUsage)} divides by): hours read on the days read, how
+     * many days were read, and its last days read (oldest first).
      */
     public record Measured(double hoursRead, int daysRead, double[] lastDaysRead) {
         public Measured {
@@ -54,7 +55,8 @@ public final class ServiceByHours {
     /**
      * The one projection every reader uses. Without a sensor: the recorded estimate and load. With one: the hours read,
      * plus the estimate's share of the days not read (the estimate taken as even over the span from {@code
-     * countedFrom} to today, at least one day), projected at the mean of the last days read.
+     * countedFrom} to today, today not included, at least one day; the days read count the same span), projected at
+     * the mean of the last days read.
      */
     public static Projection project(LocalDate today, PumpUsage usage) {
         Measured m = usage.measured();
