@@ -62,7 +62,8 @@ public class AccuracyReportService {
 
     /**
      * Starts a report in the background; 400 naming {@code origin} unless its month starts at least 12 months before
-     * the current month's (the year compared must be over); 409 while another report runs.
+     * the current month's (the year compared must be over); 409 while another report or a forecast run is going
+     * (it computes a forecast run of its own, and two at once would share the machine's cores).
      */
     public long start(LocalDate origin) {
         scope.requireProgramme();
@@ -81,7 +82,7 @@ public class AccuracyReportService {
         return ids[0];
     }
 
-    /** One report at a time across instances: the job runner checks and inserts under a database lock (409). */
+    /** One report or forecast run at a time across instances: the job runner checks and inserts under a row lock (409). */
     private long[] create(LocalDate origin) {
         String by = currentUser.name();
         return jobs.createExclusive(JobKind.ACCURACY_REPORT, jobId -> {

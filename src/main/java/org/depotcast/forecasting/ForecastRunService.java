@@ -80,7 +80,7 @@ public class ForecastRunService {
                 try {
                     startExclusive("schedule", currentOrigin());
                 } catch (ConflictException running) {
-                    Log.warn("nightly forecast run skipped: a run is already in progress");
+                    Log.warnf("nightly forecast run skipped: %s", running.getMessage());
                 }
             });
         }

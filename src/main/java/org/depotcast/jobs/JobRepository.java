@@ -24,8 +24,9 @@ class JobRepository implements PanacheRepository<BackgroundJob> {
         return find(query.toString(), Sort.descending("id"), params).page(0, limit).list();
     }
 
-    boolean anyRunning(JobKind kind) {
-        return count("kind = ?1 and state = ?2", kind, JobState.RUNNING) > 0;
+    /** The kind of a running job among {@code kinds}, if any. */
+    java.util.Optional<JobKind> runningOf(List<JobKind> kinds) {
+        return find("kind in ?1 and state = ?2", kinds, JobState.RUNNING).firstResultOptional().map(j -> j.kind);
     }
 
     /** Running jobs whose heartbeat is older than {@code before}, whichever instance owns them. */

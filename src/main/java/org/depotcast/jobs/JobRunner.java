@@ -52,7 +52,8 @@ public class JobRunner {
     }
 
     /**
-     * Records a running job of {@code kind} unless one is running on any instance (409), and in the same transaction
+     * Records a running job of {@code kind} unless one of it, or of a kind taking turns with it ({@link
+     * JobKind#takingTurns()}), is running on any instance (409), and in the same transaction
      * lets the caller insert its own rows linked to the new job's id ({@code linkedRows} answers what the caller
      * needs back). The check and the insert happen under the kind's row lock in the database, so two instances (or
      * two threads) starting at once cannot both pass the check.
@@ -62,9 +63,10 @@ public class JobRunner {
         try {
             return QuarkusTransaction.requiringNew().call(() -> {
                 OffsetDateTime now = OffsetDateTime.now(clock);
-                startLock.take(kind.name(), now);
-                if (jobs.anyRunning(kind)) {
-                    throw new ConflictException(null, "one " + kind.words() + " at a time: another is already in progress");
+                startLock.take(kind.startLock(), now);
+                java.util.Optional<JobKind> running = jobs.runningOf(kind.takingTurns());
+                if (running.isPresent()) {
+                    throw new ConflictException(null, kind.busyWords(running.get()));
                 }
                 return linkedRows.apply(persist(kind, startedBy, now));
             });
