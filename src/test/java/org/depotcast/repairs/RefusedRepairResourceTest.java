@@ -177,4 +177,42 @@ class RefusedRepairResourceTest {
         assertEquals(4, notice.getInt("[0].lines[0].unitsUsed"));
         asMechanic().get("/api/repairs/" + ref).then().statusCode(200).body("fixedOn", equalTo(null));
     }
+
+    private void report(String status, LocalDate since) {
+        asMechanic().contentType("application/json").body(Map.of("status", status, "since", since.toString()))
+                .post("/api/pumps/" + pump + "/status").then().statusCode(200);
+    }
+
+    /**
+     * While the refused repair waits on the phone the pump gets newer statuses (working again, then broken again
+     * after the repair's dates): the resend after the officer books the parts is still recorded, once, its parts out
+     * of the kit once, and the newer status stands. No rule refuses a report for being older than the pump's status
+     * on record except the status report itself; a repair's dates are its own.
+     */
+    @Test
+    void aResendAfterANewerStatusOfThePumpIsRecordedOnce() {
+        LocalDate today = LocalDate.now(java.time.ZoneOffset.UTC);
+        String ref = TestData.unique("phone-rep");
+        report("BROKEN", today.minusDays(6));
+        Map<String, Object> body = repair(ref, 3);
+        body.put("reportedOn", today.minusDays(6).toString());
+        body.put("fixedOn", today.minusDays(5).toString());
+        asMechanic().contentType("application/json").body(body).post("/api/repairs").then().statusCode(422)
+                .body("type", equalTo("/problems/not-enough-stock"));
+        report("WORKING", today.minusDays(4));
+        report("BROKEN", today.minusDays(2));
+
+        as("officer").contentType("application/json").body(Map.of("kind", "COUNT_ADJUSTMENT", "partNumber", seal, "to", kit,
+                "quantity", 2, "reference", "kit count", "idempotencyKey", TestData.unique("count"))).post("/api/stock/movements")
+                .then().statusCode(201);
+        asMechanic().contentType("application/json").body(body).post("/api/repairs").then().statusCode(201);
+        asMechanic().contentType("application/json").body(body).post("/api/repairs").then().statusCode(200);
+        assertEquals(List.of(ref), asMechanic().queryParam("asset", pump).get("/api/repairs").then().statusCode(200)
+                .extract().jsonPath().getList("repairRef"));
+        assertEquals(0, BigDecimal.ZERO.compareTo(stock.onHand(seal, kit)), "1 + 2 booked, 3 used once");
+        assertEquals(0, BigDecimal.valueOf(4).compareTo(stock.onHand(rod, kit)));
+        as("officer").get("/api/pumps/" + pump).then().statusCode(200).body("status", equalTo("BROKEN"))
+                .body("statusSince", equalTo(today.minusDays(2).toString()));
+        assertTrue(notices("officer", depot).isEmpty());
+    }
 }
