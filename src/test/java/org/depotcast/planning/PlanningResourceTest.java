@@ -118,12 +118,28 @@ class PlanningResourceTest {
         String csv = as("lead").get("/api/planning/purchase-plans/" + id + "/export").then().statusCode(200).extract().asString();
         assertEquals(lines.size() + 3, csv.strip().split("\n").length); // header, lines, objective, caution
         as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(200).body("status", equalTo("ACCEPTED"));
-        as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(409).contentType(PROBLEM);
-        as("lead").queryParam("status", "OPEN").get("/api/purchase-orders").then().body("orderNumber", hasItem("PP" + id + "-1"));
+        try {
+            as("lead").post("/api/planning/purchase-plans/" + id + "/accept").then().statusCode(409).contentType(PROBLEM);
+            as("lead").queryParam("status", "OPEN").get("/api/purchase-orders").then().body("orderNumber", hasItem("PP" + id + "-1"));
+        } finally {
+            cancelOrdersOf(id);
+        }
         as("lead").contentType("application/json").body(Map.of("budget", 0)).post("/api/planning/purchase-plans")
                 .then().statusCode(400).contentType(PROBLEM).body("errors[0].field", equalTo("budget"));
         as("mechanic1").contentType("application/json").body(Map.of("budget", 10)).post("/api/planning/purchase-plans")
                 .then().statusCode(403);
+    }
+
+    /**
+     * The plan's orders put most of the programme's shortfall on order for every later test in this JVM (a purchase
+     * plan then found under a thousand pump-days at risk where the demo has thousands): cancelled, so the programme is
+     * as the test found it.
+     */
+    private static void cancelOrdersOf(long planId) {
+        List<String> placed = as("lead").queryParam("status", "OPEN").get("/api/purchase-orders").then().statusCode(200)
+                .extract().jsonPath().getList("orderNumber", String.class);
+        placed.stream().filter(n -> n.startsWith("PP" + planId + "-")).forEach(n -> as("lead")
+                .post("/api/purchase-orders/" + n + "/cancel").then().statusCode(200).body("status", equalTo("CANCELLED")));
     }
 
     @Test
