@@ -75,6 +75,11 @@ class LeadJourneyBrowserTest extends BrowserSession {
         String method = api.getString("forecast.method");
         String chosenBox = driver.findElement(By.cssSelector("#explorer .method-box")).getText();
         assertTrue(chosenBox.contains("How the method was chosen") && chosenBox.contains("RMSSE"), chosenBox);
+        // The held-out scores are for comparison: a lower history score beside "uses the fleet model" is explained first.
+        assertTrue(chosenBox.contains("For comparison only: over the last 12 months held out"), chosenBox);
+        if ("FLEET".equals(api.getString("forecast.method"))) {
+            assertTrue(chosenBox.contains("whichever scored lower on one held-out year. The forecast uses the fleet model"), chosenBox);
+        }
         // The rate's reason in words, not the stored figures ("credibility 0.000 for 1928.0 units" before).
         assertTrue(chosenBox.contains("FLEET".equals(method) ? "The forecast uses the fleet model" : "The forecast uses the part's own history"), chosenBox);
         assertFalse(chosenBox.matches("(?s).*credibility \\d.*") || chosenBox.contains("fleet model x"), chosenBox);
@@ -147,6 +152,9 @@ class LeadJourneyBrowserTest extends BrowserSession {
         int lines = plan.getList("lines").size();
         assertTrue(lines > 0, "the demo's stock leaves parts below their reorder points");
         assertEquals(lines, driver.findElements(By.cssSelector("#plan-lines tbody tr")).size());
+        // Positions are the programme's (all stores, kits and on order), not the central store's shelf the board shows.
+        assertTrue(driver.findElement(By.cssSelector("#plan-lines thead")).getText().contains("Programme stock position before"));
+        assertTrue(driver.findElement(By.id("position-meaning")).getText().contains("the depots and the mechanics' kits hold, plus what is on order"));
         assertEquals(plan.getList("leftOut").size(), driver.findElements(By.cssSelector("#plan-left-out tbody tr")).size());
         assertEquals(String.format(java.util.Locale.US, "%,.1f pump-days", plan.getDouble("pumpDaysBefore")),
                 driver.findElement(By.id("pump-days-before")).getText());
@@ -227,6 +235,8 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertTrue(central.size() > 2, "the depot table has the central store's row");
         assertEquals(currency + " 0", central.get(2).getText().replace('\u00a0', ' '), "nothing at the central store after the first period");
         assertTrue(text(By.id("central-store-note")).contains("counted at the depot whose pumps use them"));
+        // The stock-up here and the budget plan's lines differ by the packs only, and the note says so.
+        assertTrue(text(By.id("central-store-note")).contains("The budget plan buys the same stock in whole packs"));
         assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
         assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
         PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");

@@ -160,6 +160,14 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         String to = dispatch.getDomAttribute("data-to");
         double quantity = Double.parseDouble(dispatch.getDomAttribute("data-quantity"));
         assertEquals("Dispatch " + part + " from " + from + " to " + to, dispatch.getAccessibleName());
+        // The table weighs moves by their transport cost, so it shows it: the lane's cost a unit times the quantity.
+        Map<String, Object> suggested = as("officer").get(url("/api/planning/transfers/suggestions")).jsonPath()
+                .param("p", part).param("f", from).param("t", to)
+                .get("find { it.partNumber == p && it.from == f && it.to == t }");
+        double cost = quantity * ((Number) suggested.get("unitCost")).doubleValue();
+        String shown = dispatch.findElement(By.xpath("ancestor::tr/td[@data-label='Transport cost']")).getText().replace('\u00a0', ' ');
+        assertTrue(shown.matches("USD [\\d,]+\\.\\d\\d"), shown);
+        assertEquals(cost, Double.parseDouble(shown.replaceAll("[^\\d.]", "")), 0.006, shown);
         double fromBefore = onHand(from, part);
         int inTransitBefore = inTransit(from, to, part).size();
         dispatch.click();

@@ -52,7 +52,11 @@ async function show(plan) {
             h('p', {}, 'Expected pump-days without water: ', h('strong', {id: 'pump-days-before'}, pumpDays(plan.pumpDaysBefore)),
                 ' before, ', h('strong', {id: 'pump-days-after'}, pumpDays(plan.pumpDaysAfter)), ' after this plan.'),
             h('p', {}, 'Spent: ', h('strong', {id: 'spent'}, fmt.money(plan.spent, plan.currency)), ` of ${fmt.money(plan.budget, plan.currency)}.`)),
-        h('p', {class: 'hint'}, `What the plan minimises: ${plan.objective.statement}.`),
+        h('p', {class: 'hint'}, `The plan's aim: to ${plan.objective.statement}.`),
+        // The plan buys for the programme, so its positions are the programme's, not the central store's shelf.
+        h('p', {class: 'hint', id: 'position-meaning'}, 'Stock positions here are the whole programme\'s: what the central '
+            + 'store, the depots and the mechanics\' kits hold, plus what is on order, against the programme\'s reorder '
+            + 'point and order-up-to level.'),
         h('div', {class: 'row no-print'}, acceptButton,
             h('a', {class: 'button', href: `/api/planning/purchase-plans/${plan.id}/export`, download: `purchase-plan-${plan.id}.csv`},
                 'Download as CSV')),
@@ -63,7 +67,7 @@ async function show(plan) {
                 {label: 'Packs', num: true, value: l => fmt.num(l.packs)},
                 {label: 'Quantity', num: true, value: l => q(l.quantity, l.partNumber)},
                 {label: 'Cost', num: true, value: l => fmt.money(l.cost, plan.currency)},
-                {label: 'Stock position before', num: true, value: l => q(l.positionBefore, l.partNumber)},
+                {label: 'Programme stock position before', num: true, value: l => q(l.positionBefore, l.partNumber)},
                 {label: 'Reorder point', num: true, value: l => q(l.reorderPoint, l.partNumber)},
                 {label: 'Order-up-to', num: true, value: l => q(l.orderUpTo, l.partNumber)}]}),
         table({caption: 'Left out', id: 'plan-left-out', rows: plan.leftOut, empty: 'Nothing left out: every part below its reorder point is bought up to its order-up-to level.',
@@ -71,7 +75,7 @@ async function show(plan) {
                 {label: 'Still needed', num: true, value: l => q(l.quantity, l.partNumber)},
                 {label: 'Would cost', num: true, value: l => fmt.money(l.cost, l.currency)},
                 {label: 'Why left out', value: l => REASONS[l.reason] || l.reason.toLowerCase()},
-                {label: 'Position after the plan', num: true, value: l => q(l.positionAfter, l.partNumber)},
+                {label: 'Programme position after the plan', num: true, value: l => q(l.positionAfter, l.partNumber)},
                 {label: 'Reorder point', num: true, value: l => q(l.reorderPoint, l.partNumber)}]}),
         plan.noForecast.length ? h('p', {}, `Not weighed, having no programme forecast in the run: ${plan.noForecast.join(', ')}.`) : null,
         caution()));

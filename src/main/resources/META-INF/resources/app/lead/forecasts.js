@@ -72,10 +72,12 @@ function howChosen(view) {
     const hold = view.holdout;
     const holdText = hold.fleetRmsse === null || hold.fleetRmsse === undefined
         ? 'No fleet model covers this part here, so its own history is used.'
-        : `Over the last 12 months held out, the fleet model scored RMSSE ${fmt.num(hold.fleetRmsse, 3)} and the part's own history `
-          + `RMSSE ${fmt.num(hold.historyRmsse, 3)} (lower is better). `
+        : `For comparison only: over the last 12 months held out, the fleet model scored RMSSE ${fmt.num(hold.fleetRmsse, 3)} and `
+          + `the part's own history RMSSE ${fmt.num(hold.historyRmsse, 3)} (lower is better). `
           + (hold.chosen === 'fleet model'
-              ? 'The forecast uses the fleet model' + (f.methodDetail && f.methodDetail !== 'fleet model' ? `: ${f.methodDetail}.` : '.')
+              // Said before the choice, so a lower history score beside "uses the fleet model" does not read as a slip.
+              ? 'A part the fleet model covers takes the fleet rate, updated by its own history, whichever scored lower on '
+                + 'one held-out year. The forecast uses the fleet model' + (f.methodDetail && f.methodDetail !== 'fleet model' ? `: ${f.methodDetail}.` : '.')
               : `The forecast uses the part's own history (${methodWords(f.method)}).`);
     return h('div', {class: 'method-box'},
         h('h3', {}, 'How the method was chosen'),

@@ -193,7 +193,8 @@ async function showResults(runId) {
         perGroupTable(`Spend per depot (${r.currency})`, years, 'depots', r.currency, 'spend-depots'),
         h('p', {class: 'hint', id: 'central-store-note'}, 'The central store buys once, in the first period, the stock that '
             + 'brings the programme up to its policy levels; after that each year\'s parts are counted at the depot whose '
-            + 'pumps use them, so the central store shows no spend in later years.'),
+            + 'pumps use them, so the central store shows no spend in later years. The budget plan buys the same stock '
+            + 'in whole packs, so it comes to a little more there.'),
         r.notes?.length ? h('ul', {class: 'hint'}, r.notes.map(n => h('li', {}, n))) : null);
     ready();
 }

@@ -12,6 +12,10 @@ const {me, store, parts, run} = await startOfficer({page: 'transfers', title: 'T
 const main = document.getElementById('content');
 const unit = p => (parts.get(p) || {}).unitOfIssue;
 const mayDispatchFrom = code => me.roles.includes('admin') || me.locationCodes.includes(code);
+// Lane costs are in the currency most of the catalogue is priced in, as on the lead's lane settings.
+const currencies = {};
+[...parts.values()].forEach(p => currencies[p.currency] = (currencies[p.currency] || 0) + 1);
+const laneCurrency = Object.entries(currencies).sort((a, b) => b[1] - a[1])[0]?.[0] || 'USD';
 
 async function load() {
     if (!store) {
@@ -47,12 +51,14 @@ function dispatch(button, body, form) {
 }
 
 function suggestionTable(rows) {
-    const wrap = table({caption: 'Moves that remove the most pump-days without water for their transport cost', id: 'suggestions', rows,
+    const wrap = table({caption: 'Moves that remove the most pump-days without water for their transport cost; pump-days are '
+        + 'those the receiving store would otherwise lose before its next delivery (transfer time and review)', id: 'suggestions', rows,
         empty: 'No transfer is suggested for this store now.', columns: [
             {label: 'Part', value: s => describe(parts, s.partNumber)},
             {label: 'From', value: s => s.from}, {label: 'To', value: s => s.to},
             {label: 'Quantity', value: s => fmt.qty(s.quantity, unit(s.partNumber)), num: true},
             {label: 'Distance', value: s => `${fmt.num(s.distanceKm)} km`, num: true},
+            {label: 'Transport cost', value: s => fmt.money(s.quantity * s.unitCost, laneCurrency), num: true},
             {label: 'Pump-days avoided', value: s => fmt.pumpDays(s.pumpDaysAvoided), num: true},
             {label: 'Action', value: s => {
                 if (!mayDispatchFrom(s.from)) {
