@@ -117,8 +117,10 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         asMechanic().queryParam("asset", pump).get("/api/repairs").then().statusCode(200).body("size()", org.hamcrest.Matchers.equalTo(0));
         assertEquals(0, new BigDecimal("5").compareTo(stock.onHand(sealPart, kit)), "nothing left the kit");
 
-        // The refusal leaves only when the mechanic discards it.
+        // The refusal leaves only when the mechanic discards it, and says so a second time when asked.
         press(".outbox__item--refused button.outbox__discard");
+        textOf(By.cssSelector("dialog.ask[open]"));
+        press("#ask-yes");
         wait(Duration.ofSeconds(10)).until(d -> "0".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
         // The one refusal caused on purpose shows in the network events and the browser log; nothing else may fail.
         String repairs = url("/api/repairs");

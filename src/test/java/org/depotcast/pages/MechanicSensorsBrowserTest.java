@@ -32,6 +32,12 @@ class MechanicSensorsBrowserTest extends BrowserSession {
                 + ".map(e => arguments[1] ? e.getAttribute(arguments[1]) : e.textContent)", css, attribute);
     }
 
+    private void tap(String css) {
+        WebElement control = driver.findElement(By.cssSelector(css));
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", control);
+        control.click();
+    }
+
     private void openSensors() {
         if (driver.findElement(By.id("sensors")).getDomAttribute("open") == null) {
             WebElement summary = driver.findElement(By.cssSelector("#sensors > summary"));
@@ -58,6 +64,15 @@ class MechanicSensorsBrowserTest extends BrowserSession {
         List<String> card = read("#down-list li[data-asset='" + stopped + "']", null);
         assertEquals(1, card.size(), stopped + " is listed as probably stopped");
         assertTrue(card.get(0).contains("Probably down ("), card.get(0));
+        // The mechanic is the one who would go: told to check before the trip, not to ask "the area mechanic".
+        List<String> caution = read("#sensors .sensor-caution", null);
+        assertTrue(caution.size() == 1 && caution.get(0).contains("before making the trip")
+                && !caution.get(0).contains("the area mechanic"), caution.toString());
+        // A pump probably stopped is on the round of pumps to visit, its card saying why.
+        List<String> onRound = read("#pump-list #pump-" + stopped, null);
+        assertEquals(1, onRound.size(), stopped + " is among the pumps to visit");
+        assertTrue(onRound.get(0).contains("Sensor: Probably down (") && onRound.get(0).contains("ask the community before the trip"),
+                onRound.get(0));
         Number scroll = (Number) driver.executeScript("return document.documentElement.scrollWidth");
         assertTrue(scroll.intValue() <= width, "the page is " + scroll + " px wide on a " + width + " px screen");
     }
@@ -105,7 +120,16 @@ class MechanicSensorsBrowserTest extends BrowserSession {
         assertTrue(driver.findElement(By.id("connection")).getText().startsWith("No connection"));
         assertShows(expected, stopped, 360, false);
         screenshot("mechanic-sensors-offline-360");
-        offline(false);
+
+        // Reported broken from the sensors' list with no connection: the card says it waits, and offers no second report.
+        tap("#down-list li[data-asset='" + stopped + "'] button");
+        tap("#status-form button[type=submit]");
+        wait(Duration.ofSeconds(10)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-outbox")));
+        List<String> card = read("#down-list li[data-asset='" + stopped + "']", null);
+        assertTrue(card.get(0).contains("Reported on this phone: waiting to send"), card.get(0));
+        assertTrue(read("#down-list li[data-asset='" + stopped + "'] button", null).isEmpty(), "no second report offered");
+        screenshot("mechanic-sensors-reported-offline-360");
+        // Left offline: the report is never sent, so the demo pump stays as other tests expect it.
         assertNoPageErrors();
     }
 }

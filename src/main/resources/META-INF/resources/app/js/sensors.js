@@ -1,6 +1,7 @@
 /*
  * sensors.js: words the officer's and the mechanic's pages share about pump sensors.
- *   stopCaution()            the plain caution beside every list of pumps probably down
+ *   stopCaution(reader)      the plain caution beside every list of pumps probably down; 'mechanic' for the one
+ *                            who would make the trip, otherwise the officer's words
  *   downWords(pump)          "Probably down (87 % likely)"; never "100 %": a flag is a judgement, not a fact
  *   fellWords(pump)          "Use fell on 11 Oct 2026, 3 days ago"
  *   repairWords(pump)        whether a repair is open on a flagged pump, in words
@@ -10,11 +11,14 @@
 import * as fmt from './format.js';
 import {h} from './ui.js';
 
-export function stopCaution() {
+export function stopCaution(reader) {
+    const next = reader === 'mechanic'
+        ? 'Ask the community or the pump\'s caretaker before making the trip, and report it broken only once you or '
+            + 'they have seen that it is.'
+        : 'Ask the community or the area mechanic before sending anyone, and treat the parts as an estimate of what a '
+            + 'repair is likely to need, not a diagnosis.';
     return h('p', {class: 'message sensor-caution'}, 'Probably down, not known to be: a sensor can fail or a pump can '
-        + 'stand idle. Ask the community or the area mechanic before sending anyone, and treat the parts as an '
-        + 'estimate of what a repair is likely to need, not a diagnosis. Repairs follow trained, licensed practice and '
-        + 'local rules.');
+        + `stand idle. ${next} Repairs follow trained, licensed practice and local rules.`);
 }
 
 export function downWords(pump) {

@@ -161,8 +161,8 @@ export function ask({title, lines, yes, no}) {
             resolve(value);
         };
         const stay = h('button', {type: 'button', class: 'primary', id: 'ask-no', onclick: answer(false)}, no);
-        const dialog = h('dialog', {class: 'ask', 'aria-labelledby': 'ask-title'},
-            h('h2', {id: 'ask-title'}, title), lines.map(l => (l instanceof Node ? l : h('p', {}, l))),
+        const dialog = h('dialog', {class: 'ask', 'aria-labelledby': 'question-title'},
+            h('h2', {id: 'question-title'}, title), lines.map(l => (l instanceof Node ? l : h('p', {}, l))),
             h('p', {class: 'row'}, stay, h('button', {type: 'button', id: 'ask-yes', class: 'danger', onclick: answer(true)}, yes)));
         dialog.addEventListener('cancel', e => {
             e.preventDefault();

@@ -5,11 +5,11 @@
  */
 import {startPage, topBar} from '/app/js/nav.js';
 import * as fmt from '/app/js/format.js';
-import {h, mount, say, showError, caution} from '/app/js/ui.js';
+import {h, mount, say, showError, caution, ask} from '/app/js/ui.js';
 import * as store from './store.js';
 import {sendWaiting, sendAgain} from './send.js';
 import {fetchSnapshot, kitRows} from './data.js';
-import {kitView, pumpCard, requestsView, outboxView} from './views.js';
+import {kitView, pumpCard, requestsView, outboxView, discardQuestion} from './views.js';
 import {askForm, repairForm, statusForm} from './forms.js';
 import {closeForm} from './close.js';
 import {section, heading, openSection, followJumps} from './sections.js';
@@ -79,7 +79,7 @@ function drawPumps() {
     const list = pumpRows(snapshot, outbox, {all: el('pump-all').checked, search});
     heading('pumps', `My pumps: ${list.toVisit} to visit, of ${snapshot.pumps.length}`);
     mount(el('pump-count'), list.words);
-    mount(el('pump-list'), list.rows.length ? list.rows.map(r => pumpCard(snapshot, r.pump, r.due, r.repairs, outbox, act, r.stop))
+    mount(el('pump-list'), list.rows.length ? list.rows.map(r => pumpCard(snapshot, r, outbox, act))
         : h('p', {class: 'empty'}, search ? 'No pump of yours matches.' : 'No pump needs you now. Tick "Show all my pumps" to see them all.'));
 }
 
@@ -107,7 +107,7 @@ function drawData() {
         : 'No forecast run yet.');
     mount(el('kit-body'), kitView(snapshot, outbox, (asset, wanted) => act('ask', asset, wanted)));
     mount(el('requests-body'), requestsView(snapshot, outbox));
-    mount(el('sensors-body'), sensorView(snapshot, act));
+    mount(el('sensors-body'), sensorView(snapshot, act, outbox));
     drawPumps();
     const key = JSON.stringify([snapshot.pumps.map(p => p.assetId + p.status), snapshot.balances.map(b => b.partNumber + b.onHand),
         snapshot.openRepairs.map(r => r.repairRef)]);
@@ -155,6 +155,11 @@ async function queue(item) {
 }
 
 async function discard(item) {
+    // Made on this phone, perhaps offline: a stray tap must not lose it.
+    if (!(await ask(discardQuestion(item)))) {
+        say(`Kept on this phone: ${item.summary}.`, 'ok');
+        return;
+    }
     await store.remove(item.id);
     say(`Discarded: ${item.summary}.`, 'ok');
     await drawOutbox();

@@ -1,31 +1,38 @@
 /*
  * pumplist.js: which of the mechanic's pumps the page lists, and in what order. By default the pumps that need a
- * visit (broken, with an open repair, a service due within 30 days, or an action of the mechanic's waiting), in
- * the order of a route from the depot (route.js); with "show all" or a search, every match, most pressing first.
+ * visit (broken, with an open repair, probably stopped by their sensor, a service due within 30 days, or an action of
+ * the mechanic's waiting), in the order of a route from the depot (route.js); with "show all" or a search, every
+ * match, most pressing first.
  */
 import * as fmt from '/app/js/format.js';
 import {visitOrder} from './route.js';
 import {measuredDue} from './sensorview.js';
 
-function needsAttention(pump, due, repairs, waiting) {
-    return pump.status === 'BROKEN' || repairs.length > 0 || (due && (due.state === 'OVERDUE' || due.state === 'DUE_SOON'))
-        || waiting.some(i => i.assetId === pump.assetId);
+function needsAttention(r, waiting) {
+    return r.pump.status === 'BROKEN' || r.repairs.length > 0 || Boolean(r.sensor)
+        || (r.due && (r.due.state === 'OVERDUE' || r.due.state === 'DUE_SOON'))
+        || waiting.some(i => i.assetId === r.pump.assetId);
 }
 
-function rankOf(pump, due, repairs) {
-    return pump.status === 'BROKEN' ? 0 : repairs.length ? 1 : ({OVERDUE: 2, DUE_SOON: 3}[(due || {}).state] ?? 4);
+function rankOf(r) {
+    return r.pump.status === 'BROKEN' ? 0 : r.repairs.length ? 1 : r.sensor ? 2
+        : ({OVERDUE: 3, DUE_SOON: 4}[(r.due || {}).state] ?? 5);
 }
 
-/** {rows: [{pump, due, repairs, stop}], toVisit, words}; stop = {n, legKm} on the round, or null. */
+/**
+ * {rows: [{pump, due, repairs, sensor, stop}], toVisit, words}; sensor = the pump's entry among those probably
+ * stopped (sensorview.js), or undefined; stop = {n, legKm} on the round, or null.
+ */
 export function pumpRows(snapshot, waiting, {all, search}) {
     const measured = measuredDue(snapshot);
     const due = new Map(snapshot.due.map(d => [d.assetId, measured.get(d.assetId) || d]));
     const repairs = new Map();
     snapshot.openRepairs.forEach(r => repairs.set(r.assetId, [...(repairs.get(r.assetId) || []), r]));
-    const row = p => ({pump: p, due: due.get(p.assetId), repairs: repairs.get(p.assetId) || [], stop: null});
-    const rank = r => rankOf(r.pump, r.due, r.repairs);
-    const pressing = (a, b) => rank(a) - rank(b) || a.pump.assetId.localeCompare(b.pump.assetId);
-    const visit = snapshot.pumps.map(row).filter(r => needsAttention(r.pump, r.due, r.repairs, waiting)).sort(pressing);
+    const stopped = new Map(((snapshot.probablyDown || {}).pumps || []).map(p => [p.assetId, p]));
+    const row = p => ({pump: p, due: due.get(p.assetId), repairs: repairs.get(p.assetId) || [], sensor: stopped.get(p.assetId),
+        stop: null});
+    const pressing = (a, b) => rankOf(a) - rankOf(b) || a.pump.assetId.localeCompare(b.pump.assetId);
+    const visit = snapshot.pumps.map(row).filter(r => needsAttention(r, waiting)).sort(pressing);
     const total = snapshot.pumps.length;
     if (search || all) {
         const rows = snapshot.pumps.map(row).filter(r => !search || r.pump.assetId.toLowerCase().includes(search)).sort(pressing);
@@ -36,7 +43,7 @@ export function pumpRows(snapshot, waiting, {all, search}) {
     const km = round.reduce((sum, s) => sum + (s.legKm || 0), 0);
     const from = snapshot.depot ? snapshot.depot.name || snapshot.depot.code : 'the first pump';
     return {rows, toVisit: visit.length, words: `${visit.length} of your ${total} pumps need a visit: broken, with an open repair, `
-        + `or with a service due within 30 days. In the order of a route from ${from}, nearest next pump first: about `
+        + `probably stopped by their sensor, or with a service due within 30 days. In the order of a route from ${from}, nearest next pump first: about `
         + `${fmt.num(km, 1)} km from the depot to the last pump in straight lines (roads are longer).`};
 }
 

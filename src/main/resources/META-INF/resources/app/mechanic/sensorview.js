@@ -3,7 +3,8 @@
  * offline too): the pumps probably stopped, most likely first, and the pumps due for service in the next 90 days in
  * the order of their projected due date (hours since the last service at the recent daily load).
  *   sensorCounts(snapshot)        {down, due} for the section's heading
- *   sensorView(snapshot, act)     the section's body; act('status', assetId, 'BROKEN') opens the report form
+ *   sensorView(snapshot, act, waiting)  the section's body; act('status', assetId, 'BROKEN') opens the report form,
+ *                                 unless a report of that pump is already waiting in the outbox
  *   measuredDue(snapshot)         assetId → the pump card's service-due row with the sensor plan's hours and date, for
  *                                 pumps measured by sensor, so the card and this list give the same day
  */
@@ -57,14 +58,18 @@ export function sensorCounts(snapshot) {
     return {down: snapshot.probablyDown ? snapshot.probablyDown.pumps.length : 0, due: dueRows(snapshot).length};
 }
 
-function downCard(p, act) {
+function downCard(p, act, waiting) {
+    // A second tap would queue the same report twice; until it reaches the server the card says it is on its way.
+    const reported = waiting.find(i => i.kind === 'status' && i.assetId === p.assetId);
     return h('li', {class: 'pump card', 'data-asset': p.assetId},
         h('h4', {}, p.assetId),
         h('p', {}, state(downWords(p), 'urgent')),
         h('p', {class: 'hint'}, `${fellWords(p)}; about ${fmt.num(p.baselineHoursPerDay, 1)} h a day before.`),
-        h('p', {class: 'hint'}, repairWords(p)),
-        p.openRepairRef ? null : h('button', {type: 'button', onclick: () => act('status', p.assetId, 'BROKEN')},
-            'Report it broken'));
+        reported ? null : h('p', {class: 'hint'}, repairWords(p)),
+        reported ? h('p', {class: 'sensor-reported'}, state(reported.state === 'refused'
+            ? 'Your report was refused: see "Waiting to send"' : 'Reported on this phone: waiting to send', 'info'))
+            : p.openRepairRef ? null : h('button', {type: 'button', onclick: () => act('status', p.assetId, 'BROKEN')},
+                'Report it broken'));
 }
 
 function dueItem(p, today) {
@@ -73,7 +78,7 @@ function dueItem(p, today) {
         h('span', {class: 'hint'}, `${hoursWords(p)}; ${fmt.num(p.recentHoursPerDay, 1)} h a day lately (${p.usageBasis}).`));
 }
 
-export function sensorView(snapshot, act) {
+export function sensorView(snapshot, act, waiting = []) {
     const down = snapshot.probablyDown;
     const plan = snapshot.servicePlan;
     if (!down || !plan) {
@@ -82,7 +87,8 @@ export function sensorView(snapshot, act) {
     const due = dueRows(snapshot);
     return [
         h('h3', {id: 'down-title'}, `Probably stopped: ${down.pumps.length}`),
-        down.pumps.length ? [stopCaution(), h('ul', {class: 'pump-list plain-list', id: 'down-list'}, down.pumps.map(p => downCard(p, act)))]
+        down.pumps.length ? [stopCaution('mechanic'), h('ul', {class: 'pump-list plain-list', id: 'down-list'},
+            down.pumps.map(p => downCard(p, act, waiting)))]
             : h('p', {class: 'muted'}, 'None of your pumps looks stopped.'),
         h('h3', {id: 'due-title'}, `Service due in the next ${HORIZON_DAYS} days, soonest first: ${due.length}`),
         h('p', {class: 'hint'}, `Worked out on ${fmt.date(plan.today)} from operating hours since each pump's last service `

@@ -7,6 +7,7 @@ import {h, state, table} from '/app/js/ui.js';
 import {kitRows} from './data.js';
 import {stopWords} from './pumplist.js';
 import {isShortage, shortageText} from './send.js';
+import {downWords, fellWords} from '/app/js/sensors.js';
 
 const KIT_STATES = {
     out: ['Out: none left', 'urgent'], 'top-up': ['At or below min: top up', 'warn'],
@@ -89,7 +90,14 @@ function openRepair(snapshot, r, waiting, act) {
             : h('button', {type: 'button', class: 'close-repair', onclick: () => act('close', r.assetId, r.repairRef)}, 'Close as fixed'));
 }
 
-export function pumpCard(snapshot, pump, due, repairs, waiting, act, stop) {
+/** The sensor's judgement on a pump's card, with what to check before the trip. */
+function sensorLine(sensor) {
+    return sensor ? h('p', {class: 'pump__sensor'}, state(`Sensor: ${downWords(sensor)}`, 'warn'), h('span', {class: 'hint'},
+        `${fellWords(sensor)}. Not known to be broken: ask the community before the trip.`)) : null;
+}
+
+/** A pump's card from its row of pumplist.js ({pump, due, repairs, sensor, stop}). */
+export function pumpCard(snapshot, {pump, due, repairs, sensor, stop}, waiting, act) {
     const statusWords = pump.status === 'BROKEN' ? [`Broken since ${fmt.date(pump.statusSince || pump.brokenSince)}`, 'urgent']
         : [`Working${pump.statusSince ? ` since ${fmt.date(pump.statusSince)}` : ''}`, 'ok'];
     const mine = waiting.filter(i => i.assetId === pump.assetId);
@@ -98,6 +106,7 @@ export function pumpCard(snapshot, pump, due, repairs, waiting, act, stop) {
             `${pump.modelCode}, ${fmt.num(pump.depthM, 1)} m deep`)),
         stop ? h('p', {class: 'pump__stop'}, stopWords(stop)) : null,
         h('p', {}, state(...statusWords), pump.statusNote ? h('span', {class: 'hint'}, pump.statusNote) : null),
+        sensorLine(sensor),
         serviceLine(due),
         repairs.length ? h('ul', {class: 'pump__repairs', 'aria-label': 'Open repairs'}, repairs.map(r => openRepair(snapshot, r, waiting, act)))
             : null,
@@ -152,4 +161,17 @@ export function outboxView(waiting, discard, sendAgain, kitCode) {
         item.state === 'refused' ? h('p', {class: 'row'},
             isShortage(item) ? h('button', {type: 'button', class: 'primary outbox__again', onclick: () => sendAgain(item)}, 'Send again') : null,
             h('button', {type: 'button', class: 'outbox__discard', onclick: () => discard(item)}, 'Discard this action')) : null)));
+}
+
+/** The question before an action made on this phone is deleted for good (ui.ask: "Keep it" has the focus). */
+export function discardQuestion(item) {
+    const where = item.state === 'refused' ? 'The server refused it, so it is not on record there.'
+        : 'It has not reached the server yet.';
+    return {
+        title: 'Discard this action for good?',
+        lines: [h('p', {}, h('strong', {}, item.summary)), `Made on this phone ${fmt.dateTime(item.createdAt)}. ${where}`,
+            'Discarding deletes it from this phone: it will never be sent and cannot be brought back. If the work really '
+            + 'happened, keep it and follow the advice beside it, or ask the stores officer.'],
+        yes: 'Discard it for good', no: 'Keep it'
+    };
 }
