@@ -22,6 +22,9 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class OfficerSensorsBrowserTest extends BrowserSession {
     private static final String DEPOT = "DEP-MARROWFORD";
 
+    private static final java.util.regex.Pattern EXPECTED_WITH_UNIT =
+            java.util.regex.Pattern.compile("(less than 0\\.05|[0-9.,]+) (pieces|pairs|sets|lengths|m|kg|L) expected");
+
     private List<String> texts(String css) {
         return driver.findElements(By.cssSelector(css)).stream().map(WebElement::getText).toList();
     }
@@ -66,6 +69,12 @@ class OfficerSensorsBrowserTest extends BrowserSession {
                 assertTrue(partRows.stream().anyMatch(t -> t.contains(part)
                         && (t.contains("Enough in stock") || t.contains("Short by"))), part + " with its stock in words");
             }
+            // An average count says its unit, like every other quantity on the page.
+            for (String r : partRows) {
+                assertTrue(EXPECTED_WITH_UNIT.matcher(r).find(), "expected units without their unit: " + r);
+            }
+            String downNow = driver.findElement(By.cssSelector("#main .figures div")).getText();
+            assertTrue(downNow.matches("(?s)Probably down now\\s+" + report.getList("pumps").size() + "\\D.*pumps?"), downNow);
             String aside = notSetAside.isEmpty() ? "" : driver.findElement(By.id("down-parts-aside")).getText();
             for (String part : notSetAside) {
                 assertTrue(aside.contains(part), part + " named as not worth setting aside: " + aside);
@@ -80,6 +89,44 @@ class OfficerSensorsBrowserTest extends BrowserSession {
             assertEquals(Boolean.FALSE, overflow, "the page fits the screen without sideways scrolling");
             screenshot("officer-sensors-" + (narrow ? "360" : "1280"));
         }
+        assertNoPageErrors();
+    }
+
+    /**
+     * The list under the weeks names exactly the pumps the weeks count (the last week's too), the last week ends on the
+     * 90th day, and the central store, which has no pumps, says so instead of drawing empty tables.
+     */
+    @Test
+    void theDueListHoldsEveryPumpTheWeeksCountAndTheCentralStoreSaysItHasNoPumps() throws Exception {
+        signIn("officer", "officer-demo");
+        boolean lastWeekChecked = false;
+        for (String depot : List.of("DEP-MARROWFORD", "DEP-PELLOWDENE", "DEP-TESHVALE")) {
+            JsonPath plan = as("officer").queryParam("depot", depot).get("/api/sensors/service-plan").then()
+                    .statusCode(200).extract().jsonPath();
+            List<List<String>> weeks = plan.getList("weeks.pumpsDue");
+            String lastStart = plan.getString("weeks[-1].weekStart");
+            List<String> lastWeek = weeks.get(weeks.size() - 1);
+            lastWeekChecked |= plan.getList("pumps.findAll { it.dueOn != null && it.dueOn > '" + lastStart + "' && it.dueOn <= '"
+                    + java.time.LocalDate.parse(plan.getString("today")).plusDays(89) + "' }").size() > 0;
+            open("/app/officer/sensors.html?location=" + depot);
+            waitReady();
+            List<String> listed = driver.findElements(By.cssSelector("#service-pumps tbody tr td:first-child")).stream()
+                    .map(e -> e.getDomProperty("textContent")).toList();
+            List<String> counted = weeks.stream().flatMap(List::stream).toList();
+            assertEquals(counted.size(), listed.size(), depot + ": the list names every pump the weeks count");
+            assertTrue(listed.containsAll(lastWeek), depot + ": the last week's pumps " + lastWeek + " are listed");
+            String lastLabel = texts("#service-weeks tbody tr td:first-child").get(weeks.size() - 1);
+            String day = driver.executeScript("return new Date(arguments[0] + 'T12:00:00').toLocaleDateString(undefined, "
+                    + "{day: 'numeric', month: 'short', year: 'numeric'})",
+                    java.time.LocalDate.parse(plan.getString("today")).plusDays(89).toString()).toString();
+            assertTrue(lastLabel.endsWith(day), "the last week ends on the 90th day, " + day + ": " + lastLabel);
+        }
+        assertTrue(lastWeekChecked, "a demo depot has a pump due in the last week after its first day, so the check bites");
+
+        open("/app/officer/sensors.html?location=CENTRAL");
+        waitReady();
+        assertTrue(driver.findElement(By.id("sensor-no-pumps")).getText().startsWith("CENTRAL has no pumps of its own"));
+        assertTrue(driver.findElements(By.cssSelector("#down-pumps, #service-weeks")).isEmpty(), "no empty tables");
         assertNoPageErrors();
     }
 }

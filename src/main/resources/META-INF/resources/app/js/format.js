@@ -2,6 +2,7 @@
  * format.js: numbers, money, quantities and dates for people, in the browser's locale (Intl).
  *   qty(value, unit)      whole numbers for parts counted by the piece (EACH, PAIR, SET, LENGTH), at most two
  *                         decimals for measured ones, with the unit in words: "3 pieces", "12.5 m"
+ *   units(unit)           the unit's plural in words for an average of it ("pieces", "m"), "units" when unknown
  *   num(value, digits=0)  thousands separators, at most `digits` decimals
  *   fixed(value, digits)  thousands separators, exactly `digits` decimals (figures compared in a column)
  *   pumpDays(value)       expected pump-days without water, always one decimal: "21.0", "261.4"
@@ -47,6 +48,10 @@ export function fixed(value, digits) {
 /** One rule for pump-days on every page (board, alert details, transfers, budget plan): one decimal, always shown. */
 export function pumpDays(value) {
     return fixed(value, 1);
+}
+
+export function units(unit) {
+    return (UNIT_WORDS[unit] || [null, 'units'])[1];
 }
 
 export function wholeUnits(unit) {

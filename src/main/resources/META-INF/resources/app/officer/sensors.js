@@ -13,6 +13,7 @@ import {startOfficer, describe, ready} from './officer.js';
 const {store, parts, run} = await startOfficer({page: 'sensors', title: 'Pump sensors'});
 const main = document.getElementById('content');
 const unit = p => (parts.get(p) || {}).unitOfIssue;
+const HORIZON_DAYS = 90;
 
 function sensorProvenance(down, plan) {
     const fleet = down.forecastRunId
@@ -44,13 +45,18 @@ function shortWords(need) {
         : state(`Short by ${fmt.qty(wanted - held, unit(need.partNumber))}`, 'warn');
 }
 
-/** "0.4 expected"; a part expected less than once in twenty repairs says so instead of "0 expected". */
-function expectedWords(units) {
-    return units < 0.05 ? 'less than 0.05 expected' : `${fmt.num(units, 1)} expected`;
+/**
+ * "0.4 pieces expected" (an average over the repairs these pumps may need); a part expected less than once in twenty
+ * repairs says so instead of "0 expected".
+ */
+function expectedWords(units, partNumber) {
+    const words = fmt.units(unit(partNumber));
+    return units < 0.05 ? `less than 0.05 ${words} expected` : `${fmt.num(units, 1)} ${words} expected on average`;
 }
 
 function coverWords(need) {
-    return `${expectedWords(need.expectedUnits)}; covers the need ${fmt.percent(need.coverLevel, 0)} of the time`;
+    return `${expectedWords(need.expectedUnits, need.partNumber)} for these pumps; this many covers their need `
+        + `${fmt.percent(need.coverLevel, 0)} of the time`;
 }
 
 function partsTable(down) {
@@ -80,23 +86,30 @@ function notWorthSettingAside(down) {
     return h('p', {class: 'small', id: 'down-parts-aside'}, 'Also possible, not worth setting aside (the chance of '
         + 'needing none already meets the service level): ',
         rows.map((n, i) => h('span', {}, i ? ', ' : '', h('strong', {}, n.partNumber),
-            ` ${(parts.get(n.partNumber) || {}).description || ''} (${expectedWords(n.expectedUnits)})`)), '.');
+            ` ${(parts.get(n.partNumber) || {}).description || ''} (${expectedWords(n.expectedUnits, n.partNumber)})`)), '.');
 }
 
 function downSection(down) {
     return h('section', {'aria-labelledby': 'down-title'}, h('h2', {id: 'down-title'}, 'Pumps that have probably stopped'),
-        h('div', {class: 'card'}, figures([['Probably down now', fmt.num(down.pumps.length)],
-            ['Earlier flags closed by a repair', fmt.num(down.closedByRepair)],
-            ['Earlier flags that were false alarms', fmt.num(down.falseAlarms)]])),
-        stopCaution(), downTable(down), partsTable(down), notWorthSettingAside(down),
+        h('div', {class: 'card'}, figures([['Probably down now', count(down.pumps.length, 'pump')],
+            ['Earlier flags closed by a repair report (all on record)', count(down.closedByRepair, 'flag')],
+            ['Earlier flags where use came back without a repair (false alarms, all on record)', count(down.falseAlarms, 'flag')]])),
+        down.pumps.length ? stopCaution() : null, downTable(down), partsTable(down), notWorthSettingAside(down),
         h('details', {class: 'small'}, h('summary', {}, 'How a pump is judged probably down'), h('p', {}, down.method)));
 }
 
-function weekLabel(week) {
-    const end = new Date(`${week.weekStart}T12:00:00`);
-    end.setDate(end.getDate() + 6);
-    const iso = `${end.getFullYear()}-${String(end.getMonth() + 1).padStart(2, '0')}-${String(end.getDate()).padStart(2, '0')}`;
-    return `${fmt.date(week.weekStart)} – ${fmt.date(iso)}`;
+const count = (n, word) => `${fmt.num(n)} ${n === 1 ? word : `${word}s`}`;
+
+function isoPlus(isoDay, days) {
+    const d = new Date(`${isoDay}T12:00:00`);
+    d.setDate(d.getDate() + days);
+    return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}
+
+/** The last week stops at the 90th day, as the plan does (today + 89), so its label never promises a day it skips. */
+function weekLabel(week, lastDay) {
+    const end = isoPlus(week.weekStart, 6);
+    return `${fmt.date(week.weekStart)} – ${fmt.date(end < lastDay ? end : lastDay)}`;
 }
 
 function weekShortfall(week) {
@@ -104,16 +117,17 @@ function weekShortfall(week) {
     if (!week.pumpsDue.length) {
         return state('Nothing due', 'quiet');
     }
-    return short.length ? h('span', {}, short.map(k => h('span', {class: 'hint'}, state('Short', 'warn'), ` ${k.partNumber}: `
-        + `${fmt.qty(Math.ceil(k.unitsToDate - Number(k.inStock) - 1e-9), unit(k.partNumber))} short of the `
-        + `${fmt.qty(k.unitsToDate, unit(k.partNumber))} needed by this week's end`)))
-        : state('Enough in stock for the kits due so far', 'ok');
+    return short.length ? h('span', {}, short.map(k => h('span', {class: 'hint'}, state('Short', 'warn'), ` ${k.partNumber} ${(parts.get(k.partNumber) || {}).description || ''}: `
+        + `${fmt.qty(Math.ceil(k.unitsToDate - Number(k.inStock) - 1e-9), unit(k.partNumber))} short; the services due from `
+        + `today to this week's end need ${fmt.qty(k.unitsToDate, unit(k.partNumber))}, ${fmt.qty(k.inStock, unit(k.partNumber))} in stock`)))
+        : state('Enough in stock for the services due so far', 'ok');
 }
 
 function weeksTable(plan) {
+    const lastDay = isoPlus(plan.today, HORIZON_DAYS - 1);
     return table({caption: `Service kits falling due at ${store.code} by week, for the next 90 days, against stock ${plan.stockCounted}`,
         id: 'service-weeks', rows: plan.weeks, columns: [
-            {label: 'Week', value: w => weekLabel(w)},
+            {label: 'Week', value: w => weekLabel(w, lastDay)},
             {label: 'Pumps due', value: w => w.pumpsDue.length ? h('span', {}, h('strong', {}, fmt.num(w.pumpsDue.length)),
                 h('span', {class: 'hint pump-list'}, w.pumpsDue.join(', '))) : '0'},
             {label: 'Kit parts this week', value: w => w.parts.length ? h('ul', {class: 'plain-list'}, w.parts.map(k =>
@@ -121,15 +135,30 @@ function weeksTable(plan) {
             {label: 'Stock', value: w => weekShortfall(w)}]});
 }
 
+/** What to do when stock falls short, with the pages that do it: said once, under the table that shows it. */
+function shortNext(plan, down) {
+    const short = plan.weeks.some(w => w.parts.some(k => !k.enoughInStock)) || down.parts.some(n => n.haveReady > 0 && !n.enoughInStock);
+    if (!short) {
+        return null;
+    }
+    const at = `?location=${encodeURIComponent(store.code)}`;
+    return h('p', {class: 'message', id: 'sensor-next'}, `Where a part is short, ${store.code} and its mechanics' kits hold less `
+        + 'than the pumps above will need by then. Before that week, move stock here from another store (',
+        h('a', {href: `/app/officer/transfers.html${at}`}, 'Transfers'), ') or order it (',
+        h('a', {href: `/app/officer/purchases.html${at}`}, 'Purchases'), '); some of it may be in the kits rather than on the '
+        + 'depot\'s shelf, so a kit holding more than its mechanic needs can give to another.');
+}
+
+/** Exactly the pumps counted in the weeks above, soonest first (overdue ones lead). */
 function dueTable(plan) {
-    const horizon = plan.weeks.length ? plan.weeks[plan.weeks.length - 1].weekStart : plan.today;
-    const rows = plan.pumps.filter(p => p.dueOn && p.dueOn <= horizon);
+    const counted = new Set(plan.weeks.flatMap(w => w.pumpsDue));
+    const rows = plan.pumps.filter(p => counted.has(p.assetId));
     return h('details', {}, h('summary', {}, `The ${fmt.num(rows.length)} pumps due in these weeks, soonest first`),
         table({caption: 'Pumps due for service by operating hours', id: 'service-pumps', rows, columns: [
             {label: 'Pump', value: p => h('strong', {}, p.assetId)},
             {label: 'Due', value: p => dueWords(p, plan.today)},
             {label: 'Hours', value: p => h('span', {}, hoursWords(p), h('span', {class: 'hint'}, p.usageBasis))},
-            {label: 'Recent use', value: p => `${fmt.num(p.recentHoursPerDay, 1)} h a day`, num: true},
+            {label: 'Use lately (last 28 days read)', value: p => `${fmt.num(p.recentHoursPerDay, 1)} h a day`, num: true},
             {label: 'Mechanic', value: p => p.assignedMechanic || 'none assigned'}]}));
 }
 
@@ -138,13 +167,19 @@ async function load() {
         ready();
         return;
     }
+    if (store.kind !== 'DEPOT') {
+        // Empty tables of a store with no pumps would read as "nothing wrong anywhere".
+        mount(main, h('p', {class: 'message', id: 'sensor-no-pumps'}, `${store.code} has no pumps of its own: sensors and `
+            + 'services belong to the depots. Choose a depot under "Store" to see its pumps probably stopped and its services due.'));
+        ready();
+        return;
+    }
     const [down, plan] = await Promise.all([api.get('/api/sensors/probably-down', {depot: store.code}),
         api.get('/api/sensors/service-plan', {depot: store.code})]);
     mount(main, sensorProvenance(down, plan),
-        store.kind === 'DEPOT' ? null : h('p', {class: 'message'}, 'The central store has no pumps of its own: choose a depot to see its pumps.'),
         downSection(down),
         h('section', {'aria-labelledby': 'service-title'}, h('h2', {id: 'service-title'}, 'Service due by hours'),
-            weeksTable(plan), dueTable(plan)),
+            weeksTable(plan), shortNext(plan, down), dueTable(plan)),
         caution());
     ready();
 }
