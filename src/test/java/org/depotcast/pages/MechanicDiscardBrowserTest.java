@@ -23,9 +23,11 @@ class MechanicDiscardBrowserTest extends MechanicPhoneSession {
         openPageOnPhone();
         recordFixedRepair(sealPart, 7);
         wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
+        // The refresh after the refusal redraws the outbox and says so last: wait for it, so nothing redraws under a tap.
+        wait(Duration.ofSeconds(30)).until(d -> textOf(By.id("status")).contains("refused by the server"));
         String summary = textOf(By.cssSelector(".outbox__item--refused strong"));
 
-        press(".outbox__item--refused button.outbox__discard");
+        pressDiscard();
         String question = textOf(By.cssSelector("dialog.ask[open]"));
         assertEquals("Discard this action for good?", textOf(By.cssSelector("dialog.ask[open] h2")));
         // A screen reader names the dialog by its own heading (the page's "Ask for parts" heading once shared its id).
@@ -41,12 +43,12 @@ class MechanicDiscardBrowserTest extends MechanicPhoneSession {
         assertKept(summary);
 
         // Escape (or the phone's back gesture) keeps it too.
-        press(".outbox__item--refused button.outbox__discard");
+        pressDiscard();
         textOf(By.cssSelector("dialog.ask[open]"));
         driver.switchTo().activeElement().sendKeys(Keys.ESCAPE);
         assertKept(summary);
 
-        press(".outbox__item--refused button.outbox__discard");
+        pressDiscard();
         textOf(By.cssSelector("dialog.ask[open]"));
         press("#ask-yes");
         wait(Duration.ofSeconds(10)).until(d -> "0".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
@@ -61,6 +63,13 @@ class MechanicDiscardBrowserTest extends MechanicPhoneSession {
         assertEquals("1", driver.findElement(By.tagName("body")).getDomAttribute("data-refused"));
         assertTrue(textOf(By.cssSelector(".outbox__item--refused")).contains(summary));
         assertTrue(textOf(By.id("status")).contains("Kept on this phone: " + summary));
+    }
+
+    private void pressDiscard() {
+        wait(Duration.ofSeconds(10)).ignoring(StaleElementReferenceException.class).until(d -> {
+            press(".outbox__item--refused button.outbox__discard");
+            return true;
+        });
     }
 
     private String textOf(By by) {
