@@ -148,6 +148,15 @@ class OfficerTaskPagesBrowserTest extends BrowserSession {
 
         WebElement order = waitFor(By.cssSelector("form[data-order='" + orderNumber + "']"));
         WebElement arrived = order.findElement(By.cssSelector("input[type=number]"));
+        // Nothing entered above 0 books nothing and says so beside the line, not "booked in".
+        arrived.clear();
+        arrived.sendKeys("0");
+        press(order.findElement(By.cssSelector("button.receive-part")));
+        WebElement refused = waitFor(By.cssSelector("form[data-order='" + orderNumber + "'] .field-error"));
+        assertTrue(refused.getText().contains("more than 0"), refused.getText());
+        assertFalse(driver.findElement(By.id("status")).getText().contains("booked in"), driver.findElement(By.id("status")).getText());
+        officer().get(url("/api/purchase-orders/" + orderNumber)).then().statusCode(200)
+                .body("lines[0].quantityReceived", org.hamcrest.Matchers.comparesEqualTo(0.0f));
         arrived.clear();
         arrived.sendKeys("12");
         press(order.findElement(By.cssSelector("button.receive-part")));

@@ -118,7 +118,15 @@ function receiveCard(o) {
     all.addEventListener('click', () => busy(all, () => receive(open.map(l => Number(l.outstanding))), form));
     form.addEventListener('submit', e => {
         e.preventDefault();
-        busy(some, () => receive(inputs.map(i => Number(i.value || 0))), form);
+        busy(some, () => {
+            const quantities = inputs.map(i => Number(i.value || 0));
+            // Nothing above 0 used to book nothing yet say "booked in": refused here, beside the first line.
+            if (!quantities.some(q => q > 0)) {
+                throw {errors: [{field: 'quantity', message: 'enter what arrived, more than 0, on at least one line'}],
+                    detail: `Nothing was booked against ${o.orderNumber}.`};
+            }
+            return receive(quantities);
+        }, form);
     });
     return form;
 }
