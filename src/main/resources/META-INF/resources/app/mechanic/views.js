@@ -138,11 +138,15 @@ export function requestsView(snapshot, waiting) {
         ]});
 }
 
-/** What to do about a refusal for too few parts on the kit's books: the repair happened, so it is not lost. */
+/**
+ * What to do about a refusal for too few parts on the kit's books: the repair happened, so it is not lost. The server
+ * put the refusal on the stores officer's morning board when it refused it, so the mechanic need not ask.
+ */
 function shortageAdvice(kitCode) {
     const kit = kitCode ? `your kit ${kitCode}` : 'your kit';
-    return h('p', {class: 'outbox__advice'}, `If the parts really came from ${kit}, ask the stores officer to book them to `
-        + `${kit} (a transfer to the kit, or a count of the kit), then press "Send again". It stays on this phone until then.`);
+    return h('p', {class: 'outbox__advice'}, 'The stores officer has been told: this refusal is on their morning board. '
+        + `Once they have booked the parts to ${kit} (a transfer to the kit, or a count of the kit), press "Send again". `
+        + 'It stays on this phone until then.');
 }
 
 export function outboxView(waiting, discard, sendAgain, kitCode) {
