@@ -62,7 +62,13 @@ class MechanicSensorsBrowserTest extends BrowserSession {
             assertTrue(dates.get(i - 1).compareTo(dates.get(i)) <= 0, "due dates rise: " + dates);
         }
         List<String> card = read("#down-list li[data-asset='" + stopped + "']", null);
-        assertEquals(1, card.size(), stopped + " is listed as probably stopped");
+        assertEquals(1, card.size(), stopped + " is listed as probably down");
+        // One word for the state, the officer's and the API's ("probably down"), in headings, cards and the round's words.
+        assertTrue(read("#sensors-title", null).get(0).matches("What the sensors say: \\d+ probably down, \\d+ due for service"),
+                read("#sensors-title", null).toString());
+        assertTrue(read("#down-title", null).get(0).startsWith("Probably down: "), read("#down-title", null).toString());
+        String words = read("#sensors", null).get(0) + read("#pump-count", null).get(0);
+        assertFalse(words.toLowerCase().contains("stopped"), words);
         assertTrue(card.get(0).contains("Probably down ("), card.get(0));
         // The mechanic is the one who would go: told to check before the trip, not to ask "the area mechanic".
         List<String> caution = read("#sensors .sensor-caution", null);
@@ -75,6 +81,40 @@ class MechanicSensorsBrowserTest extends BrowserSession {
                 onRound.get(0));
         Number scroll = (Number) driver.executeScript("return document.documentElement.scrollWidth");
         assertTrue(scroll.intValue() <= width, "the page is " + scroll + " px wide on a " + width + " px screen");
+    }
+
+    /**
+     * "Report broken" on the pump's own card starts from today; on its card in the sensors' list, from the day the
+     * sensor saw use fall, said so beside the date, which stays inside the pump's life.
+     */
+    private void reportFromTheSensorCard(String stopped, String fell) throws Exception {
+        String today = (String) driver.executeScript("const d = new Date(); return `${d.getFullYear()}-`"
+                + " + `${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`");
+        assertTrue(fell.compareTo(today) < 0, "the demo pump's use fell before today: " + fell);
+        String installed = as("lead").get("/api/pumps/" + stopped).then().statusCode(200).extract().path("installedOn");
+        WebElement since = driver.findElement(By.cssSelector("#status-form input[name=since]"));
+        driver.executeScript("[...document.querySelectorAll(arguments[0])].find(b => b.textContent === 'Report broken')"
+                + ".scrollIntoView({block: 'center'})", "#pump-" + stopped + " button");
+        driver.executeScript("[...document.querySelectorAll(arguments[0])].find(b => b.textContent === 'Report broken').click()",
+                "#pump-" + stopped + " button");
+        assertEquals(today, since.getDomProperty("value"), "a report from the pump's card starts from today");
+        assertEquals("", driver.findElement(By.id("since-source")).getText());
+
+        tap("#down-list li[data-asset='" + stopped + "'] button");
+        assertEquals(fell, since.getDomProperty("value"), "the report starts from the day the sensor saw use fall");
+        assertEquals(installed, since.getDomAttribute("min"));
+        assertEquals(today, since.getDomAttribute("max"));
+        String source = driver.findElement(By.id("since-source")).getText();
+        assertTrue(source.startsWith("From the sensor: use fell on ") && source.contains("Change it if you know"), source);
+        screenshot("mechanic-report-from-sensor-360");
+
+        String before = LocalDate.parse(installed).minusDays(1).toString();
+        driver.executeScript("arguments[0].value = arguments[1]", since, before);
+        tap("#status-form button[type=submit]");
+        String error = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#status-form .field-error"))).getText();
+        assertTrue(error.startsWith("cannot be before the pump was installed on"), error);
+        assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-outbox"), "nothing queued");
+        driver.executeScript("arguments[0].value = arguments[1]", since, fell);
     }
 
     @Test
@@ -121,8 +161,8 @@ class MechanicSensorsBrowserTest extends BrowserSession {
         assertShows(expected, stopped, 360, false);
         screenshot("mechanic-sensors-offline-360");
 
+        reportFromTheSensorCard(stopped, depot.getString("pumps.find { it.assetId == '" + stopped + "' }.stoppedFrom"));
         // Reported broken from the sensors' list with no connection: the card says it waits, and offers no second report.
-        tap("#down-list li[data-asset='" + stopped + "'] button");
         tap("#status-form button[type=submit]");
         wait(Duration.ofSeconds(10)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-outbox")));
         List<String> card = read("#down-list li[data-asset='" + stopped + "']", null);

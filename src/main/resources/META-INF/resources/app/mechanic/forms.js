@@ -1,7 +1,7 @@
 /*
- * forms.js: the three things a mechanic does on the phone: ask for parts, record a repair, report a pump. A form
- * checks what it can on the phone, then hands an outbox item to `queue` (see store.js); the item carries the
- * reference made here, so it counts once however often it is sent.
+ * forms.js: two of the things a mechanic does on the phone, ask for parts and record a repair (a pump's report is in
+ * report.js), and the pieces the forms share. A form checks what it can on the phone, then hands an outbox item to
+ * `queue` (see store.js); the item carries the reference made here, so it counts once however often it is sent.
  */
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
@@ -210,45 +210,5 @@ export function repairForm(snapshot, queue, waiting) {
     return {form, open(assetId) {
         form.elements.assetId.value = assetId || '';
         shortfall.draw();
-    }};
-}
-
-export function statusForm(snapshot, queue) {
-    const form = h('form', {id: 'status-form', novalidate: true},
-        field('Pump', pumpSelect(snapshot, 'assetId', false)),
-        field('The pump is', h('select', {name: 'status'}, h('option', {value: 'BROKEN'}, 'Broken: no water'),
-            h('option', {value: 'WORKING'}, 'Working again'))),
-        field('Since', h('input', {type: 'date', name: 'since', max: fmt.isoDay(), value: fmt.isoDay()})),
-        field('Note', h('textarea', {name: 'note', maxlength: '300', rows: '2'}), 'optional'),
-        h('p', {}, h('button', {type: 'submit', class: 'primary'}, 'Send this report')));
-    form.addEventListener('submit', async e => {
-        e.preventDefault();
-        clearErrors(form);
-        const assetId = form.elements.assetId.value;
-        const since = form.elements.since.value;
-        const errors = [];
-        if (!assetId) {
-            errors.push({field: 'assetId', message: 'choose the pump'});
-        }
-        if (!since || since > fmt.isoDay()) {
-            errors.push({field: 'since', message: 'give a day up to today'});
-        }
-        if (errors.length) {
-            return refuse(form, errors);
-        }
-        const status = form.elements.status.value;
-        // A report needs no reference: the same report again changes nothing (the API keeps the earlier date).
-        await queue({kind: 'status', method: 'POST', path: `/api/pumps/${encodeURIComponent(assetId)}/status`, assetId,
-            body: {status, since, note: form.elements.note.value.trim() || null},
-            summary: `Pump ${assetId} reported ${status === 'BROKEN' ? 'broken' : 'working again'} since ${fmt.date(since)}`});
-        form.reset();
-        form.elements.since.value = fmt.isoDay();
-        return true;
-    });
-    return {form, open(assetId, status) {
-        form.elements.assetId.value = assetId || '';
-        if (status) {
-            form.elements.status.value = status;
-        }
     }};
 }

@@ -10,7 +10,8 @@ import * as store from './store.js';
 import {sendWaiting, sendAgain} from './send.js';
 import {fetchSnapshot, kitRows} from './data.js';
 import {kitView, pumpCard, requestsView, outboxView, discardQuestion} from './views.js';
-import {askForm, repairForm, statusForm} from './forms.js';
+import {askForm, repairForm} from './forms.js';
+import {statusForm} from './report.js';
 import {closeForm} from './close.js';
 import {section, heading, openSection, followJumps} from './sections.js';
 import {pumpRows} from './pumplist.js';
@@ -92,7 +93,7 @@ function drawHeadings(firstTime) {
     heading('requests', `My requests: ${open} open`);
     heading('close', `Close a repair as fixed: ${snapshot.openRepairs.length} open`);
     const sensors = sensorCounts(snapshot);
-    heading('sensors', `What the sensors say: ${sensors.down} probably stopped, ${sensors.due} due for service`);
+    heading('sensors', `What the sensors say: ${sensors.down} probably down, ${sensors.due} due for service`);
     if (firstTime && short) {
         openSection('kit');
     }
@@ -137,9 +138,9 @@ async function drawOutbox() {
     drawSync();
 }
 
-function act(kind, assetId, extra) {
+function act(kind, assetId, ...extra) {
     const target = {ask: 'ask', repair: 'repair', status: 'report', close: 'close'}[kind];
-    forms[target].open(assetId, extra);
+    forms[target].open(assetId, ...extra);
     openSection(target, true);
     forms[target].form.querySelector('select, input, textarea').focus({preventScroll: true});
 }

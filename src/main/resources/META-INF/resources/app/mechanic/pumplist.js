@@ -1,6 +1,6 @@
 /*
  * pumplist.js: which of the mechanic's pumps the page lists, and in what order. By default the pumps that need a
- * visit (broken, with an open repair, probably stopped by their sensor, a service due within 30 days, or an action of
+ * visit (broken, with an open repair, judged probably down by their sensor, a service due within 30 days, or an action of
  * the mechanic's waiting), in the order of a route from the depot (route.js); with "show all" or a search, every
  * match, most pressing first.
  */
@@ -21,7 +21,7 @@ function rankOf(r) {
 
 /**
  * {rows: [{pump, due, repairs, sensor, stop}], toVisit, words}; sensor = the pump's entry among those probably
- * stopped (sensorview.js), or undefined; stop = {n, legKm} on the round, or null.
+ * down (sensorview.js), or undefined; stop = {n, legKm} on the round, or null.
  */
 export function pumpRows(snapshot, waiting, {all, search}) {
     const measured = measuredDue(snapshot);
@@ -43,7 +43,7 @@ export function pumpRows(snapshot, waiting, {all, search}) {
     const km = round.reduce((sum, s) => sum + (s.legKm || 0), 0);
     const from = snapshot.depot ? snapshot.depot.name || snapshot.depot.code : 'the first pump';
     return {rows, toVisit: visit.length, words: `${visit.length} of your ${total} pumps need a visit: broken, with an open repair, `
-        + `probably stopped by their sensor, or with a service due within 30 days. In the order of a route from ${from}, nearest next pump first: about `
+        + `judged probably down by their sensor, or with a service due within 30 days. In the order of a route from ${from}, nearest next pump first: about `
         + `${fmt.num(km, 1)} km from the depot to the last pump in straight lines (roads are longer).`};
 }
 

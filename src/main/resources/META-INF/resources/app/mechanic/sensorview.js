@@ -1,10 +1,11 @@
 /*
  * sensorview.js: the mechanic's pumps as their sensors see them, from the snapshot kept on the phone (so it shows
- * offline too): the pumps probably stopped, most likely first, and the pumps due for service in the next 90 days in
+ * offline too): the pumps probably down, most likely first, and the pumps due for service in the next 90 days in
  * the order of their projected due date (hours since the last service at the recent daily load).
  *   sensorCounts(snapshot)        {down, due} for the section's heading
- *   sensorView(snapshot, act, waiting)  the section's body; act('status', assetId, 'BROKEN') opens the report form,
- *                                 unless a report of that pump is already waiting in the outbox
+ *   sensorView(snapshot, act, waiting)  the section's body; act('status', assetId, 'BROKEN', pump) opens the report
+ *                                 form on the day the pump's use fell, unless a report of that pump is already
+ *                                 waiting in the outbox
  *   measuredDue(snapshot)         assetId → the pump card's service-due row with the sensor plan's hours and date, for
  *                                 pumps measured by sensor, so the card and this list give the same day
  */
@@ -68,7 +69,7 @@ function downCard(p, act, waiting) {
         reported ? null : h('p', {class: 'hint'}, repairWords(p)),
         reported ? h('p', {class: 'sensor-reported'}, state(reported.state === 'refused'
             ? 'Your report was refused: see "Waiting to send"' : 'Reported on this phone: waiting to send', 'info'))
-            : p.openRepairRef ? null : h('button', {type: 'button', onclick: () => act('status', p.assetId, 'BROKEN')},
+            : p.openRepairRef ? null : h('button', {type: 'button', onclick: () => act('status', p.assetId, 'BROKEN', p)},
                 'Report it broken'));
 }
 
@@ -86,10 +87,10 @@ export function sensorView(snapshot, act, waiting = []) {
     }
     const due = dueRows(snapshot);
     return [
-        h('h3', {id: 'down-title'}, `Probably stopped: ${down.pumps.length}`),
+        h('h3', {id: 'down-title'}, `Probably down: ${down.pumps.length}`),
         down.pumps.length ? [stopCaution('mechanic'), h('ul', {class: 'pump-list plain-list', id: 'down-list'},
             down.pumps.map(p => downCard(p, act, waiting)))]
-            : h('p', {class: 'muted'}, 'None of your pumps looks stopped.'),
+            : h('p', {class: 'muted'}, 'None of your pumps is probably down: every sensor shows use, or a repair is already reported.'),
         h('h3', {id: 'due-title'}, `Service due in the next ${HORIZON_DAYS} days, soonest first: ${due.length}`),
         h('p', {class: 'hint'}, `Worked out on ${fmt.date(plan.today)} from operating hours since each pump's last service `
             + 'and its use over its last 28 days read (sensor readings where the pump has a sensor).'),

@@ -4,11 +4,12 @@
  * fresh copy in the background for the next visit. Data from /api is not kept here: the page keeps its last data
  * and its outbox in IndexedDB itself, and says how old that data is.
  */
-const CACHE = 'depotcast-mechanic-v8';
+const CACHE = 'depotcast-mechanic-v9';
 const FILES = [
     '/app/mechanic/', '/app/mechanic/mechanic.js', '/app/mechanic/store.js', '/app/mechanic/send.js',
     '/app/mechanic/data.js', '/app/mechanic/views.js', '/app/mechanic/forms.js', '/app/mechanic/close.js',
     '/app/mechanic/sections.js', '/app/mechanic/route.js', '/app/mechanic/pumplist.js', '/app/mechanic/sensorview.js',
+    '/app/mechanic/report.js',
     '/app/js/sensors.js', '/app/js/api.js', '/app/js/format.js', '/app/js/ui.js', '/app/js/nav.js', '/app/js/device.js',
     '/app/css/app.css', '/app/css/mechanic.css', '/app/favicon.svg'
 ];
