@@ -19,7 +19,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * A demo mechanic's page shows their pumps due for service in the order of their projected due date and their pumps
- * probably stopped, at 360 and 1280 px, and still shows them from the phone's cache with no connection.
+ * probably down, at 360 and 1280 px, and still shows them from the phone's cache with no connection.
  */
 @QuarkusTest
 class MechanicSensorsBrowserTest extends BrowserSession {
@@ -74,7 +74,7 @@ class MechanicSensorsBrowserTest extends BrowserSession {
         List<String> caution = read("#sensors .sensor-caution", null);
         assertTrue(caution.size() == 1 && caution.get(0).contains("before making the trip")
                 && !caution.get(0).contains("the area mechanic"), caution.toString());
-        // A pump probably stopped is on the round of pumps to visit, its card saying why.
+        // A pump probably down is on the round of pumps to visit, its card saying why.
         List<String> onRound = read("#pump-list #pump-" + stopped, null);
         assertEquals(1, onRound.size(), stopped + " is among the pumps to visit");
         assertTrue(onRound.get(0).contains("Sensor: Probably down (") && onRound.get(0).contains("ask the community before the trip"),
