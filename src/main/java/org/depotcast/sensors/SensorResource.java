@@ -2,6 +2,8 @@ package org.depotcast.sensors;
 
 import jakarta.annotation.security.RolesAllowed;
 import jakarta.validation.Valid;
+import jakarta.validation.constraints.DecimalMax;
+import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
@@ -33,9 +35,12 @@ class SensorResource {
     private final ProbablyDownService probablyDown;
     private final StopFlagService stopFlags;
     private final SensorServicePlanService servicePlan;
+    private final StopCertaintyService certainty;
 
     SensorResource(SensorIntakeService intake, SensorConversionService conversions, SensorPumpService pumps,
-                   ProbablyDownService probablyDown, StopFlagService stopFlags, SensorServicePlanService servicePlan) {
+                   ProbablyDownService probablyDown, StopFlagService stopFlags, SensorServicePlanService servicePlan,
+                   StopCertaintyService certainty) {
+        this.certainty = certainty;
         this.servicePlan = servicePlan;
         this.probablyDown = probablyDown;
         this.stopFlags = stopFlags;
@@ -92,6 +97,28 @@ class SensorResource {
         LocalDate asOf = DateBounds.requireEvent("day", QueryParams.optionalDate("day", day));
         LocalDate judged = asOf == null ? DateBounds.today() : asOf;
         return new StopCheckResult(judged, stopFlags.refreshAll(judged));
+    }
+
+    /** The least probability down at which a pump is flagged, as a fraction. */
+    record StopCertaintyRequest(@NotNull @DecimalMin(value = "0.5", message = StopCertaintyService.RANGE)
+                                @DecimalMax(value = "0.99", message = StopCertaintyService.RANGE)
+                                Double leastProbability) {
+    }
+
+    @GET
+    @Path("stop-certainty")
+    @RolesAllowed({Roles.STORES_OFFICER, Roles.PROGRAMME_LEAD, Roles.ADMIN, Roles.MECHANIC})
+    public StopCertaintyService.StopCertainty stopCertainty() {
+        return certainty.inForce();
+    }
+
+    /** The programme lead sets how sure the sensors must be before a pump is flagged; flags open from then on. */
+    @PUT
+    @Path("stop-certainty")
+    @Consumes(MediaType.APPLICATION_JSON)
+    @RolesAllowed({Roles.PROGRAMME_LEAD, Roles.ADMIN})
+    public StopCertaintyService.StopCertainty setStopCertainty(@Valid @NotNull StopCertaintyRequest request) {
+        return certainty.set(request.leastProbability());
     }
 
     @GET

@@ -28,9 +28,10 @@ import java.util.Set;
 
 /**
  * Keeps the "probably down" flags in step with the sensors and the repairs: a pump the detector finds stopped
- * ({@link StopDetector}), with a probability of at least {@value #LEAST_PROBABILITY} and no repair reported since the
- * stop, is flagged; a flag closes when a repair is reported (REPAIR_REPORTED) or when use comes back without one
- * (FALSE_ALARM, counted in the report). The detector judges the days read less the downtime of breakdowns already
+ * ({@link StopDetector}), with a probability of at least the programme's setting ({@link StopCertaintyService}, 0.5
+ * unless the lead changed it) and no repair reported since the stop, is flagged. The setting governs opening only: a
+ * flag already open when it is raised stays open. A flag closes when a repair is reported (REPAIR_REPORTED) or when
+ * use comes back without one (FALSE_ALARM, counted in the report). The detector judges the days read less the downtime of breakdowns already
  * on record ({@link RecordedDowntime}), so an earlier repair's days are not taken for the pump idling. How often a
  * working pump idles is fitted over the pumps judged together ({@link IdleDayPrior}: a day's file of the programme, the
  * stop check); a refresh of fewer than {@value IdleDayPrior#LEAST_PUMPS} pumps (a single pump's file) has too few to
@@ -41,8 +42,6 @@ import java.util.Set;
  */
 @ApplicationScoped
 public class StopFlagService {
-    static final double LEAST_PROBABILITY = 0.5;
-
     @ApplicationScoped
     static class StopFlags implements PanacheRepository<StopFlag> {
         List<StopFlag> open() {
@@ -68,12 +67,14 @@ public class StopFlagService {
     private final RepairRecords repairs;
     private final AuditService audit;
     private final BreakdownHazards hazards;
+    private final StopCertaintyService certainty;
     private static final StopSettings SETTINGS = StopSettings.DEFAULT;
     private final StopDetector detector = new StopDetector(SETTINGS);
 
     StopFlagService(StopFlags flags, SensorUsageQuery usage, RepairRecords repairs, AuditService audit,
-                    BreakdownHazards hazards) {
+                    BreakdownHazards hazards, StopCertaintyService certainty) {
         this.hazards = hazards;
+        this.certainty = certainty;
         this.flags = flags;
         this.usage = usage;
         this.repairs = repairs;
@@ -113,6 +114,7 @@ public class StopFlagService {
         }
         IdleDayPrior prior = pooledPrior(windows, asRead);
         Map<Long, StopDetector.Verdict> verdicts = verdicts(windows, prior, asOf);
+        double least = certainty.leastProbability();
         int opened = 0, stillOpen = 0;
         for (Map.Entry<Long, double[]> pump : windows.entrySet()) {
             StopDetector.Verdict verdict = verdicts.get(pump.getKey());
@@ -120,7 +122,7 @@ public class StopFlagService {
             StopFlag flag = open.get(pump.getKey());
             if (flag != null) {
                 stillOpen += follow(flag, verdict, repair, asOf) ? 1 : 0;
-            } else if (raise(pump.getKey(), verdict, repair, asOf,
+            } else if (verdict.probabilityDown() >= least && raise(pump.getKey(), verdict, repair, asOf,
                     flaggedStops.getOrDefault(pump.getKey(), Set.of()))) {
                 opened++;
                 stillOpen++;
@@ -194,11 +196,13 @@ public class StopFlagService {
         return true;
     }
 
-    /** Opens a flag for a probable stop not flagged before ({@code flaggedStops}: the pump's flagged stop days). */
+    /**
+     * Opens a flag for a stop not flagged before ({@code flaggedStops}: the pump's flagged stop days); the caller has
+     * checked its probability against the programme's setting.
+     */
     private boolean raise(long pumpId, StopDetector.Verdict verdict, RepairFacts repair, LocalDate asOf,
                           Set<LocalDate> flaggedStops) {
-        if (verdict.state() != StopDetector.State.STOPPED || verdict.probabilityDown() < LEAST_PROBABILITY
-                || repair.openRepairRef() != null) {
+        if (verdict.state() != StopDetector.State.STOPPED || repair.openRepairRef() != null) {
             return false;
         }
         LocalDate stoppedFrom = asOf.minusDays(SETTINGS.historyDays() - 1L - verdict.changeIndex());

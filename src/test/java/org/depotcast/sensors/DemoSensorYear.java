@@ -100,10 +100,10 @@ final class DemoSensorYear {
      */
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule)
             throws IOException {
-        return replay(seed, delay, leaveOutRecorded, rule, StopFlagService.LEAST_PROBABILITY);
+        return replay(seed, delay, leaveOutRecorded, rule, StopCertaintyService.DEFAULT);
     }
 
-    /** @param leastProbability the probability a flag opens at (the service's {@link StopFlagService#LEAST_PROBABILITY}) */
+    /** @param leastProbability the probability a flag opens at (the service's default, {@link StopCertaintyService#DEFAULT}) */
     static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded, Rule rule,
                                  double leastProbability) throws IOException {
         return replay(seed, delay, leaveOutRecorded, rule, leastProbability, null);
@@ -115,7 +115,7 @@ final class DemoSensorYear {
      */
     static List<PumpYear> replayWithRates(long seed, DemoSensorSeries.ReportDelay delay,
                                           Map<String, Double> ratesByAsset) throws IOException {
-        return replay(seed, delay, true, Rule.POOLED, StopFlagService.LEAST_PROBABILITY, ratesByAsset);
+        return replay(seed, delay, true, Rule.POOLED, StopCertaintyService.DEFAULT, ratesByAsset);
     }
 
     private static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded,

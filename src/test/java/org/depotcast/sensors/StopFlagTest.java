@@ -87,6 +87,36 @@ class StopFlagTest {
                 .body("falseAlarms", equalTo((int) falseAlarmsBefore + 1));
     }
 
+    /**
+     * The lead's certainty applies to flags opened from then on: raised above a stop's probability, the same stop at
+     * another pump is not flagged, while the flag opened before the change stays open through the next file.
+     */
+    @Test
+    void aStopLessLikelyThanTheLeadsCertaintyIsNotFlaggedAndAFlagAlreadyOpenStays() {
+        String flaggedBefore = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        SensorIntakeTest.csv("officer", stoppedHistory(flaggedBefore)).then().statusCode(200);
+        double before = ((Number) reportOf(flaggedBefore).get("probabilityDown")).doubleValue();
+        String after = SensorIntakeTest.pump("DEP-TESHVALE", "RB-2");
+        double expected = twoDaysDown(after, LocalDate.of(2026, 10, 12), 1.0 / 30, 6.0);
+        assertTrue(before >= 0.5 && expected >= 0.5 && Math.max(before, expected) < 0.985,
+                "both stops flagged at the default of 0.5, below the highest certainty: " + before + ", " + expected);
+        // The least whole per cent above both probabilities.
+        double certainty = Math.floor(Math.max(before, expected) * 100 + 1) / 100;
+        try {
+            as("lead").contentType("application/json").body(Map.of("leastProbability", certainty))
+                    .put("/api/sensors/stop-certainty").then().statusCode(200);
+            SensorIntakeTest.csv("officer", stoppedHistory(after)).then().statusCode(200).body("added", equalTo(42));
+            assertTrue(reportOf(after).isEmpty(), "a stop " + expected + " likely is not flagged at " + certainty);
+
+            SensorIntakeTest.csv("officer", "asset_id,day,hours\n" + flaggedBefore + ",2026-10-13,0\n")
+                    .then().statusCode(200);
+            assertEquals("probably down", reportOf(flaggedBefore).get("state"), "a flag already open stays open");
+        } finally {
+            as("lead").contentType("application/json").body(Map.of("leastProbability", 0.5))
+                    .put("/api/sensors/stop-certainty").then().statusCode(200);
+        }
+    }
+
     @Test
     void withAFinishedForecastRunAPumpsOwnBreakdownRateSetsItsPrior() {
         if (runs.latestFinished().isEmpty()) {
