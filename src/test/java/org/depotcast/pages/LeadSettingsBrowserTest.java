@@ -93,4 +93,58 @@ class LeadSettingsBrowserTest extends BrowserSession {
                     .put("/api/planning/service-levels").then().statusCode(204);
         }
     }
+
+    private double certainty() {
+        return as("lead").get("/api/sensors/stop-certainty").then().statusCode(200).extract().jsonPath()
+                .getDouble("leastProbability");
+    }
+
+    /**
+     * The certainty a "probably down" flag needs reads as a sentence with the demo's measured trade beside it; a figure
+     * outside 50 to 99 % (or a fraction typed for a per cent) is refused beside the input and changes nothing; a
+     * figure saved is in force and the officer's sensors page says so. 50 % is put back afterwards.
+     */
+    @Test
+    void theLeadSetsHowSureTheSensorsMustBeBeforeAPumpIsCalledProbablyDown() {
+        assertEquals(0.5, certainty(), 1e-12);
+        try {
+            signIn("lead", "lead-demo");
+            open("/app/lead/settings.html");
+            waitReady();
+            WebElement input = waitFor(By.id("least-probability"));
+            assertEquals("50", input.getDomProperty("value"));
+            String sentence = driver.findElement(By.cssSelector("#stop-certainty-form p")).getText();
+            assertTrue(sentence.startsWith("Call a pump probably down when the sensor makes it at least")
+                    && sentence.endsWith("% likely"), sentence);
+            String measured = driver.findElement(By.id("stop-measured")).getText();
+            assertTrue(measured.startsWith("As measured on the demo") && measured.contains("at 80 %, 79 %"), measured);
+            assertTrue(driver.findElement(By.cssSelector("#stop-certainty .in-force")).getText()
+                    .equals("at least 50 % likely"));
+
+            for (String wrong : new String[]{"100", "0.8", "40", ""}) {
+                enter(driver.findElement(By.id("least-probability")), wrong);
+                save("#stop-certainty-form");
+                wait(Duration.ofSeconds(20)).ignoring(StaleElementReferenceException.class).until(d -> d.findElement(
+                        By.cssSelector("#stop-certainty-form .field-error")).getText().contains("from 50 to 99"));
+                assertEquals(0.5, certainty(), 1e-12, "refused, not saved: '" + wrong + "'");
+            }
+
+            enter(driver.findElement(By.id("least-probability")), "80");
+            save("#stop-certainty-form");
+            waitSaid("Pumps are called probably down from 80 % likely");
+            assertEquals(0.8, certainty(), 1e-12);
+            assertEquals("at least 80 % likely", waitFor(By.cssSelector("#stop-certainty .in-force")).getText());
+            assertNoPageErrors();
+
+            signIn("officer", "officer-demo");
+            open("/app/officer/sensors.html?location=DEP-TESHVALE");
+            waitReady();
+            assertTrue(waitFor(By.id("stop-certainty")).getText().startsWith(
+                    "A pump is called probably down when its sensor makes it at least 80 % likely"));
+            assertNoPageErrors();
+        } finally {
+            as("lead").contentType("application/json").body(Map.of("leastProbability", 0.5))
+                    .put("/api/sensors/stop-certainty").then().statusCode(200);
+        }
+    }
 }

@@ -1,4 +1,7 @@
-/* The lead's settings: service level per part class, the financial year's first month, transport cost per lane. */
+/*
+ * The lead's settings: service level per part class, how sure the sensors must be before a pump is called probably
+ * down, the financial year's first month, transport cost per lane.
+ */
 import {startLeadPage, ready, api, fmt} from './lead.js';
 import {h, mount, table, busy, say, state} from '/app/js/ui.js';
 
@@ -36,6 +39,39 @@ async function showLevels() {
     const l = await api.get('/api/planning/service-levels');
     mount(document.getElementById('levels'), levelForm('CRITICAL', 'Critical parts', l.critical, l.defaultCritical),
         levelForm('STANDARD', 'Standard parts', l.standard, l.defaultStandard));
+}
+
+/** The least chance down at which a pump is flagged, typed in per cent (the API takes a fraction). */
+function certaintyForm(c) {
+    // One sentence with the input in it, so the figure reads as what it means.
+    const form = h('form', {id: 'stop-certainty-form', novalidate: true},
+        h('p', {}, h('label', {for: 'least-probability'}, 'Call a pump probably down when the sensor makes it at least'),
+            ' ', h('input', {id: 'least-probability', name: 'leastProbability', type: 'number', min: 50, max: 99, step: 0.1,
+                class: 'percent', 'aria-describedby': 'least-probability-hint', value: Number((c.leastProbability * 100).toFixed(2))}),
+            ' % likely'),
+        h('p', {class: 'hint', id: 'least-probability-hint'},
+            `per cent, 50 to 99; default ${fmt.num(c.defaultLeastProbability * 100, 0)} %`),
+        h('button', {type: 'submit', class: 'primary'}, 'Save the figure'));
+    form.addEventListener('submit', e => {
+        e.preventDefault();
+        busy(e.submitter || form.querySelector('button'), async () => {
+            const percent = form.leastProbability.value === '' ? NaN : Number(form.leastProbability.value);
+            // Checked in per cent, as the service levels are: 0.8 typed for 80 % must not be read as 0.8 %.
+            if (!(percent >= 50 && percent <= 99)) {
+                throw {errors: [{field: 'leastProbability', message: 'enter a chance in per cent, from 50 to 99 (e.g. 80)'}],
+                    detail: 'Probably down: nothing was saved.'};
+            }
+            const saved = await api.put('/api/sensors/stop-certainty', {leastProbability: percent / 100});
+            say(`Pumps are called probably down from ${fmt.num(percent, 1)} % likely, for flags opened from now on.`, 'ok');
+            showCertainty(saved);
+        }, form);
+    });
+    return h('div', {}, form, h('p', {}, 'In force now: ',
+        h('strong', {class: 'in-force'}, `at least ${fmt.num(c.leastProbability * 100, 1)} % likely`)));
+}
+
+async function showCertainty(view) {
+    mount(document.getElementById('stop-certainty'), certaintyForm(view || await api.get('/api/sensors/stop-certainty')));
 }
 
 const MONTHS = [...Array(12).keys()].map(m => new Intl.DateTimeFormat(undefined, {month: 'long'}).format(new Date(2026, m, 15)));
@@ -89,5 +125,5 @@ async function showLanes() {
             {label: 'Set a cost', value: laneCost}]}));
 }
 
-await Promise.all([showLevels(), showYear(), showLanes()]);
+await Promise.all([showLevels(), showCertainty(), showYear(), showLanes()]);
 ready();

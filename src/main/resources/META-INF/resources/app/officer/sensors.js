@@ -89,8 +89,16 @@ function notWorthSettingAside(down) {
             ` ${(parts.get(n.partNumber) || {}).description || ''} (${expectedWords(n.expectedUnits, n.partNumber)})`)), '.');
 }
 
-function downSection(down) {
+/** The programme lead's setting in force; flags opened under an earlier one stay until closed. */
+function certaintyLine(c) {
+    return h('p', {class: 'small', id: 'stop-certainty'}, `A pump is called probably down when its sensor makes it at least `
+        + `${fmt.num(c.leastProbability * 100, 1)} % likely (set by the programme lead; the default is `
+        + `${fmt.num(c.defaultLeastProbability * 100, 0)} %).`);
+}
+
+function downSection(down, certainty) {
     return h('section', {'aria-labelledby': 'down-title'}, h('h2', {id: 'down-title'}, 'Pumps that have probably stopped'),
+        certaintyLine(certainty),
         h('div', {class: 'card'}, figures([['Probably down now', count(down.pumps.length, 'pump')],
             ['Earlier flags closed by a repair report (all on record)', count(down.closedByRepair, 'flag')],
             ['Earlier flags where use came back without a repair (false alarms, all on record)', count(down.falseAlarms, 'flag')]])),
@@ -174,10 +182,10 @@ async function load() {
         ready();
         return;
     }
-    const [down, plan] = await Promise.all([api.get('/api/sensors/probably-down', {depot: store.code}),
-        api.get('/api/sensors/service-plan', {depot: store.code})]);
+    const [down, plan, certainty] = await Promise.all([api.get('/api/sensors/probably-down', {depot: store.code}),
+        api.get('/api/sensors/service-plan', {depot: store.code}), api.get('/api/sensors/stop-certainty')]);
     mount(main, sensorProvenance(down, plan),
-        downSection(down),
+        downSection(down, certainty),
         h('section', {'aria-labelledby': 'service-title'}, h('h2', {id: 'service-title'}, 'Service due by hours'),
             weeksTable(plan), shortNext(plan, down), dueTable(plan)),
         caution());
