@@ -113,6 +113,9 @@ class MechanicSensorsBrowserTest extends BrowserSession {
         tap("#status-form button[type=submit]");
         String error = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#status-form .field-error"))).getText();
         assertTrue(error.startsWith("cannot be before the pump was installed on"), error);
+        String describedBy = since.getDomAttribute("aria-describedby");
+        assertTrue(describedBy.contains("since-source") && describedBy.contains(driver.findElement(
+                By.cssSelector("#status-form .field-error")).getDomAttribute("id")), "the date's source and its error: " + describedBy);
         assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-outbox"), "nothing queued");
         driver.executeScript("arguments[0].value = arguments[1]", since, fell);
     }

@@ -50,9 +50,13 @@ export function statusForm(snapshot, queue) {
             setDay(form.elements.assetId.value, null);
         }
     });
+    // Marking or clearing an error replaces the field's description: the words on the date's source stay with it.
+    const describeSince = () => since.setAttribute('aria-describedby',
+        [...new Set([...(since.getAttribute('aria-describedby') || '').split(' ').filter(Boolean), 'since-source'])].join(' '));
     form.addEventListener('submit', async e => {
         e.preventDefault();
         clearErrors(form);
+        describeSince();
         const assetId = form.elements.assetId.value;
         const day = since.value;
         const pump = pumpOf(assetId);
@@ -66,7 +70,9 @@ export function statusForm(snapshot, queue) {
             errors.push({field: 'since', message: `cannot be before the pump was installed on ${fmt.date(pump.installedOn)}`});
         }
         if (errors.length) {
-            return refuse(form, errors);
+            refuse(form, errors);
+            describeSince();
+            return false;
         }
         const status = form.elements.status.value;
         // A report needs no reference: the same report again changes nothing (the API keeps the earlier date).
