@@ -88,6 +88,13 @@ public class PlanningService {
         if (location.kind() == LocationKind.IN_TRANSIT) {
             throw new InvalidInputException("location", "stock in transit has no reorder policy");
         }
+        if (location.kind() == LocationKind.CENTRAL_STORE && !breakdownsOnly) {
+            // The central store buys for the whole programme, so its reorder point is set against the echelon position
+            // as the budget plan's: its own shelf alone would ask to buy again what the depots and kits already hold.
+            return echelonPolicies(location, serviceLevels(null)).stream()
+                    .filter(p -> !AlertRules.NO_FORECAST.equals(p.forecastMethod()) || p.onHand() > 0 || p.onOrder() > 0)
+                    .toList();
+        }
         String forecastKey = location.kind() == LocationKind.CENTRAL_STORE ? PROGRAMME : location.code();
         int horizonMonths = location.kind() == LocationKind.KIT ? 2 : 3;
         Map<String, ForecastQueryService.DemandRate> demand = breakdownsOnly ? forecasts.breakdownsAt(forecastKey)
@@ -128,9 +135,13 @@ public class PlanningService {
     public List<StockPolicy> programmePolicies(Double serviceLevel) {
         scope.requireProgramme();
         requireForecasts();
-        PolicyCalculator.ServiceLevels levels = serviceLevels(serviceLevel);
         LocationSummary central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream().findFirst()
                 .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
+        return echelonPolicies(central, serviceLevels(serviceLevel));
+    }
+
+    /** Every part's policy at the central store against the echelon position (see {@link #programmePolicies()}). */
+    private List<StockPolicy> echelonPolicies(LocationSummary central, PolicyCalculator.ServiceLevels levels) {
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
         Map<String, double[]> echelon = new HashMap<>();
         for (BalanceView b : stock.balances(null)) {

@@ -18,6 +18,8 @@ const unit = p => (parts.get(p) || {}).unitOfIssue;
 const n = (value, p) => fmt.wholeUnits(unit(p)) ? fmt.num(Math.round(value)) : fmt.num(value, 2);
 const UNIT_NAMES = {EACH: 'pieces', PAIR: 'pairs', SET: 'sets', LENGTH: 'lengths', METRE: 'metres', KILOGRAM: 'kg', LITRE: 'litres'};
 const names = new Map(stores.map(s => [s.code, s.name]));
+// The central store buys for the whole programme: its alerts count stock in every store and kit (as the budget plan).
+const central = store && store.kind === 'CENTRAL_STORE';
 
 async function load() {
     if (!store) {
@@ -77,7 +79,9 @@ function pumps(alert) {
 function alertTable(alerts, policyOf, suggestions) {
     const rows = alerts.map((a, i) => ({a, i, policy: policyOf.get(a.partNumber)}));
     const wrap = table({
-        caption: `${fmt.num(alerts.length)} alerts at ${storeName(store)}`, id: 'alerts',
+        caption: `${fmt.num(alerts.length)} alerts at ${storeName(store)}` + (central
+            ? ': bought for the whole programme, so stock counts every store and kit, and what is on order' : ''),
+        id: 'alerts',
         empty: 'No alerts at this store: every part is above its reorder point.',
         columns: [
             {label: 'Rank', value: r => String(r.i + 1), num: true},
@@ -85,8 +89,8 @@ function alertTable(alerts, policyOf, suggestions) {
                 h('span', {class: 'hint'}, `counted in ${UNIT_NAMES[unit(r.a.partNumber)] || 'units'}`)]},
             {label: 'Why', value: r => reasons(r.a)},
             {label: 'Pump-days without water', value: r => fmt.pumpDays(r.a.pumpDaysAtRisk), num: true},
-            {label: 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
-            {label: 'On order', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
+            {label: central ? 'On hand in the programme' : 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
+            {label: central ? 'On order for the programme' : 'On order', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
             {label: 'Reorder point', value: r => n(r.a.reorderPoint, r.a.partNumber), num: true},
             {label: 'Order up to', value: r => n(r.a.orderUpTo, r.a.partNumber), num: true},
