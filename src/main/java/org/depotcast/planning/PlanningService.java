@@ -43,12 +43,14 @@ public class PlanningService {
     private final org.depotcast.access.AuditService audit;
     private final org.depotcast.requests.RequestService requests;
     private final Clock clock;
+    private final org.depotcast.access.SystemWork system;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
                     CurrentUser currentUser, PlanningSettings settings,
                     org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
                     org.depotcast.requests.RequestService requests, ServiceLevelRepository serviceLevelsSet,
-                    Clock clock) {
+                    Clock clock, org.depotcast.access.SystemWork system) {
+        this.system = system;
         this.serviceLevelsSet = serviceLevelsSet;
         this.requests = requests;
         this.scope = scope;
@@ -144,7 +146,8 @@ public class PlanningService {
     private List<StockPolicy> echelonPolicies(LocationSummary central, PolicyCalculator.ServiceLevels levels) {
         Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
         Map<String, double[]> echelon = new HashMap<>();
-        for (BalanceView b : stock.balances(null)) {
+        // Every store and kit, whoever asks: a central-store officer buys for kits they do not see one by one.
+        for (BalanceView b : system.call("echelon-position", () -> stock.balances(null))) {
             double[] cell = echelon.computeIfAbsent(b.partNumber(), k -> new double[3]);
             cell[0] += b.onHand().doubleValue();
             cell[1] += b.onOrder().doubleValue();
