@@ -5,6 +5,7 @@ import jakarta.validation.Valid;
 import jakarta.validation.constraints.DecimalMax;
 import jakarta.validation.constraints.DecimalMin;
 import jakarta.validation.constraints.NotNull;
+import org.eclipse.microprofile.openapi.annotations.media.Schema;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
 import jakarta.ws.rs.HeaderParam;
@@ -100,7 +101,9 @@ class SensorResource {
     }
 
     /** The least probability down at which a pump is flagged, as a fraction. */
-    record StopCertaintyRequest(@NotNull @DecimalMin(value = "0.5", message = StopCertaintyService.RANGE)
+    record StopCertaintyRequest(@Schema(description = "Least probability down at which a pump is flagged, as a "
+                                        + "fraction (0.5 to 0.99; 0.8 means 80 %)")
+                                @NotNull @DecimalMin(value = "0.5", message = StopCertaintyService.RANGE)
                                 @DecimalMax(value = "0.99", message = StopCertaintyService.RANGE)
                                 Double leastProbability) {
     }
