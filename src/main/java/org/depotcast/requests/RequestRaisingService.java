@@ -76,7 +76,7 @@ public class RequestRaisingService {
         request.mechanic = mechanic;
         request.kitId = kit.id();
         request.depotId = locations.requireSummary("mechanic", kit.parentCode()).id();
-        request.pumpId = body.assetId() == null ? null : pumps.requireVisible("assetId", body.assetId()).id();
+        request.pumpId = pumpOf(body);
         request.urgency = body.urgency();
         request.fault = body.fault();
         request.raisedAt = OffsetDateTime.now(clock);
@@ -98,6 +98,17 @@ public class RequestRaisingService {
         requests.persist(request);
         audit.record("REQUEST_RAISED", "parts_request", request.clientRef, null, body);
         return new Raised(RequestDtos.View.from(request, directory.of(List.of(request))), false);
+    }
+
+    /** The pump the request is for, or null for a kit top-up; "pump down" says a pump has stopped, so it must name it. */
+    private Long pumpOf(RequestDtos.Raise body) {
+        if (body.assetId() == null) {
+            if (body.urgency() == PartsRequest.Urgency.PUMP_DOWN) {
+                throw new InvalidInputException("assetId", "a request for a pump that is down must name the pump");
+            }
+            return null;
+        }
+        return pumps.requireVisible("assetId", body.assetId()).id();
     }
 
     /** The first field in which a resent request differs from the one raised under its reference, or null. */

@@ -83,7 +83,7 @@ class CreatedLocationWalkTest {
         String part = data.part(UnitOfIssue.EACH);
         String clientRef = TestData.unique("WREQ");
         String request = location(as("mechanic1").contentType(JSON).body(Map.of("clientRef", clientRef,
-                "urgency", "PUMP_DOWN", "lines", List.of(Map.of("partNumber", part, "quantity", 1))))
+                "urgency", "ROUTINE", "lines", List.of(Map.of("partNumber", part, "quantity", 1))))
                 .post("/api/requests").then().extract());
         as("mechanic1").get(request).then().statusCode(200).body("clientRef", equalTo(clientRef));
     }

@@ -38,6 +38,14 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         String halfPiece = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#ask-form .field-error")).getText());
         assertTrue(halfPiece.contains("give a whole number: this part is counted in pieces"), halfPiece);
         assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-outbox"));
+        // "Pump down" names the pump that is down: without one it is refused on the phone, beside the pump's field.
+        type("#ask-form input[data-field='lines[0].quantity']", "1");
+        choose("#ask-form select[name=urgency]", "PUMP_DOWN");
+        press("#ask-form button[type=submit]");
+        String noPump = wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#ask-form select[name=assetId] + .field-error")).getText());
+        assertTrue(noPump.startsWith("choose the pump that is down"), noPump);
+        assertEquals("0", driver.findElement(By.tagName("body")).getDomAttribute("data-outbox"));
+        choose("#ask-form select[name=urgency]", "ROUTINE");
 
         askForTopUp(valvePart, 3);
         waitOutbox(1);

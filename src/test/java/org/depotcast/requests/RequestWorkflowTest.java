@@ -160,6 +160,27 @@ class RequestWorkflowTest {
                 .body("errors.field", hasItem("urgency"));
     }
 
+    @Test
+    void aPumpDownRequestMustNameThePump() {
+        String ref = TestData.unique("down");
+        as("mechanic1").contentType("application/json").body(Map.of("clientRef", ref, "urgency", "PUMP_DOWN",
+                "lines", List.of(Map.of("partNumber", "OB-CS-63", "quantity", 1)))).post("/api/requests")
+                .then().statusCode(400).contentType(PROBLEM).body("errors[0].field", equalTo("assetId"));
+        // Nothing was kept under the reference: sent again with the pump, it is raised.
+        raiseAs("mechanic1", Map.of("clientRef", ref, "assetId", pumpOf("mechanic1"), "urgency", "PUMP_DOWN",
+                "lines", List.of(Map.of("partNumber", "OB-CS-63", "quantity", 1))));
+    }
+
+    @Test
+    void approvingMoreThanAskedIsRefusedNamingTheLine() {
+        long id = raiseAs("mechanic1", Map.of("clientRef", TestData.unique("over"), "urgency", "ROUTINE",
+                "lines", List.of(Map.of("partNumber", "OB-OR-SET", "quantity", 2))));
+        as("officer").contentType("application/json").body(Map.of("lines", List.of(Map.of("partNumber", "OB-OR-SET",
+                "quantity", 3)))).post("/api/requests/" + id + "/approve")
+                .then().statusCode(422).contentType(PROBLEM).body("errors[0].field", equalTo("lines[0].quantity"));
+        as("officer").get("/api/requests/" + id).then().statusCode(200).body("status", equalTo("RAISED"));
+    }
+
     /** A working demo pump assigned to the mechanic (seed-data/pumps.csv). */
     static String pumpOf(String mechanic) {
         return as(mechanic).get("/api/pumps").then().extract().jsonPath().getString("find { it.status == 'WORKING' }.assetId");

@@ -130,6 +130,10 @@ export function askForm(snapshot, queue) {
         clearErrors(form);
         const read = lines.read();
         const errors = checkLines(read, true);
+        if (form.elements.urgency.value === 'PUMP_DOWN' && !form.elements.assetId.value) {
+            // The server refuses it too: "pump down" is about one pump, and the officer needs to know which.
+            errors.push({field: 'assetId', message: 'choose the pump that is down, or ask as routine for a kit top-up'});
+        }
         if (errors.length) {
             return refuse(form, errors);
         }
