@@ -5,7 +5,7 @@
  */
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
-import {h, mount, table, state, say, busy, caution} from '/app/js/ui.js';
+import {h, mount, table, state, say, busy, caution, showError} from '/app/js/ui.js';
 import {startOfficer, describe, ready} from './officer.js';
 
 const {store, parts} = await startOfficer({page: 'requests', title: 'Parts requests'});
@@ -56,7 +56,8 @@ function heading(r) {
 }
 
 function approvalCard(r, substitutes) {
-    const form = h('form', {class: 'task', 'data-request-id': r.id});
+    // The page names a wrong quantity beside its field in words, not in the browser's own bubble.
+    const form = h('form', {class: 'task', 'data-request-id': r.id, novalidate: true});
     const caution = h('p', {class: 'message', hidden: true}, SUBSTITUTE_CAUTION);
     const lines = r.lines.map((l, i) => {
         const qty = h('input', {type: 'number', id: `q-${r.id}-${i}`, name: `lines[${i}].quantity`, min: 0, max: l.requested,
@@ -87,6 +88,11 @@ function approvalCard(r, substitutes) {
         quantity: l.requested})), note: note.value || null}), form));
     form.addEventListener('submit', e => {
         e.preventDefault();
+        const errors = lines.flatMap((x, i) => overAsked(x, i));
+        if (errors.length) {
+            showError({errors, detail: 'Check the marked quantities; nothing was approved.'}, form);
+            return;
+        }
         busy(asEntered, () => approve({lines: lines.map(x => ({partNumber: x.l.partNumber, quantity: x.qty.value === '' ? null : Number(x.qty.value),
             substitutePartNumber: x.sub.value || null})), note: note.value || null}), form);
     });
@@ -100,6 +106,15 @@ function approvalCard(r, substitutes) {
         h('div', {class: 'row'}, full, asEntered),
         h('div', {class: 'row'}, h('div', {class: 'inline-field'}, h('label', {for: reason.id}, 'Reason for refusing'), reason), refuse));
     return form;
+}
+
+/** What the API would refuse in a line's quantity, said before sending (the API still checks). */
+function overAsked({l, qty}, i) {
+    const value = qty.value === '' ? NaN : Number(qty.value);
+    const asked = fmt.qty(l.requested, unit(l.partNumber));
+    const message = !(value >= 0) ? `give a quantity from 0 to the ${asked} asked for`
+        : value > Number(l.requested) ? `cannot approve more than the ${asked} asked for` : null;
+    return message ? [{field: `lines[${i}].quantity`, message}] : [];
 }
 
 function issueCard(r) {
