@@ -84,8 +84,8 @@ class MechanicSensorsBrowserTest extends BrowserSession {
     }
 
     /**
-     * "Report broken" on the pump's own card starts from today; on its card in the sensors' list, from the day the
-     * sensor saw use fall, said so beside the date, which stays inside the pump's life.
+     * "Report broken" on a flagged pump's own card and on its card in the sensors' list starts from the day the sensor saw
+     * use fall, said so beside the date, which stays inside the pump's life; on another pump's card, from today.
      */
     private void reportFromTheSensorCard(String stopped, String fell) throws Exception {
         String today = (String) driver.executeScript("const d = new Date(); return `${d.getFullYear()}-`"
@@ -97,7 +97,15 @@ class MechanicSensorsBrowserTest extends BrowserSession {
                 + ".scrollIntoView({block: 'center'})", "#pump-" + stopped + " button");
         driver.executeScript("[...document.querySelectorAll(arguments[0])].find(b => b.textContent === 'Report broken').click()",
                 "#pump-" + stopped + " button");
-        assertEquals(today, since.getDomProperty("value"), "a report from the pump's card starts from today");
+        assertEquals(fell, since.getDomProperty("value"), "a report from a flagged pump's own card starts from the day use fell");
+        assertTrue(driver.findElement(By.id("since-source")).getText().startsWith("From the sensor: use fell on "));
+        // A pump its sensor does not flag starts from today, from its own card too.
+        String other = (String) driver.executeScript("const card = [...document.querySelectorAll('#pump-list article.pump')]"
+                + ".find(c => !c.querySelector('.pump__sensor') && [...c.querySelectorAll('button')].some(b => b.textContent === 'Report broken'));"
+                + "if (!card) return null; [...card.querySelectorAll('button')].find(b => b.textContent === 'Report broken').click();"
+                + "return card.id");
+        assertTrue(other != null, "a pump not flagged by its sensor is on the list");
+        assertEquals(today, since.getDomProperty("value"), "a report from " + other + "'s card starts from today");
         assertEquals("", driver.findElement(By.id("since-source")).getText());
 
         tap("#down-list li[data-asset='" + stopped + "'] button");

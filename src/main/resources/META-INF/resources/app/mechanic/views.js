@@ -114,7 +114,8 @@ export function pumpCard(snapshot, {pump, due, repairs, sensor, stop}, waiting, 
         h('div', {class: 'row pump__actions'},
             pump.status === 'BROKEN'
                 ? h('button', {type: 'button', onclick: () => act('status', pump.assetId, 'WORKING')}, 'Report working again')
-                : h('button', {type: 'button', onclick: () => act('status', pump.assetId, 'BROKEN')}, 'Report broken'),
+                // Flagged by its sensor, the report starts from the day use fell, as from the sensors' list.
+                : h('button', {type: 'button', onclick: () => act('status', pump.assetId, 'BROKEN', sensor)}, 'Report broken'),
             h('button', {type: 'button', onclick: () => act('repair', pump.assetId)}, 'Record a repair'),
             h('button', {type: 'button', onclick: () => act('ask', pump.assetId)}, 'Ask for parts')));
 }
