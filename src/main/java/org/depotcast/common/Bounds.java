@@ -45,6 +45,13 @@ public final class Bounds {
     public static final String ORDER_QUANTITY_MAX = "1000000";
     /** Exchange rate from the catalogue currency to a projection currency. */
     public static final String EXCHANGE_RATE_MAX = "1000000";
+    /**
+     * A cycle service level typed by a person (settings, spend scenarios), as a fraction: below a half the reorder
+     * point falls under the mean demand, and the bounds refuse a mix-up of scales (0.2 meant as 20 %, 95 as 95 %).
+     */
+    public static final String SERVICE_LEVEL_MIN = "0.5";
+    public static final String SERVICE_LEVEL_MAX = "0.999";
+    public static final String SERVICE_LEVEL_RANGE = "must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)";
 
     private Bounds() {
     }

@@ -59,11 +59,10 @@ public final class PlanningRequests {
      * mean demand, and the bound refuses a mix-up of scales (99 % typed as 0.99 on a per-cent form arrives as 0.0099).
      */
     public record ServiceLevelRequest(@NotBlank @Size(max = 40) String partClass,
-                                      @NotNull @DecimalMin(value = "0.5", message = LEVEL_RANGE)
-                                      @DecimalMax(value = "0.999", message = LEVEL_RANGE) Double level) {
+                                      @NotNull @DecimalMin(value = Bounds.SERVICE_LEVEL_MIN, message = Bounds.SERVICE_LEVEL_RANGE)
+                                      @DecimalMax(value = Bounds.SERVICE_LEVEL_MAX, message = Bounds.SERVICE_LEVEL_RANGE)
+                                      Double level) {
     }
-
-    static final String LEVEL_RANGE = "must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)";
 
     public record LaneCostRequest(@NotBlank @Size(max = 40) String from, @NotBlank @Size(max = 40) String to,
                                   @NotNull @DecimalMin(value = "0", message = "must not be negative")

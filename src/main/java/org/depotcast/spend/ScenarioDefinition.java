@@ -22,7 +22,7 @@ import java.util.List;
  * @param priceEscalationPercentPerYear price rise per year, compounded from year 2
  * @param currency                   projection currency; {@code exchangeRate} converts catalogue prices into it
  * @param serviceLevel               one cycle service level for every part, for the year-1 stock top-up (else the
- *                                   levels in force)
+ *                                   levels in force); a fraction from 0.5 to 0.999, as on the lead's settings
  */
 public record ScenarioDefinition(
         @NotBlank @Size(max = 120) String name,
@@ -33,7 +33,8 @@ public record ScenarioDefinition(
         @DecimalMin("-50") @DecimalMax("200") Double priceEscalationPercentPerYear,
         @Pattern(regexp = "[A-Z]{3}", message = "must be a three-letter ISO 4217 code") String currency,
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.EXCHANGE_RATE_MAX) Double exchangeRate,
-        @DecimalMin(value = "0", inclusive = false) @DecimalMax(value = "1", inclusive = false) Double serviceLevel,
+        @DecimalMin(value = Bounds.SERVICE_LEVEL_MIN, message = Bounds.SERVICE_LEVEL_RANGE)
+        @DecimalMax(value = Bounds.SERVICE_LEVEL_MAX, message = Bounds.SERVICE_LEVEL_RANGE) Double serviceLevel,
         @Min(1000) @Max(100000) Integer draws,
         Long seed) {
 

@@ -191,6 +191,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         WebElement count = driver.findElement(By.cssSelector("#installations [data-name=count]"));
         count.clear();
         count.sendKeys("25");
+        refusalsAreSaidBesideTheirFieldsInWords(name);
         driver.findElement(By.id("save-scenario")).click();
         steady(Duration.ofSeconds(30)).until(d -> d.findElement(By.id("scenarios")).getText().contains(name));
         JsonPath saved = as("lead").get("/api/spend/scenarios").then().statusCode(200).extract().jsonPath();
@@ -199,6 +200,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         @SuppressWarnings("unchecked")
         Map<String, Object> definition = (Map<String, Object>) scenario.get("definition");
         assertEquals(10.0, ((Number) definition.get("usageChangePercent")).doubleValue(), 0);
+        assertEquals(0.95, ((Number) definition.get("serviceLevel")).doubleValue(), 1e-9, "95 typed as per cent");
         assertEquals(25, ((Number) ((List<Map<String, Object>>) definition.get("installations")).get(0).get("count")).intValue());
 
         driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']")).click();
@@ -242,6 +244,31 @@ class LeadJourneyBrowserTest extends BrowserSession {
         PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");
     }
 
+    /**
+     * A currency the API refuses, then a service level typed as a fraction (0.2 would be a 20 % level): each refusal
+     * is said beside its input, the top line says it in words (no field names), nothing is saved; leaves 95 %.
+     */
+    private void refusalsAreSaidBesideTheirFieldsInWords(String name) {
+        WebElement currency = driver.findElement(By.id("sc-currency"));
+        currency.sendKeys("EU");
+        driver.findElement(By.id("save-scenario")).click();
+        assertTrue(waitFor(By.cssSelector("#sc-currency + .field-error")).getText().contains("three-letter"));
+        String top = text(By.id("status"));
+        assertTrue(top.contains("The scenario was not saved") && !top.contains("currency:"), top);
+        currency.clear();
+        WebElement level = driver.findElement(By.id("sc-level"));
+        level.sendKeys("0.2");
+        driver.findElement(By.id("save-scenario")).click();
+        steady(Duration.ofSeconds(20)).until(d -> d.findElements(By.cssSelector("#sc-level + .field-error")).stream()
+                .anyMatch(e -> e.getText().contains("per cent, from 50 to 99.9")));
+        top = text(By.id("status"));
+        assertTrue(top.contains("The scenario was not saved") && !top.contains("serviceLevel"), top);
+        assertFalse(as("lead").get("/api/spend/scenarios").then().statusCode(200).extract().asString().contains(name),
+                "a refused scenario is not saved");
+        level.clear();
+        level.sendKeys("95");
+    }
+
     @Test
     void theLeadRunsTheForecastsReadsAChartPlansABudgetAndProjectsSpend() {
         signIn("lead", "lead-demo");
@@ -254,6 +281,9 @@ class LeadJourneyBrowserTest extends BrowserSession {
         screens("lead-budget");
         runAScenarioAndReadItsChart();
         screens("lead-spend");
-        assertNoPageErrors();
+        // The one refusal the API answered (the currency), on purpose.
+        String scenarios = url("/api/spend/scenarios");
+        assertNoPageErrors("HTTP 400 POST " + scenarios,
+                scenarios + " - Failed to load resource: the server responded with a status of 400");
     }
 }

@@ -230,4 +230,19 @@ class SpendResourceTest {
         as("officer2").contentType("application/json").body(scenario(TestData.unique("o"))).post("/api/spend/scenarios")
                 .then().statusCode(403).contentType(PROBLEM);
     }
+
+    @Test
+    void aServiceLevelOutsideAHalfTo0999IsRefusedNamingTheFieldAndItsScale() {
+        // 0.2 would be taken as a 20 % level, 95 meant as per cent would be refused in bare words: both say the scale.
+        for (double level : new double[]{0.2, 0.4999, 95, 0.9991}) {
+            as("lead").contentType("application/json").body(scenario(TestData.unique("lvl"), "serviceLevel", level))
+                    .post("/api/spend/scenarios").then().statusCode(400).contentType(PROBLEM)
+                    .body("type", equalTo("/problems/invalid-input")).body("errors[0].field", equalTo("serviceLevel"))
+                    .body("errors[0].message", equalTo("must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)"));
+        }
+        for (double level : new double[]{0.5, 0.999}) {
+            as("lead").contentType("application/json").body(scenario(TestData.unique("lvl"), "serviceLevel", level))
+                    .post("/api/spend/scenarios").then().statusCode(201);
+        }
+    }
 }

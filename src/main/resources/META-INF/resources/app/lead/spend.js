@@ -105,6 +105,8 @@ function edit(s) {
         'currency', 'exchangeRate', 'serviceLevel', 'draws']) {
         form.elements[name].value = d[name] ?? '';
     }
+    // The page asks per cent, as the settings page does; the API keeps a fraction.
+    form.elements.serviceLevel.value = d.serviceLevel == null ? '' : Number((d.serviceLevel * 100).toFixed(2));
     mount(installBox, (d.installations || []).map(installationRow));
     numberRows();
     document.getElementById('editor-heading').textContent = s ? `Scenario: ${s.name}` : 'New scenario';
@@ -114,6 +116,23 @@ function edit(s) {
     form.elements.name.focus();
 }
 
+const NOT_SAVED = 'The scenario was not saved: correct what is said beside each field marked below.';
+
+/**
+ * The per-cent figure as the API's fraction (rounded: 99.9 / 100 is 0.9990000000000001, past the API's 0.999).
+ * Checked here in per cent: the API's bounds are a fraction's, and 0.2 typed would be a 20 % level.
+ */
+function levelOrNull(percent) {
+    if (percent === null) {
+        return null;
+    }
+    if (!(percent >= 50 && percent <= 99.9)) {
+        throw {errors: [{field: 'serviceLevel', message: 'enter a level in per cent, from 50 to 99.9 (e.g. 95)'}],
+            detail: NOT_SAVED};
+    }
+    return Number((percent / 100).toFixed(6));
+}
+
 function definition() {
     const numberOrNull = name => form.elements[name].value === '' ? null : Number(form.elements[name].value);
     return {
@@ -121,7 +140,7 @@ function definition() {
         decommissionPercentPerYear: numberOrNull('decommissionPercentPerYear'), usageChangePercent: numberOrNull('usageChangePercent'),
         priceEscalationPercentPerYear: numberOrNull('priceEscalationPercentPerYear'),
         currency: form.elements.currency.value.trim().toUpperCase() || null, exchangeRate: numberOrNull('exchangeRate'),
-        serviceLevel: numberOrNull('serviceLevel'), draws: numberOrNull('draws'),
+        serviceLevel: levelOrNull(numberOrNull('serviceLevel')), draws: numberOrNull('draws'),
         installations: [...installBox.children].map(row => {
             const value = name => row.querySelector(`[data-name="${name}"]`).value;
             return {year: Number(value('year')), count: Number(value('count')), modelCode: value('modelCode'),
@@ -133,8 +152,14 @@ function definition() {
 
 async function save(asNew) {
     const body = definition();
-    const saved = editing && !asNew ? await api.put(`/api/spend/scenarios/${editing.id}`, body)
-        : await api.post('/api/spend/scenarios', body);
+    let saved;
+    try {
+        saved = editing && !asNew ? await api.put(`/api/spend/scenarios/${editing.id}`, body)
+            : await api.post('/api/spend/scenarios', body);
+    } catch (e) {
+        // The API's detail names fields ("currency: …"); each one is said beside its input, so the top line is words.
+        throw e.errors?.length && !e.refused && !e.offline ? Object.assign(e, {detail: NOT_SAVED}) : e;
+    }
     say(`Scenario "${saved.name}" saved.`, 'ok');
     editorCard.hidden = true;
     editing = null;
