@@ -200,7 +200,7 @@ class LeadJourneyBrowserTest extends BrowserSession {
         @SuppressWarnings("unchecked")
         Map<String, Object> definition = (Map<String, Object>) scenario.get("definition");
         assertEquals(10.0, ((Number) definition.get("usageChangePercent")).doubleValue(), 0);
-        assertEquals(0.95, ((Number) definition.get("serviceLevel")).doubleValue(), 1e-9, "95 typed as per cent");
+        assertEquals(0.95, ((Number) definition.get("serviceLevel")).doubleValue(), 1e-6, "95 typed as per cent"); // a JSON float
         assertEquals(25, ((Number) ((List<Map<String, Object>>) definition.get("installations")).get(0).get("count")).intValue());
 
         driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']")).click();
