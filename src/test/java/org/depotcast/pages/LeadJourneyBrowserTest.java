@@ -203,7 +203,10 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertEquals(0.95, ((Number) definition.get("serviceLevel")).doubleValue(), 1e-6, "95 typed as per cent"); // a JSON float
         assertEquals(25, ((Number) ((List<Map<String, Object>>) definition.get("installations")).get(0).get("count")).intValue());
 
-        driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']")).click();
+        WebElement run = driver.findElement(By.xpath("//button[normalize-space()='Run " + name + "']"));
+        // Centred: at the top edge the "saved" message, fixed over the page, takes the click.
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", run);
+        run.click();
         waitFor(By.id("spend-progress")).findElement(By.tagName("progress"));
         String total = steady(Duration.ofSeconds(300)).until(d -> {
             List<WebElement> shown = d.findElements(By.id("spend-total"));
