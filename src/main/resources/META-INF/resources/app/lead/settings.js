@@ -27,7 +27,8 @@ function levelForm(partClass, words, level, defaultLevel) {
                 throw {errors: [{field: 'level', message: 'enter a level in per cent, from 50 to 99.9 (e.g. 95)'}],
                     detail: `${words}: nothing was saved.`};
             }
-            await api.put('/api/planning/service-levels', {partClass, level: percent / 100});
+            // Rounded: 99.9 / 100 is 0.9990000000000001, past the API's 0.999.
+            await api.put('/api/planning/service-levels', {partClass, level: Number((percent / 100).toFixed(6))});
             say(`${words}: ${fmt.num(percent, 1)} % from now on.`, 'ok');
             await showLevels();
         }, form);
@@ -61,7 +62,7 @@ function certaintyForm(c) {
                 throw {errors: [{field: 'leastProbability', message: 'enter a chance in per cent, from 50 to 99 (e.g. 80)'}],
                     detail: 'Probably down: nothing was saved.'};
             }
-            const saved = await api.put('/api/sensors/stop-certainty', {leastProbability: percent / 100});
+            const saved = await api.put('/api/sensors/stop-certainty', {leastProbability: Number((percent / 100).toFixed(6))});
             say(`Pumps are called probably down from ${fmt.num(percent, 1)} % likely, for flags opened from now on.`, 'ok');
             showCertainty(saved);
         }, form);
