@@ -5,12 +5,11 @@ import java.util.List;
 
 /**
  * The kinds of background job; {@link #words()} names one in messages. Kinds that share a start lock run one at a
- * time between them: an accuracy report computes a forecast run of its own, and a spend run reads the newest finished
- * one twice (a run finishing in between would mix two runs' demand), so both take turns with forecast runs.
+ * time between them: an accuracy report computes a forecast run of its own, so it takes turns with forecast runs.
  */
 public enum JobKind {
     FORECAST_RUN("forecast run", "a forecast run", "FORECAST_RUN"),
-    SPEND_RUN("spend run", "a spend run", "FORECAST_RUN"),
+    SPEND_RUN("spend run", "a spend run", "SPEND_RUN"),
     ACCURACY_REPORT("accuracy report", "an accuracy report", "FORECAST_RUN");
 
     private final String words;
@@ -41,7 +40,6 @@ public enum JobKind {
     String busyWords(JobKind running) {
         return running == this ? "one " + words + " at a time: another is already in progress"
                 : "one forecast computation at a time: " + running.oneWords + " is in progress (an accuracy report "
-                + "computes a forecast run of its own, a spend run reads the finished one); start the " + words
-                + " when it has finished";
+                + "computes a forecast run of its own); start the " + words + " when it has finished";
     }
 }

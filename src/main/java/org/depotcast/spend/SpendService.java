@@ -70,8 +70,7 @@ public class SpendService {
     }
 
     /**
-     * Starts a run in the background; poll {@link #run(long)} for its phase and results. 409 while a spend run, a
-     * forecast run or an accuracy report is going.
+     * Starts a run in the background; poll {@link #run(long)} for its phase and results.
      *
      * @param origin the projection's first day (its month's first day is used); null for the current month's. A
      *               future one is refused (400, field {@code origin}), as for a forecast run.
@@ -90,9 +89,8 @@ public class SpendService {
             throw new NoForecastYetException();
         }
         FinancialYears years = financialYears.current();
-        // Takes its turn with forecast runs and reports (409): it reads the newest finished forecast run twice, for
-        // the fleet's models and for the stock top-up, and a run finishing in between would mix two runs' demand.
-        SpendRun run = jobs.createExclusive(JobKind.SPEND_RUN, jobId -> {
+        long jobId = jobs.create(JobKind.SPEND_RUN);
+        SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
             SpendRun r = new SpendRun();
             r.jobId = jobId;
             r.scenarioId = scenarioId;
@@ -106,7 +104,7 @@ public class SpendService {
             return r;
         });
         // The caller's programme-wide view was checked above; the job runs as the system for it.
-        jobs.launch(run.jobId, progress -> execute(run.id, scenario.name, definition, years, from, progress));
+        jobs.launch(jobId, progress -> execute(run.id, scenario.name, definition, years, from, progress));
         return run;
     }
 

@@ -4,12 +4,10 @@ import io.quarkus.narayana.jta.QuarkusTransaction;
 import io.quarkus.test.junit.QuarkusTest;
 import jakarta.inject.Inject;
 import jakarta.persistence.EntityManager;
-import org.depotcast.forecasting.ForecastRunService;
 import org.junit.jupiter.api.Test;
 
 import java.time.LocalDate;
 import java.time.ZoneOffset;
-import java.util.Map;
 import java.util.concurrent.TimeUnit;
 
 import static org.depotcast.TestData.as;
@@ -22,9 +20,7 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 /**
  * An accuracy report computes a forecast run of its own, so it is refused while a forecast run is going and a
  * forecast run is refused while a report is going, as a second forecast run is: two heavy computations never share
- * the machine. A spend run reads the newest finished forecast run twice (fleet models, then the stock top-up), so it
- * takes the same turn: no run finishes between the two reads. The same start lock and check decide it (JobKind's
- * start lock), across instances too.
+ * the machine. The same start lock and check decide it (JobKind's start lock), across instances too.
  */
 @QuarkusTest
 class ForecastComputationsTakeTurnsTest {
@@ -34,8 +30,6 @@ class ForecastComputationsTakeTurnsTest {
     JobRunner runner;
     @Inject
     EntityManager em;
-    @Inject
-    ForecastRunService forecasts;
 
     @Test
     void anAccuracyReportWaitsForAForecastRunAndTheOtherWayRound() {
@@ -60,45 +54,17 @@ class ForecastComputationsTakeTurnsTest {
         }
     }
 
-    @Test
-    void aSpendRunWaitsForAForecastRunAndTheOtherWayRound() {
-        awaitNoneRunning();
-        if (forecasts.latestFinished().isEmpty()) {
-            forecasts.runNow("test", LocalDate.of(2026, 12, 2));
-        }
-        long scenario = as("lead").contentType("application/json").body(Map.of("name", "turns " + System.nanoTime(),
-                "horizonYears", 1, "draws", 1000)).post("/api/spend/scenarios").then().statusCode(201)
-                .extract().jsonPath().getLong("id");
-        long forecastRun = runner.create(JobKind.FORECAST_RUN);
-        try {
-            as("lead").post("/api/spend/scenarios/" + scenario + "/runs").then().statusCode(409).contentType(PROBLEM)
-                    .body("type", equalTo("/problems/conflict"))
-                    .body("detail", containsString("a forecast run is in progress"));
-            assertEquals(0, running(JobKind.SPEND_RUN), "no spend run was started");
-        } finally {
-            finish(forecastRun);
-        }
-        long spendRun = runner.create(JobKind.SPEND_RUN);
-        try {
-            as("lead").post("/api/forecast/runs").then().statusCode(409).contentType(PROBLEM)
-                    .body("detail", containsString("a spend run is in progress"));
-            assertEquals(0, running(JobKind.FORECAST_RUN), "no forecast run was started");
-        } finally {
-            finish(spendRun);
-        }
-    }
-
     private long running(JobKind kind) {
         return QuarkusTransaction.requiringNew().call(() -> em.createQuery(
                 "select count(j) from BackgroundJob j where j.kind = ?1 and j.state = ?2", Long.class)
                 .setParameter(1, kind).setParameter(2, JobState.RUNNING).getSingleResult());
     }
 
-    /** Forecast runs, reports and spend runs of other tests may still be going; these tests need them idle. */
+    /** Forecast runs and reports of other tests may still be going; this test needs both idle. */
     private void awaitNoneRunning() {
         long deadline = System.nanoTime() + TimeUnit.SECONDS.toNanos(300);
-        while (running(JobKind.FORECAST_RUN) + running(JobKind.ACCURACY_REPORT) + running(JobKind.SPEND_RUN) > 0) {
-            assertTrue(System.nanoTime() < deadline, "a forecast run, report or spend run of another test kept running");
+        while (running(JobKind.FORECAST_RUN) + running(JobKind.ACCURACY_REPORT) > 0) {
+            assertTrue(System.nanoTime() < deadline, "a forecast run or accuracy report of another test kept running");
             pause(200);
         }
     }
