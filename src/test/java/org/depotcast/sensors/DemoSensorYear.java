@@ -51,8 +51,8 @@ final class DemoSensorYear {
         }
     }
 
-    /** One sensor pump's year: its planted breakdowns, its flags in order, the days judged. */
-    record PumpYear(String assetId, List<Planted> planted, List<Flag> flags, int daysJudged) {
+    /** One sensor pump's year: its planted breakdowns, its flags in order, the days judged, its hours as read. */
+    record PumpYear(String assetId, List<Planted> planted, List<Flag> flags, int daysJudged, double[] hours) {
     }
 
     /** How the chance of an idle day and of a breakdown are judged. */
@@ -242,7 +242,7 @@ final class DemoSensorYear {
         if (openDay >= 0) {
             flags.add(flag(openDay, DAYS, stoppedFrom, probability, baseline, covering, nearNothing, idleOnRecord));
         }
-        return new PumpYear(pump.assetId(), marks, flags, judged);
+        return new PumpYear(pump.assetId(), marks, flags, judged, hours);
     }
 
     /** The breakdowns reported by day {@code today}, as days of the window starting on day {@code first}. */

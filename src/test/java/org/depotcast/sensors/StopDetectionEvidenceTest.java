@@ -86,7 +86,7 @@ class StopDetectionEvidenceTest {
         DemoSensorSeries.ReportDelay delay = DemoSensorSeries.ReportDelay.CARETAKER_TO_MECHANIC;
         for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
             double[] previous = null;
-            for (double least : new double[]{0.5, 0.8, 0.95}) {
+            for (double least : new double[]{0.5, 0.8, 0.9, 0.95}) {
                 List<DemoSensorYear.PumpYear> year = DemoSensorYear.replay(seed, delay, true,
                         DemoSensorYear.Rule.POOLED, least);
                 double[] figures = statistics(year);
@@ -105,6 +105,11 @@ class StopDetectionEvidenceTest {
                                 + "stop; %.1f %% of the %d stops of their own flagged before the report%n", delay,
                         seed, least, figures[1], 100 * figures[2], 100 * figures[5], figures[3], flags,
                         probability / flags, (double) covering / flags, 100 * figures[8], (int) figures[7]);
+                if (least == 0.9) {
+                    // The highest share flagged first within the 2 false alarms per 1,000 pump-months on the
+                    // demo's series (measured 1.85 / 1.36 with 69.8 / 70.7 % flagged first, README).
+                    assertTrue(figures[3] <= 2 && figures[2] >= 0.65, "at 0.9: " + figures[2] + ", " + figures[3]);
+                }
                 if (least == 0.95) {
                     // A stricter flag keeps false alarms within the 2 per 1,000 pump-months and still flags
                     // most stops first (65–66 % on the demo's series).
@@ -116,6 +121,48 @@ class StopDetectionEvidenceTest {
                 }
                 previous = figures;
             }
+        }
+    }
+
+    /**
+     * The most any detector reading these series could flag before the report: a planted breakdown can be flagged
+     * first only if at least one day from its stop to the day before its report was read (not reported the same day,
+     * not lost in a transmission gap) and it did not begin while another breakdown of the pump stood. The issue's 80 %
+     * counts all planted breakdowns judged, so this bound says how far it is within reach on the demo's series.
+     */
+    @Test
+    void noDetectorCanFlagMoreThanTheStopsReadBeforeTheirReport() throws IOException {
+        DemoSensorSeries.ReportDelay delay = DemoSensorSeries.ReportDelay.CARETAKER_TO_MECHANIC;
+        for (long seed : new long[]{DemoSensorReadings.SEED, 15}) {
+            List<DemoSensorYear.PumpYear> year = DemoSensorYear.replay(seed, delay);
+            int window = StopSettings.DEFAULT.windowDays(), judged = 0, readBefore = 0, sameDay = 0, within = 0;
+            for (DemoSensorYear.PumpYear pump : year) {
+                List<DemoSensorYear.Planted> marks = pump.planted();
+                for (int i = 0; i < marks.size(); i++) {
+                    DemoSensorYear.Planted m = marks.get(i);
+                    if (m.stop() < window || m.report() >= DAYS) {
+                        continue;
+                    }
+                    judged++;
+                    boolean read = false;
+                    for (int t = m.stop(); t < m.report(); t++) {
+                        read |= !Double.isNaN(pump.hours()[t]);
+                    }
+                    sameDay += m.report() == m.stop() ? 1 : 0;
+                    within += withinAnother(marks, i) ? 1 : 0;
+                    readBefore += read && !withinAnother(marks, i) ? 1 : 0;
+                }
+            }
+            double[] figures = statistics(year);
+            double bound = (double) readBefore / judged;
+            System.out.printf("EVIDENCE %s, seed %d: of %d planted breakdowns judged, %d reported the day they "
+                            + "stopped, %d stopped while another of the pump stood, %d (%.1f %%) read on a day before "
+                            + "their report: the most any detector could flag first; the service's %.1f %% is %.1f %% "
+                            + "of that%n", delay, seed, judged, sameDay, within, readBefore, 100 * bound,
+                    100 * figures[2], 100 * figures[2] / bound);
+            assertEquals(judged, (int) figures[0], "the same planted breakdowns judged");
+            assertTrue(figures[2] <= bound, "no detector flags first a stop with no reading before its report");
+            assertTrue(sameDay > 0 && within > 0 && bound < 0.9, "the bound leaves stops out: " + bound);
         }
     }
 
