@@ -100,7 +100,9 @@ public class ProblemMapper {
 
     @ServerExceptionMapper
     public Response notEnoughStock(NotEnoughStockException e, UriInfo uri) {
-        return respond(422, "not-enough-stock", "Not enough on hand", e.getMessage(), uri, fieldList(e.field(), e.getMessage()));
+        Problem body = new Problem("/problems/not-enough-stock", "Not enough on hand", 422, e.getMessage(),
+                uri == null ? null : uri.getPath(), fieldList(e.field(), e.getMessage()), e.members());
+        return Response.status(422).type(Problem.MEDIA_TYPE).entity(body).build();
     }
 
     @ServerExceptionMapper

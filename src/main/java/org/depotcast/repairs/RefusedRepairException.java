@@ -10,10 +10,13 @@ import java.util.Map;
 
 /**
  * The ledger's refusal of a repair's parts (answered as any {@link NotEnoughStockException}), carrying what the
- * stores officer's notice needs once the repair's own transaction has rolled back.
+ * stores officer's notice needs once the repair's own transaction has rolled back, and then whether the notice was
+ * written: the answer says so ({@code officerNoticeRecorded}, and the notice's id as {@code officerNotice}), so the
+ * phone says "the officer has been told" only when it is true.
  */
 class RefusedRepairException extends NotEnoughStockException {
     private final transient Refusal refusal;
+    private Long noticeId;
 
     /** The repair as sent: who, which kit and pump, the day of the fix and every part it used. */
     record Refusal(String repairRef, String mechanic, long kitId, String kitCode, long pumpId, LocalDate fixedOn,
@@ -37,5 +40,16 @@ class RefusedRepairException extends NotEnoughStockException {
 
     Refusal refusal() {
         return refusal;
+    }
+
+    /** The notice written for this refusal, or null when none was (a failed write, or the parts booked since). */
+    void noted(Long noticeId) {
+        this.noticeId = noticeId;
+    }
+
+    @Override
+    public Map<String, Object> members() {
+        return noticeId == null ? Map.of("officerNoticeRecorded", false)
+                : Map.of("officerNoticeRecorded", true, "officerNotice", noticeId);
     }
 }

@@ -64,26 +64,29 @@ public class RefusedRepairService {
         try {
             return QuarkusTransaction.requiringNew().call(repairWork::get);
         } catch (RefusedRepairException refused) {
-            note(refused.refusal());
+            refused.noted(note(refused.refusal()));
             throw refused;
         }
     }
 
-    /** Never lets the notice replace the mechanic's answer: a second try settles a race on the reference. */
-    private void note(RefusedRepairException.Refusal refusal) {
+    /**
+     * The notice's id, or null when none was written. Never lets the notice replace the mechanic's answer: a second
+     * try settles a race on the reference; a failure after it is logged and the answer says the notice is missing.
+     */
+    private Long note(RefusedRepairException.Refusal refusal) {
         for (int attempt = 1; attempt <= 2; attempt++) {
             try {
-                QuarkusTransaction.requiringNew().run(() -> write(refusal));
-                return;
+                return QuarkusTransaction.requiringNew().call(() -> write(refusal));
             } catch (RuntimeException e) {
                 if (attempt == 2) {
                     Log.errorf(e, "could not note the refused repair %s for the stores officer", refusal.repairRef());
                 }
             }
         }
+        return null;
     }
 
-    private void write(RefusedRepairException.Refusal refusal) {
+    private Long write(RefusedRepairException.Refusal refusal) {
         List<RefusedRepairLine> shortNow = new ArrayList<>();
         for (RefusedRepairException.Used used : refusal.used()) {
             BigDecimal held = stock.onHand(used.partNumber(), refusal.kitCode());
@@ -92,7 +95,7 @@ public class RefusedRepairService {
             }
         }
         if (shortNow.isEmpty()) {
-            return; // booked since: the phone's next send records it, nothing for the officer to do
+            return null; // booked since: the phone's next send records it, nothing for the officer to do
         }
         OffsetDateTime now = OffsetDateTime.now(clock);
         RefusedRepair notice = notices.byRef(refusal.repairRef()).orElse(null);
@@ -113,6 +116,7 @@ public class RefusedRepairService {
         }
         notices.flush();
         audit.record("REPAIR_REFUSED_FOR_STOCK", "refused-repair", notice.repairRef, null, view(notice));
+        return notice.id;
     }
 
     /** In the repair's transaction: the repair is recorded, so its notice (if any) is closed. */

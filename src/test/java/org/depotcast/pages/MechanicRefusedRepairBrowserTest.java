@@ -1,6 +1,7 @@
 package org.depotcast.pages;
 
 import io.quarkus.test.junit.QuarkusTest;
+import org.depotcast.repairs.NoticeWritesFail;
 import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 import org.openqa.selenium.StaleElementReferenceException;
@@ -17,17 +18,31 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * A repair that really happened uses more parts than the kit's books show: the server refuses it (stock never goes
- * negative), the phone keeps it and says in words that the stores officer has it on their morning board and what to
- * do, the officer books the parts to the kit, and "Send again" records the repair once, its parts out of the kit.
+ * negative), the phone keeps it and says in words what to do: tell the stores officer when the server could not put
+ * the refusal on their morning board (its answer says so), that the officer has been told once it could. The officer
+ * books the parts to the kit, and "Send again" records the repair once, its parts out of the kit.
  */
 @QuarkusTest
 class MechanicRefusedRepairBrowserTest extends MechanicPhoneSession {
 
     @Test
     void aRepairRefusedForPartsNotOnTheBooksIsSentAgainOnceTheOfficerBooksThem() throws Exception {
+        NoticeWritesFail notices = NoticeWritesFail.install();
+        notices.fail(true);
         openPageOnPhone();
         recordFixedRepair(sealPart, 7);
         wait(Duration.ofSeconds(30)).until(d -> "1".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
+        String untold = textOf(By.cssSelector(".outbox__item--refused .outbox__advice"));
+        assertTrue(untold.startsWith("The server could not put this refusal on the stores officer's morning board: tell the "
+                + "stores officer yourself") && !untold.contains("has been told"), untold);
+        as("officer").queryParam("depot", depot).get("/api/refused-repairs").then().statusCode(200).body("size()",
+                org.hamcrest.Matchers.equalTo(0));
+
+        // Sent again while the books are still short, the notice is written this time, and the phone says so.
+        notices.fail(false);
+        press(".outbox__item--refused button.outbox__again");
+        wait(Duration.ofSeconds(30)).until(d -> textOf(By.cssSelector(".outbox__item--refused .outbox__advice"))
+                .startsWith("The stores officer has been told"));
         String message = textOf(By.cssSelector(".outbox__item--refused .outbox__message"));
         assertEquals("The books show only 5 of part " + sealPart + " in " + kit + ", and this needs 7.", message);
         String advice = textOf(By.cssSelector(".outbox__item--refused .outbox__advice"));

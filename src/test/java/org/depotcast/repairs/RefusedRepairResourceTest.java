@@ -135,6 +135,28 @@ class RefusedRepairResourceTest {
         assertTrue(audit.contains("REFUSED_REPAIR_RECORDED") && audit.contains(ref), audit);
     }
 
+    /**
+     * The refusal's answer says whether the officer's notice was written (and which it is), so the phone says "the
+     * officer has been told" only when it is true; a write that fails (provoked here) still answers the refusal, saying
+     * no notice was recorded.
+     */
+    @Test
+    void theRefusalSaysWhetherTheOfficersNoticeWasRecorded() {
+        String ref = TestData.unique("phone-rep");
+        Number told = asMechanic().contentType("application/json").body(repair(ref, 2)).post("/api/repairs").then()
+                .statusCode(422).contentType(PROBLEM).body("type", equalTo("/problems/not-enough-stock"))
+                .body("officerNoticeRecorded", equalTo(true)).extract().path("officerNotice");
+        assertEquals(((Number) notices("officer", depot).get(0).get("id")).longValue(), told.longValue());
+
+        NoticeWritesFail.install().fail(true);
+        String untold = TestData.unique("phone-rep");
+        asMechanic().contentType("application/json").body(repair(untold, 2)).post("/api/repairs").then()
+                .statusCode(422).contentType(PROBLEM).body("type", equalTo("/problems/not-enough-stock"))
+                .body("detail", equalTo("only 1 of part '" + seal + "' on hand at '" + kit + "', cannot take 2"))
+                .body("officerNoticeRecorded", equalTo(false)).body("$", not(org.hamcrest.Matchers.hasKey("officerNotice")));
+        as("officer").get("/api/repairs/" + untold).then().statusCode(404);
+    }
+
     @Test
     void theOfficerDismissesANoticeAndTheDismissalIsAudited() {
         String ref = TestData.unique("phone-rep");

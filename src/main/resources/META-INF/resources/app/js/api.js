@@ -10,11 +10,13 @@
  *   clientRef(prefix?)             a random reference made on this device, for resends that must count once
  * A 401 sends the browser to the sign-in page ("your session has ended" when this browser had signed in).
  * Any other failure throws ApiError: status (0 = no connection), title, detail, errors[{field, message}],
- * refused (403), offline.
+ * refused (403), offline, extensions (the problem's own members beside the standard ones, e.g. officerNoticeRecorded).
  */
 export const PAGE_HEADER = 'X-Requested-With';
 export const PAGE_HEADER_VALUE = 'depotcast';
 export const SIGNED_IN_MARK = 'depotcast.signed-in';
+
+const STANDARD_MEMBERS = new Set(['type', 'title', 'status', 'detail', 'instance', 'errors']);
 
 export class ApiError extends Error {
     constructor(status, problem) {
@@ -26,6 +28,7 @@ export class ApiError extends Error {
         this.errors = Array.isArray(problem.errors) ? problem.errors : [];
         this.refused = status === 403;
         this.offline = status === 0;
+        this.extensions = Object.fromEntries(Object.entries(problem).filter(([name]) => !STANDARD_MEMBERS.has(name)));
     }
 }
 

@@ -6,7 +6,9 @@
  * discards it or sends it again (sendAgain); no connection or a server fault (5xx) leaves the item waiting for the
  * next try. A refusal for too few parts on the kit's books (/problems/not-enough-stock) is marked `shortage`: the
  * repair happened, so it waits for the stores officer to book the parts to the kit and is then sent again under the
- * same reference (the server kept nothing of the refused send, so the resend records it once).
+ * same reference (the server kept nothing of the refused send, so the resend records it once). Its answer says
+ * whether the server put the refusal on the stores officer's morning board (officerNoticeRecorded): the item keeps
+ * that as `officerTold`, and the notice's id as `officerNotice` once any send has written one.
  */
 import * as api from '/app/js/api.js';
 import * as store from './store.js';
@@ -32,7 +34,7 @@ function withLock(work) {
 
 /** A refused item back to waiting, as it was queued (same reference and body), for the next send. */
 export function sendAgain(item) {
-    const {status, message, errors, shortage, ...kept} = item;
+    const {status, message, errors, shortage, officerTold, ...kept} = item;
     return store.update({...kept, state: 'waiting'});
 }
 
@@ -80,6 +82,15 @@ function fieldWords(field) {
     return String(field || 'request').replace(/([A-Z])/g, ' $1').toLowerCase();
 }
 
+/** Whether this refusal reached the officer's board, and the notice any send of the item wrote (kept for withdrawing). */
+function officerNotice(item, e) {
+    if (e.type !== SHORTAGE) {
+        return {};
+    }
+    return {officerTold: e.extensions.officerNoticeRecorded === true,
+        officerNotice: e.extensions.officerNotice || item.officerNotice};
+}
+
 async function sendAll(username, onEach) {
     const result = {sent: 0, refused: 0, stopped: null};
     for (const item of await store.items(username)) {
@@ -96,7 +107,7 @@ async function sendAll(username, onEach) {
                 break;
             }
             await store.update({...item, state: 'refused', status: e.status, message: refusalText(e), errors: e.errors,
-                shortage: e.type === SHORTAGE});
+                shortage: e.type === SHORTAGE, ...officerNotice(item, e)});
             result.refused++;
         }
         if (onEach) {

@@ -140,12 +140,16 @@ export function requestsView(snapshot, waiting) {
 }
 
 /**
- * What to do about a refusal for too few parts on the kit's books: the repair happened, so it is not lost. The server
- * put the refusal on the stores officer's morning board when it refused it, so the mechanic need not ask.
+ * What to do about a refusal for too few parts on the kit's books: the repair happened, so it is not lost. When the
+ * server put the refusal on the stores officer's morning board the mechanic need not ask; when it could not (its
+ * answer says so), the mechanic is asked to tell the officer. Items kept from before the answer said so count as told.
  */
-function shortageAdvice(kitCode) {
+function shortageAdvice(item, kitCode) {
     const kit = kitCode ? `your kit ${kitCode}` : 'your kit';
-    return h('p', {class: 'outbox__advice'}, 'The stores officer has been told: this refusal is on their morning board. '
+    const told = item.officerTold !== false ? 'The stores officer has been told: this refusal is on their morning board. '
+        : 'The server could not put this refusal on the stores officer\'s morning board: tell the stores officer yourself '
+        + 'that the books show too few parts for this repair. ';
+    return h('p', {class: 'outbox__advice'}, told
         + `Once they have booked the parts to ${kit} (a transfer to the kit, or a count of the kit), press "Send again". `
         + 'It stays on this phone until then.');
 }
@@ -161,7 +165,7 @@ export function outboxView(waiting, discard, sendAgain, kitCode) {
             ? h('p', {}, state('Refused by the server', 'urgent'), ' ', h('span', {class: 'outbox__message'},
                 isShortage(item) ? shortageText(item.message) : item.message))
             : h('p', {}, state('Waiting to send', 'info'), h('span', {class: 'hint'}, `Made ${fmt.dateTime(item.createdAt)}`)),
-        isShortage(item) ? shortageAdvice(kitCode) : null,
+        isShortage(item) ? shortageAdvice(item, kitCode) : null,
         item.ref ? h('p', {class: 'hint'}, `Reference ${item.ref}`) : null,
         item.state === 'refused' ? h('p', {class: 'row'},
             isShortage(item) ? h('button', {type: 'button', class: 'primary outbox__again', onclick: () => sendAgain(item)}, 'Send again') : null,
