@@ -11,10 +11,11 @@ public final class TransferResponses {
 
     /**
      * A suggested move: {@code unitCost} is transport per unit; {@code pumpDaysAvoided} the receiver's reduction in
-     * expected pump-days without water over its protection period.
+     * expected pump-days without water over its protection period, {@code overDays} days (its transfer time and
+     * review), so suggestions to stores with other periods can be compared per day.
      */
     public record Suggestion(String partNumber, String from, String to, long quantity, double distanceKm,
-                             double unitCost, double pumpDaysAvoided) {
+                             double unitCost, double pumpDaysAvoided, int overDays) {
     }
 
     /**

@@ -98,7 +98,8 @@ public class TransferService {
             received.merge(to.locationCode(), (double) move.units(), Double::sum);
             out.add(new TransferResponses.Suggestion(part, sides.donors().get(move.from()).code(), to.locationCode(),
                     move.units(), lanes.km()[move.from()][move.to()], move.unitCost(),
-                    ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays())));
+                    ShortageReduction.pumpDaysAvoided(demand.get(to.locationCode()), before, move.units(), to.protectionDays()),
+                    to.protectionDays()));
         }
         out.sort(Comparator.comparing(TransferResponses.Suggestion::from).thenComparing(TransferResponses.Suggestion::to));
         return out;

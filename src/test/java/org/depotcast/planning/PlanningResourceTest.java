@@ -176,6 +176,11 @@ class PlanningResourceTest {
         assertFalse(suggestions.isEmpty(), "the demo programme has transfer suggestions");
         Map<String, Double> given = new HashMap<>();
         for (Map<String, Object> s : suggestions) {
+            // Pump-days are counted over the receiver's own protection period, said with them.
+            List<Map<String, Object>> toPolicies = as("officer").queryParam("location", s.get("to"))
+                    .get("/api/planning/policies").then().extract().jsonPath().getList("$");
+            assertEquals(toPolicies.stream().filter(p -> p.get("partNumber").equals(s.get("partNumber"))).findFirst()
+                    .orElseThrow().get("protectionDays"), s.get("overDays"), "over the receiver's protection period");
             given.merge(s.get("partNumber") + "|" + s.get("from"), ((Number) s.get("quantity")).doubleValue(), Double::sum);
         }
         for (Map.Entry<String, Double> g : given.entrySet()) {

@@ -175,7 +175,7 @@ function transferOffer(s, u) {
         say(`Transfer ${order.id} dispatched: ${fmt.qty(order.quantity, u)} of ${s.partNumber} from ${s.from} to ${s.to}, now in transit.`);
     }));
     return h('div', {class: 'transfer'}, h('p', {}, `Send ${fmt.qty(s.quantity, u)} from ${names.get(s.from) || s.from} to `
-        + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.pumpDays(s.pumpDaysAvoided)} pump-days without water.`),
+        + `${names.get(s.to) || s.to} (${fmt.num(s.distanceKm)} km); removes about ${fmt.pumpDays(s.pumpDaysAvoided)} pump-days without water over the next ${s.overDays} days.`),
         me.locationCodes.length && !me.locationCodes.includes(s.from) && !me.roles.includes('admin')
             ? h('p', {class: 'hint'}, `The officer of ${s.from} dispatches it.`) : send);
 }

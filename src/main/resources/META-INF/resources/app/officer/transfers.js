@@ -59,7 +59,7 @@ function suggestionTable(rows) {
             {label: 'Quantity', value: s => fmt.qty(s.quantity, unit(s.partNumber)), num: true},
             {label: 'Distance', value: s => `${fmt.num(s.distanceKm)} km`, num: true},
             {label: 'Transport cost', value: s => fmt.money(s.quantity * s.unitCost, laneCurrency), num: true},
-            {label: 'Pump-days avoided', value: s => fmt.pumpDays(s.pumpDaysAvoided), num: true},
+            {label: 'Pump-days avoided', value: s => `${fmt.pumpDays(s.pumpDaysAvoided)} over ${s.overDays} days`, num: true},
             {label: 'Action', value: s => {
                 if (!mayDispatchFrom(s.from)) {
                     return h('span', {class: 'hint'}, `The officer of ${s.from} dispatches it.`);
