@@ -49,8 +49,25 @@ final class DemoSensorSeries {
         }
     }
 
-    /** The hours, and for each stop (in the order given) the day its use fell. */
-    record Series(double[] hours, List<LocalDate> stoppedFrom) {
+    /** The hours, and for each stop (in the order given) the day its use fell, and the series' own settings. */
+    record Series(double[] hours, List<LocalDate> stoppedFrom, Settings settings) {
+    }
+
+    /**
+     * What the series was drawn from, which a detector never sees (for the evidence tests' bound on what any detector
+     * could do): the pump factor times its load, its quiet weekday (0 = Monday), the day its decline starts
+     * ({@link Integer#MAX_VALUE} for none), and its chance of starting an idle spell on a day (0 for a pump that never
+     * idles).
+     */
+    record Settings(double level, int quietWeekday, int declineFrom, double spellsPerDay) {
+        /** The day's expected hours in use before noise: level, season, quiet weekday and decline. */
+        double expected(LocalDate firstDay, int d) {
+            LocalDate day = firstDay.plusDays(d);
+            double season = 1 + 0.25 * Math.cos(2 * Math.PI * (day.getDayOfYear() - 75) / 365.25);
+            double week = day.getDayOfWeek().getValue() - 1 == quietWeekday ? 0.35 : 1.0;
+            double decline = d < declineFrom ? 1 : Math.max(0.45, 1 - 0.55 * (d - declineFrom) / 60.0);
+            return level * season * week * decline;
+        }
     }
 
     private DemoSensorSeries() {
@@ -73,15 +90,12 @@ final class DemoSensorSeries {
         int quietWeekday = random.nextInt(7);
         int declineFrom = random.nextDouble() < 0.08 ? random.nextInt(days) : Integer.MAX_VALUE;
         double[] hours = new double[days];
+        Settings drawn = new Settings(level, quietWeekday, declineFrom, 0);
         for (int d = 0; d < days; d++) {
-            LocalDate day = firstDay.plusDays(d);
-            double season = 1 + 0.25 * Math.cos(2 * Math.PI * (day.getDayOfYear() - 75) / 365.25);
-            double week = day.getDayOfWeek().getValue() - 1 == quietWeekday ? 0.35 : 1.0;
-            double decline = d < declineFrom ? 1 : Math.max(0.45, 1 - 0.55 * (d - declineFrom) / 60.0);
             double noise = Math.exp(0.15 * random.nextGaussian());
-            hours[d] = Math.min(24, Math.round(level * season * week * decline * noise * 100) / 100.0);
+            hours[d] = Math.min(24, Math.round(drawn.expected(firstDay, d) * noise * 100) / 100.0);
         }
-        idleDays(hours, new SplittableRandom(seed * 104_729L + assetId.hashCode() * 31L + 17));
+        double spellsPerDay = idleDays(hours, new SplittableRandom(seed * 104_729L + assetId.hashCode() * 31L + 17));
         List<LocalDate> stoppedFrom = new java.util.ArrayList<>();
         for (Stop stop : stops) {
             LocalDate from = stop.reportedOn().minusDays(delay.draw(random));
@@ -106,18 +120,19 @@ final class DemoSensorSeries {
                 Arrays.fill(hours, d, Math.min(days, d + 1 + random.nextInt(7)), Double.NaN);
             }
         }
-        return new Series(hours, stoppedFrom);
+        return new Series(hours, stoppedFrom, new Settings(level, quietWeekday, declineFrom, spellsPerDay));
     }
 
     /**
      * Low-use days of a working pump (a market day, rain, another source nearby): for 30 % of pumps ({@link #IDLING_SHARE}),
      * spells of 1 day (60 %), 2 (30 %) or 3 (10 %) days of use under a quarter of an hour, starting on a day with a
      * chance drawn once per pump between 1 in 60 and 1 in 10 (log-uniform). Drawn from their own seeded stream, so the
-     * rest of the series is the same as without them. All figures are invented for the demo.
+     * rest of the series is the same as without them. All figures are invented for the demo. Returns the pump's chance
+     * of starting a spell on a day, 0 for a pump that never idles.
      */
-    private static void idleDays(double[] hours, SplittableRandom random) {
+    private static double idleDays(double[] hours, SplittableRandom random) {
         if (random.nextDouble() >= IDLING_SHARE) {
-            return;
+            return 0;
         }
         double spellsPerDay = Math.exp(Math.log(1 / 60.0) + random.nextDouble() * Math.log(6.0));
         for (int d = 0; d < hours.length; d++) {
@@ -130,5 +145,6 @@ final class DemoSensorSeries {
                 d += days;
             }
         }
+        return spellsPerDay;
     }
 }

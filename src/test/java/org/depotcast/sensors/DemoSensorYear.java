@@ -78,8 +78,12 @@ final class DemoSensorYear {
         }
     }
 
-    /** A sensor pump's year of hours, its planted breakdowns and its breakdowns per operating hour. */
-    private record SensorPump(String assetId, double[] hours, List<Planted> marks, double breakdownsPerHour) {
+    /**
+     * A sensor pump's year of hours, its planted breakdowns, its breakdowns per operating hour, its recorded load (hours
+     * a day) and the settings its series was drawn from.
+     */
+    record SensorPump(String assetId, double[] hours, List<Planted> marks, double breakdownsPerHour, double load,
+                      DemoSensorSeries.Settings drawn) {
     }
 
     private DemoSensorYear() {
@@ -121,6 +125,19 @@ final class DemoSensorYear {
     private static List<PumpYear> replay(long seed, DemoSensorSeries.ReportDelay delay, boolean leaveOutRecorded,
                                          Rule rule, double leastProbability, Map<String, Double> ratesByAsset)
             throws IOException {
+        List<SensorPump> pumps = pumps(seed, delay, ratesByAsset);
+        StopDetector detector = new StopDetector(rule.settings);
+        IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);
+        List<PumpYear> year = new ArrayList<>();
+        for (SensorPump pump : pumps) {
+            year.add(judge(pump, detector, rule, priors, leaveOutRecorded, leastProbability));
+        }
+        return year;
+    }
+
+    /** The demo's sensor pumps for a seed and report delay, with the planted rates unless rates are given. */
+    static List<SensorPump> pumps(long seed, DemoSensorSeries.ReportDelay delay, Map<String, Double> ratesByAsset)
+            throws IOException {
         Map<String, List<DemoSensorSeries.Stop>> stops = breakdowns(FIRST.minusDays(60));
         Map<String, Double> loads = latestLoads();
         List<CSVRecord> planted = csv("planted-rates.csv");
@@ -131,9 +148,8 @@ final class DemoSensorYear {
                 continue;
             }
             List<DemoSensorSeries.Stop> own = stops.getOrDefault(asset, List.of());
-            DemoSensorSeries.Series series = DemoSensorSeries.of(asset, seed,
-                    loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day"))), FIRST, DAYS, own,
-                    delay);
+            double load = loads.getOrDefault(asset, Double.parseDouble(pump.get("usage_hours_per_day")));
+            DemoSensorSeries.Series series = DemoSensorSeries.of(asset, seed, load, FIRST, DAYS, own, delay);
             List<Planted> marks = new ArrayList<>();
             for (int i = 0; i < own.size(); i++) {
                 DemoSensorSeries.Stop s = own.get(i);
@@ -142,15 +158,9 @@ final class DemoSensorYear {
             }
             double perHour = ratesByAsset != null ? ratesByAsset.get(asset) : plantedRate(planted,
                     Double.parseDouble(pump.get("depth_m")), LocalDate.parse(pump.get("installed_on")));
-            pumps.add(new SensorPump(asset, series.hours(), marks, perHour));
+            pumps.add(new SensorPump(asset, series.hours(), marks, perHour, load, series.settings()));
         }
-        StopDetector detector = new StopDetector(rule.settings);
-        IdleDayPrior[] priors = priors(pumps, detector, rule, leaveOutRecorded);
-        List<PumpYear> year = new ArrayList<>();
-        for (SensorPump pump : pumps) {
-            year.add(judge(pump, detector, rule, priors, leaveOutRecorded, leastProbability));
-        }
-        return year;
+        return pumps;
     }
 
     /** Each day's prior, fitted as the service fits it over every sensor pump judged that day. */
