@@ -22,11 +22,22 @@ import java.util.List;
 /**
  * A repair the ledger refused because the kit's books held fewer parts than it used: the stores officer's notice.
  * One per repair reference, however often the phone sends it again; it holds the parts short at the last refusal.
+ * It closes when the repair is recorded, the officer dismisses it or the mechanic withdraws it, with the reason in words.
  */
 @Entity
 @Table(name = "refused_repair")
 public class RefusedRepair {
-    public enum State { OPEN, RECORDED, DISMISSED }
+    /** Open, or closed with its reason in words. */
+    public enum State {
+        OPEN(null), RECORDED("the repair was recorded"), DISMISSED("dismissed by the stores officer"),
+        WITHDRAWN("withdrawn by the mechanic");
+
+        final String reason;
+
+        State(String reason) {
+            this.reason = reason;
+        }
+    }
 
     @Id
     @GeneratedValue(strategy = GenerationType.IDENTITY)
@@ -54,6 +65,8 @@ public class RefusedRepair {
     public OffsetDateTime closedAt;
     @Column(name = "closed_by")
     public String closedBy;
+    @Column(name = "closed_reason")
+    public String closedReason;
     @ElementCollection(fetch = FetchType.EAGER)
     @CollectionTable(name = "refused_repair_line", joinColumns = @JoinColumn(name = "refused_repair_id"))
     public List<RefusedRepairLine> lines = new ArrayList<>();
@@ -69,11 +82,13 @@ public class RefusedRepair {
         state = State.OPEN;
         closedAt = null;
         closedBy = null;
+        closedReason = null;
     }
 
     void close(State how, String by, OffsetDateTime at) {
         state = how;
         closedBy = by.length() > 80 ? by.substring(0, 80) : by;
         closedAt = at;
+        closedReason = how.reason;
     }
 }

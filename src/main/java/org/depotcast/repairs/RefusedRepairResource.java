@@ -12,7 +12,10 @@ import org.depotcast.access.Roles;
 
 import java.util.List;
 
-/** Repairs refused for parts the kit's books did not hold, for the stores officers of the kits' depots. */
+/**
+ * Repairs refused for parts the kit's books did not hold, for the stores officers of the kits' depots; the mechanic
+ * whose repair it was may withdraw its notice.
+ */
 @Path("/api/refused-repairs")
 @Produces(MediaType.APPLICATION_JSON)
 @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN, Roles.PROGRAMME_LEAD})
@@ -34,5 +37,13 @@ class RefusedRepairResource {
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
     public RefusedRepairNotice dismiss(@PathParam("id") long id) {
         return service.dismiss(id);
+    }
+
+    /** The mechanic discarded the refused repair on the phone: its notice is withdrawn. */
+    @POST
+    @Path("by-repair/{repairRef}/withdraw")
+    @RolesAllowed(Roles.MECHANIC)
+    public RefusedRepairNotice withdraw(@PathParam("repairRef") String repairRef) {
+        return service.withdraw(repairRef);
     }
 }

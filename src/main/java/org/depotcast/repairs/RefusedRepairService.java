@@ -28,7 +28,8 @@ import java.util.function.Supplier;
 /**
  * The stores officer's notices of repairs refused for parts the kit's books did not hold. A refusal is written in a
  * transaction of its own after the repair's has rolled back (the refused repair itself writes nothing); the repair
- * recorded later closes its notice in the repair's own transaction; the officer may dismiss one.
+ * recorded later closes its notice in the repair's own transaction; the officer may dismiss one, and the mechanic
+ * who discards the refused repair on the phone withdraws it.
  */
 @ApplicationScoped
 public class RefusedRepairService {
@@ -168,6 +169,29 @@ public class RefusedRepairService {
         return after;
     }
 
+    /**
+     * The mechanic discarded the refused repair on the phone: its notice is withdrawn (closed, "withdrawn by the
+     * mechanic"). Only the mechanic whose repair was refused may (403 otherwise); a closed one is answered as it is,
+     * so the phone's queue may send it again; 404 when no notice was written for that repair.
+     */
+    @Transactional
+    public RefusedRepairNotice withdraw(String repairRef) {
+        RefusedRepair notice = notices.byRef(repairRef)
+                .orElseThrow(() -> new EntityMissingException(null, "refused repair", repairRef));
+        if (!notice.mechanic.equals(currentUser.name())) {
+            throw new ForbiddenException("refused repair " + repairRef + " was sent by another mechanic");
+        }
+        if (notice.state != RefusedRepair.State.OPEN) {
+            return view(notice);
+        }
+        RefusedRepairNotice before = view(notice);
+        notice.close(RefusedRepair.State.WITHDRAWN, currentUser.name(), OffsetDateTime.now(clock));
+        notices.flush();
+        RefusedRepairNotice after = view(notice);
+        audit.record("REFUSED_REPAIR_WITHDRAWN", "refused-repair", notice.repairRef, before, after);
+        return after;
+    }
+
     private RefusedRepairNotice view(RefusedRepair notice) {
         return views(List.of(notice)).get(0);
     }
@@ -185,7 +209,7 @@ public class RefusedRepairService {
             }).toList();
             return new RefusedRepairNotice(n.id, n.repairRef, n.mechanic, kit.code(), kit.parentCode(),
                     assetIds.get(n.pumpId), n.fixedOn, n.firstRefusedAt, n.lastRefusedAt, n.attempts, n.state,
-                    n.closedAt, n.closedBy, lines);
+                    n.closedAt, n.closedBy, n.closedReason, lines);
         }).toList();
     }
 }

@@ -8,12 +8,15 @@ import org.openqa.selenium.StaleElementReferenceException;
 
 import java.time.Duration;
 
+import static org.depotcast.TestData.as;
+
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
  * "Discard this action" on the phone asks first, in words, with "Keep it" chosen unless the mechanic picks the other
- * button: a refused repair made on the phone is deleted only on a second, deliberate tap.
+ * button: a refused repair made on the phone is deleted only on a second, deliberate tap, and its notice leaves the
+ * stores officer's morning board (the phone withdraws it).
  */
 @QuarkusTest
 class MechanicDiscardBrowserTest extends MechanicPhoneSession {
@@ -26,6 +29,8 @@ class MechanicDiscardBrowserTest extends MechanicPhoneSession {
         // The refresh after the refusal redraws the outbox and says so last: wait for it, so nothing redraws under a tap.
         wait(Duration.ofSeconds(30)).until(d -> textOf(By.id("status")).contains("refused by the server"));
         String summary = textOf(By.cssSelector(".outbox__item--refused strong"));
+        as("officer").queryParam("depot", depot).get("/api/refused-repairs").then().statusCode(200).body("size()",
+                org.hamcrest.Matchers.equalTo(1));
 
         pressDiscard();
         String question = textOf(By.cssSelector("dialog.ask[open]"));
@@ -53,7 +58,10 @@ class MechanicDiscardBrowserTest extends MechanicPhoneSession {
         press("#ask-yes");
         wait(Duration.ofSeconds(10)).until(d -> "0".equals(d.findElement(By.tagName("body")).getDomAttribute("data-refused")));
         assertTrue(textOf(By.id("outbox-body")).contains("Nothing waiting"));
-        assertTrue(textOf(By.id("status")).contains("Discarded: " + summary));
+        assertTrue(textOf(By.id("status")).contains("Discarded: " + summary + ". It is off the stores officer's morning board."),
+                textOf(By.id("status")));
+        as("officer").queryParam("depot", depot).get("/api/refused-repairs").then().statusCode(200).body("size()",
+                org.hamcrest.Matchers.equalTo(0));
         String posted = url("/api/repairs");
         assertNoPageErrors("HTTP 422 POST " + posted, posted + " - Failed to load resource: the server responded with a status of 422");
     }

@@ -175,11 +175,40 @@ class RefusedRepairResourceTest {
         as("officer").post("/api/refused-repairs/" + Long.MAX_VALUE + "/dismiss").then().statusCode(404).contentType(PROBLEM)
                 .body("type", equalTo("/problems/not-found"));
         as("officer").post("/api/refused-repairs/" + id + "/dismiss").then().statusCode(200)
-                .body("state", equalTo("DISMISSED")).body("closedBy", equalTo("officer"));
+                .body("state", equalTo("DISMISSED")).body("closedBy", equalTo("officer"))
+                .body("closedReason", equalTo("dismissed by the stores officer"));
         as("officer").post("/api/refused-repairs/" + id + "/dismiss").then().statusCode(200).body("state", equalTo("DISMISSED"));
         assertTrue(notices("officer", depot).isEmpty());
         String audit = as("admin").queryParam("entityType", "refused-repair").get("/api/audit").asString();
         assertTrue(audit.contains("REFUSED_REPAIR_DISMISSED"), audit);
+    }
+
+    /**
+     * The mechanic discards the refused repair on the phone: the phone withdraws its notice, which leaves the
+     * officer's board with the reason in words. Only that mechanic may; a resend of the withdrawal is answered as it is.
+     */
+    @Test
+    void theMechanicWithdrawsTheNoticeOfTheirOwnRefusedRepair() {
+        String ref = TestData.unique("phone-rep");
+        sendRefused(ref, 2);
+        String withdraw = "/api/refused-repairs/by-repair/" + ref + "/withdraw";
+        String other = TestData.unique("mech").toLowerCase();
+        String otherKit = data.kit(depot, other);
+        data.asSystem(() -> accounts.create(other, PASSWORD, Set.of("mechanic"), locations.require(null, otherKit).id));
+        given().auth().preemptive().basic(other, PASSWORD).post(withdraw).then().statusCode(403).contentType(PROBLEM)
+                .body("type", equalTo("/problems/forbidden"));
+        as("officer").post(withdraw).then().statusCode(403).contentType(PROBLEM);
+        asMechanic().post("/api/refused-repairs/by-repair/" + TestData.unique("never-sent") + "/withdraw").then()
+                .statusCode(404).contentType(PROBLEM).body("type", equalTo("/problems/not-found"));
+        assertEquals(1, notices("officer", depot).size(), "refused withdrawals leave it open");
+
+        asMechanic().post(withdraw).then().statusCode(200).body("repairRef", equalTo(ref))
+                .body("state", equalTo("WITHDRAWN")).body("closedBy", equalTo(mechanic))
+                .body("closedReason", equalTo("withdrawn by the mechanic"));
+        asMechanic().post(withdraw).then().statusCode(200).body("state", equalTo("WITHDRAWN"));
+        assertTrue(notices("officer", depot).isEmpty(), "withdrawn, so off the officer's board");
+        String audit = as("admin").queryParam("entityType", "refused-repair").get("/api/audit").asString();
+        assertTrue(audit.contains("REFUSED_REPAIR_WITHDRAWN") && audit.contains(ref), audit);
     }
 
     @Test

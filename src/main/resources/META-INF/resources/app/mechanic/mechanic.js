@@ -7,7 +7,7 @@ import {startPage, topBar} from '/app/js/nav.js';
 import * as fmt from '/app/js/format.js';
 import {h, mount, say, showError, caution, ask} from '/app/js/ui.js';
 import * as store from './store.js';
-import {sendWaiting, sendAgain} from './send.js';
+import {sendWaiting, sendAgain, withdrawNotice} from './send.js';
 import {fetchSnapshot, kitRows} from './data.js';
 import {kitView, pumpCard, requestsView, outboxView, discardQuestion} from './views.js';
 import {askForm, repairForm} from './forms.js';
@@ -162,7 +162,8 @@ async function discard(item) {
         return;
     }
     await store.remove(item.id);
-    say(`Discarded: ${item.summary}.`, 'ok');
+    const withdrawn = await withdrawNotice(item, me.username, () => syncAndRefresh(false));
+    say(`Discarded: ${item.summary}.${withdrawn}`, 'ok');
     await drawOutbox();
     drawData();
 }

@@ -8,7 +8,9 @@
  * repair happened, so it waits for the stores officer to book the parts to the kit and is then sent again under the
  * same reference (the server kept nothing of the refused send, so the resend records it once). Its answer says
  * whether the server put the refusal on the stores officer's morning board (officerNoticeRecorded): the item keeps
- * that as `officerTold`, and the notice's id as `officerNotice` once any send has written one.
+ * that as `officerTold`, and the notice's id as `officerNotice` once any send has written one. Discarding such an
+ * item queues the withdrawal of its notice (withdrawNotice), sent like any other write, now or when the phone is
+ * back online; a withdrawal answered 404 (no notice was ever written) leaves the outbox, having nothing to withdraw.
  */
 import * as api from '/app/js/api.js';
 import * as store from './store.js';
@@ -91,6 +93,25 @@ function officerNotice(item, e) {
         officerNotice: e.extensions.officerNotice || item.officerNotice};
 }
 
+/**
+ * After the mechanic discarded a refused repair: queues the withdrawal of its notice on the stores officer's board
+ * when there may be one (a send wrote one, or the item was kept from before the answer said), then `sync`s. Answers
+ * the words to add to "Discarded: …".
+ */
+export async function withdrawNotice(item, username, sync) {
+    if (!isShortage(item) || !item.ref || (!item.officerNotice && item.officerTold === false)) {
+        return '';
+    }
+    const queued = await store.queue({kind: 'withdraw', method: 'POST', username, ref: item.ref,
+        path: `/api/refused-repairs/by-repair/${encodeURIComponent(item.ref)}/withdraw`,
+        summary: `Withdraw the stores officer's notice of: ${item.summary}`});
+    await sync();
+    const left = (await store.items(username)).find(i => i.id === queued.id);
+    return !left ? ' It is off the stores officer\'s morning board.'
+        : left.state === 'refused' ? ' The server refused to take it off the stores officer\'s morning board: see "Waiting to send".'
+        : ' It will be taken off the stores officer\'s morning board when this phone next sends (see "Waiting to send").';
+}
+
 async function sendAll(username, onEach) {
     const result = {sent: 0, refused: 0, stopped: null};
     for (const item of await store.items(username)) {
@@ -102,6 +123,10 @@ async function sendAll(username, onEach) {
             await store.remove(item.id);
             result.sent++;
         } catch (e) {
+            if (item.kind === 'withdraw' && e.status === 404) {
+                await store.remove(item.id); // no notice was written for that repair: nothing to withdraw
+                continue;
+            }
             if (!REFUSALS.has(e.status)) {
                 result.stopped = e;
                 break;

@@ -5,7 +5,8 @@
  *             reference made on the phone (client reference or repair reference), so sending it again after a lost
  *             answer gives the first record back (the API answers 200 to the same reference and content).
  * An outbox item: {id, username, kind, method, path, body, ref, summary, createdAt, state: 'waiting'|'refused',
- * message, errors, shortage}. Nothing leaves the outbox except by reaching the server or by the user discarding it;
+ * message, errors, shortage, officerTold, officerNotice} (kind 'withdraw': a refused repair's notice taken back when
+ * the mechanic discards it). Nothing leaves the outbox except by reaching the server or by the user discarding it;
  * a refused item goes back to waiting only when the user sends it again.
  */
 const DB_NAME = 'depotcast-mechanic';
