@@ -29,7 +29,9 @@ class SharedModulesBrowserTest extends BrowserSession {
         Map<String, Object> out = inPage("/app/js/format.js", "done({pieces: m.qty(2.6, 'EACH'), one: m.qty(1, 'SET'),"
                 + " metres: m.qty(12.345, 'METRE'), money: m.money(1250, 'USD'), zero: m.num(-0.2), big: m.num(1234567.891, 1),"
                 + " none: m.qty(null, 'EACH'), day: m.date('2026-11-03'), pct: m.percent(0.953),"
-                + " days: m.pumpDays(21), manyDays: m.pumpDays(1234.56), noDays: m.pumpDays(-0.01)});");
+                + " days: m.pumpDays(21), manyDays: m.pumpDays(1234.56), noDays: m.pumpDays(-0.01),"
+                + " forPump: m.requestFor({assetId: 'MJ-1', urgency: 'PUMP_DOWN'}), topUp: m.requestFor({urgency: 'ROUTINE'}),"
+                + " downNoPump: m.requestFor({assetId: null, urgency: 'PUMP_DOWN'})});");
         assertEquals("3 pieces", out.get("pieces"));
         assertEquals("1 set", out.get("one"));
         assertEquals("12.35 m", out.get("metres"));
@@ -42,6 +44,9 @@ class SharedModulesBrowserTest extends BrowserSession {
         assertEquals("21.0", out.get("days"), "pump-days always keep their one decimal");
         assertEquals("1,234.6", out.get("manyDays"));
         assertEquals("0.0", out.get("noDays"));
+        assertEquals("Pump MJ-1", out.get("forPump"));
+        assertEquals("Kit top-up", out.get("topUp"));
+        assertEquals("Pump down, no pump named", out.get("downNoPump"), "a pump-down request from before one named its pump");
         assertNoPageErrors();
     }
 

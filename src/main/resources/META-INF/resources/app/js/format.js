@@ -11,6 +11,7 @@
  *   wholeMoney(value, currency) "USD 12,858": projections and their ranges (spend, back-check), whose cents mean nothing
  *   percent(share)        0.953 → "95.3 %"
  *   date(iso) dateTime(iso) relative(iso)  "3 Nov 2025", "3 Nov 2025, 08:14", "3 days ago" / "in 2 hours"
+ *   requestFor(request)   what a parts request is for: "Pump MJ-1", "Kit top-up", or "Pump down, no pump named"
  * Every function answers "–" for a missing value, never "NaN" or "null".
  */
 const NONE = '–';
@@ -142,4 +143,15 @@ export function isoDay(offsetDays = 0) {
     const d = new Date();
     d.setDate(d.getDate() + offsetDays);
     return `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, '0')}-${String(d.getDate()).padStart(2, '0')}`;
+}
+
+/**
+ * What a parts request is for, in words: its pump, else a kit top-up. A "pump down" request stored before one had to
+ * name its pump (4 Dec 2026) says so rather than pass for a kit top-up: it was about a pump, only not which.
+ */
+export function requestFor(request) {
+    if (request.assetId) {
+        return `Pump ${request.assetId}`;
+    }
+    return request.urgency === 'PUMP_DOWN' ? 'Pump down, no pump named' : 'Kit top-up';
 }

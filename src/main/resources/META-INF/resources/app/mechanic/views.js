@@ -130,7 +130,7 @@ export function requestsView(snapshot, waiting) {
         empty: waiting.some(i => i.kind === 'request') ? 'None on the server yet; yours are waiting to send.' : 'No requests yet.',
         columns: [
             {label: 'Raised', value: r => fmt.date(r.raisedAt)},
-            {label: 'For', value: r => r.assetId ? `Pump ${r.assetId}` : 'Kit top-up'},
+            {label: 'For', value: r => fmt.requestFor(r)},
             {label: 'Parts', value: r => lines(r)},
             {label: 'State', value: r => h('span', {}, state(...(REQUEST_STATES[r.status] || [r.status, 'quiet'])),
                 refusal(r) ? h('span', {class: 'hint'}, refusal(r)) : null,

@@ -50,8 +50,10 @@ async function load() {
 
 function heading(r) {
     return [h('h3', {}, `Request ${r.id} from ${r.mechanic} (${r.kit}) `, statusOf(r.status)),
-        h('p', {class: 'small muted'}, `${r.urgency === 'PUMP_DOWN' ? 'Pump down' : 'Routine'}`,
-            r.assetId ? ` · pump ${r.assetId}` : ' · kit top-up', r.fault ? ` · fault: ${r.fault}` : '',
+        // A "pump down" request from before one had to name its pump is not a kit top-up: requestFor says which it is.
+        h('p', {class: 'small muted'}, r.urgency === 'PUMP_DOWN' && !r.assetId ? fmt.requestFor(r)
+            : `${r.urgency === 'PUMP_DOWN' ? 'Pump down' : 'Routine'} · ${r.assetId ? `pump ${r.assetId}` : 'kit top-up'}`,
+            r.fault ? ` · fault: ${r.fault}` : '',
             ` · raised ${fmt.dateTime(r.raisedAt)}`)];
 }
 
