@@ -24,6 +24,7 @@ import java.util.Set;
  */
 @ApplicationScoped
 public class FleetOutlooks {
+    private static final String NONE_AS_OF = "no forecast run as of that day has finished";
     private final ForecastModelFiles files;
     private final FleetSnapshotLoader loader;
     private final ForecastRepository repository;
@@ -40,21 +41,34 @@ public class FleetOutlooks {
     /** As of {@code origin}'s month's first day, over {@code months} months ahead. */
     public FleetOutlook asOf(LocalDate origin, int months) {
         FleetSnapshot snapshot = loader.load(origin, historyMonths);
-        return stored(snapshot, months).orElseGet(() -> fitted(snapshot, months));
+        return stored(snapshot, months).orElseGet(() -> fitted(snapshot, months, NONE_AS_OF));
+    }
+
+    /**
+     * As of {@code origin} from forecast run {@code forecastRunId} alone, whichever run has finished since: its stored
+     * models and ratios when it is as of that origin and kept its ratios, else fitted afresh as such a run would (no
+     * other stored run is read). A spend run pins the run it starts with, so its fleet and its top-up agree.
+     */
+    public FleetOutlook asOf(LocalDate origin, int months, long forecastRunId) {
+        FleetSnapshot snapshot = loader.load(origin, historyMonths);
+        return QuarkusTransaction.requiringNew().call(() -> repository.run(forecastRunId)
+                        .filter(run -> snapshot.historyEnd().equals(run.origin))
+                        .flatMap(run -> stored(run, snapshot, months)))
+                .orElseGet(() -> fitted(snapshot, months, "forecast run " + forecastRunId + " is not as of that day or "
+                        + "kept no depot ratios"));
     }
 
     /** Fitted afresh, whatever runs are stored. */
     public FleetOutlook fittedAsOf(LocalDate origin, int months) {
-        return fitted(loader.load(origin, historyMonths), months);
+        return fitted(loader.load(origin, historyMonths), months, NONE_AS_OF);
     }
 
-    private FleetOutlook fitted(FleetSnapshot snapshot, int months) {
+    private FleetOutlook fitted(FleetSnapshot snapshot, int months, String why) {
         Map<ComponentFamily, ForecastModelDefinition> definitions = files.load();
         Map<ComponentFamily, FleetRateModel> models = FleetModelFitter.fitAll(definitions, snapshot, 0);
         DemandAssembler run = new DemandAssembler(snapshot, definitions, models, Map.of(), 1);
         return new FleetOutlook(snapshot, definitions, models, months, depotRatios(snapshot, run.weigh()),
-                "fitted for this projection as a forecast run as of " + snapshot.historyEnd()
-                        + " would (no forecast run as of that day has finished)");
+                "fitted for this projection as a forecast run as of " + snapshot.historyEnd() + " would (" + why + ")");
     }
 
     /**
@@ -63,17 +77,20 @@ public class FleetOutlooks {
      */
     private java.util.Optional<FleetOutlook> stored(FleetSnapshot snapshot, int months) {
         return QuarkusTransaction.requiringNew().call(() -> repository.latestFinishedRunAsOf(snapshot.historyEnd())
-                .flatMap(run -> {
-                    List<ForecastRepository.StoredRatio> ratios = repository.credibilityRatios(run.id);
-                    if (ratios.isEmpty()) {
-                        return java.util.Optional.empty();
-                    }
-                    Map<ComponentFamily, FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
-                    repository.fitsOf(run.id).forEach(r -> models.put(ComponentFamily.valueOf(r.family), r.rateModel()));
-                    return java.util.Optional.of(new FleetOutlook(snapshot, files.load(), models, months,
-                            depotRatios(snapshot, ratios), "the fleet models and depot ratios of forecast run " + run.id
-                            + " as of " + run.origin + " (finished " + run.finishedAt.toLocalDate() + ")"));
-                }));
+                .flatMap(run -> stored(run, snapshot, months)));
+    }
+
+    /** The run's stored models and ratios, in the caller's transaction; empty when it kept no ratios. */
+    private java.util.Optional<FleetOutlook> stored(ForecastRun run, FleetSnapshot snapshot, int months) {
+        List<ForecastRepository.StoredRatio> ratios = repository.credibilityRatios(run.id);
+        if (ratios.isEmpty()) {
+            return java.util.Optional.empty();
+        }
+        Map<ComponentFamily, FleetRateModel> models = new EnumMap<>(ComponentFamily.class);
+        repository.fitsOf(run.id).forEach(r -> models.put(ComponentFamily.valueOf(r.family), r.rateModel()));
+        return java.util.Optional.of(new FleetOutlook(snapshot, files.load(), models, months,
+                depotRatios(snapshot, ratios), "the fleet models and depot ratios of forecast run " + run.id
+                + " as of " + run.origin + " (finished " + run.finishedAt.toLocalDate() + ")"));
     }
 
     /** The credibility ratio of each depot series (programme and kit series left out), by {@link FleetOutlook#seriesKey}. */

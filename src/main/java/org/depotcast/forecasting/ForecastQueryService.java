@@ -51,14 +51,17 @@ public class ForecastQueryService {
      */
     @Transactional
     public Map<String, DemandRate> demandAt(String locationCode, int months) {
-        Map<String, DemandRate> rates = new java.util.HashMap<>();
         Optional<ForecastRun> run = repository.latestFinishedRun();
-        if (run.isEmpty()) {
-            return rates;
-        }
+        return run.isEmpty() ? new java.util.HashMap<>() : demandOf(run.get().id, locationCode, months);
+    }
+
+    /** As {@link #demandAt}, from forecast run {@code runId} whichever run is the latest (empty for an unknown run). */
+    @Transactional
+    public Map<String, DemandRate> demandOf(long runId, String locationCode, int months) {
+        Map<String, DemandRate> rates = new java.util.HashMap<>();
         Map<Long, String> numbers = new java.util.HashMap<>();
         parts.summaries().forEach(p -> numbers.put(p.id(), p.partNumber()));
-        for (PartForecast f : repository.forecastsAt(run.get().id, locationCode)) {
+        for (PartForecast f : repository.forecastsAt(runId, locationCode)) {
             double[] monthly = f.monthlyForecast;
             int n = Math.max(1, Math.min(months, monthly.length));
             double sum = 0;
@@ -68,6 +71,13 @@ public class ForecastQueryService {
             rates.put(numbers.get(f.partId), new DemandRate(sum / n, f.variancePerMonth, f.method));
         }
         return rates;
+    }
+
+    /** The id of the run planning reads now (the newest finished one), if any has finished. */
+    @Transactional
+    public java.util.OptionalLong latestRunId() {
+        return repository.latestFinishedRun().map(run -> java.util.OptionalLong.of(run.id))
+                .orElseGet(java.util.OptionalLong::empty);
     }
 
     /** Whether any forecast run has finished: planning answers nothing before one has. */

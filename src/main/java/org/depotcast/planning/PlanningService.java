@@ -93,7 +93,7 @@ public class PlanningService {
         if (location.kind() == LocationKind.CENTRAL_STORE && !breakdownsOnly) {
             // The central store buys for the whole programme, so its reorder point is set against the echelon position
             // as the budget plan's: its own shelf alone would ask to buy again what the depots and kits already hold.
-            return echelonPolicies(location, serviceLevels(null)).stream()
+            return echelonPolicies(location, forecasts.demandAt(PROGRAMME, 3), serviceLevels(null)).stream()
                     .filter(p -> !AlertRules.NO_FORECAST.equals(p.forecastMethod()) || p.onHand() > 0 || p.onOrder() > 0)
                     .toList();
         }
@@ -137,14 +137,22 @@ public class PlanningService {
     public List<StockPolicy> programmePolicies(Double serviceLevel) {
         scope.requireProgramme();
         requireForecasts();
-        LocationSummary central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream().findFirst()
-                .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
-        return echelonPolicies(central, serviceLevels(serviceLevel));
+        return echelonPolicies(central(), forecasts.demandAt(PROGRAMME, 3), serviceLevels(serviceLevel));
+    }
+
+    /**
+     * As {@link #programmePolicies(Double)}, from the demand of forecast run {@code forecastRunId} whichever run has
+     * finished since: a spend run reads its fleet models and its stock top-up from one run.
+     */
+    @Transactional
+    public List<StockPolicy> programmePolicies(Double serviceLevel, long forecastRunId) {
+        scope.requireProgramme();
+        return echelonPolicies(central(), forecasts.demandOf(forecastRunId, PROGRAMME, 3), serviceLevels(serviceLevel));
     }
 
     /** Every part's policy at the central store against the echelon position (see {@link #programmePolicies()}). */
-    private List<StockPolicy> echelonPolicies(LocationSummary central, PolicyCalculator.ServiceLevels levels) {
-        Map<String, ForecastQueryService.DemandRate> demand = forecasts.demandAt(PROGRAMME, 3);
+    private List<StockPolicy> echelonPolicies(LocationSummary central, Map<String, ForecastQueryService.DemandRate> demand,
+                                              PolicyCalculator.ServiceLevels levels) {
         Map<String, double[]> echelon = new HashMap<>();
         // Every store and kit, whoever asks: a central-store officer buys for kits they do not see one by one.
         for (BalanceView b : system.call("echelon-position", () -> stock.balances(null))) {
@@ -162,6 +170,11 @@ public class PlanningService {
                     rate == null ? AlertRules.NO_FORECAST : rate.method(), held[0], held[1], 0, levels));
         }
         return policies;
+    }
+
+    private LocationSummary central() {
+        return locations.summariesOfKind(LocationKind.CENTRAL_STORE).stream().findFirst()
+                .orElseThrow(() -> new BusinessRuleException("location", "the programme has no central store"));
     }
 
     /** The levels in force: a scenario's override, else the lead's settings, else the configured defaults. */

@@ -64,7 +64,7 @@ public class BackCheckService {
             int year = origin.getYear();
             ScenarioDefinition oneYear = new ScenarioDefinition("back-check " + period.label(), 1, null, null, null, null,
                     null, null, null, DRAWS, (long) year);
-            SpendLineBuilder builder = lines.build(oneYear, List.of(period), partsById, false);
+            SpendLineBuilder builder = lines.build(oneYear, List.of(period), partsById);
             var yearLines = builder.lines();
             double expectedBreakdowns = 0, expectedServices = 0;
             for (var line : yearLines) {

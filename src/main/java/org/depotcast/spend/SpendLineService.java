@@ -63,34 +63,43 @@ class SpendLineService {
     }
 
     /**
-     * The fleet's lines over {@code periods} (the first starting at the origin), the scenario's installations and,
-     * when {@code withTopUp}, the stock needed now to reach the policy levels.
+     * The fleet's lines over {@code periods} (the first starting at the origin) as {@link FleetOutlooks#asOf} sees
+     * it, and the scenario's installations; no top-up (back-checks, tests).
      */
-    SpendLineBuilder build(ScenarioDefinition definition, List<FinancialYears.Period> periods, Map<Long, PartSummary> partsById,
-                           boolean withTopUp) {
+    SpendLineBuilder build(ScenarioDefinition definition, List<FinancialYears.Period> periods,
+                           Map<Long, PartSummary> partsById) {
         int months = periods.stream().mapToInt(FinancialYears.Period::monthCount).sum();
-        FleetOutlook outlook = outlooks.asOf(periods.get(0).startsOn(), months);
-        SpendLineBuilder builder = new SpendLineBuilder(outlook, partsById, definition, periods);
+        return withInstallations(new SpendLineBuilder(outlooks.asOf(periods.get(0).startsOn(), months), partsById,
+                definition, periods), definition);
+    }
+
+    /**
+     * A spend run's lines from the first day of {@code origin}'s month over the scenario's financial years: the
+     * fleet, the installations and the stock needed now to reach the policy levels, the fleet models and the top-up's
+     * demand both from forecast run {@code forecastRunId}, so a run finishing meanwhile mixes nothing in.
+     */
+    SpendLineBuilder build(ScenarioDefinition definition, FinancialYears financialYears, LocalDate origin,
+                           Map<Long, PartSummary> partsById, long forecastRunId) {
+        List<FinancialYears.Period> periods = financialYears.projection(origin.withDayOfMonth(1),
+                definition.horizonYears());
+        int months = periods.stream().mapToInt(FinancialYears.Period::monthCount).sum();
+        SpendLineBuilder builder = withInstallations(new SpendLineBuilder(outlooks.asOf(periods.get(0).startsOn(),
+                months, forecastRunId), partsById, definition, periods), definition);
+        String central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).get(0).code();
+        for (StockPolicy p : planning.programmePolicies(definition.serviceLevel(), forecastRunId)) {
+            PartSummary part = parts.requireSummary("partNumber", p.partNumber());
+            builder.addTopUp(central, part.id(), Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
+        }
+        return builder;
+    }
+
+    private SpendLineBuilder withInstallations(SpendLineBuilder builder, ScenarioDefinition definition) {
         builder.addFleet();
         for (ScenarioDefinition.Installation inst : definition.installations() == null
                 ? List.<ScenarioDefinition.Installation>of() : definition.installations()) {
             addInstallation(builder, inst);
         }
-        if (withTopUp) {
-            String central = locations.summariesOfKind(LocationKind.CENTRAL_STORE).get(0).code();
-            for (StockPolicy p : planning.programmePolicies(definition.serviceLevel())) {
-                PartSummary part = parts.requireSummary("partNumber", p.partNumber());
-                builder.addTopUp(central, part.id(), Math.max(0, Math.ceil(p.orderUpTo() - p.position())));
-            }
-        }
         return builder;
-    }
-
-    /** As {@link #build} from the first day of {@code origin}'s month over the scenario's financial years. */
-    SpendLineBuilder build(ScenarioDefinition definition, FinancialYears financialYears, LocalDate origin,
-                           Map<Long, PartSummary> partsById) {
-        return build(definition, financialYears.projection(origin.withDayOfMonth(1), definition.horizonYears()),
-                partsById, true);
     }
 
     private void addInstallation(SpendLineBuilder builder, ScenarioDefinition.Installation inst) {

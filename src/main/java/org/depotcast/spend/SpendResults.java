@@ -40,7 +40,7 @@ public record SpendResults(String scenario, String currency, int draws, long see
     /** Summaries of the draws per period, with the notes a reader needs to take the figures right. */
     static SpendResults summarise(String name, String currency, ScenarioDefinition definition,
                                   FinancialYears financialYears, List<FinancialYears.Period> periods,
-                                  SpendLineBuilder builder, SpendDraws draws) {
+                                  SpendLineBuilder builder, SpendDraws draws, long forecastRunId) {
         List<SpendResults.Year> years = new ArrayList<>();
         for (int y = 0; y < draws.years(); y++) {
             Map<String, SpendSimulation.Summary> families = new LinkedHashMap<>();
@@ -72,8 +72,8 @@ public record SpendResults(String scenario, String currency, int draws, long see
                 + java.time.Month.of(financialYears.startMonth()).getDisplayName(java.time.format.TextStyle.FULL, java.util.Locale.ENGLISH)
                 + (periods.get(0).partial() ? "; the first period is the months left in the year in progress (" + periods.get(0).months()
                 + "), then " + definition.horizonYears() + " whole years." : "."));
-        notes.add("The first period includes the stock needed now to bring the programme to its policy levels, bought "
-                + "once by the central store (its only spend); after that each year's parts are counted at the depot whose "
+        notes.add("The first period includes the stock needed now to bring the programme to its policy levels (from "
+                + "the demand of forecast run " + forecastRunId + "), bought once by the central store (its only spend); after that each year's parts are counted at the depot whose "
                 + "pumps use them, so the central store shows no spend in later years.");
         notes.add("Demand as of " + periods.get(0).startsOn() + ": the pumps and usage history (measured hours where "
                 + "pumps have sensors) as of that day, with " + builder.ratesBasis() + ".");

@@ -14,7 +14,7 @@ import org.depotcast.common.NoForecastYetException;
 import org.depotcast.core.spend.SpendDraws;
 import org.depotcast.core.spend.SpendLine;
 import org.depotcast.core.spend.SpendSimulation;
-import org.depotcast.forecasting.ForecastRunService;
+import org.depotcast.forecasting.ForecastQueryService;
 import org.depotcast.jobs.JobFailed;
 import org.depotcast.jobs.JobKind;
 import org.depotcast.jobs.JobProgress;
@@ -36,7 +36,7 @@ public class SpendService {
     private final Runs runs;
     private final SpendScenarioService scenarios;
     private final SpendLineService lineService;
-    private final ForecastRunService forecastRuns;
+    private final ForecastQueryService forecasts;
     private final AccessScope scope;
     private final JobRunner jobs;
     private final ObjectMapper json;
@@ -48,13 +48,13 @@ public class SpendService {
 
     private final Clock clock;
 
-    SpendService(Runs runs, SpendScenarioService scenarios, SpendLineService lineService, ForecastRunService forecastRuns,
+    SpendService(Runs runs, SpendScenarioService scenarios, SpendLineService lineService, ForecastQueryService forecasts,
                  AccessScope scope, JobRunner jobs, ObjectMapper json, FinancialYearService financialYears, Clock clock) {
         this.clock = clock;
         this.runs = runs;
         this.scenarios = scenarios;
         this.lineService = lineService;
-        this.forecastRuns = forecastRuns;
+        this.forecasts = forecasts;
         this.scope = scope;
         this.jobs = jobs;
         this.json = json;
@@ -70,12 +70,21 @@ public class SpendService {
     }
 
     /**
-     * Starts a run in the background; poll {@link #run(long)} for its phase and results.
+     * Starts a run in the background; poll {@link #run(long)} for its phase and results. It reads one forecast run,
+     * the newest finished one now, for its fleet models and its stock top-up alike (its notes name it).
      *
      * @param origin the projection's first day (its month's first day is used); null for the current month's. A
      *               future one is refused (400, field {@code origin}), as for a forecast run.
      */
     public SpendRun start(long scenarioId, LocalDate origin) {
+        return start(scenarioId, origin, null);
+    }
+
+    /**
+     * As {@link #start(long, LocalDate)}, reading forecast run {@code pinned} whichever has finished since (null: the
+     * newest finished one now).
+     */
+    SpendRun start(long scenarioId, LocalDate origin, Long pinned) {
         scope.requireProgramme();
         LocalDate current = LocalDate.now(clock).withDayOfMonth(1);
         LocalDate from = origin == null ? current : origin.withDayOfMonth(1);
@@ -85,9 +94,9 @@ public class SpendService {
         }
         SpendScenario scenario = scenarios.scenario(scenarioId);
         ScenarioDefinition definition = scenarios.fromJson(scenario.definition);
-        if (forecastRuns.latestFinished().isEmpty()) {
-            throw new NoForecastYetException();
-        }
+        // One forecast run for the whole spend run (fleet models and stock top-up): one finishing meanwhile is not read.
+        long forecastRunId = pinned != null ? pinned
+                : forecasts.latestRunId().orElseThrow(NoForecastYetException::new);
         FinancialYears years = financialYears.current();
         long jobId = jobs.create(JobKind.SPEND_RUN);
         SpendRun run = QuarkusTransaction.requiringNew().call(() -> {
@@ -104,7 +113,7 @@ public class SpendService {
             return r;
         });
         // The caller's programme-wide view was checked above; the job runs as the system for it.
-        jobs.launch(jobId, progress -> execute(run.id, scenario.name, definition, years, from, progress));
+        jobs.launch(jobId, progress -> execute(run.id, scenario.name, definition, years, from, forecastRunId, progress));
         return run;
     }
 
@@ -155,11 +164,11 @@ public class SpendService {
     }
 
     private String execute(long runId, String name, ScenarioDefinition definition, FinancialYears financialYears,
-                           LocalDate origin, JobProgress progress) {
-        phase(runId, progress, "reading the fleet as of " + origin);
+                           LocalDate origin, long forecastRunId, JobProgress progress) {
+        phase(runId, progress, "reading the fleet as of " + origin + " and forecast run " + forecastRunId);
         Map<Long, PartSummary> partsById = lineService.partsById();
         String currency = SpendLineService.currency(definition, partsById);
-        SpendLineBuilder builder = lineService.build(definition, financialYears, origin, partsById);
+        SpendLineBuilder builder = lineService.build(definition, financialYears, origin, partsById, forecastRunId);
         List<FinancialYears.Period> periods = financialYears.projection(origin, definition.horizonYears());
         SpendLine[] lines = builder.lines();
         phase(runId, progress, "simulating " + definition.drawsOrDefault() + " draws over " + lines.length + " lines");
@@ -167,7 +176,8 @@ public class SpendService {
                 builder.partNumbers.size(), builder.depotCodes.size(), builder.groupLogSd, builder.groupDispersion,
                 definition.drawsOrDefault(), definition.seedOrDefault());
         phase(runId, progress, "summarising");
-        SpendResults results = SpendResults.summarise(name, currency, definition, financialYears, periods, builder, draws);
+        SpendResults results = SpendResults.summarise(name, currency, definition, financialYears, periods, builder, draws,
+                forecastRunId);
         String stored = toJson(results);
         QuarkusTransaction.requiringNew().run(() -> {
             SpendRun run = runs.findById(runId);

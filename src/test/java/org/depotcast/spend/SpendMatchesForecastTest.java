@@ -57,7 +57,7 @@ class SpendMatchesForecastTest {
         ScenarioDefinition baseline = new ScenarioDefinition("baseline", 1, null, null, null, null, null, null, null,
                 null, null);
         SpendLineBuilder spend = QuarkusTransaction.requiringNew().call(() ->
-                lines.build(baseline, year, lines.partsById(), false));
+                lines.build(baseline, year, lines.partsById()));
         FleetOutlook outlook = outlooks.asOf(origin, 12);
         Map<String, Long> partIds = new HashMap<>();
         outlook.snapshot().partNumbers().forEach((id, number) -> partIds.put(number, id));

@@ -90,7 +90,7 @@ class SpendMeasuredHoursTest {
     private SpendLineBuilder build(List<FinancialYears.Period> year) {
         ScenarioDefinition baseline = new ScenarioDefinition("baseline", 1, null, null, null, null, null, null, null,
                 null, null);
-        return QuarkusTransaction.requiringNew().call(() -> lines.build(baseline, year, lines.partsById(), false));
+        return QuarkusTransaction.requiringNew().call(() -> lines.build(baseline, year, lines.partsById()));
     }
 
     private static double sum(double[] values) {
