@@ -157,8 +157,7 @@ public class AccuracyReportService {
         AccuracyResults results = new AccuracyResults(origin, origin, end.minusDays(1), runId, notes,
                 AccuracyScoring.summaries(rows), rows);
         String text = write(results);
-        QuarkusTransaction.requiringNew().run(() ->
-                forecasts.getEntityManager().find(AccuracyReport.class, reportId).results = text);
+        progress.finishWith(() -> forecasts.getEntityManager().find(AccuracyReport.class, reportId).results = text);
         return "Accuracy report " + reportId + ": " + rows.size() + " series as of " + origin + " against the 12 months after it.";
     }
 

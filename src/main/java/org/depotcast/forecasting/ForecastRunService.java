@@ -136,7 +136,7 @@ public class ForecastRunService {
 
     /**
      * Inside another job (the accuracy report): an {@link #AS_OF_TRIGGER} run as of {@code origin}, computed in the
-     * caller's thread and linked to the caller's job; answers its id. A failure propagates to the caller's job.
+     * caller's thread, linked to the caller's job and done when it ends; answers its id. A failure fails that job.
      */
     public long runAsOfWithin(JobProgress progress, LocalDate origin) {
         long runId = QuarkusTransaction.requiringNew().call(() -> createRun(AS_OF_TRIGGER, origin.withDayOfMonth(1),
@@ -208,6 +208,7 @@ public class ForecastRunService {
         });
         progress.phase("storing the forecasts");
         QuarkusTransaction.requiringNew().timeout(600).run(() -> store(runId, models, results));
+        progress.finishWith(() -> markDone(runId, results));
         Log.infof("forecast run %d: %d series done in %d ms", runId, results.size(), (System.nanoTime() - started) / 1_000_000);
         return "Forecast run " + runId + ": " + results.size() + " series as of " + today.withDayOfMonth(1) + ".";
     }
@@ -234,7 +235,11 @@ public class ForecastRunService {
                 em.clear();
             }
         }
-        ForecastRun run = em.find(ForecastRun.class, runId);
+    }
+
+    /** In the transaction that ends the run's job (JobProgress.finishWith): shown done, its job has ended. */
+    private void markDone(long runId, List<PartForecastResult> results) {
+        ForecastRun run = repository.getEntityManager().find(ForecastRun.class, runId);
         run.seriesDone = results.size();
         run.seriesTotal = results.size();
         run.status = ForecastRun.Status.DONE;

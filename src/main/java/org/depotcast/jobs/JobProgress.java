@@ -9,4 +9,11 @@ public interface JobProgress {
 
     /** Units of work done out of {@code total}. */
     void progress(int done, int total);
+
+    /**
+     * Runs {@code lastWrite} (the feature marking its rows finished) in the transaction that marks the job done, after
+     * the work has returned; never if the job fails. A poll then sees the rows finished exactly when the job has ended,
+     * so a start made right after it is not refused for a job still ending (JobKind's start lock).
+     */
+    void finishWith(Runnable lastWrite);
 }

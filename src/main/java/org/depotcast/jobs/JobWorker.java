@@ -14,6 +14,8 @@ import org.depotcast.common.NoForecastYetException;
 
 import java.time.Clock;
 import java.time.OffsetDateTime;
+import java.util.ArrayList;
+import java.util.List;
 import java.util.Set;
 import java.util.concurrent.ConcurrentHashMap;
 
@@ -48,9 +50,11 @@ class JobWorker {
     @ActivateRequestContext
     void execute(long jobId, JobKind kind, JobWork work) {
         executing.add(jobId);
+        List<Runnable> lastWrites = new ArrayList<>();
         try {
-            String summary = system.call(kind.name().toLowerCase(java.util.Locale.ROOT), () -> work.run(progressOf(jobId)));
-            end(jobId, JobState.DONE, summary, () -> { });
+            String summary = system.call(kind.name().toLowerCase(java.util.Locale.ROOT),
+                    () -> work.run(progressOf(jobId, lastWrites)));
+            end(jobId, JobState.DONE, summary, () -> lastWrites.forEach(Runnable::run));
         } catch (RuntimeException | Error e) {
             Log.errorf(e, "job %d (%s) failed on instance %s", jobId, kind, instance.id());
             String message = safeMessage(kind, jobId, e);
@@ -72,7 +76,7 @@ class JobWorker {
         return "The " + kind.words() + " failed on the server; the service log has the detail under job " + jobId + ".";
     }
 
-    private JobProgress progressOf(long jobId) {
+    private JobProgress progressOf(long jobId, List<Runnable> lastWrites) {
         return new JobProgress() {
             @Override
             public long jobId() {
@@ -91,6 +95,11 @@ class JobWorker {
                     job.progressTotal = total;
                 });
             }
+
+            @Override
+            public void finishWith(Runnable lastWrite) {
+                lastWrites.add(lastWrite);
+            }
         };
     }
 
@@ -104,7 +113,7 @@ class JobWorker {
 
     /**
      * Only a running job ends here: one already marked failed by a sweep stays failed. {@code alsoNow} runs in the same
-     * transaction, so a feature's rows fail together with the job (a poll never sees one without the other).
+     * transaction, so a feature's rows finish or fail together with the job (a poll never sees one without the other).
      */
     private void end(long jobId, JobState state, String message, Runnable alsoNow) {
         QuarkusTransaction.requiringNew().run(() -> {

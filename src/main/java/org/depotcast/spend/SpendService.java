@@ -179,7 +179,8 @@ public class SpendService {
         SpendResults results = SpendResults.summarise(name, currency, definition, financialYears, periods, builder, draws,
                 forecastRunId);
         String stored = toJson(results);
-        QuarkusTransaction.requiringNew().run(() -> {
+        // Done in the transaction that ends its job: a poll showing it done finds the job ended too.
+        progress.finishWith(() -> {
             SpendRun run = runs.findById(runId);
             run.results = stored;
             run.status = SpendRun.Status.DONE;
