@@ -69,7 +69,9 @@ public class AccuracyReportService {
         scope.requireProgramme();
         LocalDate latest = forecastRuns.currentOrigin().minusMonths(AccuracyScoring.MONTHS);
         if (origin == null) {
-            throw new InvalidInputException("origin", "is required: a date written yyyy-mm-dd, at most " + latest);
+            // A client that sends it in a JSON body meets this too, so say where it goes.
+            throw new InvalidInputException("origin", "is required, as a query parameter (?origin=yyyy-mm-dd, at most "
+                    + latest + "); a request body is not read");
         }
         LocalDate from = origin.withDayOfMonth(1);
         if (from.isAfter(latest)) {

@@ -37,6 +37,10 @@ class AccuracyReportTest {
         TestData.as("lead").post(REPORTS + "?origin=" + tooRecent).then().statusCode(400).contentType(PROBLEM)
                 .body("errors.field", hasItem("origin")).body("errors[0].message", containsString("12 months"));
         TestData.as("lead").post(REPORTS).then().statusCode(400).contentType(PROBLEM).body("errors.field", hasItem("origin"));
+        // Sent in a JSON body, it is still missing where it is read, and the answer says where that is.
+        TestData.as("lead").contentType("application/json").body(java.util.Map.of("origin", "2025-12-01")).post(REPORTS)
+                .then().statusCode(400).contentType(PROBLEM).body("errors[0].field", org.hamcrest.Matchers.equalTo("origin"))
+                .body("errors[0].message", org.hamcrest.Matchers.startsWith("is required, as a query parameter (?origin="));
         TestData.as("lead").post(REPORTS + "?origin=last-year").then().statusCode(400).contentType(PROBLEM)
                 .body("errors.field", hasItem("origin"));
         // Before the register's first pump there is nothing to forecast from: refused, not an empty report.
