@@ -52,6 +52,12 @@ public final class Bounds {
     public static final String SERVICE_LEVEL_MIN = "0.5";
     public static final String SERVICE_LEVEL_MAX = "0.999";
     public static final String SERVICE_LEVEL_RANGE = "must be a fraction from 0.5 to 0.999 (50 % to 99.9 %)";
+    /**
+     * The API document's words for such a level (the calculators' levels, any probability strictly between 0 and 1,
+     * keep {@code ApiDocumentFilter}'s general words).
+     */
+    public static final String SERVICE_LEVEL_DESCRIPTION = "cycle service level, a fraction from 0.5 to 0.999 "
+            + "(50 % to 99.9 %)";
 
     private Bounds() {
     }

@@ -8,6 +8,7 @@ import jakarta.validation.constraints.Digits;
 import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Size;
+import org.eclipse.microprofile.openapi.annotations.media.Schema;
 
 import java.math.BigDecimal;
 import java.time.LocalDate;
@@ -59,6 +60,7 @@ public final class PlanningRequests {
      * mean demand, and the bound refuses a mix-up of scales (99 % typed as 0.99 on a per-cent form arrives as 0.0099).
      */
     public record ServiceLevelRequest(@NotBlank @Size(max = 40) String partClass,
+                                      @Schema(description = Bounds.SERVICE_LEVEL_DESCRIPTION)
                                       @NotNull @DecimalMin(value = Bounds.SERVICE_LEVEL_MIN, message = Bounds.SERVICE_LEVEL_RANGE)
                                       @DecimalMax(value = Bounds.SERVICE_LEVEL_MAX, message = Bounds.SERVICE_LEVEL_RANGE)
                                       Double level) {

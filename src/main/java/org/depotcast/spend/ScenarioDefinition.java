@@ -10,6 +10,7 @@ import jakarta.validation.constraints.NotBlank;
 import jakarta.validation.constraints.NotNull;
 import jakarta.validation.constraints.Pattern;
 import jakarta.validation.constraints.Size;
+import org.eclipse.microprofile.openapi.annotations.media.Schema;
 
 import java.util.List;
 
@@ -33,6 +34,8 @@ public record ScenarioDefinition(
         @DecimalMin("-50") @DecimalMax("200") Double priceEscalationPercentPerYear,
         @Pattern(regexp = "[A-Z]{3}", message = "must be a three-letter ISO 4217 code") String currency,
         @DecimalMin(value = "0", inclusive = false) @DecimalMax(Bounds.EXCHANGE_RATE_MAX) Double exchangeRate,
+        @Schema(description = "one " + Bounds.SERVICE_LEVEL_DESCRIPTION + " for every part, for the year-1 stock top-up; "
+                + "left out, the levels in force")
         @DecimalMin(value = Bounds.SERVICE_LEVEL_MIN, message = Bounds.SERVICE_LEVEL_RANGE)
         @DecimalMax(value = Bounds.SERVICE_LEVEL_MAX, message = Bounds.SERVICE_LEVEL_RANGE) Double serviceLevel,
         @Min(1000) @Max(100000) Integer draws,

@@ -62,6 +62,43 @@ class ApiDocumentTest {
         assertTrue(missing.isEmpty(), String.join("\n", missing));
     }
 
+    /**
+     * A service level's words agree with the bounds its schema gives: "strictly between 0 and 1" only where 0 and 1 are
+     * its exclusive bounds (the calculators), and its own range where the service refuses more (a spend scenario's
+     * 0.5 to 0.999).
+     */
+    @Test
+    void serviceLevelsAreDescribedByTheBoundsTheirSchemasGive() throws Exception {
+        document = new ObjectMapper().readTree(given().accept("application/json").get("/q/openapi?format=json").asString());
+        List<String> wrong = new ArrayList<>();
+        int levels = 0;
+        for (Iterator<Map.Entry<String, JsonNode>> schemas = document.at("/components/schemas").fields(); schemas.hasNext(); ) {
+            Map.Entry<String, JsonNode> schema = schemas.next();
+            for (String name : List.of("serviceLevel", "level")) {
+                JsonNode level = schema.getValue().at("/properties/" + name);
+                if (!level.isMissingNode() && (level.has("minimum") || level.has("exclusiveMinimum"))) {
+                    levels += checkLevel(schema.getKey() + "." + name, level, wrong);
+                }
+            }
+        }
+        assertTrue(levels >= 3, "read " + levels + " bounded service levels");
+        assertTrue(wrong.isEmpty(), String.join("\n", wrong));
+        assertTrue(document.at("/components/schemas/ScenarioDefinition/properties/serviceLevel/description").asText()
+                .contains("0.5 to 0.999"), "the spend scenario's level");
+    }
+
+    /** 1 after checking one level's words against its bounds (a mismatch is added to {@code wrong}). */
+    private static int checkLevel(String name, JsonNode level, List<String> wrong) {
+        String words = level.path("description").asText();
+        String least = level.has("minimum") ? level.get("minimum").asText() : level.get("exclusiveMinimum").asText();
+        String most = level.has("maximum") ? level.get("maximum").asText() : level.path("exclusiveMaximum").asText();
+        boolean open01 = !level.has("minimum") && "0".equals(least) && !level.has("maximum") && "1".equals(most);
+        if (open01 != words.contains("strictly between 0 and 1") || !open01 && !(words.contains(least) && words.contains(most))) {
+            wrong.add(name + ": [" + least + ", " + most + "] described as '" + words + "'");
+        }
+        return 1;
+    }
+
     private void check(JsonNode schema, String prefix, List<String> missing, int depth) {
         if (depth > 5) {
             return;
