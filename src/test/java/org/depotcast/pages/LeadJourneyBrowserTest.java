@@ -245,6 +245,27 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
         assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
         PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");
+        comparesReopensAndBackChecks(name);
+    }
+
+    /** The page's other parts: finished runs side by side, a saved scenario opened again as saved, the back-check. */
+    private void comparesReopensAndBackChecks(String name) {
+        WebElement compare = driver.findElement(By.cssSelector("#compare-form button[type=submit]"));
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", compare);
+        compare.click();
+        assertTrue(waitFor(By.id("compare-table")).getText().contains(name));
+        WebElement edit = driver.findElement(By.xpath("//button[normalize-space()='Edit " + name + "']"));
+        driver.executeScript("arguments[0].scrollIntoView({block: 'center'})", edit);
+        edit.click();
+        assertEquals(name, driver.findElement(By.id("sc-name")).getDomProperty("value"));
+        assertEquals("95", driver.findElement(By.id("sc-level")).getDomProperty("value"), "the fraction shown per cent");
+        assertEquals(1, driver.findElements(By.cssSelector("#installations .installation-row")).size());
+        driver.findElement(By.id("close-editor")).click();
+        String backCheck = steady(Duration.ofSeconds(60)).until(d -> {
+            String shown = d.findElement(By.id("back-check")).getText();
+            return shown.contains("Working out") ? null : shown;
+        });
+        assertFalse(backCheck.contains("is not defined") || backCheck.contains("is not a function"), backCheck);
     }
 
     /**
