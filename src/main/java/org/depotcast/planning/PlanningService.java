@@ -44,12 +44,14 @@ public class PlanningService {
     private final org.depotcast.requests.RequestService requests;
     private final Clock clock;
     private final org.depotcast.access.SystemWork system;
+    private final TransferOrderService.Orders transfers;
 
     PlanningService(PartService parts, LocationService locations, StockQueryService stock, ForecastQueryService forecasts,
                     CurrentUser currentUser, PlanningSettings settings,
                     org.depotcast.access.AccessScope scope, org.depotcast.access.AuditService audit,
                     org.depotcast.requests.RequestService requests, ServiceLevelRepository serviceLevelsSet,
-                    Clock clock, org.depotcast.access.SystemWork system) {
+                    Clock clock, org.depotcast.access.SystemWork system, TransferOrderService.Orders transfers) {
+        this.transfers = transfers;
         this.system = system;
         this.serviceLevelsSet = serviceLevelsSet;
         this.requests = requests;
@@ -105,19 +107,23 @@ public class PlanningService {
         for (BalanceView b : stock.balances(location.code())) {
             onHandOnOrder.put(b.partNumber(), new double[]{b.onHand().doubleValue(), b.onOrder().doubleValue()});
         }
+        // A transfer dispatched here counts as on order until it is received: without it the store would be told
+        // to buy, or be sent from another depot, what is already on the road to it.
+        Map<Long, java.math.BigDecimal> onTheWay = transfers.onTheWayTo(location.id());
         Map<String, java.math.BigDecimal> committed = requests.committed();
         PolicyCalculator.ServiceLevels levels = serviceLevels(null);
         List<StockPolicy> policies = new ArrayList<>();
         for (PartSummary part : parts.summaries()) {
             ForecastQueryService.DemandRate rate = demand.get(part.partNumber());
             double[] held = onHandOnOrder.get(part.partNumber());
-            if (rate == null && held == null) {
+            double coming = onTheWay.getOrDefault(part.id(), java.math.BigDecimal.ZERO).doubleValue();
+            if (rate == null && held == null && coming == 0) {
                 continue;
             }
             policies.add(calculator.policy(part, location.code(), location.kind(),
                     rate == null ? 0 : rate.monthlyMean(), rate == null ? 0 : rate.monthlyVariance(),
                     rate == null ? AlertRules.NO_FORECAST : rate.method(), held == null ? 0 : held[0],
-                    held == null ? 0 : held[1], committed.getOrDefault(location.code() + "|" + part.partNumber(),
+                    (held == null ? 0 : held[1]) + coming, committed.getOrDefault(location.code() + "|" + part.partNumber(),
                             java.math.BigDecimal.ZERO).doubleValue(), levels));
         }
         return policies;

@@ -13,6 +13,7 @@ package org.depotcast.planning;
  * @param orderQuantity    Q in whole packs, at least the MOQ
  * @param orderUpTo        S = s + Q, capped by days of cover below the central store and by shelf life (a kit's max)
  * @param orderUpToRule    which rule set {@code orderUpTo}, in words
+ * @param onOrder          outstanding on purchase orders, plus transfers dispatched here and not yet received
  * @param committed        approved for mechanics and not yet issued
  * @param position         on hand + on order − committed
  * @param expectedShortUnits G(position): units expected short before replenishment arrives

@@ -22,9 +22,12 @@ import org.depotcast.stock.MovementCommand;
 import org.depotcast.stock.MovementKind;
 import org.depotcast.stock.StockLedgerService;
 
+import java.math.BigDecimal;
 import java.time.Clock;
 import java.time.OffsetDateTime;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 
 /**
@@ -71,6 +74,15 @@ public class TransferOrderService {
             }
             // Stored as text, IN_TRANSIT sorts before RECEIVED.
             return list(where + " order by status, id desc", params);
+        }
+
+        /** Units still on the road to a location, per part id: dispatched, not yet received or written off. */
+        Map<Long, BigDecimal> onTheWayTo(long toId) {
+            Map<Long, BigDecimal> byPart = new HashMap<>();
+            for (TransferOrder o : list("toId = ?1 and status = ?2", toId, TransferOrder.Status.IN_TRANSIT)) {
+                byPart.merge(o.partId, o.outstanding(), BigDecimal::add);
+            }
+            return byPart;
         }
     }
 

@@ -200,6 +200,33 @@ class PlanningResourceTest {
     }
 
     @Test
+    void aTransferOnTheWayCountsInTheReceivingStoresPositionUntilItIsReceived() {
+        // Without it, the morning board kept telling the receiving officer to buy what was already on the road.
+        String part = data.part(org.depotcast.catalogue.UnitOfIssue.EACH), from = data.depot(), to = data.depot();
+        data.stock(part, from, 10);
+        long id = as("officer").contentType("application/json")
+                .body(Map.of("partNumber", part, "from", from, "to", to, "quantity", 4))
+                .post("/api/planning/transfers").then().statusCode(201).extract().jsonPath().getLong("id");
+        assertEquals(List.of(0.0, 4.0, 4.0), stockOf(part, to));
+        as("officer").contentType("application/json").body(Map.of("receivedQuantity", 3))
+                .post("/api/planning/transfers/" + id + "/receive").then().statusCode(200);
+        assertEquals(List.of(3.0, 1.0, 4.0), stockOf(part, to));
+        as("officer").post("/api/planning/transfers/" + id + "/receive").then().statusCode(200);
+        assertEquals(List.of(4.0, 0.0, 4.0), stockOf(part, to));
+        assertEquals(List.of(6.0, 0.0, 6.0), stockOf(part, from));
+    }
+
+    /** On hand, on order and position of the part's policy at the location. */
+    private static List<Double> stockOf(String part, String location) {
+        Map<String, Object> p = as("officer").queryParam("location", location).get("/api/planning/policies").then()
+                .statusCode(200).extract().jsonPath().<Map<String, Object>>getList("$").stream()
+                .filter(x -> part.equals(x.get("partNumber"))).findFirst().orElseThrow(() -> new AssertionError(
+                        "no policy of " + part + " at " + location));
+        return List.of(((Number) p.get("onHand")).doubleValue(), ((Number) p.get("onOrder")).doubleValue(),
+                ((Number) p.get("position")).doubleValue());
+    }
+
+    @Test
     void theLeadSetsServiceLevelsAndPoliciesFollow() {
         double before = policyOf("OB-CS-50", "DEP-TESHVALE").get("reorderPoint");
         as("lead").contentType("application/json").body(Map.of("partClass", "CRITICAL", "level", 0.999))
