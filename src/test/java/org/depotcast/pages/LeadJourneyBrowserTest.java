@@ -156,6 +156,18 @@ class LeadJourneyBrowserTest extends BrowserSession {
         assertTrue(driver.findElement(By.cssSelector("#plan-lines thead")).getText().contains("Programme stock position before"));
         assertTrue(driver.findElement(By.id("position-meaning")).getText().contains("the depots and the mechanics' kits hold, plus what is on order"));
         assertEquals(plan.getList("leftOut").size(), driver.findElements(By.cssSelector("#plan-left-out tbody tr")).size());
+        // Where each part ends: the plan buys to the reorder point and past it only where a unit saves most, so a
+        // part often ends short of its order-up-to level (the empty "Left out" once said every part reached it).
+        List<WebElement> after = driver.findElements(By.cssSelector("#plan-lines tbody td[data-label='Position after']"));
+        assertEquals(lines, after.size());
+        for (int i = 0; i < lines; i++) {
+            double position = plan.getDouble("lines[" + i + "].positionBefore") + plan.getDouble("lines[" + i + "].quantity");
+            assertEquals(position, Double.parseDouble(after.get(i).getText().replaceAll("[^\\d.]", "")), 1e-9, after.get(i).getText());
+        }
+        if (plan.getList("leftOut").isEmpty()) {
+            assertEquals("Nothing left out: every part that was below its reorder point reaches it with this plan.",
+                    driver.findElement(By.cssSelector("#plan-left-out + p.empty")).getText());
+        }
         assertEquals(String.format(java.util.Locale.US, "%,.1f pump-days", plan.getDouble("pumpDaysBefore")),
                 driver.findElement(By.id("pump-days-before")).getText());
         assertTrue(driver.findElement(By.id("plan")).getText().contains(plan.getString("caution")), "the plan's caution is shown");

@@ -68,9 +68,13 @@ async function show(plan) {
                 {label: 'Quantity', num: true, value: l => q(l.quantity, l.partNumber)},
                 {label: 'Cost', num: true, value: l => fmt.money(l.cost, plan.currency)},
                 {label: 'Programme stock position before', num: true, value: l => q(l.positionBefore, l.partNumber)},
+                // The plan buys up to the reorder point first and past it only where a unit still saves most: the
+                // position after shows where each part ends, often short of its order-up-to level.
+                {label: 'Position after', num: true, value: l => q(l.positionBefore + l.quantity, l.partNumber)},
                 {label: 'Reorder point', num: true, value: l => q(l.reorderPoint, l.partNumber)},
                 {label: 'Order-up-to', num: true, value: l => q(l.orderUpTo, l.partNumber)}]}),
-        table({caption: 'Left out', id: 'plan-left-out', rows: plan.leftOut, empty: 'Nothing left out: every part below its reorder point is bought up to its order-up-to level.',
+        table({caption: 'Left out', id: 'plan-left-out', rows: plan.leftOut,
+            empty: 'Nothing left out: every part that was below its reorder point reaches it with this plan.',
             columns: [{label: 'Part', value: l => `${l.partNumber} · ${l.description}`},
                 {label: 'Still needed', num: true, value: l => q(l.quantity, l.partNumber)},
                 {label: 'Would cost', num: true, value: l => fmt.money(l.cost, l.currency)},
