@@ -180,6 +180,35 @@ class OfficerJourneyBrowserTest extends BrowserSession {
         assertNoPageErrors();
     }
 
+    @Test
+    void theBoardSaysWhenAWaitingPumpsPartIsOnTheShelfAndWhatItsPumpDaysSpan() throws Exception {
+        // The demo's Marrowford depot holds 50 rod centralisers while a pump waits 9 days for one: the officer read
+        // "More than needed" beside a waiting pump, with nothing saying the part was short in the kit, not here.
+        String depot = "DEP-MARROWFORD";
+        signIn("officer", "officer-demo");
+        open("/app/officer/?location=" + depot);
+        waitReady();
+        List<Map<String, Object>> alerts = as("officer").get(url("/api/planning/alerts?location=" + depot)).then()
+                .statusCode(200).extract().jsonPath().getList("$");
+        int onShelf = 0;
+        for (Map<String, Object> a : alerts) {
+            String cell = driver.findElement(By.cssSelector("#alerts tr.alert-row[data-part='" + a.get("partNumber")
+                    + "'] td[data-label='Pumps waiting']")).getText();
+            double spare = ((Number) a.get("onHand")).doubleValue() - ((Number) a.get("committed")).doubleValue();
+            boolean waiting = !((List<?>) a.get("waitingPumps")).isEmpty();
+            assertEquals(waiting && spare > 0, cell.contains("on the shelf here and not promised: the pump waits on its "
+                    + "mechanic's kit, not on this store"), a.get("partNumber") + ": " + cell);
+            onShelf += waiting && spare > 0 ? 1 : 0;
+        }
+        assertTrue(onShelf > 0, "the demo depot has a pump waiting for a part on its shelf");
+        assertTrue(driver.findElement(By.id("pump-days-meaning")).getText()
+                .contains("until it is next resupplied here (the days under \"Expected use\")"));
+        assertFalse(driver.findElements(By.cssSelector("#alerts thead th")).stream()
+                .noneMatch(th -> th.getText().replace('\n', ' ').equals("On order or on the way")), "the depot's on order counts transfers");
+        screenshot("officer-board-marrowford");
+        assertNoPageErrors();
+    }
+
     /** The words the pages use for a method (app/js/methods.js), for the methods the demo's alerts come from. */
     private static String methodWords(String method) {
         return switch (method) {

@@ -44,6 +44,10 @@ async function load() {
     mount(main, refused, summary(alerts, requests, inbound, mine),
         h('section', {'aria-labelledby': 'alerts-title'},
             h('h2', {id: 'alerts-title'}, 'Alerts, most pump-days without water first'),
+            // The number had no span: it is counted until the part's next resupply, the days under "Expected use".
+            h('p', {class: 'hint', id: 'pump-days-meaning'}, 'Pump-days without water: the days pumps are expected to '
+                + 'stand broken for want of the part until it is next resupplied here (the days under "Expected use"), '
+                + 'with each pump already waiting counted for all of them.'),
             alertTable(alerts, policyOf, mine)),
         caution());
     ready();
@@ -72,8 +76,13 @@ function pumps(alert) {
     if (!alert.waitingPumps.length) {
         return 'none';
     }
+    // A pump can wait on its mechanic's kit while the part sits here (50 on the shelf, "More than needed", a pump
+    // waiting 9 days): the shelf is not the problem, getting the part to the kit is.
+    const spare = alert.onHand - alert.committed;
     return h('span', {class: 'pump-list'}, `${alert.pumpsWaiting}: `,
-        alert.waitingPumps.map((p, i) => [i ? ', ' : '', h('span', {class: 'nowrap'}, `${p.assetId} (${fmt.num(p.daysWaiting)} d)`)]));
+        alert.waitingPumps.map((p, i) => [i ? ', ' : '', h('span', {class: 'nowrap'}, `${p.assetId} (${fmt.num(p.daysWaiting)} d)`)]),
+        spare > 0 ? h('span', {class: 'hint on-shelf'}, `${n(spare, alert.partNumber)} on the shelf here and not promised: `
+            + `the pump waits on its mechanic's kit, not on this store`) : null);
 }
 
 function alertTable(alerts, policyOf, suggestions) {
@@ -90,7 +99,8 @@ function alertTable(alerts, policyOf, suggestions) {
             {label: 'Why', value: r => reasons(r.a)},
             {label: 'Pump-days without water', value: r => fmt.pumpDays(r.a.pumpDaysAtRisk), num: true},
             {label: central ? 'On hand in the programme' : 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
-            {label: central ? 'On order for the programme' : 'On order', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
+            // A depot's "on order" counts transfers dispatched to it and not yet received, as its position does.
+            {label: central ? 'On order for the programme' : 'On order or on the way', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
             {label: 'Reorder point', value: r => n(r.a.reorderPoint, r.a.partNumber), num: true},
             {label: 'Order up to', value: r => n(r.a.orderUpTo, r.a.partNumber), num: true},
