@@ -85,6 +85,9 @@ function pumps(alert) {
             + `the pump waits on its mechanic's kit, not on this store`) : null);
 }
 
+// The forecast method a policy carries when the latest run has no forecast of the part there (AlertRules.NO_FORECAST).
+const unknown = alert => alert.forecastMethod === 'no forecast';
+
 function alertTable(alerts, policyOf, suggestions) {
     const rows = alerts.map((a, i) => ({a, i, policy: policyOf.get(a.partNumber)}));
     const wrap = table({
@@ -102,11 +105,13 @@ function alertTable(alerts, policyOf, suggestions) {
             // A depot's "on order" counts transfers dispatched to it and not yet received, as its position does.
             {label: central ? 'On order for the programme' : 'On order or on the way', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
-            {label: 'Reorder point', value: r => n(r.a.reorderPoint, r.a.partNumber), num: true},
-            {label: 'Order up to', value: r => n(r.a.orderUpTo, r.a.partNumber), num: true},
+            // With no forecast the demand is unknown, not zero: the reason says there is no reorder point, so the
+            // columns say so too (they showed 0, 1 and "0 over the next 60 days").
+            {label: 'Reorder point', value: r => unknown(r.a) ? '–' : n(r.a.reorderPoint, r.a.partNumber), num: true},
+            {label: 'Order up to', value: r => unknown(r.a) ? '–' : n(r.a.orderUpTo, r.a.partNumber), num: true},
             // The demand the reorder point covers, in the officer's words; an average, so a small one keeps a decimal
             // (0.3 showed as "0" beside a reorder point of 2).
-            {label: 'Expected use', value: r => r.policy
+            {label: 'Expected use', value: r => r.policy && !unknown(r.a)
                 ? h('span', {}, fmt.num(r.policy.demandMean, r.policy.demandMean < 10 ? 1 : 0),
                     h('span', {class: 'hint'}, `over the next ${fmt.num(r.policy.protectionDays)} days`))
                 : '–', num: true},
