@@ -136,6 +136,10 @@ class OfficerTaskPagesBrowserTest extends BrowserSession {
         open("/app/officer/purchases.html?location=" + depot);
         waitReady();
         WebElement plan = waitFor(By.cssSelector("form[data-supplier='Test Supplier']"));
+        // One part is "1 part" (it said "1 parts"), and the pack and the minimum say which is which ("10 pieces, 10 pieces").
+        assertEquals("Purchase plan for " + depot + " (1 part)", driver.findElement(By.id("plan-title")).getText());
+        assertEquals("packs of 10 pieces; at least 10 pieces",
+                plan.findElement(By.cssSelector("td[data-label='Pack, minimum order']")).getText().replace('\n', ' '));
         String orderNumber = TestData.unique("PO").toUpperCase();
         WebElement number = plan.findElement(By.name("orderNumber"));
         number.clear();

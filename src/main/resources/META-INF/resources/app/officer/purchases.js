@@ -23,7 +23,7 @@ async function load() {
     const bySupplier = new Map();
     plan.forEach(l => bySupplier.set(l.supplier, [...(bySupplier.get(l.supplier) || []), l]));
     mount(main,
-        h('section', {'aria-labelledby': 'plan-title'}, h('h2', {id: 'plan-title'}, `Purchase plan for ${store.code} (${plan.length} parts)`),
+        h('section', {'aria-labelledby': 'plan-title'}, h('h2', {id: 'plan-title'}, `Purchase plan for ${store.code} (${plan.length} part${plan.length === 1 ? '' : 's'})`),
             h('p', {class: 'hint'}, 'Parts put into the plan from the morning board, by anyone who looks after this store, until they are ordered.'),
             plan.length ? h('div', {class: 'task-list'}, [...bySupplier].map(([supplier, lines]) => orderForm(supplier, lines)))
                 : h('p', {class: 'empty'}, 'The plan is empty. Use "Put into the purchase plan" on an alert of the morning board.')),
@@ -59,7 +59,9 @@ function orderForm(supplier, lines) {
         table({caption: `Parts to order from ${supplier}`, captionHidden: true, rows: lines, columns: [
             {label: 'Part', value: l => [describe(parts, l.partNumber), l.note ? h('span', {class: 'hint'}, l.note) : null]},
             {label: 'Quantity', value: (l, i) => [h('label', {for: quantities[i].id, class: 'visually-hidden'}, `Quantity of ${l.partNumber}`), quantities[i]]},
-            {label: 'Pack, minimum order', value: l => `${fmt.qty(l.packSize, unit(l.partNumber))}, ${fmt.qty(l.minOrderQty, unit(l.partNumber))}`, num: true},
+            // "5 pieces, 5 pieces" left the officer to guess which was the pack and which the minimum.
+            {label: 'Pack, minimum order', value: l => `packs of ${fmt.qty(l.packSize, unit(l.partNumber))}; `
+                + `at least ${fmt.qty(l.minOrderQty, unit(l.partNumber))}`, num: true},
             {label: 'Unit cost', value: l => fmt.money(l.unitCost, l.currency), num: true},
             {label: 'Put in by', value: l => `${l.addedBy}, ${fmt.date(l.addedAt)}`},
             {label: 'Take out', value: l => {
