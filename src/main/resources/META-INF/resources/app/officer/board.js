@@ -10,6 +10,7 @@ import {methodWords} from '/app/js/methods.js';
 import {h, mount, table, state, say, busy, figures, caution} from '/app/js/ui.js';
 import {startOfficer, kindWords, describe, ready, orderQuantity, storeName} from './officer.js';
 import {refusedRepairs} from './refused.js';
+import {arrivals, arrivalWords} from './arrivals.js';
 
 const {me, store, stores, parts} = await startOfficer({page: 'board', title: 'Morning board'});
 const main = document.getElementById('content');
@@ -39,6 +40,7 @@ async function load() {
         api.get('/api/planning/transfers/suggestions'), api.get('/api/requests', {status: 'RAISED'}),
         api.get('/api/planning/transfers', {to: store.code, state: 'IN_TRANSIT'})]);
     const policyOf = new Map(policies.map(p => [p.partNumber, p]));
+    const due = await arrivals(store, inbound, central);
     const mine = suggestions.filter(s => s.to === store.code || s.from === store.code);
     const requests = waiting.filter(r => r.depot === store.code);
     mount(main, refused, summary(alerts, requests, inbound, mine),
@@ -48,7 +50,7 @@ async function load() {
             h('p', {class: 'hint', id: 'pump-days-meaning'}, 'Pump-days without water: the days pumps are expected to '
                 + 'stand broken for want of the part until it is next resupplied here (the days under "Expected use"), '
                 + 'with each pump already waiting counted for all of them.'),
-            alertTable(alerts, policyOf, mine)),
+            alertTable(alerts, policyOf, mine, due)),
         caution());
     ready();
 }
@@ -72,7 +74,7 @@ function reasons(alert) {
         alert.raisedAgainBy.length ? state('Raised again', 'warn') : null);
 }
 
-function pumps(alert) {
+function pumps(alert, due) {
     if (!alert.waitingPumps.length) {
         return 'none';
     }
@@ -82,14 +84,17 @@ function pumps(alert) {
     return h('span', {class: 'pump-list'}, `${alert.pumpsWaiting}: `,
         alert.waitingPumps.map((p, i) => [i ? ', ' : '', h('span', {class: 'nowrap'}, `${p.assetId} (${fmt.num(p.daysWaiting)} d)`)]),
         spare > 0 ? h('span', {class: 'hint on-shelf'}, `${n(spare, alert.partNumber)} on the shelf here and not promised: `
-            + `the pump waits on its mechanic's kit, not on this store`) : null);
+            + `the pump waits on its mechanic's kit, not on this store`)
+            // "More than needed" counts what is on order: with none here to give, say how long the pumps will wait.
+            : alert.onOrder > 0 && arrivalWords(due) ? h('span', {class: 'hint'}, 'none here to give; what is on order: ',
+                arrivalWords(due)) : null);
 }
 
 // The forecast method a policy carries when the latest run has no forecast of the part there (AlertRules.NO_FORECAST).
 const unknown = alert => alert.forecastMethod === 'no forecast';
 
-function alertTable(alerts, policyOf, suggestions) {
-    const rows = alerts.map((a, i) => ({a, i, policy: policyOf.get(a.partNumber)}));
+function alertTable(alerts, policyOf, suggestions, due) {
+    const rows = alerts.map((a, i) => ({a, i, policy: policyOf.get(a.partNumber), due: due.get(a.partNumber)}));
     const wrap = table({
         caption: `${fmt.num(alerts.length)} alerts at ${storeName(store)}` + (central
             ? ': bought for the whole programme, so stock counts every store and kit, and what is on order' : ''),
@@ -103,7 +108,8 @@ function alertTable(alerts, policyOf, suggestions) {
             {label: 'Pump-days without water', value: r => fmt.pumpDays(r.a.pumpDaysAtRisk), num: true},
             {label: central ? 'On hand in the programme' : 'On hand', value: r => n(r.a.onHand, r.a.partNumber), num: true},
             // A depot's "on order" counts transfers dispatched to it and not yet received, as its position does.
-            {label: central ? 'On order for the programme' : 'On order or on the way', value: r => n(r.a.onOrder, r.a.partNumber), num: true},
+            {label: central ? 'On order for the programme' : 'On order or on the way', value: r => r.a.onOrder > 0
+                ? h('span', {}, n(r.a.onOrder, r.a.partNumber), arrivalWords(r.due)) : n(r.a.onOrder, r.a.partNumber), num: true},
             {label: 'Committed', value: r => n(r.a.committed, r.a.partNumber), num: true},
             // With no forecast the demand is unknown, not zero: the reason says there is no reorder point, so the
             // columns say so too (they showed 0, 1 and "0 over the next 60 days").
@@ -115,7 +121,7 @@ function alertTable(alerts, policyOf, suggestions) {
                 ? h('span', {}, fmt.num(r.policy.demandMean, r.policy.demandMean < 10 ? 1 : 0),
                     h('span', {class: 'hint'}, `over the next ${fmt.num(r.policy.protectionDays)} days`))
                 : '–', num: true},
-            {label: 'Pumps waiting', value: r => pumps(r.a)},
+            {label: 'Pumps waiting', value: r => pumps(r.a, r.due)},
             {label: 'Actions', value: r => actions(r.a, r.policy, suggestions.filter(s => s.partNumber === r.a.partNumber))}
         ],
         rows
