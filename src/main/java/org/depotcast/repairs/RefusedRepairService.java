@@ -158,15 +158,7 @@ public class RefusedRepairService {
         if (!scope.current().sees(notice.kitId)) {
             throw new ForbiddenException("refused repair " + id + " is at a kit outside the locations assigned to you");
         }
-        if (notice.state != RefusedRepair.State.OPEN) {
-            return view(notice);
-        }
-        RefusedRepairNotice before = view(notice);
-        notice.close(RefusedRepair.State.DISMISSED, currentUser.name(), OffsetDateTime.now(clock));
-        notices.flush();
-        RefusedRepairNotice after = view(notice);
-        audit.record("REFUSED_REPAIR_DISMISSED", "refused-repair", notice.repairRef, before, after);
-        return after;
+        return closeOpen(notice, RefusedRepair.State.DISMISSED, "REFUSED_REPAIR_DISMISSED");
     }
 
     /**
@@ -181,14 +173,19 @@ public class RefusedRepairService {
         if (!notice.mechanic.equals(currentUser.name())) {
             throw new ForbiddenException("refused repair " + repairRef + " was sent by another mechanic");
         }
+        return closeOpen(notice, RefusedRepair.State.WITHDRAWN, "REFUSED_REPAIR_WITHDRAWN");
+    }
+
+    /** Closes an open notice as {@code state}, audited; a closed one is answered as it is (a resend changes nothing). */
+    private RefusedRepairNotice closeOpen(RefusedRepair notice, RefusedRepair.State state, String auditAction) {
         if (notice.state != RefusedRepair.State.OPEN) {
             return view(notice);
         }
         RefusedRepairNotice before = view(notice);
-        notice.close(RefusedRepair.State.WITHDRAWN, currentUser.name(), OffsetDateTime.now(clock));
+        notice.close(state, currentUser.name(), OffsetDateTime.now(clock));
         notices.flush();
         RefusedRepairNotice after = view(notice);
-        audit.record("REFUSED_REPAIR_WITHDRAWN", "refused-repair", notice.repairRef, before, after);
+        audit.record(auditAction, "refused-repair", notice.repairRef, before, after);
         return after;
     }
 
