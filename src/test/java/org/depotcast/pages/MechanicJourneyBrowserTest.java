@@ -68,6 +68,10 @@ class MechanicJourneyBrowserTest extends MechanicPhoneSession {
         wait(Duration.ofSeconds(10)).until(d -> d.findElement(By.cssSelector("#repair-form .kit-short")).getText().isEmpty());
         assertEquals("2 actions are waiting to send.", driver.findElement(By.id("outbox-count")).getText());
         assertEquals(2, driver.findElements(By.cssSelector("#outbox-list li")).size());
+        // The waiting actions say their quantities in the part's unit, as the kit table does.
+        String waitingWords = driver.findElement(By.id("outbox-list")).getDomProperty("textContent");
+        assertTrue(waitingWords.contains("Parts request to top up the kit: 3 pieces " + valvePart), waitingWords);
+        assertTrue(waitingWords.contains("parts used: 2 pieces " + sealPart), waitingWords);
         assertFitsThePhone();
         screenshot("mechanic-offline-outbox");
 

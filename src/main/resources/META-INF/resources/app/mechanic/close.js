@@ -6,6 +6,7 @@
  */
 import * as fmt from '/app/js/format.js';
 import {h, clearErrors} from '/app/js/ui.js';
+import {partQty} from './views.js';
 import {field, partLines, checkLines, refuse, describeKit, kitShortfall, repairCaution} from './forms.js';
 
 function repairWords(r) {
@@ -64,7 +65,7 @@ export function closeForm(snapshot, queue, waiting) {
         await queue({kind: 'close', method: 'PATCH', path: `/api/repairs/${encodeURIComponent(r.repairRef)}`, body,
             ref: r.repairRef, assetId: r.assetId,
             summary: `Close the ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'} of pump ${r.assetId} as fixed on ${fmt.date(fixedOn)}`
-                + (body.lines.length ? `, parts used: ${body.lines.map(l => `${fmt.num(l.quantity, 2)} × ${l.partNumber}`).join(', ')}` : '')});
+                + (body.lines.length ? `, parts used: ${body.lines.map(l => partQty(snapshot, l.partNumber, l.quantity)).join(', ')}` : '')});
         form.reset();
         form.elements.fixedOn.value = today;
         lines.clear();

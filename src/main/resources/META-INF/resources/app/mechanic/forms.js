@@ -6,7 +6,7 @@
 import * as api from '/app/js/api.js';
 import * as fmt from '/app/js/format.js';
 import {h, mount, showError, clearErrors} from '/app/js/ui.js';
-import {partLabel} from './views.js';
+import {partLabel, partQty} from './views.js';
 import {waitingUse} from './data.js';
 
 let fieldIds = 0;
@@ -142,7 +142,7 @@ export function askForm(snapshot, queue) {
         const body = {clientRef: ref, assetId, urgency: form.elements.urgency.value, fault: form.elements.fault.value.trim() || null,
             lines: read.map(l => ({partNumber: l.partNumber, quantity: l.quantity}))};
         await queue({kind: 'request', method: 'POST', path: '/api/requests', body, ref, assetId,
-            summary: `Parts request ${assetId ? `for pump ${assetId}` : 'to top up the kit'}: ${body.lines.map(l => `${fmt.num(l.quantity, 2)} × ${l.partNumber}`).join(', ')}`});
+            summary: `Parts request ${assetId ? `for pump ${assetId}` : 'to top up the kit'}: ${body.lines.map(l => partQty(snapshot, l.partNumber, l.quantity)).join(', ')}`});
         form.reset();
         lines.clear();
         lines.add();
@@ -204,7 +204,7 @@ export function repairForm(snapshot, queue, waiting) {
             lines: lines.read().map(l => ({partNumber: l.partNumber, quantity: l.quantity}))};
         await queue({kind: 'repair', method: 'POST', path: '/api/repairs', body, ref, assetId: body.assetId,
             summary: `${body.kind === 'PREVENTIVE' ? 'Service' : 'Repair'} of pump ${body.assetId}${body.fixedOn ? `, fixed ${fmt.date(body.fixedOn)}` : ', not fixed yet'}`
-                + (body.lines.length ? `, parts used: ${body.lines.map(l => `${fmt.num(l.quantity, 2)} × ${l.partNumber}`).join(', ')}` : '')});
+                + (body.lines.length ? `, parts used: ${body.lines.map(l => partQty(snapshot, l.partNumber, l.quantity)).join(', ')}` : '')});
         form.reset();
         form.elements.reportedOn.value = today;
         form.elements.fixedOn.value = today;

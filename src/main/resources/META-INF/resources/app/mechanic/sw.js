@@ -4,7 +4,7 @@
  * fresh copy in the background for the next visit. Data from /api is not kept here: the page keeps its last data
  * and its outbox in IndexedDB itself, and says how old that data is.
  */
-const CACHE = 'depotcast-mechanic-v14';
+const CACHE = 'depotcast-mechanic-v15';
 const FILES = [
     '/app/mechanic/', '/app/mechanic/mechanic.js', '/app/mechanic/store.js', '/app/mechanic/send.js',
     '/app/mechanic/data.js', '/app/mechanic/views.js', '/app/mechanic/forms.js', '/app/mechanic/close.js',

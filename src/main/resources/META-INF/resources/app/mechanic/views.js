@@ -25,6 +25,11 @@ function unitOf(snapshot, partNumber) {
     return part ? part.unitOfIssue : undefined;
 }
 
+/** A quantity of one part in the part's unit, as the kit table says it: "2 pieces OB-CS-50", "1.5 m PIPE-25". */
+export function partQty(snapshot, partNumber, quantity) {
+    return `${fmt.qty(quantity, unitOf(snapshot, partNumber))} ${partNumber}`;
+}
+
 export function partLabel(snapshot, partNumber) {
     const part = snapshot.parts.find(p => p.partNumber === partNumber);
     return part ? `${partNumber} · ${part.description}` : partNumber;
@@ -83,7 +88,7 @@ function openRepair(snapshot, r, waiting, act) {
     const closing = waiting.find(i => i.kind === 'close' && i.ref === r.repairRef);
     return h('li', {'data-repair': r.repairRef},
         `Open ${r.kind === 'PREVENTIVE' ? 'service' : 'repair'}, reported ${fmt.date(r.reportedOn)}`,
-        r.fault ? `: ${r.fault}` : '', r.lines.length ? `; needs ${r.lines.map(l => `${fmt.qty(l.quantity, unitOf(snapshot, l.partNumber))} ${l.partNumber}`).join(', ')}` : '',
+        r.fault ? `: ${r.fault}` : '', r.lines.length ? `; needs ${r.lines.map(l => partQty(snapshot, l.partNumber, l.quantity)).join(', ')}` : '',
         h('span', {class: 'hint'}, `Reference ${r.repairRef}`),
         closing ? h('p', {}, state(closing.state === 'refused' ? 'Closing refused: see "Waiting to send"' : 'Closed on this phone: waiting to send',
             closing.state === 'refused' ? 'urgent' : 'info'))
@@ -121,9 +126,9 @@ export function pumpCard(snapshot, {pump, due, repairs, sensor, stop}, waiting, 
 }
 
 export function requestsView(snapshot, waiting) {
-    const lines = r => r.lines.map(l => `${fmt.qty(l.requested, unitOf(snapshot, l.partNumber))} ${l.partNumber}`
+    const lines = r => r.lines.map(l => partQty(snapshot, l.partNumber, l.requested)
         + (l.substitute ? ` (approved as ${l.substitute})` : '')
-        + (l.approved !== null && l.approved !== undefined && Number(l.approved) !== Number(l.requested) ? `, ${fmt.num(l.approved, 2)} approved` : '')).join('; ');
+        + (l.approved !== null && l.approved !== undefined && Number(l.approved) !== Number(l.requested) ? `, ${fmt.qty(l.approved, unitOf(snapshot, l.partNumber))} approved` : '')).join('; ');
     const recent = snapshot.requests.slice(0, 30);
     const refusal = r => (r.history || []).filter(e => e.reason).map(e => e.reason).pop();
     return table({caption: 'My parts requests, newest first', id: 'requests-table', rows: recent,
