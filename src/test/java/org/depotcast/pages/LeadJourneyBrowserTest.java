@@ -251,9 +251,26 @@ class LeadJourneyBrowserTest extends BrowserSession {
         List<WebElement> central = driver.findElements(By.xpath("//table[@id='spend-depots']//tbody/tr[td[1][normalize-space()='CENTRAL']]/td"));
         assertTrue(central.size() > 2, "the depot table has the central store's row");
         assertEquals(currency + " 0", central.get(2).getText().replace('\u00a0', ' '), "nothing at the central store after the first period");
-        assertTrue(text(By.id("central-store-note")).contains("counted at the depot whose pumps use them"));
+        // The run's notes say how the stock-up is counted, once; the page adds only how the budget plan differs.
+        String said = text(By.id("results"));
+        assertFalse(said.contains("The central store buys once"), said);
+        assertEquals(1, said.split("bought once by the central store", -1).length - 1, said);
+        assertTrue(text(By.id("spend-notes")).contains("counted at the depot whose pumps use them"));
         // The stock-up here and the budget plan's lines differ by the packs only, and the note says so.
-        assertTrue(text(By.id("central-store-note")).contains("The budget plan buys the same stock in whole packs"));
+        assertTrue(text(By.id("central-store-note")).contains("The budget plan buys the same stock-up in whole packs"));
+        // Periods go by their dates, the first (months left in the financial year) holding the stock-up.
+        String firstMonths = (String) years.get(0).get("months");
+        String lastMonths = (String) years.get(years.size() - 1).get("months");
+        String span = text(By.id("spend-span"));
+        assertTrue(span.startsWith("Expected parts spend from " + firstMonths.split(" – ")[0] + " to "
+                + lastMonths.split(" – ")[lastMonths.split(" – ").length - 1] + ": "), span);
+        assertTrue(span.contains("The first period, " + firstMonths + ", holds the central store's one-time stock-up"), span);
+        assertFalse(span.contains("over the " + years.size() + " periods"), span);
+        // Component families as the trade writes them, never "o ring".
+        List<String> families = driver.findElements(By.cssSelector("#spend-families tbody tr td:first-child")).stream()
+                .map(WebElement::getText).toList();
+        assertTrue(families.contains("Cup seal") && families.contains("O-ring"), families.toString());
+        assertTrue(families.stream().allMatch(f -> f.matches("[A-Z].*") && !f.contains("_")), families.toString());
         assertEquals("/api/spend/runs/" + runId + "/report", driver.findElement(By.linkText("Printable report")).getDomAttribute("href"));
         assertTrue(driver.getCurrentUrl().endsWith("?run=" + runId));
         PrintedPage.assertPrintsChartAndTable(driver, "#results figure.chart", "lead-spend-printed");

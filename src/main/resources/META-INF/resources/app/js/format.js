@@ -11,6 +11,7 @@
  *   wholeMoney(value, currency) "USD 12,858": projections and their ranges (spend, back-check), whose cents mean nothing
  *   percent(share)        0.953 → "95.3 %"
  *   date(iso) dateTime(iso) relative(iso)  "3 Nov 2025", "3 Nov 2025, 08:14", "3 days ago" / "in 2 hours"
+ *   family(code)          a component family as the trade writes it: "O_RING" → "O-ring", "CUP_SEAL" → "Cup seal"
  *   requestFor(request)   what a parts request is for: "Pump MJ-1", "Kit top-up", or "Pump down, no pump named"
  * Every function answers "–" for a missing value, never "NaN" or "null".
  */
@@ -71,6 +72,18 @@ export function qty(value, unit) {
         return text;
     }
     return `${text} ${Math.abs(Math.round(n)) === 1 && wholeUnits(unit) ? words[0] : words[1]}`;
+}
+
+/* The catalogue's family codes carry no display name: the ones the trade does not write in sentence case. */
+const FAMILY_WORDS = {O_RING: 'O-ring'};
+
+export function family(code) {
+    if (code === undefined || code === null || code === '') {
+        return NONE;
+    }
+    const key = String(code).toUpperCase();
+    const words = key.replace(/_/g, ' ').toLowerCase();
+    return FAMILY_WORDS[key] || words.charAt(0).toUpperCase() + words.slice(1);
 }
 
 export function money(value, currency) {

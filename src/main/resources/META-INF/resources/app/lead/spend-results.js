@@ -17,12 +17,17 @@ const whole = v => fmt.num(v, 0);
 const money = (v, currency) => fmt.wholeMoney(v, currency);
 const range = (low, high, currency) => `${money(low, currency)} – ${whole(high)}`;
 
+/** A period by its dates: the first, months left in a financial year, by its months ("Dec 2026"), others by their year. */
+const periodName = y => y.partial && y.months ? y.months : y.label;
+const firstMonth = y => (y.months || y.label).split(' – ')[0];
+const lastMonth = y => (y.months || y.label).split(' – ').pop();
+
 function perGroupTable(caption, years, key, currency, id) {
     const names = [...new Set(years.flatMap(y => Object.keys(y[key] || {})))].sort();
     return table({caption, id, rows: names, columns: [{label: key === 'families' ? 'Component family' : 'Depot',
-        value: n => key === 'families' ? n.replace(/_/g, ' ').toLowerCase() : n},
-        ...years.map(y => ({label: `${y.label} (mean)`, num: true, value: n => money(y[key][n]?.mean, currency)})),
-        ...years.map(y => ({label: `${y.label} (80 % range)`, num: true,
+        value: n => key === 'families' ? fmt.family(n) : n},
+        ...years.map(y => ({label: `${periodName(y)} (mean)`, num: true, value: n => money(y[key][n]?.mean, currency)})),
+        ...years.map(y => ({label: `${periodName(y)} (80 % range)`, num: true,
             value: n => y[key][n] ? range(y[key][n].p10, y[key][n].p90, currency) : '–'}))]});
 }
 
@@ -31,28 +36,30 @@ export async function showResults(runId) {
     history.replaceState(null, '', `?run=${runId}`);
     runCard.hidden = false;
     const years = r.years;
-    const x = years.map(y => y.partial ? `${y.label} (part)` : y.label);
+    const x = years.map(periodName);
     const total = years.reduce((s, y) => s + y.total.mean, 0);
+    const first = years[0];
     mount(results,
         h('h3', {}, `${r.scenario}: run ${runId}`),
-        h('p', {}, `Expected parts spend over the ${years.length} periods: `, h('strong', {id: 'spend-total'}, money(total, r.currency)),
-            ` (${fmt.num(r.draws)} draws, seed ${r.seed}). Financial years start in `,
+        h('p', {id: 'spend-span'}, `Expected parts spend from ${firstMonth(first)} to ${lastMonth(years[years.length - 1])}: `,
+            h('strong', {id: 'spend-total'}, money(total, r.currency)), ` (${fmt.num(r.draws)} draws, seed ${r.seed}). `,
+            `The first period, ${first.months || first.label}, holds the central store's one-time stock-up to the policy levels`,
+            first.partial ? ' besides its own months\' parts' : '', '. Financial years start in ',
             new Intl.DateTimeFormat(undefined, {month: 'long'}).format(new Date(2026, r.financialYearStartMonth - 1, 15)), '.'),
         h('p', {class: 'row no-print'},
             h('a', {class: 'button', href: `/api/spend/runs/${runId}/report`, target: '_blank', rel: 'noopener'}, 'Printable report'),
             h('a', {class: 'button', href: `/api/spend/runs/${runId}/results.csv`, download: `spend-run-${runId}.csv`}, 'Download as CSV')),
-        fanChart({title: `Parts spend a financial year, ${r.scenario} (${r.currency})`, x, xLabel: 'Financial year',
+        fanChart({title: `Parts spend a period, ${r.scenario} (${r.currency})`, x, xLabel: 'Period (financial years after the first)',
             yLabel: `Spend a year (${r.currency})`, centreName: 'Expected (mean)', centre: years.map(y => y.total.mean),
             range80: [years.map(y => y.total.p10), years.map(y => y.total.p90)],
             range95: [years.map(y => y.total.p2_5), years.map(y => y.total.p97_5)], format: whole, cell: v => money(v, r.currency)}),
-        h('p', {class: 'hint'}, years.map(y => `${y.label}: ${y.months}`).join('; '), '.'),
+        h('p', {class: 'hint'}, years.filter(y => periodName(y) !== y.months).map(y => `${y.label}: ${y.months}`).join('; '), '.'),
         perGroupTable(`Spend per component family (${r.currency})`, years, 'families', r.currency, 'spend-families'),
         perGroupTable(`Spend per depot (${r.currency})`, years, 'depots', r.currency, 'spend-depots'),
-        h('p', {class: 'hint', id: 'central-store-note'}, 'The central store buys once, in the first period, the stock that '
-            + 'brings the programme up to its policy levels; after that each year\'s parts are counted at the depot whose '
-            + 'pumps use them, so the central store shows no spend in later years. The budget plan buys the same stock '
-            + 'in whole packs, so it comes to a little more there.'),
-        r.notes?.length ? h('ul', {class: 'hint'}, r.notes.map(n => h('li', {}, n))) : null);
+        // The run's notes say how the central store's stock-up is counted; the page adds only how the budget plan differs.
+        r.notes?.length ? h('ul', {class: 'hint', id: 'spend-notes'}, r.notes.map(n => h('li', {}, n))) : null,
+        h('p', {class: 'hint', id: 'central-store-note'}, 'The budget plan buys the same stock-up in whole packs, so it '
+            + 'comes to a little more there.'));
     ready();
 }
 
