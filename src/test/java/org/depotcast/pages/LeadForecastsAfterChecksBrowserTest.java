@@ -6,6 +6,7 @@ import org.junit.jupiter.api.Test;
 import org.openqa.selenium.By;
 
 import java.time.Duration;
+import java.util.List;
 
 import static io.restassured.RestAssured.given;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -51,6 +52,14 @@ class LeadForecastsAfterChecksBrowserTest extends BrowserSession {
         waitReady();
         String heading = wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#explorer h3"))).getText();
         assertTrue(heading.startsWith("OB-CS-50"), heading);
+        // The fleet model's families as the trade writes them ("O-ring", "Cup seal"), never "o ring".
+        String coefficients = wait(Duration.ofSeconds(30)).until(d -> d.findElement(By.cssSelector("#fleet > .table-wrap caption"))).getText();
+        List<String> families = driver.findElements(By.cssSelector("#family option")).stream().map(o -> o.getText()).toList();
+        assertTrue(families.stream().anyMatch(f -> f.startsWith("O-ring")) && families.stream().anyMatch(f -> f.startsWith("Cup seal")),
+                families.toString());
+        assertTrue(families.stream().noneMatch(f -> f.contains("_") || f.matches("[a-z].*")), families.toString());
+        String chosen = driver.findElement(By.cssSelector("#family option:checked")).getText().replace(" (prior)", "");
+        assertTrue(coefficients.startsWith("Coefficients of the " + chosen + " model"), coefficients);
         assertNoPageErrors();
     }
 }
