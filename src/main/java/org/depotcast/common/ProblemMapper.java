@@ -156,6 +156,10 @@ public class ProblemMapper {
         if (e.getCause() instanceof JsonProcessingException json) {
             return unreadableJson(json, uri);
         }
+        InvalidInputException malformedPath = MalformedPath.refusal(e, uri);
+        if (malformedPath != null) {
+            return invalidInput(malformedPath, uri);
+        }
         int status = e.getResponse().getStatus();
         if (status == 404 && PageNotFound.answers(uri, headers)) {
             return Response.status(404).type(MediaType.TEXT_HTML_TYPE.withCharset("UTF-8"))
