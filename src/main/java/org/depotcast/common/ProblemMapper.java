@@ -65,11 +65,11 @@ public class ProblemMapper {
     public Response unreadableJson(JsonProcessingException e, UriInfo uri) {
         String field = "body";
         if (e instanceof JsonMappingException m && !m.getPath().isEmpty()) {
-            field = jsonPath(m.getPath());
+            field = JsonPaths.fieldOf(m.getPath());
         } else if (e instanceof InputCoercionException coercion && coercion.getProcessor() != null
                 && coercion.getProcessor().getParsingContext() != null) {
             // A number the parser itself refused (out of a whole number's range): where it stood.
-            field = pointerPath(coercion.getProcessor().getParsingContext().pathAsPointer().toString());
+            field = JsonPaths.fromPointer(coercion.getProcessor().getParsingContext().pathAsPointer().toString());
         }
         String detail = e instanceof JsonMappingException ? "value does not have the expected type or form"
                 : "body is not well-formed JSON";
@@ -200,37 +200,6 @@ public class ProblemMapper {
 
     private static List<FieldError> fieldList(String field, String message) {
         return field == null ? List.of() : List.of(new FieldError(field, message));
-    }
-
-    private static String jsonPath(List<JsonMappingException.Reference> path) {
-        StringBuilder sb = new StringBuilder();
-        for (JsonMappingException.Reference ref : path) {
-            if (ref.getFieldName() != null) {
-                if (!sb.isEmpty()) {
-                    sb.append('.');
-                }
-                sb.append(ref.getFieldName());
-            } else if (ref.getIndex() >= 0) {
-                sb.append('[').append(ref.getIndex()).append(']');
-            }
-        }
-        return sb.isEmpty() ? "body" : sb.toString();
-    }
-
-    /** "/lines/0/quantity" as "lines[0].quantity"; "body" for the root. */
-    static String pointerPath(String pointer) {
-        StringBuilder sb = new StringBuilder();
-        for (String step : pointer.split("/")) {
-            if (step.isEmpty()) {
-                continue;
-            }
-            if (step.chars().allMatch(Character::isDigit)) {
-                sb.append('[').append(step).append(']');
-            } else {
-                sb.append(sb.isEmpty() ? "" : ".").append(step.replace("~1", "/").replace("~0", "~"));
-            }
-        }
-        return sb.isEmpty() ? "body" : sb.toString();
     }
 
     /**
