@@ -5,12 +5,15 @@ import jakarta.validation.Valid;
 import jakarta.validation.constraints.NotNull;
 import jakarta.ws.rs.Consumes;
 import jakarta.ws.rs.GET;
+import jakarta.ws.rs.NotSupportedException;
 import jakarta.ws.rs.POST;
 import jakarta.ws.rs.PUT;
 import jakarta.ws.rs.Path;
 import jakarta.ws.rs.PathParam;
 import jakarta.ws.rs.Produces;
 import jakarta.ws.rs.QueryParam;
+import jakarta.ws.rs.core.Context;
+import jakarta.ws.rs.core.HttpHeaders;
 import jakarta.ws.rs.core.MediaType;
 import jakarta.ws.rs.core.Response;
 import jakarta.ws.rs.core.UriInfo;
@@ -190,11 +193,17 @@ class PlanningResource {
         return transferReceipts.receive(id, r);
     }
 
-    /** Without a body: everything still outstanding arrived. */
+    /**
+     * Without a body: everything still outstanding arrived. A body of another type than JSON ({"receivedQuantity":2}
+     * sent as text/plain) is refused as one the operation does not read, never taken for "everything arrived".
+     */
     @POST
     @Path("transfers/{id}/receive")
     @RolesAllowed({Roles.STORES_OFFICER, Roles.ADMIN})
-    public TransferResponses.Order receiveAll(@PathParam("id") long id) {
+    public TransferResponses.Order receiveAll(@PathParam("id") long id, @Context HttpHeaders headers) {
+        if (headers.getLength() > 0 || headers.getHeaderString("Transfer-Encoding") != null) {
+            throw new NotSupportedException();
+        }
         return transferReceipts.receive(id, null);
     }
 }

@@ -92,6 +92,20 @@ class TransferLoopsTest {
     }
 
     @Test
+    void aReceiptSentAsPlainTextIsRefusedNotBookedAsEverythingArrived() {
+        String part = data.part(UnitOfIssue.EACH), from = data.depot(), to = data.depot();
+        data.stock(part, from, 10);
+        long id = as("officer").contentType("application/json").body(dispatch(part, from, to, 6, null))
+                .post("/api/planning/transfers").then().statusCode(201).extract().jsonPath().getLong("id");
+        // Two arrived; the client forgot the JSON type. Taking it for "no body" booked all six.
+        as("officer").contentType("text/plain").body("{\"receivedQuantity\": 2}")
+                .post("/api/planning/transfers/" + id + "/receive").then().statusCode(415).contentType(PROBLEM);
+        as("officer").get("/api/planning/transfers/" + id).then().statusCode(200)
+                .body("status", equalTo("IN_TRANSIT")).body("outstanding", equalTo(6.0f));
+        assertOnHand(0, part, to);
+    }
+
+    @Test
     void aTransferIsReceivedInPartAndItsLossesWrittenOffThroughTheLedger() {
         String part = data.part(UnitOfIssue.EACH), from = data.depot(), to = data.depot();
         data.stock(part, from, 10);
