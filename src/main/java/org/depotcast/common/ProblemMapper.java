@@ -168,6 +168,11 @@ public class ProblemMapper {
         if (status >= 500) {
             return unexpected(e, uri);
         }
+        if (status == 415) {
+            FieldError error = UnreadableMediaType.error(headers);
+            return respond(415, "unsupported-media-type", "Unsupported media type",
+                    error.field() + ": " + error.message(), uri, List.of(error));
+        }
         String title = Response.Status.fromStatusCode(status) == null ? "Request refused"
                 : Response.Status.fromStatusCode(status).getReasonPhrase();
         return respond(status, "http-" + status, title, title, uri, List.of());
