@@ -36,20 +36,25 @@ final class ReadingFiles {
                 org.depotcast.common.BodySizeLimit.countedBulk(body), StandardCharsets.UTF_8), 64 * 1024);
         StringBuilder line = new StringBuilder(128);
         long number = 0;
+        boolean anyLine = false;
         try {
             while (true) {
                 line.setLength(0);
                 int end = readLine(in, line);
-                if (end == -1 && line.isEmpty()) {
-                    return;
-                }
-                number++;
-                if (end == -2) {
-                    rows.accept(RawReading.unreadable(number, "line longer than " + LONGEST_LINE + " characters"));
-                } else if (!line.toString().isBlank()) {
-                    rows.accept(parse(number, line.toString(), json));
+                if (end != -1 || !line.isEmpty()) {
+                    number++;
+                    if (end == -2) {
+                        rows.accept(RawReading.unreadable(number, "line longer than " + LONGEST_LINE + " characters"));
+                    } else if (!line.toString().isBlank()) {
+                        rows.accept(parse(number, line.toString(), json));
+                    }
+                    anyLine |= end == -2 || !line.toString().isBlank();
                 }
                 if (end == -1) {
+                    if (!anyLine) {
+                        // As an empty CSV: a file that says nothing is a mistake, not "0 readings taken".
+                        throw new InvalidInputException("body", "the body is empty");
+                    }
                     return;
                 }
             }

@@ -110,6 +110,16 @@ class SensorIntakeTest {
     }
 
     @Test
+    void anEmptyNdjsonFileIsRefusedAsAnEmptyCsvIs() {
+        for (String body : List.of("", "\n\n  \n")) {
+            as("officer").contentType(SensorResource.NDJSON).body(body.getBytes(java.nio.charset.StandardCharsets.UTF_8))
+                    .post("/api/sensors/readings").then()
+                    .statusCode(400).contentType(PROBLEM).body("errors[0].field", equalTo("body"))
+                    .body("errors[0].message", equalTo("the body is empty"));
+        }
+    }
+
+    @Test
     void whoMaySendAndForWhichPumps() {
         String elsewhere = pump("DEP-PELLOWDENE", "RB-2");
         csv("mechanic1", "asset_id,day,hours\n" + elsewhere + ",2026-10-01,3\n").then().statusCode(403)
